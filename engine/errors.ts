@@ -1,0 +1,62 @@
+// Named error classes shared across the engine. Callers (CLI, main, worker) catch these by class and
+// print `message` as one line; tests check the class and its fields, never the wording.
+
+/** Base of every error the engine raises on purpose. */
+export class LanewrightError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = new.target.name;
+  }
+}
+
+/** A text that should hold an amount of money but does not. */
+export class MoneyFormatError extends LanewrightError {
+  constructor(readonly value: string, readonly reason: string) {
+    super(`money: cannot read "${value}": ${reason}`);
+  }
+}
+
+/** A sum of money left the range where integers are exact (Number.MAX_SAFE_INTEGER minor units). */
+export class MoneyOverflowError extends LanewrightError {
+  constructor(readonly context: string) {
+    super(`money: ${context} exceeds ${Number.MAX_SAFE_INTEGER} minor units; refusing to give an inexact figure`);
+  }
+}
+
+/** A depot id that the network does not contain. */
+export class UnknownDepotError extends LanewrightError {
+  constructor(readonly depotId: string, readonly context = 'network') {
+    super(`${context}: unknown depot "${depotId}"`);
+  }
+}
+
+/** A network that cannot be built from the given depots and lanes. */
+export class NetworkBuildError extends LanewrightError {
+  constructor(readonly reason: string) {
+    super(`network: ${reason}`);
+  }
+}
+
+/** Asking for the path to a depot whose cost is unbounded (it would circle a rebate loop forever). */
+export class UnboundedPathError extends LanewrightError {
+  constructor(readonly depotId: string) {
+    super(`routes: depot "${depotId}" is reachable through a rebate loop; its cost is unbounded and it has no cheapest path`);
+  }
+}
+
+/** A problem in an input file, located as a spreadsheet shows it (header = row 1). */
+export class InputFileError extends LanewrightError {
+  constructor(
+    readonly file: string,
+    readonly row: number | null,
+    readonly column: string | null,
+    readonly value: string | null,
+    readonly reason: string,
+  ) {
+    super(
+      [file, row !== null ? `row ${row}` : null, column !== null ? `column "${column}"` : null, value !== null ? `value "${value}"` : null]
+        .filter((part) => part !== null)
+        .join(', ') + `: ${reason}`,
+    );
+  }
+}

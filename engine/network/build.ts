@@ -1,0 +1,119 @@
+// Compiles depots and lanes into the typed-array Network. Runs once per import; every solver then
+// works on flat arrays, which keeps a million lanes in well under 100 MB.
+
+import { MoneyOverflowError, NetworkBuildError, UnknownDepotError } from '../errors';
+import type { DepotInput, LaneInput, Network } from './types';
+
+export interface BuildOptions {
+  /** ISO 4217 code of every amount; default "EUR". */
+  currency?: string;
+  /** Minor digits of the currency; default 2. */
+  exponent?: number;
+}
+
+/**
+ * Builds the compiled network. Depot ids must be unique and every lane must name known depots;
+ * the importer reports such problems per row before it gets here, so here they are programming errors.
+ */
+export function buildNetwork(depots: readonly DepotInput[], lanes: readonly LaneInput[], options: BuildOptions = {}): Network {
+  const depotCount = depots.length;
+  const laneCount = lanes.length;
+  const depotIndex = new Map<string, number>();
+  const depotIds: string[] = new Array(depotCount);
+  const depotNames: string[] = new Array(depotCount);
+  const lat = new Float64Array(depotCount);
+  const lon = new Float64Array(depotCount);
+  for (let i = 0; i < depotCount; i++) {
+    const d = depots[i];
+    if (depotIndex.has(d.id)) throw new NetworkBuildError(`duplicate depot id "${d.id}"`);
+    depotIndex.set(d.id, i);
+    depotIds[i] = d.id;
+    depotNames[i] = d.name;
+    lat[i] = d.lat;
+    lon[i] = d.lon;
+  }
+
+  const laneFrom = new Int32Array(laneCount);
+  const laneTo = new Int32Array(laneCount);
+  const laneToll = new Float64Array(laneCount);
+  const laneFuel = new Float64Array(laneCount);
+  const laneFees = new Float64Array(laneCount);
+  const laneRebate = new Float64Array(laneCount);
+  const laneNet = new Float64Array(laneCount);
+  const laneRow = new Int32Array(laneCount);
+  const laneDistanceKm = new Float64Array(laneCount);
+  const laneDriveMinutes = new Float64Array(laneCount);
+  const laneRef: (string | undefined)[] = new Array(laneCount);
+  const outStart = new Int32Array(depotCount + 1);
+
+  for (let e = 0; e < laneCount; e++) {
+    const lane = lanes[e];
+    const from = depotIndex.get(lane.from);
+    if (from === undefined) throw new UnknownDepotError(lane.from, `lane from row ${lane.sourceRow}`);
+    const to = depotIndex.get(lane.to);
+    if (to === undefined) throw new UnknownDepotError(lane.to, `lane from row ${lane.sourceRow}`);
+    const net = lane.toll + lane.fuel + lane.fees - lane.rebate;
+    // Each component is a safe integer; the sum of four can still leave the exact range.
+    if (!Number.isSafeInteger(net)) throw new MoneyOverflowError(`net cost of the lane from row ${lane.sourceRow}`);
+    laneFrom[e] = from;
+    laneTo[e] = to;
+    laneToll[e] = lane.toll;
+    laneFuel[e] = lane.fuel;
+    laneFees[e] = lane.fees;
+    laneRebate[e] = lane.rebate;
+    laneNet[e] = net;
+    laneRow[e] = lane.sourceRow;
+    laneDistanceKm[e] = lane.distanceKm ?? NaN;
+    laneDriveMinutes[e] = lane.driveMinutes ?? NaN;
+    laneRef[e] = lane.ref;
+    outStart[from + 1]++;
+  }
+  for (let d = 0; d < depotCount; d++) outStart[d + 1] += outStart[d];
+
+  // Counting sort by origin depot; stable, so parallel lanes keep their input order and the
+  // first of two equally cheap contract lines is the one routes use.
+  const fill = outStart.slice(0, depotCount);
+  const outLane = new Int32Array(laneCount);
+  const outTo = new Int32Array(laneCount);
+  const outNet = new Float64Array(laneCount);
+  for (let e = 0; e < laneCount; e++) {
+    const p = fill[laneFrom[e]]++;
+    outLane[p] = e;
+    outTo[p] = laneTo[e];
+    outNet[p] = laneNet[e];
+  }
+
+  return {
+    depotCount,
+    laneCount,
+    currency: options.currency ?? 'EUR',
+    exponent: options.exponent ?? 2,
+    depotIds,
+    depotNames,
+    lat,
+    lon,
+    depotIndex,
+    laneFrom,
+    laneTo,
+    laneToll,
+    laneFuel,
+    laneFees,
+    laneRebate,
+    laneNet,
+    laneRow,
+    laneDistanceKm,
+    laneDriveMinutes,
+    laneRef,
+    outStart,
+    outLane,
+    outTo,
+    outNet,
+  };
+}
+
+/** Index of a depot id, or UnknownDepotError. */
+export function depotIndexOf(network: Network, id: string, context = 'network'): number {
+  const index = network.depotIndex.get(id);
+  if (index === undefined) throw new UnknownDepotError(id, context);
+  return index;
+}

@@ -1,0 +1,50 @@
+// `lanewright routes`: cheapest routes from one depot, as CSV (default) or JSON.
+
+import { buildNetwork, depotIndexOf } from '../../../engine/network/build';
+import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
+import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
+import { routesReport, routesReportRows } from '../../../engine/report/routes-report';
+import { formatCsvRows } from '../../../engine/io/csv-papaparse';
+import { readDepotsCsv, readLanesCsv } from '../../../engine/import/basic-reader';
+import { required, UsageError, type ParsedArgs } from '../args';
+import { readTextFile } from '../files';
+import type { CommandOutput } from '../run';
+
+export const routesFlags = ['json', 'timings'];
+
+export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
+  const depotsPath = required(args, 'depots');
+  const lanesPath = required(args, 'lanes');
+  const originId = required(args, 'from');
+  const maxLegsText = args.values.get('max-legs');
+  let maxLegs: number | undefined;
+  if (maxLegsText !== undefined) {
+    maxLegs = Number(maxLegsText);
+    if (!/^\d+$/.test(maxLegsText) || !Number.isSafeInteger(maxLegs)) throw new UsageError(`--max-legs must be a whole number >= 0, got "${maxLegsText}"`);
+  }
+
+  const readStart = performance.now();
+  const depots = readDepotsCsv(depotsPath, readTextFile(depotsPath));
+  const lanes = readLanesCsv(lanesPath, readTextFile(lanesPath));
+  const network = buildNetwork(depots, lanes);
+  const origin = depotIndexOf(network, originId, `--from`);
+  const readMs = performance.now() - readStart;
+
+  const solveStart = performance.now();
+  const solved = maxLegs === undefined ? cheapestRoutes(network, origin) : legLimitedRoutes(network, origin, maxLegs);
+  const solveMs = performance.now() - solveStart;
+
+  const report = routesReport(network, solved);
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(routesReportRows(report)));
+  if (args.flags.has('timings')) {
+    out.timing({ read_ms: round(readMs), solve_ms: round(solveMs), depots: network.depotCount, lanes: network.laneCount });
+  }
+  if (report.loops.length > 0) {
+    out.warn(`WARNING: ${report.loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
+  }
+  return 0;
+}
+
+function round(ms: number): number {
+  return Math.round(ms * 100) / 100;
+}

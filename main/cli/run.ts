@@ -1,0 +1,54 @@
+// Command dispatch for `lanewright`. Known errors print as one line on stderr with a non-zero exit
+// status; only a genuine bug shows a stack trace.
+
+import { LanewrightError } from '../../engine/errors';
+import { parseArgs, UsageError } from './args';
+import { writeTextFileAtomic } from './files';
+import { routesFlags, runRoutes } from './commands/routes';
+
+/** Where a command sends its results; --out redirects `write` to a file. */
+export interface CommandOutput {
+  write(text: string): void;
+  warn(line: string): void;
+  timing(figures: Record<string, number>): void;
+}
+
+const USAGE = `usage:
+  lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--max-legs K] [--json] [--out FILE] [--timings]
+
+Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
+local regulations apply; defer to local codes and licensed practice.`;
+
+const COMMANDS: Record<string, { flags: string[]; run: (args: ReturnType<typeof parseArgs>, out: CommandOutput) => number }> = {
+  routes: { flags: routesFlags, run: runRoutes },
+};
+
+/** Runs the command line; returns the exit status. */
+export async function main(argv: readonly string[]): Promise<number> {
+  try {
+    const word = argv.find((a) => !a.startsWith('--'));
+    if (argv.length === 0 || argv.includes('--help') || word === 'help') {
+      process.stdout.write(USAGE + '\n');
+      return argv.length === 0 ? 2 : 0;
+    }
+    const command = word === undefined ? undefined : COMMANDS[word];
+    if (!command) throw new UsageError(`unknown command "${word ?? ''}" (try: ${Object.keys(COMMANDS).join(', ')})`);
+    const args = parseArgs(argv, new Set(command.flags));
+    const outPath = args.values.get('out');
+    const chunks: string[] = [];
+    const output: CommandOutput = {
+      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(text)),
+      warn: (line) => process.stderr.write(line + '\n'),
+      timing: (figures) => process.stderr.write(JSON.stringify(figures) + '\n'),
+    };
+    const status = command.run(args, output);
+    if (outPath) writeTextFileAtomic(outPath, chunks.join(''));
+    return status;
+  } catch (error) {
+    if (error instanceof LanewrightError) {
+      process.stderr.write(`lanewright: ${error.message}\n`);
+      return error instanceof UsageError ? 2 : 1;
+    }
+    throw error;
+  }
+}
