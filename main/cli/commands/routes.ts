@@ -1,20 +1,17 @@
 // `lanewright routes`: cheapest routes from one depot, as CSV (default) or JSON.
 
-import { buildNetwork, depotIndexOf } from '../../../engine/network/build';
+import { depotIndexOf } from '../../../engine/network/build';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
 import { routesReport, routesReportRows } from '../../../engine/report/routes-report';
 import { formatCsvRows } from '../../../engine/io/csv-papaparse';
-import { readDepotsCsv, readLanesCsv } from '../../../engine/import/basic-reader';
 import { required, UsageError, type ParsedArgs } from '../args';
-import { readTextFile } from '../files';
+import { loadNetwork } from '../load-network';
 import type { CommandOutput } from '../run';
 
 export const routesFlags = ['json', 'timings'];
 
 export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
-  const depotsPath = required(args, 'depots');
-  const lanesPath = required(args, 'lanes');
   const originId = required(args, 'from');
   const maxLegsText = args.values.get('max-legs');
   let maxLegs: number | undefined;
@@ -24,9 +21,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   }
 
   const readStart = performance.now();
-  const depots = readDepotsCsv(depotsPath, readTextFile(depotsPath));
-  const lanes = readLanesCsv(lanesPath, readTextFile(lanesPath));
-  const network = buildNetwork(depots, lanes);
+  const network = loadNetwork(args);
   const origin = depotIndexOf(network, originId, `--from`);
   const readMs = performance.now() - readStart;
 
