@@ -1,6 +1,7 @@
 // Hand-written types for the parts of papaparse the engine uses. The DefinitelyTyped package
 // references Node's types, which would quietly let `process` and `Buffer` compile inside the
-// engine; this narrow declaration keeps the engine free of Node. Mapped in tsconfig.json `paths`.
+// engine; this narrow declaration keeps the engine free of Node. @types/papaparse is
+// deliberately not installed, so TypeScript falls back to this ambient module.
 
 declare module 'papaparse' {
   export interface ParseError {
