@@ -1,0 +1,37 @@
+// The cautions and about text, in one place so the Electron main process, the renderer and the
+// README-facing screens all say the same words. Pure strings: no DOM, no Node.
+
+/** Product name as shown in window titles, dialogs and the about box. */
+export const PRODUCT_NAME = 'Lanewright';
+
+/** One-line description of what the tool does. */
+export const PRODUCT_TAGLINE = 'Toll-and-rebate route planning for freight dispatch.';
+
+/** The cautions, one sentence each, in the order they are shown. */
+export const CAUTIONS: readonly string[] = [
+  'Results are cost estimates built from the lane files you load; they are not quotes, invoices or contract terms.',
+  'Vehicle restrictions apply and are not checked here: height, weight, axle load and hazardous goods.',
+  'Driver hours rules and local regulations apply to every route.',
+  'Defer to local codes, the carrier\'s own procedures and licensed professional practice before dispatching.',
+];
+
+/** Heading of the notice shown the first time the app opens. */
+export const FIRST_RUN_TITLE = 'Before you plan';
+
+/** Body of the first-run notice: a short lead-in followed by every caution. */
+export const FIRST_RUN_NOTICE =
+  'Lanewright compares lane costs, tolls, fuel, fees and rebates to find the cheapest routes between depots ' +
+  'and to flag rebate terms that cannot be right. Please keep in mind:\n\n' +
+  CAUTIONS.map((line) => `- ${line}`).join('\n');
+
+/** Label of the button that closes the first-run notice. */
+export const FIRST_RUN_ACKNOWLEDGE = 'I understand';
+
+/** Body of the about dialog; `version` is the app version, shown on the first line. */
+export function aboutText(version: string): string {
+  return `${PRODUCT_NAME} ${version}\n${PRODUCT_TAGLINE}\n\n` + CAUTIONS.join('\n');
+}
+
+/** Notice on the demo data, so nobody mistakes it for a real carrier or contract. */
+export const SAMPLE_DATA_NOTICE =
+  'The sample scenario uses the fictional carrier Brightwater & Fennick Haulage; its depots sit in real cities but its lanes, tolls and rebates are invented.';
