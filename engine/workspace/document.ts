@@ -33,29 +33,12 @@ export interface PlanningSettings {
   maxLegs: number | null;
 }
 
-/** The lane amount a scenario edit changes. */
-export type LaneAmountField = 'toll' | 'fuel' | 'fees' | 'rebate';
-
 /**
- * One edit in a scenario: a lane amount set to a new value. The lane is named by its row in the
- * lanes file (header = row 1), with its reference kept as a check that the file has not changed.
+ * Scenarios are the engine's `Scenario` (engine/scenario), embedded as they are; names are unique
+ * within a workspace so `activeScenario` can name one.
  */
-export interface ScenarioLaneEdit {
-  laneRow: number;
-  laneRef: string | null;
-  field: LaneAmountField;
-  /** New amount, integer minor units. */
-  amountMinor: number;
-  /** Optional note from the analyst on why the value changed. */
-  note: string | null;
-}
-
-/** A named set of lane edits evaluated against the base contract. */
-export interface WorkspaceScenario {
-  id: string;
-  name: string;
-  edits: ScenarioLaneEdit[];
-}
+export type { Scenario as WorkspaceScenario } from './scenario-shape';
+import type { Scenario } from './scenario-shape';
 
 /** The whole workspace as it is saved (version 1). */
 export interface WorkspaceDocument {
@@ -65,8 +48,8 @@ export interface WorkspaceDocument {
   savedAt: string | null;
   files: WorkspaceFiles;
   settings: PlanningSettings;
-  scenarios: WorkspaceScenario[];
-  /** Id of the scenario being viewed, or null for the base contract. */
+  scenarios: Scenario[];
+  /** Name of the scenario being viewed, or null for the base contract. */
   activeScenario: string | null;
 }
 
