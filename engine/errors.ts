@@ -60,3 +60,22 @@ export class InputFileError extends LanewrightError {
     );
   }
 }
+
+/** A scenario document that cannot be read; `path` locates the field (e.g. "changes[2].lane.from"). */
+export class ScenarioFormatError extends LanewrightError {
+  constructor(
+    readonly source: string,
+    readonly path: string,
+    readonly value: string | null,
+    readonly reason: string,
+  ) {
+    super(`${source}: ${path === '' ? 'document' : `field "${path}"`}${value !== null ? `, value ${value}` : ''}: ${reason}`);
+  }
+}
+
+/** A computation that needs a loop-free network (Johnson's reweighting, headroom) was given one with a rebate loop. */
+export class RebateLoopPresentError extends LanewrightError {
+  constructor(readonly depotIds: readonly string[], readonly context: string) {
+    super(`${context}: the network has a rebate loop through ${depotIds.join(' > ')}; fix it first (see the audit's fix plan)`);
+  }
+}

@@ -1,0 +1,101 @@
+// A fix plan that leaves the whole network free of rebate loops while changing as little as
+// possible: take a loop, cut the rebate of one of its lanes by what the lap pays (never below 0),
+// look again, until no loop is left. Only rebates shrink, so no lane ever gets cheaper; the plan is
+// then checked by a separate solve of the changed network.
+
+import { sumMinor, type Minor } from '../money/minor';
+import type { Network } from '../network/types';
+import { toRebateLoop, type RebateLoop } from '../loops/rebate-loop';
+import { labelCorrect } from '../routes/label-correcting';
+
+export interface FixPlanOptions {
+  /** 1 for lanes whose contract the user marks as negotiable; those are cut first. */
+  negotiable?: Uint8Array;
+  /** Most cuts before giving up (default 10 x lanes + 1,000). */
+  maxSteps?: number;
+  onProgress?: (done: number, total: number) => void;
+}
+
+/** One lane's change in the plan (all cuts on the lane summed). */
+export interface FixLaneChange {
+  lane: number;
+  oldRebate: Minor;
+  newRebate: Minor;
+  oldNet: Minor;
+  newNet: Minor;
+  negotiable: boolean;
+}
+
+export interface FixPlan {
+  /** Changed lanes in input order. */
+  changes: FixLaneChange[];
+  /** Cuts in the order made, with the loop that prompted each. */
+  steps: { lane: number; cut: Minor; loop: RebateLoop }[];
+  /** Net cost per CSR position after the plan. */
+  weights: Float64Array;
+  /** Loops no rebate cut can fix (no lane on them carries a rebate); the plan stops at the first. */
+  unfixable: RebateLoop[];
+  /** True when a final solve of the changed network finds no loop and no lane got cheaper. */
+  verified: boolean;
+}
+
+const allDepots = (n: number) => Int32Array.from({ length: n }, (_, d) => d);
+
+/**
+ * Builds the plan. Among a loop's rebate lanes it prefers, in order: negotiable lanes; lanes whose
+ * rebate covers the whole amount (one cut fixes the loop); the cut that is the smallest share of the
+ * lane's rebate; the lowest source row.
+ */
+export function buildFixPlan(network: Network, options: FixPlanOptions = {}): FixPlan {
+  const n = network.depotCount;
+  const sources = allDepots(n);
+  const weights = network.outNet.slice();
+  const rebate = Float64Array.from(network.laneRebate);
+  const positionOf = new Int32Array(network.laneCount);
+  for (let p = 0; p < network.laneCount; p++) positionOf[network.outLane[p]] = p;
+  const negotiable = options.negotiable;
+  const maxSteps = options.maxSteps ?? 10 * network.laneCount + 1000;
+  const steps: FixPlan['steps'] = [];
+  const unfixable: RebateLoop[] = [];
+
+  for (;;) {
+    const solved = labelCorrect(network, { sources, weights, onLoop: 'stop' });
+    if (solved.loops.length === 0) break;
+    const loop = toRebateLoop(network, solved.loops[0], weights);
+    const amount = -loop.netPerLap;
+    const candidates = loop.lanes.filter((e) => rebate[e] > 0);
+    if (candidates.length === 0 || steps.length >= maxSteps) {
+      unfixable.push(loop);
+      break;
+    }
+    const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], network.laneRow[e]];
+    candidates.sort((a, b) => {
+      const ra = rank(a);
+      const rb = rank(b);
+      for (let i = 0; i < ra.length; i++) if (ra[i] !== rb[i]) return ra[i] - rb[i];
+      return a - b;
+    });
+    const lane = candidates[0];
+    const cut = Math.min(amount, rebate[lane]) as Minor;
+    rebate[lane] -= cut;
+    weights[positionOf[lane]] = sumMinor([weights[positionOf[lane]], cut], 'net cost after a rebate cut');
+    steps.push({ lane, cut, loop });
+    options.onProgress?.(steps.length, steps.length + 1);
+  }
+
+  const touched = [...new Set(steps.map((s) => s.lane))].sort((a, b) => a - b);
+  const changes = touched.map((lane) => ({
+    lane,
+    oldRebate: network.laneRebate[lane] as Minor,
+    newRebate: rebate[lane] as Minor,
+    oldNet: network.laneNet[lane] as Minor,
+    newNet: weights[positionOf[lane]] as Minor,
+    negotiable: !!(negotiable && negotiable[lane]),
+  }));
+
+  // Independent of the loop above: one more solve of the final network, and every lane compared.
+  let verified = unfixable.length === 0 && labelCorrect(network, { sources, weights, onLoop: 'stop' }).loops.length === 0;
+  for (let p = 0; p < weights.length && verified; p++) if (weights[p] < network.outNet[p]) verified = false;
+  for (let e = 0; e < rebate.length && verified; e++) if (rebate[e] < 0) verified = false;
+  return { changes, steps, weights, unfixable, verified };
+}

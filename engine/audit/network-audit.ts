@@ -1,0 +1,85 @@
+// The contract review of a whole network, independent of any origin: every distinct rebate loop
+// (up to a cap) with the depots it makes unbounded and what would neutralise it, a verified fix
+// plan, and rebate headroom for every lane (on the fixed network when there were loops).
+
+import type { Network } from '../network/types';
+import { laneKeysOf, laneKeyText } from '../scenario/lane-key';
+import { findDistinctLoops } from './distinct-loops';
+import { buildFixPlan, type FixPlan } from './fix-plan';
+import { laneFloors, type LaneFloors } from './headroom';
+import { reachableFrom } from './loop-reach';
+import { neutralisers, type LaneNeutraliser } from './neutralise';
+import type { RebateLoop } from '../loops/rebate-loop';
+
+export type AuditPhase = 'loops' | 'fix-plan' | 'headroom';
+
+export interface AuditOptions {
+  /** Most distinct loops to report (default 100). */
+  loopCap?: number;
+  /** Contract references or lane key texts ("FROM>TO|ref|n") the user marks as negotiable. */
+  negotiable?: Iterable<string>;
+  onProgress?: (progress: { phase: AuditPhase; done: number; total: number }) => void;
+}
+
+export interface AuditLoop {
+  loop: RebateLoop;
+  /** Depots every route reaching the loop sees as unbounded (all depots reachable from it). */
+  unboundedDepots: number[];
+  neutralisers: LaneNeutraliser[];
+}
+
+export interface NetworkAudit {
+  loops: AuditLoop[];
+  loopCapReached: boolean;
+  /** Null when the network has no loop (nothing to fix). */
+  fixPlan: FixPlan | null;
+  /** Null only when the fix plan could not remove every loop. */
+  headroom: LaneFloors | null;
+  headroomAfterFixPlan: boolean;
+  /** Per lane: 1 when marked negotiable. */
+  negotiable: Uint8Array;
+}
+
+/** Runs the whole audit. */
+export function auditNetwork(network: Network, options: AuditOptions = {}): NetworkAudit {
+  const report = options.onProgress;
+  const negotiable = markNegotiable(network, options.negotiable);
+
+  const distinct = findDistinctLoops(network, {
+    cap: options.loopCap,
+    onProgress: (done, total) => report?.({ phase: 'loops', done, total }),
+  });
+  const reachOfComponent = new Map<number, number[]>();
+  const loops = distinct.loops.map((loop, i) => {
+    const component = distinct.componentOfLoop[i];
+    let reach = reachOfComponent.get(component);
+    if (!reach) {
+      reach = reachableFrom(network, distinct.components[component]);
+      reachOfComponent.set(component, reach);
+    }
+    return { loop, unboundedDepots: reach, neutralisers: neutralisers(network, loop) };
+  });
+
+  let fixPlan: FixPlan | null = null;
+  let weights = network.outNet;
+  if (loops.length > 0) {
+    fixPlan = buildFixPlan(network, { negotiable, onProgress: (done, total) => report?.({ phase: 'fix-plan', done, total }) });
+    weights = fixPlan.weights;
+  }
+  const headroom =
+    fixPlan && !fixPlan.verified ? null : laneFloors(network, { weights, onProgress: (done, total) => report?.({ phase: 'headroom', done, total }) });
+  return { loops, loopCapReached: distinct.capReached, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable };
+}
+
+function markNegotiable(network: Network, names: Iterable<string> | undefined): Uint8Array {
+  const marks = new Uint8Array(network.laneCount);
+  if (!names) return marks;
+  const wanted = new Set([...names].map((s) => s.trim()).filter((s) => s !== ''));
+  if (wanted.size === 0) return marks;
+  const keys = laneKeysOf(network);
+  for (let e = 0; e < network.laneCount; e++) {
+    const ref = network.laneRef[e];
+    if ((ref !== undefined && wanted.has(ref)) || wanted.has(laneKeyText(keys[e]))) marks[e] = 1;
+  }
+  return marks;
+}

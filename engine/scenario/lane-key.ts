@@ -1,0 +1,77 @@
+// Names a lane so that the name survives a re-import: source rows shift whenever someone edits the
+// lanes file, but a lane's origin, destination and contract reference do not. Parallel lanes with
+// the same three are told apart by their occurrence, counted in file order from 1.
+
+import type { LaneInput, Network } from '../network/types';
+
+/** A lane named by what it is, not where it sits in the file. */
+export interface LaneKey {
+  from: string;
+  to: string;
+  /** Contract reference (`LaneInput.ref`), null when the file gives none. */
+  ref: string | null;
+  /** 1 for the first lane in file order with this from/to/ref, 2 for the second, ... */
+  occurrence: number;
+}
+
+type LaneLike = Pick<LaneInput, 'from' | 'to' | 'ref'>;
+
+/** The group a lane's occurrence is counted in. */
+function groupText(from: string, to: string, ref: string | null | undefined): string {
+  return JSON.stringify([from, to, ref ?? null]);
+}
+
+/** One key per lane, in input order. */
+export function laneKeysOf(source: readonly LaneLike[] | Network): LaneKey[] {
+  const seen = new Map<string, number>();
+  const keys: LaneKey[] = [];
+  const count = 'laneCount' in source ? source.laneCount : source.length;
+  for (let e = 0; e < count; e++) {
+    let from: string, to: string, ref: string | null;
+    if ('laneCount' in source) {
+      from = source.depotIds[source.laneFrom[e]];
+      to = source.depotIds[source.laneTo[e]];
+      ref = source.laneRef[e] ?? null;
+    } else {
+      ({ from, to } = source[e]);
+      ref = source[e].ref ?? null;
+    }
+    if (ref === '') ref = null;
+    const group = groupText(from, to, ref);
+    const occurrence = (seen.get(group) ?? 0) + 1;
+    seen.set(group, occurrence);
+    keys.push({ from, to, ref, occurrence });
+  }
+  return keys;
+}
+
+/** Printable form "FROM>TO|ref|n" (ref empty when null); accepted wherever a lane is named. */
+export function laneKeyText(key: LaneKey): string {
+  return `${key.from}>${key.to}|${key.ref ?? ''}|${key.occurrence}`;
+}
+
+/** Reads "FROM>TO|ref|n" back; null when the text is not in that form. */
+export function parseLaneKeyText(text: string): LaneKey | null {
+  const match = /^([^>|]+)>([^>|]+)\|([^|]*)\|(\d+)$/.exec(text.trim());
+  if (!match) return null;
+  const occurrence = Number(match[4]);
+  if (occurrence < 1) return null;
+  return { from: match[1], to: match[2], ref: match[3] === '' ? null : match[3], occurrence };
+}
+
+/** Unambiguous identity of a key (depot ids may hold any character), for maps and sets. */
+export function laneKeyId(key: LaneKey): string {
+  return JSON.stringify([key.from, key.to, key.ref ?? null, key.occurrence]);
+}
+
+/** Map from laneKeyId to lane index, for resolving many keys against one lane list. */
+export function laneKeyIndex(keys: readonly LaneKey[]): Map<string, number> {
+  const index = new Map<string, number>();
+  keys.forEach((key, e) => index.set(laneKeyId(key), e));
+  return index;
+}
+
+/** True when both keys name the same lane. */
+export function sameLaneKey(a: LaneKey, b: LaneKey): boolean {
+  return a.from === b.from && a.to === b.to && (a.ref ?? null) === (b.ref ?? null) && a.occurrence === b.occurrence;
+}
