@@ -2,6 +2,8 @@
 // settings and the what-if scenarios). Shared by the Electron main process (reads and writes the file)
 // and the renderer (edits it). Plain JSON data only, so it crosses IPC and storage unchanged.
 
+import type { Scenario } from './scenario-shape';
+
 /** Value of the `format` field; a file without it is not a workspace. */
 export const WORKSPACE_FORMAT = 'lanewright-workspace';
 
@@ -37,8 +39,7 @@ export interface PlanningSettings {
  * Scenarios are the engine's `Scenario` (engine/scenario), embedded as they are; names are unique
  * within a workspace so `activeScenario` can name one.
  */
-export type { Scenario as WorkspaceScenario } from './scenario-shape';
-import type { Scenario } from './scenario-shape';
+export type WorkspaceScenario = Scenario;
 
 /** The whole workspace as it is saved (version 1). */
 export interface WorkspaceDocument {
@@ -48,7 +49,7 @@ export interface WorkspaceDocument {
   savedAt: string | null;
   files: WorkspaceFiles;
   settings: PlanningSettings;
-  scenarios: Scenario[];
+  scenarios: WorkspaceScenario[];
   /** Name of the scenario being viewed, or null for the base contract. */
   activeScenario: string | null;
 }
