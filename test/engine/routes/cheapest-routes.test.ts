@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, STATUS_UNREACHABLE, type RouteTree } from '../../../engine/routes/cheapest-routes';
 import { routePath } from '../../../engine/routes/route-path';
-import { UnboundedPathError } from '../../../engine/errors';
+import { MoneyOverflowError, UnboundedPathError } from '../../../engine/errors';
 import type { Network } from '../../../engine/network/types';
 import { networkOf } from '../../support/network-builder';
 import { buildNetwork } from '../../../engine/network/build';
@@ -45,6 +45,41 @@ describe('published worked examples', () => {
     expect(tree.loops[0].depots.map((d) => net.depotIds[d])).toEqual(['e', 'f']);
     expect(tree.loops[0].netPerLap).toBe(-3);
     expect(() => routePath(net, tree, net.depotIndex.get('g')!)).toThrow(UnboundedPathError);
+  });
+
+  // Sedgewick and Wayne, "Algorithms", 4th edition, section 4.4 (shortest paths), the tinyEWDn
+  // network: negative edges, no negative cycle, distances from vertex 0. Edges and distances from
+  // memory, converted to cents.
+  const tinyEWDn: [string, string, number][] = [
+    ['4', '5', 35], ['5', '4', 35], ['4', '7', 37], ['5', '7', 28], ['7', '5', 28], ['5', '1', 32], ['0', '4', 38], ['0', '2', 26],
+    ['7', '3', 39], ['1', '3', 29], ['2', '7', 34], ['6', '2', -120], ['3', '6', 52], ['6', '0', -140], ['6', '4', -125],
+  ];
+  const eight = ['0', '1', '2', '3', '4', '5', '6', '7'];
+
+  it('Sedgewick & Wayne, Algorithms 4th ed., tinyEWDn: distances from 0', () => {
+    const net = networkOf(eight, tinyEWDn);
+    const tree = solve(net, '0');
+    expect(eight.map((id) => costOf(net, tree, id))).toEqual([0, 93, 26, 99, 26, 61, 151, 60]);
+    expect(pathIds(net, tree, '1')).toBe('0>2>7>3>6>4>5>1');
+    expect(tree.loops).toEqual([]);
+  });
+
+  // Same book and section, tinyEWDnc: tinyEWDn with 5->4 weighted -0.66, which makes the negative
+  // cycle 4->5->4 (0.35 - 0.66 = -0.31). Values from memory. The cycle is reachable from 0 and
+  // every vertex is reachable from it, so every depot is unbounded.
+  it('Sedgewick & Wayne, Algorithms 4th ed., tinyEWDnc: negative cycle 4->5->4', () => {
+    const lanes = tinyEWDn.map(([u, v, w]): [string, string, number] => (u === '5' && v === '4' ? [u, v, -66] : [u, v, w]));
+    const net = networkOf(eight, lanes);
+    const tree = solve(net, '0');
+    for (const id of eight) expect(costOf(net, tree, id), id).toBe(-Infinity);
+    expect(tree.loops).toHaveLength(1); // one strongly connected part holds every negative loop
+    const fiveToFour = lanes.findIndex(([u, v]) => u === '5' && v === '4');
+    const loop = tree.loops[0];
+    // The book names 4->5->4; 4->7->5->4 (0.37 + 0.28 - 0.66 = -0.01) is negative too and also
+    // valid. Either way the loop runs through the changed lane 5->4.
+    expect(loop.lanes).toContain(fiveToFour);
+    expect([-31, -1]).toContain(loop.netPerLap);
+    expect(() => routePath(net, tree, 0)).toThrow(UnboundedPathError);
   });
 });
 
@@ -111,6 +146,65 @@ describe('edge cases', () => {
     const tree = solve(net, 'A');
     expect(Array.from(tree.status)).toEqual([STATUS_UNBOUNDED, STATUS_UNBOUNDED, STATUS_UNREACHABLE]);
     expect(tree.loops[0].netPerLap).toBe(-1);
+  });
+
+  it('a zero-cost lane from a depot to itself is no loop; a single depot with a rebate on one is unbounded', () => {
+    const zero = networkOf(['A', 'B'], [['A', 'A', 0], ['A', 'B', 3]]);
+    const tree = solve(zero, 'A');
+    expect(tree.loops).toEqual([]);
+    expect(pathIds(zero, tree, 'B')).toBe('A>B');
+    const single = networkOf(['Only'], [['Only', 'Only', -1]]);
+    const lone = solve(single, 'Only');
+    expect(lone.status[0]).toBe(STATUS_UNBOUNDED);
+    expect(lone.loops).toEqual([{ depots: [0], lanes: [0], netPerLap: -1 }]);
+  });
+
+  it('a loop the origin cannot reach, feeding depots it does reach, changes no cost', () => {
+    const base: [string, string, number][] = [['A', 'B', 4], ['B', 'C', 2], ['A', 'C', 7]];
+    const withLoop: [string, string, number][] = [...base, ['X', 'Y', -9], ['Y', 'X', 2], ['Y', 'C', -20], ['X', 'B', 0]];
+    const ids = ['A', 'B', 'C', 'X', 'Y'];
+    const plain = solve(networkOf(ids, base), 'A');
+    const net = networkOf(ids, withLoop);
+    const tree = solve(net, 'A');
+    expect(tree.loops).toEqual([]);
+    expect(Array.from(tree.cost)).toEqual(Array.from(plain.cost));
+    expect(Array.from(tree.status)).toEqual([STATUS_REACHABLE, STATUS_REACHABLE, STATUS_REACHABLE, STATUS_UNREACHABLE, STATUS_UNREACHABLE]);
+    // From X the same loop is reachable: warned, and everything downstream is unbounded.
+    const fromX = solve(net, 'X');
+    expect(fromX.loops).toHaveLength(1);
+    expect(Array.from(fromX.status)).toEqual([STATUS_UNREACHABLE, STATUS_UNBOUNDED, STATUS_UNBOUNDED, STATUS_UNBOUNDED, STATUS_UNBOUNDED]);
+  });
+
+  it('parallel lanes: only the cheaper one closes a rebate loop, and the loop names that lane', () => {
+    const net = networkOf(['A', 'B'], [['A', 'B', 5], ['B', 'A', -2], ['B', 'A', -7]]);
+    const tree = solve(net, 'A');
+    expect(tree.loops).toHaveLength(1);
+    expect(tree.loops[0].lanes).toEqual([0, 2]);
+    expect(tree.loops[0].netPerLap).toBe(-2);
+  });
+
+  it('a closed lane (weight +Infinity) neither routes nor closes a loop', () => {
+    const net = networkOf(['A', 'B', 'C'], [['A', 'B', 1], ['B', 'A', -5], ['B', 'C', 1]]);
+    const weights = Float64Array.from(net.outNet);
+    const closing = Array.from(net.outLane).indexOf(1);
+    weights[closing] = Infinity;
+    const tree = cheapestRoutes(net, 0, weights);
+    expect(tree.loops).toEqual([]);
+    expect(Array.from(tree.cost)).toEqual([0, 1, 2]);
+    expect(solve(net, 'A').loops).toHaveLength(1);
+  });
+
+  it('the origin with no lanes reaches nothing else', () => {
+    const net = networkOf(['A', 'B', 'C'], [['B', 'C', 1], ['C', 'A', 1]]);
+    const tree = solve(net, 'A');
+    expect(Array.from(tree.status)).toEqual([STATUS_REACHABLE, STATUS_UNREACHABLE, STATUS_UNREACHABLE]);
+    expect(tree.cost[0]).toBe(0);
+  });
+
+  it('a route cost beyond the exact range is refused, not rounded', () => {
+    const big = Number.MAX_SAFE_INTEGER - 10;
+    const net = networkOf(['A', 'B', 'C'], [['A', 'B', big], ['B', 'C', big]]);
+    expect(() => solve(net, 'A')).toThrow(MoneyOverflowError);
   });
 
   it('reports a second loop further inside the unbounded region', () => {
