@@ -136,6 +136,16 @@ describe('lanewright routes', () => {
     expectOneLineError(run('routes', '--depots', work, '--lanes', lanes, '--from', 'A'), work);
   });
 
+  it('runs as `npx lanewright` from the repository root', () => {
+    const result = spawnSync('npx', ['--offline', 'lanewright', 'routes', '--depots', depots, '--lanes', lanes, '--from', 'A'], {
+      cwd: root,
+      encoding: 'utf8',
+      timeout: 60_000,
+    });
+    expect(result.status, result.stderr).toBe(0);
+    expect(csvObjects(result.stdout).find((r) => r.id === 'C')).toMatchObject({ cost: '17.50', path: 'A>B>C' });
+  });
+
   it('a bad --max-legs is refused in one line', () => {
     expectOneLineError(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--max-legs', 'two'), 'max-legs');
   });
