@@ -1,0 +1,127 @@
+// Compares a scenario with the base from one origin: each depot's cost before and after, whether
+// its cheapest route changed, and which rebate loops (network-wide) appear or disappear. Lanes are
+// matched by LaneKey, so a lane the scenario only re-priced still counts as the same lane.
+
+import { findDistinctLoops } from '../audit/distinct-loops';
+import { depotIndexOf } from '../network/build';
+import type { Network } from '../network/types';
+import { cheapestRoutes, statusName, STATUS_REACHABLE, STATUS_UNBOUNDED, type DepotStatus, type RouteTree } from '../routes/cheapest-routes';
+import { routePath } from '../routes/route-path';
+import { applyScenario, type AppliedScenario, type ApplyOptions, type ScenarioBase, type ScenarioProblem } from './apply';
+import { laneKeyId, type LaneKey } from './lane-key';
+import type { Scenario } from './types';
+
+export interface DepotComparison {
+  depot: string;
+  name: string;
+  baseStatus: DepotStatus;
+  scenarioStatus: DepotStatus;
+  /** Exact costs in minor units where reachable, else null. */
+  baseCost: number | null;
+  scenarioCost: number | null;
+  /** scenarioCost - baseCost when both are reachable, else null. */
+  change: number | null;
+  /** True when the lanes of the cheapest route differ (or the status does). */
+  routeChanged: boolean;
+  baseRoute: LaneKey[] | null;
+  scenarioRoute: LaneKey[] | null;
+}
+
+export interface ComparedLoop {
+  depots: string[];
+  lanes: LaneKey[];
+  /** Source rows of the lanes (0 for a lane the scenario added). */
+  rows: number[];
+  netPerLap: number;
+  /** True when the origin reaches the loop (its costs are unbounded from there). */
+  reachedFromOrigin: boolean;
+}
+
+export interface ScenarioComparison {
+  scenario: string;
+  origin: string;
+  currency: string;
+  problems: ScenarioProblem[];
+  depots: DepotComparison[];
+  loopsAppeared: ComparedLoop[];
+  loopsDisappeared: ComparedLoop[];
+  /** True when either side has more distinct loops than the cap. */
+  loopCapReached: boolean;
+  baseNetwork: Network;
+  applied: AppliedScenario;
+}
+
+export interface CompareOptions extends ApplyOptions {
+  /** Most distinct loops looked for on each side (default 100). */
+  loopCap?: number;
+}
+
+/** Applies `scenario` to `base` and compares both from the depot with id `originId`. */
+export function compareScenario(base: ScenarioBase, scenario: Scenario, originId: string, options: CompareOptions = {}): ScenarioComparison {
+  const applied = applyScenario(base, scenario, options);
+  // The base goes through the same date filter, so only the scenario's changes differ.
+  const unchanged = applyScenario(base, { name: 'base', description: null, changes: [] }, options);
+  const baseNetwork = unchanged.network;
+  const baseKeys = unchanged.laneKeys;
+  const scenarioNetwork = applied.network;
+  const origin = depotIndexOf(baseNetwork, originId, 'compare --from');
+  const before = cheapestRoutes(baseNetwork, origin);
+  const after = cheapestRoutes(scenarioNetwork, depotIndexOf(scenarioNetwork, originId, 'compare --from'));
+
+  const routeOf = (net: Network, tree: RouteTree, keys: LaneKey[], d: number) =>
+    tree.status[d] === STATUS_REACHABLE ? routePath(net, tree, d)!.lanes.map((e) => keys[e]) : null;
+  const sameRoute = (a: LaneKey[] | null, b: LaneKey[] | null) =>
+    a !== null && b !== null && a.length === b.length && a.every((k, i) => laneKeyId(k) === laneKeyId(b[i]));
+
+  const depots: DepotComparison[] = [];
+  for (let d = 0; d < baseNetwork.depotCount; d++) {
+    const baseCost = before.status[d] === STATUS_REACHABLE ? before.cost[d] : null;
+    const scenarioCost = after.status[d] === STATUS_REACHABLE ? after.cost[d] : null;
+    const baseRoute = routeOf(baseNetwork, before, baseKeys, d);
+    const scenarioRoute = routeOf(scenarioNetwork, after, applied.laneKeys, d);
+    depots.push({
+      depot: baseNetwork.depotIds[d],
+      name: baseNetwork.depotNames[d],
+      baseStatus: statusName(before.status[d]),
+      scenarioStatus: statusName(after.status[d]),
+      baseCost,
+      scenarioCost,
+      change: baseCost !== null && scenarioCost !== null ? scenarioCost - baseCost : null,
+      routeChanged: before.status[d] !== after.status[d] || (baseRoute !== null && !sameRoute(baseRoute, scenarioRoute)),
+      baseRoute,
+      scenarioRoute,
+    });
+  }
+
+  const cap = options.loopCap;
+  const loopsOf = (net: Network, keys: LaneKey[], tree: RouteTree) => {
+    const found = findDistinctLoops(net, { cap });
+    const byId = new Map<string, ComparedLoop>();
+    for (const loop of found.loops) {
+      const lanes = loop.lanes.map((e) => keys[e]);
+      const id = lanes.map(laneKeyId).sort().join('\n');
+      byId.set(id, {
+        depots: loop.depots.map((x) => net.depotIds[x]),
+        lanes,
+        rows: loop.lanes.map((e) => net.laneRow[e]),
+        netPerLap: loop.netPerLap,
+        reachedFromOrigin: tree.status[loop.depots[0]] === STATUS_UNBOUNDED,
+      });
+    }
+    return { byId, capReached: found.capReached };
+  };
+  const was = loopsOf(baseNetwork, baseKeys, before);
+  const now = loopsOf(scenarioNetwork, applied.laneKeys, after);
+  return {
+    scenario: scenario.name,
+    origin: originId,
+    currency: baseNetwork.currency,
+    problems: applied.problems,
+    depots,
+    loopsAppeared: [...now.byId].filter(([id]) => !was.byId.has(id)).map(([, loop]) => loop),
+    loopsDisappeared: [...was.byId].filter(([id]) => !now.byId.has(id)).map(([, loop]) => loop),
+    loopCapReached: was.capReached || now.capReached,
+    baseNetwork,
+    applied,
+  };
+}
