@@ -1,0 +1,48 @@
+// Opens and saves workspace files on disk: size limit, UTF-8, validation and migration on read;
+// relative input paths, a fresh save timestamp and an atomic replace on write.
+
+import { readFile, stat } from 'node:fs/promises';
+import type { WorkspaceDocument } from '../../engine/workspace/document';
+import { parseWorkspace, serializeWorkspace } from '../../engine/workspace/parse';
+import { writeFileAtomic, type AtomicWriteHooks } from './atomic-write';
+import { FileAccessError, fileAccessError } from './errors';
+import { withResolvedPaths, withStoredPaths } from './stored-paths';
+
+/** Largest workspace file read (a workspace holds settings and edits, never lane data). */
+export const MAX_WORKSPACE_BYTES = 64 * 1024 * 1024;
+
+/** Reads, checks and migrates the workspace at `path`; input paths come back absolute. */
+export async function readWorkspaceFile(path: string): Promise<{ document: WorkspaceDocument; migratedFrom: number }> {
+  const text = await readTextFile(path, MAX_WORKSPACE_BYTES);
+  const { document, migratedFrom } = parseWorkspace(text, path);
+  return { document: withResolvedPaths(document, path), migratedFrom };
+}
+
+/** Writes `document` to `path` atomically, stamping the save time; returns what was written. */
+export async function writeWorkspaceFile(
+  path: string,
+  document: WorkspaceDocument,
+  now: Date = new Date(),
+  hooks?: AtomicWriteHooks,
+): Promise<WorkspaceDocument> {
+  const stamped: WorkspaceDocument = { ...document, savedAt: now.toISOString() };
+  const text = serializeWorkspace(withStoredPaths(stamped, path), path);
+  await writeFileAtomic(path, text, hooks);
+  return stamped;
+}
+
+/** Reads a UTF-8 text file of at most `maxBytes`, without the byte-order mark. */
+export async function readTextFile(path: string, maxBytes: number): Promise<string> {
+  let text: string;
+  try {
+    const info = await stat(path);
+    if (!info.isFile()) throw new FileAccessError(path, 'read', 'ENOTFILE', 'this is not a regular file');
+    if (info.size > maxBytes) {
+      throw new FileAccessError(path, 'read', 'EFBIG', `the file is ${info.size} bytes; the limit is ${maxBytes}`);
+    }
+    text = await readFile(path, 'utf8');
+  } catch (error) {
+    throw fileAccessError(path, 'read', error);
+  }
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
