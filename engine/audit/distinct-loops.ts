@@ -10,7 +10,7 @@ import { loopKey, type RebateLoop } from '../loops/rebate-loop';
 import type { Network } from '../network/types';
 
 export interface DistinctLoopsOptions {
-  /** Most loops to report (default 100). */
+  /** Most loops to report (default 100); the first loop of each component is reported even past it. */
   cap?: number;
   /** Cost per CSR position; defaults to the network's net costs. */
   weights?: Float64Array;
@@ -79,10 +79,6 @@ export function findDistinctLoops(network: Network, options: DistinctLoopsOption
     const root: Branch = { component, closed: [] };
     const loop = search(root);
     if (!loop) return;
-    if (loops.length >= cap) {
-      capReached = true;
-      return;
-    }
     known.add(loopKey(loop));
     loops.push(loop);
     componentOfLoop.push(component);

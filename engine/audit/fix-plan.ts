@@ -44,7 +44,7 @@ const allDepots = (n: number) => Int32Array.from({ length: n }, (_, d) => d);
 /**
  * Builds the plan. Among a loop's rebate lanes it prefers, in order: negotiable lanes; lanes whose
  * rebate covers the whole amount (one cut fixes the loop); the cut that is the smallest share of the
- * lane's rebate; the lowest source row.
+ * lane's rebate; the largest rebate (when none covers the amount); the lowest source row.
  */
 export function buildFixPlan(network: Network, options: FixPlanOptions = {}): FixPlan {
   const n = network.depotCount;
@@ -68,7 +68,7 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
       unfixable.push(loop);
       break;
     }
-    const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], network.laneRow[e]];
+    const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], -rebate[e], network.laneRow[e]];
     candidates.sort((a, b) => {
       const ra = rank(a);
       const rb = rank(b);

@@ -1,0 +1,66 @@
+import { describe, expect, it } from 'vitest';
+import { laneFloors } from '../../../engine/audit/headroom';
+import { auditNetwork } from '../../../engine/audit/network-audit';
+import { networkOf } from '../../support/network-builder';
+import { indexedLanes, randomNetwork, referenceHasNegativeLoop } from './reference';
+
+/**
+ * Brute force, independent of the engine: with lane e's net set to its floor there is no negative
+ * loop (js-graph-algorithms' Bellman-Ford); one minor unit lower there is. "No limit" means even a
+ * huge rebate on that lane makes no loop.
+ */
+function checkFloorsByBruteForce(depotCount: number, nets: Float64Array, floor: Float64Array, lanes: ReturnType<typeof indexedLanes>, label: string) {
+  for (let e = 0; e < lanes.length; e++) {
+    const withNet = (value: number) => lanes.map((l, i) => (i === e ? ([l[0], l[1], value] as typeof l) : l));
+    if (Number.isNaN(floor[e])) {
+      expect(referenceHasNegativeLoop(depotCount, withNet(-1_000_000_000)), `${label} lane ${e}: no limit`).toBe(false);
+      continue;
+    }
+    expect(nets[e] >= floor[e], `${label} lane ${e}: net is above its floor`).toBe(true);
+    expect(referenceHasNegativeLoop(depotCount, withNet(floor[e])), `${label} lane ${e}: at its floor`).toBe(false);
+    expect(referenceHasNegativeLoop(depotCount, withNet(floor[e] - 1)), `${label} lane ${e}: one below its floor`).toBe(true);
+  }
+}
+
+describe('rebate headroom', () => {
+  it('a two-depot example worked by hand', () => {
+    // A->B nets 10, B->A nets 4: A->B may fall to -4 before the pair pays; B->A to -10. C has no way back.
+    const net = networkOf(['A', 'B', 'C'], [['A', 'B', 10], ['B', 'A', 4], ['B', 'C', 7], ['C', 'C', 0]]);
+    const { floor } = laneFloors(net);
+    expect(Array.from(floor)).toEqual([-4, -10, NaN, 0]);
+  });
+
+  it('matches brute force on 60 small random loop-free networks', () => {
+    for (let seed = 1; seed <= 60; seed++) {
+      const depots = 2 + (seed % 7);
+      const net = randomNetwork(seed, depots, depots * 2 + (seed % 5), true, 20);
+      const { floor, net: nets } = laneFloors(net);
+      checkFloorsByBruteForce(depots, nets, floor, indexedLanes(net, nets), `seed ${seed}`);
+    }
+  });
+
+  it('is computed on the fixed network when the network has loops, and matches brute force there', () => {
+    let withLoops = 0;
+    for (let seed = 100; seed < 160; seed++) {
+      const depots = 3 + (seed % 5);
+      const net = randomNetwork(seed, depots, depots * 2, false, 20);
+      const audit = auditNetwork(net);
+      expect(audit.headroom, `seed ${seed}`).not.toBeNull();
+      const { floor, net: nets } = audit.headroom!;
+      if (audit.loops.length > 0) {
+        withLoops++;
+        expect(audit.headroomAfterFixPlan).toBe(true);
+      }
+      checkFloorsByBruteForce(depots, nets, floor, indexedLanes(net, nets), `seed ${seed}`);
+    }
+    expect(withLoops).toBeGreaterThan(10);
+  });
+
+  it('reports progress up to the number of distinct destinations', () => {
+    const net = randomNetwork(7, 30, 120, true);
+    const seen: [number, number][] = [];
+    const result = laneFloors(net, { onProgress: (done, total) => seen.push([done, total]) });
+    expect(seen[0][0]).toBe(0);
+    expect(seen.at(-1)).toEqual([result.sources, result.sources]);
+  });
+});
