@@ -11,6 +11,7 @@ export * from './routes/leg-limited';
 export * from './loops/rebate-loop';
 export * from './loops/strong-components';
 export * from './loops/find-negative-loop';
+export * from './loops/find-negative-loops';
 export * from './report/routes-report';
 export * from './routes/indexed-min-heap';
 export * from './routes/dijkstra';

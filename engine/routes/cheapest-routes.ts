@@ -4,7 +4,7 @@
 // of the unbounded region that holds a loop, not only the first loop the solve ran into).
 
 import { componentHasCycle, strongComponents } from '../loops/strong-components';
-import { findNegativeLoop } from '../loops/find-negative-loop';
+import { findNegativeLoops } from '../loops/find-negative-loops';
 import { loopKey, toRebateLoop, type RebateLoop } from '../loops/rebate-loop';
 import type { Network } from '../network/types';
 import { IN_TREE, UNBOUNDED, labelCorrect } from './label-correcting';
@@ -64,23 +64,15 @@ export function cheapestRoutes(network: Network, origin: number, weights?: Float
 }
 
 // The solve stops looking inside a region once it is unbounded, so a second loop further on would
-// go unreported. Each strongly connected part of the unbounded region that can hold a loop and has
-// none reported yet is searched on its own.
+// go unreported. Every strongly connected part of the unbounded region that can hold a loop and has
+// none reported yet is searched, all parts in one pass (see find-negative-loops.ts).
 function loopsMissedInside(network: Network, status: Uint8Array, known: RebateLoop[], weights?: Float64Array): RebateLoop[] {
   const allowed = new Uint8Array(network.depotCount);
   for (let d = 0; d < network.depotCount; d++) if (status[d] === STATUS_UNBOUNDED) allowed[d] = 1;
   const { componentOf, members } = strongComponents(network, allowed, weights);
   const covered = new Uint8Array(members.length);
   for (const loop of known) covered[componentOf[loop.depots[0]]] = 1;
+  const open = members.filter((component, c) => !covered[c] && componentHasCycle(network, component, weights));
   const seen = new Set(known.map(loopKey));
-  const extra: RebateLoop[] = [];
-  members.forEach((component, c) => {
-    if (covered[c] || !componentHasCycle(network, component, weights)) return;
-    const loop = findNegativeLoop(network, component, weights);
-    if (loop && !seen.has(loopKey(loop))) {
-      seen.add(loopKey(loop));
-      extra.push(loop);
-    }
-  });
-  return extra;
+  return findNegativeLoops(network, open, weights).filter((loop): loop is RebateLoop => loop !== null && !seen.has(loopKey(loop)));
 }

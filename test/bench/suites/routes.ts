@@ -109,6 +109,19 @@ function withRebateLoop(depotCount: number, laneCount: number, seed: number): Ge
   return { network: compile(depotCount, from, to, net), origin: 0 };
 }
 
+/** A rebate loop at depot 0 <-> 1, then a chain of two-depot parts; every tenth part holds a rebate loop. */
+function chainOfPairs(depotCount: number): Network {
+  const from: number[] = [0, 1];
+  const to: number[] = [1, 0];
+  const net: number[] = [500, -600];
+  for (let i = 2; i + 1 < depotCount; i += 2) {
+    from.push(i - 1, i, i + 1);
+    to.push(i, i + 1, i);
+    net.push(100, 300, i % 20 === 2 ? -400 : 300);
+  }
+  return compile(depotCount, Int32Array.from(from), Int32Array.from(to), Float64Array.from(net));
+}
+
 interface BaselineResult {
   dist: Float64Array;
   relaxations: number;
@@ -229,5 +242,17 @@ export const suite: BenchSuite = {
           : `ran ${baseline.result.rounds} rounds, ${baseline.result.stillDropping} costs still dropping in the last`),
     });
     record({ case: 'rebate loop 20k/100k: relaxations', engine: engine.result.stats.relaxations, baseline: baseline.result.relaxations, unit: 'count' });
+
+    // Loop reporting looks inside every strongly connected part of the unbounded region; this case
+    // (a loop at the origin, then 50,000 two-depot parts in a chain) guards against that search
+    // costing O(depots) per part.
+    const chain = chainOfPairs(100_000);
+    const chained = timeBest(() => cheapestRoutes(chain, 0), 3);
+    record({
+      case: 'loop ahead of 50k small parts (100k depots): solve + loop report',
+      engine: chained.ms,
+      unit: 'ms',
+      note: `${chained.result.loops.length} loops reported (one per part that holds one); no baseline, plain Bellman-Ford has no per-part loop report`,
+    });
   },
 };

@@ -6,6 +6,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { UnboundedPathError } from '../../../engine/errors';
 import { findNegativeLoop } from '../../../engine/loops/find-negative-loop';
+import { findNegativeLoops } from '../../../engine/loops/find-negative-loops';
 import { loopKey, type RebateLoop } from '../../../engine/loops/rebate-loop';
 import { strongComponents } from '../../../engine/loops/strong-components';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, STATUS_UNREACHABLE } from '../../../engine/routes/cheapest-routes';
@@ -147,6 +148,27 @@ describe('rebate loops on random networks match reference libraries', () => {
         }
       }),
       { seed: SEED + 4, numRuns: 1500 },
+    );
+  });
+
+  it('findNegativeLoops, all components in one pass, agrees with the reference per component', () => {
+    fc.assert(
+      fc.property(anyNetwork(30, 70, -6, 20), (spec) => {
+        const net = toNetwork(spec);
+        const withLoop = componentsWithNegativeLoop(spec).map((c) => [...c].sort((a, b) => a - b).join(','));
+        const { members } = strongComponents(net);
+        const loops = findNegativeLoops(net, members);
+        expect(loops).toHaveLength(members.length);
+        members.forEach((component, c) => {
+          const key = component.slice().sort((a, b) => a - b).join(',');
+          expect(loops[c] !== null, `component {${key}}`).toBe(withLoop.includes(key));
+          if (loops[c]) {
+            expectRealLoop(spec, loops[c]!);
+            expect(loops[c]!.depots.every((d) => component.includes(d))).toBe(true);
+          }
+        });
+      }),
+      { seed: SEED + 6, numRuns: 1500 },
     );
   });
 });

@@ -207,6 +207,22 @@ describe('edge cases', () => {
     expect(() => solve(net, 'A')).toThrow(MoneyOverflowError);
   });
 
+  it('reports a loop in each of many small components downstream of a loop', () => {
+    // O <-> A is a rebate loop; behind it a chain of 200 two-depot parts, every fifth with a rebate loop.
+    const ids = ['O', 'A'];
+    const lanes: [string, string, number][] = [['O', 'A', 5], ['A', 'O', -6]];
+    let previous = 'A';
+    for (let i = 0; i < 200; i++) {
+      const [x, y] = [`X${i}`, `Y${i}`];
+      ids.push(x, y);
+      lanes.push([previous, x, 1], [x, y, 3], [y, x, i % 5 === 0 ? -4 : 3]);
+      previous = y;
+    }
+    const tree = solve(networkOf(ids, lanes), 'O');
+    expect(tree.loops).toHaveLength(1 + 40);
+    expect(Array.from(tree.status).every((s) => s === STATUS_UNBOUNDED)).toBe(true);
+  });
+
   it('reports a second loop further inside the unbounded region', () => {
     // Loop 1 (A<->B) is met first; loop 2 (C<->D) lies downstream of it in another component.
     const net = networkOf(['O', 'A', 'B', 'C', 'D'], [
