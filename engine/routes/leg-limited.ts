@@ -115,7 +115,9 @@ export function legLimitedRoutes(network: Network, origin: number, maxLegs: numb
     if (cost[d] === Infinity) continue;
     status[d] = STATUS_REACHABLE;
     finalCost[d] = cost[d];
-    legs[d] = walkBack(d).lanes.length;
+    // Round k only extends walks that changed in round k-1, so an entry of round k ends a walk of
+    // exactly k lanes: no need to walk back here.
+    legs[d] = logRound[latest[d]];
   }
 
   const unlimited = cheapestRoutes(network, origin, weights);
