@@ -1,0 +1,70 @@
+// A small static file server for browser mode (`npm run web`) and the end-to-end tests: serves the
+// built renderer from one folder on localhost only, with the same Content-Security-Policy as the app.
+
+import { createReadStream } from 'node:fs';
+import { stat } from 'node:fs/promises';
+import { createServer, type Server } from 'node:http';
+import { extname, join, normalize, resolve, sep } from 'node:path';
+
+const TYPES: Record<string, string> = {
+  '.html': 'text/html; charset=utf-8',
+  '.js': 'text/javascript; charset=utf-8',
+  '.mjs': 'text/javascript; charset=utf-8',
+  '.css': 'text/css; charset=utf-8',
+  '.json': 'application/json; charset=utf-8',
+  '.map': 'application/json; charset=utf-8',
+  '.svg': 'image/svg+xml',
+  '.png': 'image/png',
+  '.ico': 'image/x-icon',
+  '.csv': 'text/csv; charset=utf-8',
+};
+
+export interface RunningServer {
+  server: Server;
+  port: number;
+  url: string;
+  close(): Promise<void>;
+}
+
+/** Serves `root` on 127.0.0.1:`port` (0 = any free port). Paths outside `root` are refused. */
+export function serveStatic(root: string, port: number): Promise<RunningServer> {
+  const base = resolve(root);
+  const server = createServer(async (request, response) => {
+    try {
+      const url = new URL(request.url ?? '/', 'http://localhost');
+      const relative = normalize(decodeURIComponent(url.pathname)).replace(/^([/\\])+/, '');
+      let file = join(base, relative === '' ? 'index.html' : relative);
+      if (file !== base && !file.startsWith(base + sep)) {
+        response.writeHead(403).end('outside the served folder');
+        return;
+      }
+      const info = await stat(file).catch(() => null);
+      if (info?.isDirectory()) file = join(file, 'index.html');
+      else if (!info) {
+        response.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
+        return;
+      }
+      response.writeHead(200, {
+        'content-type': TYPES[extname(file)] ?? 'application/octet-stream',
+        'cache-control': 'no-cache',
+        'x-content-type-options': 'nosniff',
+      });
+      createReadStream(file).pipe(response);
+    } catch {
+      response.writeHead(400).end('bad request');
+    }
+  });
+  return new Promise((resolveStart, reject) => {
+    server.once('error', reject);
+    server.listen(port, '127.0.0.1', () => {
+      const address = server.address();
+      const actual = typeof address === 'object' && address ? address.port : port;
+      resolveStart({
+        server,
+        port: actual,
+        url: `http://127.0.0.1:${actual}/`,
+        close: () => new Promise((done) => server.close(() => done())),
+      });
+    });
+  });
+}

@@ -1,0 +1,91 @@
+// The window's layout: header, planning side panel, the map, the tabbed lower panel and the status
+// line. State lives in the workbench hook; this file only arranges components.
+
+import { useEffect, useMemo, useState } from 'react';
+import type { LanewrightHost } from '../../main/ipc/contract';
+import { laneKeysOf } from '../../engine/scenario/lane-key';
+import { AboutDialog } from '../components/AboutDialog/AboutDialog';
+import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';
+import { ImportDialog } from '../components/ImportPanel/ImportDialog';
+import { LoopAlert } from '../components/LoopAlert/LoopAlert';
+import { MapLegend } from '../components/MapLegend/MapLegend';
+import { PlanControls } from '../components/PlanControls/PlanControls';
+import { ProgressBar } from '../components/ProgressBar/ProgressBar';
+import { RouteDetail } from '../components/RouteDetail/RouteDetail';
+import { StatusBar } from '../components/StatusBar/StatusBar';
+import { TopBar } from '../components/TopBar/TopBar';
+import { NetworkMap } from '../map/NetworkMap';
+import { applyScenarioAmounts } from '../model/scenario-edits';
+import { LowerPanel } from './LowerPanel';
+import { useCommands } from './use-commands';
+import { useWorkbench } from './use-workbench';
+
+export function App({ host, version }: { host: LanewrightHost; version: string }) {
+  const bench = useWorkbench(host);
+  const { dataset, plan, settings, setSettings, scenario, selected, setSelected } = bench;
+  const network = dataset.network;
+  const [importOpen, setImportOpen] = useState(false);
+  const [aboutOpen, setAboutOpen] = useState(false);
+  const [tab, setTab] = useState('results');
+  const ui = useMemo(() => ({ openImport: () => setImportOpen(true), openAbout: () => setAboutOpen(true) }), []);
+  const { exportFile } = useCommands(bench, ui);
+
+  const keys = useMemo(() => (network ? laneKeysOf(Array.from(network.laneFrom, (a, e) => ({ from: network.depotIds[a], to: network.depotIds[network.laneTo[e]], ref: network.laneRef[e] }))) : []), [network]);
+  const amounts = useMemo(
+    () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario) : null),
+    [network, keys, scenario],
+  );
+
+  // A newly imported network without the chosen origin starts from its first depot.
+  useEffect(() => {
+    if (network && network.depotIds.length > 0 && !network.depotIds.includes(settings.origin)) setSettings({ ...settings, origin: network.depotIds[0] });
+  }, [network, settings, setSettings]);
+
+  const solve = plan.solve && network && plan.solve.status.length === network.depotIds.length ? plan.solve : null;
+  const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
+  return (
+    <div className="lw-app">
+      <a className="lw-skip" href="#lw-lower">
+        Skip to results
+      </a>
+      <TopBar datasetName={datasetName} desktop={host.kind === 'desktop'} dirty={bench.dirty} onSample={(loop) => void bench.openSample(loop)} onImport={ui.openImport} onSave={() => void bench.save(false)} onExport={(k) => void exportFile(k)} onAbout={ui.openAbout} />
+      <ProgressBar progress={bench.engine.progress} onCancel={bench.engine.cancel} />
+      {(dataset.error || plan.error) && (
+        <p className="lw-error" role="alert">
+          {dataset.error ?? plan.error}
+        </p>
+      )}
+      {network && solve && amounts && <LoopAlert network={network} solve={solve} amounts={amounts} onReview={() => setTab('review')} />}
+      <main className="lw-body">
+        <aside className="lw-side" aria-label="Plan and route">
+          {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
+          {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
+            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={plan.route} onPlanFrom={(d) => (setSettings({ ...settings, origin: network.depotIds[d] }), setSelected(null))} />
+          )}
+          {network && solve && selected === null && <p className="lw-muted">Pick a depot on the map or in the results to see its route and cost breakdown.</p>}
+        </aside>
+        <section className="lw-mapwrap" aria-label="Map">
+          <NetworkMap network={network} solve={solve} route={plan.route} selected={selected} onSelect={setSelected} />
+          <MapLegend />
+        </section>
+      </main>
+      <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
+        {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} />}
+      </section>
+      <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />
+      <FirstRunNotice />
+      {aboutOpen && <AboutDialog version={version} runtime={host.kind === 'desktop' ? 'desktop app' : 'browser'} onClose={() => setAboutOpen(false)} />}
+      {(importOpen || dataset.pending) && (
+        <ImportDialog
+          host={host}
+          current={dataset.files}
+          pending={dataset.pending}
+          onImport={bench.importFiles}
+          onContinue={dataset.continueWithAccepted}
+          onFix={dataset.dismissPending}
+          onClose={() => setImportOpen(false)}
+        />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,49 @@
+// The tabbed lower panel: results table, editable lanes with the scenario comparison, the
+// contract review and the last import's report.
+
+import type { Scenario } from '../model/scenario-edits';
+import type { LaneAmounts, LaneKey } from '../model/scenario-edits';
+import type { ExportKind, NetworkView, SolveView } from '../worker/protocol';
+import { ContractReview } from '../components/ContractReview/ContractReview';
+import { ImportReportTable } from '../components/ImportPanel/ImportReportTable';
+import { LaneTable } from '../components/LaneTable/LaneTable';
+import { ResultsTable } from '../components/ResultsTable/ResultsTable';
+import { ScenarioCompare } from '../components/ScenarioCompare/ScenarioCompare';
+import { Tabs } from '../components/Tabs/Tabs';
+import type { Workbench } from './use-workbench';
+
+export interface LowerPanelProps {
+  bench: Workbench;
+  network: NetworkView;
+  solve: SolveView;
+  amounts: LaneAmounts;
+  keys: readonly LaneKey[];
+  tab: string;
+  onTab(tab: string): void;
+  onExport(kind: ExportKind): void;
+}
+
+export function LowerPanel({ bench, network, solve, amounts, keys, tab, onTab, onExport }: LowerPanelProps) {
+  const { scenario, setScenario, selected, setSelected, dataset } = bench;
+  const onScenario = (next: Scenario) => setScenario(next);
+  const issues = dataset.report?.issues.length ?? 0;
+  const tabs = [
+    { id: 'results', label: 'Results' },
+    { id: 'lanes', label: 'Lanes & scenario', badge: scenario.changes.length ? `(${scenario.changes.length} changed)` : undefined },
+    { id: 'review', label: 'Contract review', badge: solve.loops.length ? '(loop!)' : undefined },
+    { id: 'import', label: 'Import report', badge: issues ? `(${issues} rejected)` : undefined },
+  ];
+  return (
+    <Tabs tabs={tabs} active={tab} onChange={onTab} label="Results and contract">
+      {tab === 'results' && <ResultsTable network={network} solve={solve} selected={selected} onSelect={setSelected} onExport={() => onExport('routes-csv')} />}
+      {tab === 'lanes' && (
+        <div className="lw-split">
+          <LaneTable network={network} keys={keys} amounts={amounts} scenario={scenario} onScenario={onScenario} />
+          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} />
+        </div>
+      )}
+      {tab === 'review' && <ContractReview engine={bench.engine} network={network} scenario={scenario} />}
+      {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
+    </Tabs>
+  );
+}

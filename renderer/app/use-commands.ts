@@ -1,0 +1,62 @@
+// Commands shared by the header buttons and the desktop application menu: exports go through the
+// worker (which holds the plan) and then to the host (save dialog or download).
+
+import { useCallback, useEffect } from 'react';
+import type { MenuCommand } from '../../main/ipc/contract';
+import type { ExportKind } from '../worker/protocol';
+import type { Workbench } from './use-workbench';
+
+export interface CommandHandlers {
+  openImport(): void;
+  openAbout(): void;
+}
+
+export function useCommands(bench: Workbench, ui: CommandHandlers) {
+  const { host, engine, setMessage, save, openWorkspace } = bench;
+
+  const exportFile = useCallback(
+    async (what: ExportKind) => {
+      try {
+        const file = await engine.client.request<'exported'>({ kind: 'export', what });
+        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : 'csv');
+        if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
+        else if (result.value) setMessage(`Exported ${result.value.path}.`);
+      } catch (error) {
+        setMessage(`Export failed: ${(error as Error).message}`);
+      }
+    },
+    [engine, host, setMessage],
+  );
+
+  useEffect(
+    () =>
+      host.onMenuCommand((command: MenuCommand) => {
+        switch (command.command) {
+          case 'open-workspace':
+            return void openWorkspace(command.path);
+          case 'new-workspace':
+            return void bench.openSample(false);
+          case 'import-depots':
+          case 'import-lanes':
+            return ui.openImport();
+          case 'save':
+            return void save(false);
+          case 'save-as':
+            return void save(true);
+          case 'export-lanes':
+            return void exportFile('lanes-csv');
+          case 'export-routes':
+            return void exportFile('routes-csv');
+          case 'export-loops':
+            return void exportFile('loops-csv');
+          case 'export-geojson':
+            return void exportFile('geojson');
+          case 'about':
+            return ui.openAbout();
+        }
+      }),
+    [host, bench, ui, save, openWorkspace, exportFile],
+  );
+
+  return { exportFile };
+}

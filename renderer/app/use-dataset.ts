@@ -1,0 +1,68 @@
+// The loaded depots and lanes: importing a pair of files, the validation report, and the choice
+// the report offers (fix the file, or continue with the accepted rows). A refused import never
+// replaces the network already on screen.
+
+import { useCallback, useState } from 'react';
+import type { ImportReport, NamedText, NetworkView } from '../worker/protocol';
+import { WorkCancelledError, type Engine } from './use-engine';
+
+export interface DatasetFiles {
+  depots: NamedText;
+  lanes: NamedText;
+}
+
+/** An import waiting for the user's decision (its report lists rejected rows). */
+export interface PendingImport {
+  files: DatasetFiles;
+  report: ImportReport;
+}
+
+export interface Dataset {
+  files: DatasetFiles | null;
+  network: NetworkView | null;
+  /** Report of the import now on screen (rejected rows stay listed after continuing). */
+  report: ImportReport | null;
+  pending: PendingImport | null;
+  error: string | null;
+  /** Imports files; with issues the import waits in `pending` unless `acceptPartial`. Resolves true when loaded. */
+  load(files: DatasetFiles, acceptPartial?: boolean): Promise<boolean>;
+  continueWithAccepted(): Promise<boolean>;
+  dismissPending(): void;
+}
+
+export function useDataset(engine: Engine): Dataset {
+  const [files, setFiles] = useState<DatasetFiles | null>(null);
+  const [network, setNetwork] = useState<NetworkView | null>(null);
+  const [report, setReport] = useState<ImportReport | null>(null);
+  const [pending, setPending] = useState<PendingImport | null>(null);
+  const [error, setError] = useState<string | null>(null);
+
+  const load = useCallback(
+    async (next: DatasetFiles, acceptPartial = false): Promise<boolean> => {
+      setError(null);
+      try {
+        const request = { kind: 'load' as const, depots: next.depots, lanes: next.lanes, acceptPartial };
+        const answer = await engine.track((onProgress) => engine.client.request<'loaded'>(request, onProgress), 'Importing');
+        if (!answer.network) {
+          setPending({ files: next, report: answer.report });
+          return false;
+        }
+        engine.client.rememberLoad(request);
+        setFiles(next);
+        setNetwork(answer.network);
+        setReport(answer.report);
+        setPending(null);
+        return true;
+      } catch (caught) {
+        if (!(caught instanceof WorkCancelledError)) setError((caught as Error).message);
+        return false;
+      }
+    },
+    [engine],
+  );
+
+  const continueWithAccepted = useCallback(async () => (pending ? load(pending.files, true) : false), [load, pending]);
+  const dismissPending = useCallback(() => setPending(null), []);
+
+  return { files, network, report, pending, error, load, continueWithAccepted, dismissPending };
+}

@@ -1,0 +1,64 @@
+// One engine worker per window, with the progress of whatever it is doing and a way to cancel it.
+// Progress shows only for work that lasts over a moment, so quick solves do not flash a bar.
+
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { EngineClient, WorkCancelledError } from '../worker/client';
+
+export interface Progress {
+  phase: string;
+  fraction: number;
+}
+
+const SHOW_AFTER_MS = 150;
+
+export interface Engine {
+  client: EngineClient;
+  progress: Progress | null;
+  /** Runs a request with progress reporting; rejects with WorkCancelledError when cancelled. */
+  track<T>(work: (onProgress: (phase: string, fraction: number) => void) => Promise<T>, phase: string): Promise<T>;
+  cancel(): void;
+}
+
+export function useEngine(): Engine {
+  const clientRef = useRef<EngineClient | null>(null);
+  if (clientRef.current === null) {
+    clientRef.current = new EngineClient(() => new Worker(new URL('../worker/engine.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-engine' }));
+  }
+  const client = clientRef.current;
+  const [progress, setProgress] = useState<Progress | null>(null);
+  const running = useRef(0);
+
+  useEffect(() => () => client.dispose(), [client]);
+
+  const track = useCallback(
+    async <T,>(work: (onProgress: (phase: string, fraction: number) => void) => Promise<T>, phase: string): Promise<T> => {
+      running.current++;
+      let latest: Progress = { phase, fraction: 0 };
+      let shown = false;
+      const timer = setTimeout(() => {
+        shown = true;
+        setProgress(latest);
+      }, SHOW_AFTER_MS);
+      try {
+        return await work((p, fraction) => {
+          latest = { phase: p, fraction };
+          if (shown) setProgress(latest);
+        });
+      } finally {
+        clearTimeout(timer);
+        running.current--;
+        if (running.current === 0) setProgress(null);
+      }
+    },
+    [],
+  );
+
+  const cancel = useCallback(() => {
+    void client.cancel().catch(() => undefined);
+    setProgress(null);
+  }, [client]);
+
+  return { client, progress, track, cancel };
+}
+
+export { WorkCancelledError };

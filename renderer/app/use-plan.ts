@@ -1,0 +1,69 @@
+// Keeps the plan current: whenever the network, the controls or the scenario change, a solve is
+// queued (debounced, so typing in a field does not start a solve per key) and the newest answer
+// wins. Also fetches the selected depot's route.
+
+import { useEffect, useRef, useState } from 'react';
+import type { Scenario } from '../model/scenario-edits';
+import type { NetworkView, PlanSettings, RouteView, SolveView } from '../worker/protocol';
+import { WorkCancelledError, type Engine } from './use-engine';
+
+const DEBOUNCE_MS = 120;
+
+export interface Plan {
+  solve: SolveView | null;
+  /** Time from sending the solve to having its answer on the UI thread. */
+  roundTripMs: number | null;
+  route: RouteView | null;
+  error: string | null;
+  solving: boolean;
+}
+
+export function usePlan(engine: Engine, network: NetworkView | null, settings: PlanSettings, scenario: Scenario | null, selected: number | null): Plan {
+  const [solve, setSolve] = useState<SolveView | null>(null);
+  const [roundTripMs, setRoundTrip] = useState<number | null>(null);
+  const [route, setRoute] = useState<RouteView | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [solving, setSolving] = useState(false);
+  const latest = useRef(0);
+
+  useEffect(() => {
+    if (!network || !network.depotIds.includes(settings.origin)) {
+      setSolve(null);
+      return;
+    }
+    const ticket = ++latest.current;
+    setSolving(true);
+    const timer = setTimeout(async () => {
+      const started = performance.now();
+      try {
+        const answer = await engine.track((onProgress) => engine.client.request<'solved'>({ kind: 'solve', settings, scenario }, onProgress), 'Solving');
+        if (ticket !== latest.current) return;
+        setSolve(answer.result);
+        setRoundTrip(performance.now() - started);
+        setError(null);
+      } catch (caught) {
+        if (ticket === latest.current && !(caught instanceof WorkCancelledError)) setError((caught as Error).message);
+      } finally {
+        if (ticket === latest.current) setSolving(false);
+      }
+    }, DEBOUNCE_MS);
+    return () => clearTimeout(timer);
+  }, [engine, network, settings, scenario]);
+
+  useEffect(() => {
+    if (!solve || selected === null || solve.status[selected] !== 1) {
+      setRoute(null);
+      return;
+    }
+    let live = true;
+    engine.client
+      .request<'route'>({ kind: 'route', target: selected })
+      .then((answer) => live && setRoute(answer.route))
+      .catch(() => live && setRoute(null));
+    return () => {
+      live = false;
+    };
+  }, [engine, solve, selected]);
+
+  return { solve, roundTripMs, route, error, solving };
+}

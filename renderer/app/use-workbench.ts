@@ -1,0 +1,134 @@
+// The window's state in one place for the shell to hand out: host, engine, loaded data, planning
+// controls, the active scenario, the selection, and opening / saving the workspace.
+
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import type { LanewrightHost } from '../../main/ipc/contract';
+import { emptyScenario, type Scenario } from '../model/scenario-edits';
+import { SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
+import type { PlanSettings } from '../worker/protocol';
+import { useDataset, type DatasetFiles } from './use-dataset';
+import { useEngine } from './use-engine';
+import { usePlan } from './use-plan';
+import { defaultSettings, documentOf, filesOf, stateOf } from './workspace-doc';
+
+export function useWorkbench(host: LanewrightHost) {
+  const engine = useEngine();
+  const dataset = useDataset(engine);
+  const [settings, setSettings] = useState<PlanSettings>(() => defaultSettings(SAMPLE_ORIGIN));
+  const [scenario, setScenario] = useState<Scenario>(() => emptyScenario());
+  const [selected, setSelected] = useState<number | null>(null);
+  const [message, setMessage] = useState<string | null>(null);
+  const [savedPath, setSavedPath] = useState<string | null>(null);
+  const [dirty, setDirty] = useState(false);
+  const restored = useRef(false);
+  const plan = usePlan(engine, dataset.network, settings, scenario, selected);
+
+  const openSample = useCallback(
+    async (loop: boolean) => {
+      const ok = await dataset.load(sampleFiles(loop));
+      if (ok) {
+        setSettings((s) => ({ ...s, origin: SAMPLE_ORIGIN }));
+        setScenario(emptyScenario());
+        setSelected(null);
+        setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');
+      }
+    },
+    [dataset],
+  );
+
+  const openDocument = useCallback(
+    async (doc: Parameters<typeof stateOf>[0]) => {
+      const state = stateOf(doc);
+      const files = await filesOf(host, doc);
+      if (files && (await dataset.load(files))) {
+        setSettings(state.settings);
+        setScenario(state.scenario);
+        setSelected(null);
+        return true;
+      }
+      return false;
+    },
+    [host, dataset],
+  );
+
+  // First show: the last workspace when there is one, otherwise the sample so a plan is on screen.
+  useEffect(() => {
+    if (restored.current) return;
+    restored.current = true;
+    void (async () => {
+      try {
+        const recent = host.kind === 'web' ? null : await host.recentWorkspaces();
+        const path = recent && recent.ok && recent.value.length > 0 ? recent.value[0].path : null;
+        if (host.kind === 'web' || path) {
+          const opened = await host.openWorkspace(path);
+          if (opened.ok && opened.value && (await openDocument(opened.value.document))) {
+            setSavedPath(opened.value.path);
+            return;
+          }
+        }
+      } catch (error) {
+        setMessage(`Could not reopen the last workspace: ${(error as Error).message}. Showing the sample instead.`);
+      }
+      await openSample(false);
+    })();
+  }, [host, openDocument, openSample]);
+
+  const document = useMemo(() => documentOf(dataset.files, settings, scenario), [dataset.files, settings, scenario]);
+
+  // Browser mode keeps the workspace as it changes; the desktop marks it unsaved and saves on request.
+  const firstDocument = useRef(true);
+  useEffect(() => {
+    if (!dataset.files) return;
+    if (firstDocument.current) {
+      firstDocument.current = false;
+      return;
+    }
+    if (host.kind === 'web') void host.saveWorkspace(document, null, false);
+    else {
+      setDirty(true);
+      void host.setDirty(true);
+    }
+  }, [host, document, dataset.files]);
+
+  const save = useCallback(
+    async (saveAs: boolean) => {
+      const result = await host.saveWorkspace(document, savedPath, saveAs);
+      if (!result.ok) setMessage(`Not saved: ${result.failure.message}`);
+      else if (result.value) {
+        setSavedPath(result.value.path);
+        setDirty(false);
+        void host.setDirty(false);
+        setMessage(`Workspace saved to ${result.value.path}.`);
+        return true;
+      }
+      return false;
+    },
+    [host, document, savedPath],
+  );
+
+  const openWorkspace = useCallback(
+    async (path: string | null) => {
+      const opened = await host.openWorkspace(path);
+      if (!opened.ok) setMessage(`Could not open the workspace: ${opened.failure.message}`);
+      else if (opened.value && (await openDocument(opened.value.document))) {
+        setSavedPath(opened.value.path);
+        setDirty(false);
+        setMessage(`Opened ${opened.value.path}.`);
+      }
+    },
+    [host, openDocument],
+  );
+
+  const importFiles = useCallback(
+    async (files: DatasetFiles) => {
+      const ok = await dataset.load(files);
+      if (ok) setSelected(null);
+      return ok;
+    },
+    [dataset],
+  );
+
+  return { host, engine, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles };
+}
+
+export type Workbench = ReturnType<typeof useWorkbench>;

@@ -1,0 +1,62 @@
+// Converts between the saved workspace document (engine/workspace) and the renderer's state, and
+// finds the input files a document names (bundled sample files never go to the host).
+
+import type { LanewrightHost, WorkspaceDocument } from '../../main/ipc/contract';
+import { emptyWorkspace } from '../../engine/workspace/document';
+import { emptyScenario, type Scenario } from '../model/scenario-edits';
+import { sampleText } from '../sample/sample';
+import type { PlanSettings } from '../worker/protocol';
+import type { DatasetFiles } from './use-dataset';
+
+export const NO_CLASS = '';
+
+/** Today as an ISO 8601 date in the local calendar. */
+export function todayIso(now = new Date()): string {
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+}
+
+export function defaultSettings(origin: string): PlanSettings {
+  return { origin, maxLegs: null, vehicleClass: NO_CLASS, dispatchDate: todayIso() };
+}
+
+/** The document for the current state. */
+export function documentOf(files: DatasetFiles | null, settings: PlanSettings, scenario: Scenario): WorkspaceDocument {
+  const doc = emptyWorkspace();
+  doc.savedAt = new Date().toISOString();
+  doc.files = { depots: files?.depots.name ?? null, lanes: files?.lanes.name ?? null };
+  doc.settings = {
+    origin: settings.origin || null,
+    dispatchDate: settings.dispatchDate || null,
+    vehicleClass: settings.vehicleClass === NO_CLASS ? null : settings.vehicleClass,
+    maxLegs: settings.maxLegs,
+  };
+  doc.scenarios = [scenario];
+  doc.activeScenario = scenario.changes.length > 0 ? scenario.name : null;
+  return doc;
+}
+
+/** Settings and scenario from a document. */
+export function stateOf(doc: WorkspaceDocument): { settings: PlanSettings; scenario: Scenario } {
+  const s = doc.settings;
+  const scenario = doc.scenarios.find((x) => x.name === doc.activeScenario) ?? doc.scenarios[0] ?? emptyScenario();
+  return {
+    settings: { origin: s.origin ?? '', maxLegs: s.maxLegs, vehicleClass: s.vehicleClass ?? NO_CLASS, dispatchDate: s.dispatchDate ?? todayIso() },
+    scenario,
+  };
+}
+
+/** Reads one file a document names: bundled sample text, or through the host. */
+async function readNamed(host: LanewrightHost, path: string): Promise<{ name: string; text: string }> {
+  const bundled = sampleText(path);
+  if (bundled !== undefined) return { name: path, text: bundled };
+  const result = await host.readFile(path);
+  if (!result.ok) throw new Error(result.failure.message);
+  return { name: result.value.path, text: result.value.text };
+}
+
+/** The input files a document names, or null when it names none. */
+export async function filesOf(host: LanewrightHost, doc: WorkspaceDocument): Promise<DatasetFiles | null> {
+  if (!doc.files.depots || !doc.files.lanes) return null;
+  return { depots: await readNamed(host, doc.files.depots), lanes: await readNamed(host, doc.files.lanes) };
+}

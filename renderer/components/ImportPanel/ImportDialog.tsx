@@ -1,0 +1,83 @@
+// The import flow: pick a depots file and a lanes file (either may be kept from the current data),
+// import, and when rows are rejected see the report and choose: fix the file (nothing changes) or
+// continue with the accepted rows.
+
+import { useState } from 'react';
+import type { LanewrightHost } from '../../../main/ipc/contract';
+import type { DatasetFiles, PendingImport } from '../../app/use-dataset';
+import type { NamedText } from '../../worker/protocol';
+import { Dialog } from '../Dialog/Dialog';
+import { ImportReportTable } from './ImportReportTable';
+
+export interface ImportDialogProps {
+  host: LanewrightHost;
+  current: DatasetFiles | null;
+  pending: PendingImport | null;
+  onImport(files: DatasetFiles): Promise<boolean>;
+  onContinue(): Promise<boolean>;
+  onFix(): void;
+  onClose(): void;
+}
+
+export function ImportDialog({ host, current, pending, onImport, onContinue, onFix, onClose }: ImportDialogProps) {
+  const [depots, setDepots] = useState<NamedText | null>(current?.depots ?? null);
+  const [lanes, setLanes] = useState<NamedText | null>(current?.lanes ?? null);
+  const [problem, setProblem] = useState<string | null>(null);
+  const pick = async (kind: 'depots' | 'lanes') => {
+    const result = await host.pickFile(kind);
+    if (!result.ok) setProblem(result.failure.message);
+    else if (result.value) (kind === 'depots' ? setDepots : setLanes)({ name: result.value.name, text: result.value.text });
+  };
+  const run = async () => {
+    if (!depots || !lanes) return;
+    if (await onImport({ depots, lanes })) onClose();
+  };
+  if (pending) {
+    const accepted = pending.report.depots.accepted + pending.report.lanes.accepted;
+    return (
+      <Dialog title="Import report" onClose={onFix} className="lw-wide">
+        <p role="status">
+          {pending.report.issues.length} row{pending.report.issues.length === 1 ? ' was' : 's were'} rejected. Nothing has changed yet.
+        </p>
+        <ImportReportTable report={pending.report} />
+        <div className="lw-dialog-buttons">
+          <button type="button" onClick={onFix}>
+            Fix the file first
+          </button>
+          {!pending.report.fatal && (
+            <button type="button" className="lw-primary" onClick={async () => (await onContinue()) && onClose()}>
+              Continue with the {accepted} accepted rows
+            </button>
+          )}
+        </div>
+        {pending.report.fatal && <p className="lw-warn">Nothing usable could be read; fix the file and import again.</p>}
+      </Dialog>
+    );
+  }
+  return (
+    <Dialog title="Import depots and lanes" onClose={onClose}>
+      <p>CSV files (RFC 4180). Depots: id, name, lat, lon. Lanes: from, to, toll, fuel, fees, rebate (amounts in major units, e.g. 12.50).</p>
+      <div className="lw-file-row">
+        <button type="button" onClick={() => pick('depots')}>
+          Choose depots file…
+        </button>
+        <span data-testid="import-depots-name">{depots?.name ?? 'none chosen'}</span>
+      </div>
+      <div className="lw-file-row">
+        <button type="button" onClick={() => pick('lanes')}>
+          Choose lanes file…
+        </button>
+        <span data-testid="import-lanes-name">{lanes?.name ?? 'none chosen'}</span>
+      </div>
+      {problem && <p className="lw-warn">{problem}</p>}
+      <div className="lw-dialog-buttons">
+        <button type="button" onClick={onClose}>
+          Cancel
+        </button>
+        <button type="button" className="lw-primary" disabled={!depots || !lanes} onClick={run}>
+          Import
+        </button>
+      </div>
+    </Dialog>
+  );
+}

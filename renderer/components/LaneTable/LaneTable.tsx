@@ -1,0 +1,105 @@
+// The lane table: every lane of the contract with its amounts under the active scenario. Editing an
+// amount or closing a lane adds a change to the scenario (never to the imported file); the plan
+// recomputes at once. Filtered and paged so 50,000 lanes stay responsive.
+
+import { useMemo, useState } from 'react';
+import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type LaneAmounts, type LaneKey, type Scenario } from '../../model/scenario-edits';
+import { formatMoney } from '../../model/format';
+import type { NetworkView } from '../../worker/protocol';
+import { AmountCell } from './AmountCell';
+
+export interface LaneTableProps {
+  network: NetworkView;
+  keys: readonly LaneKey[];
+  amounts: LaneAmounts;
+  scenario: Scenario;
+  onScenario(next: Scenario): void;
+}
+
+const PAGE = 100;
+
+export function LaneTable({ network, keys, amounts, scenario, onScenario }: LaneTableProps) {
+  const [text, setText] = useState('');
+  const [changedOnly, setChangedOnly] = useState(false);
+  const [page, setPage] = useState(0);
+  const lanes = useMemo(() => {
+    const needle = text.trim().toLowerCase();
+    const out: number[] = [];
+    for (let e = 0; e < network.laneFrom.length; e++) {
+      if (changedOnly && !amounts.changed[e]) continue;
+      if (needle !== '') {
+        const hay = `${network.depotIds[network.laneFrom[e]]} ${network.depotIds[network.laneTo[e]]} ${network.laneRef[e] ?? ''}`.toLowerCase();
+        if (!hay.includes(needle)) continue;
+      }
+      out.push(e);
+    }
+    return out;
+  }, [network, amounts, text, changedOnly]);
+  const pages = Math.max(1, Math.ceil(lanes.length / PAGE));
+  const current = Math.min(page, pages - 1);
+  const id = (d: number) => network.depotIds[d];
+  const base = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
+  return (
+    <div className="lw-lanes">
+      <div className="lw-table-tools" role="group" aria-label="Filter lanes">
+        <input type="search" aria-label="Filter lanes by depot or contract ref" placeholder="Filter by depot or contract ref" value={text} onChange={(e) => (setText(e.target.value), setPage(0))} />
+        <label className="lw-check">
+          <input type="checkbox" checked={changedOnly} onChange={(e) => (setChangedOnly(e.target.checked), setPage(0))} /> Changed in scenario only
+        </label>
+        <span className="lw-muted" aria-live="polite">
+          {lanes.length} lanes · page {current + 1} of {pages}
+        </span>
+        <button type="button" disabled={current === 0} onClick={() => setPage(current - 1)}>
+          Previous page
+        </button>
+        <button type="button" disabled={current >= pages - 1} onClick={() => setPage(current + 1)}>
+          Next page
+        </button>
+      </div>
+      <table className="lw-table" aria-label={`Lanes under scenario “${scenario.name}”`} data-testid="lane-table">
+        <thead>
+          <tr>
+            <th scope="col">Row</th>
+            <th scope="col">Lane</th>
+            <th scope="col">Ref</th>
+            <th scope="col" className="lw-num">Tolls</th>
+            <th scope="col" className="lw-num">Fuel</th>
+            <th scope="col" className="lw-num">Fees</th>
+            <th scope="col" className="lw-num">Rebate</th>
+            <th scope="col" className="lw-num">Net</th>
+            <th scope="col">Open</th>
+          </tr>
+        </thead>
+        <tbody>
+          {lanes.slice(current * PAGE, current * PAGE + PAGE).map((e) => {
+            const name = `${id(network.laneFrom[e])} → ${id(network.laneTo[e])}`;
+            const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+            return (
+              <tr key={e} data-lane-row={network.laneRow[e]} className={amounts.changed[e] ? 'lw-changed-row' : undefined}>
+                <td>{network.laneRow[e]}</td>
+                <th scope="row">{name}</th>
+                <td>{network.laneRef[e] ?? '—'}</td>
+                {EDITABLE_FIELDS.map((field) => (
+                  <td key={field} className="lw-num">
+                    <AmountCell
+                      key={`${e}-${field}-${amounts[field][e]}`}
+                      valueMinor={amounts[field][e]}
+                      exponent={network.exponent}
+                      label={`${field} of lane ${name}, row ${network.laneRow[e]}`}
+                      changed={amounts[field][e] !== base[field][e]}
+                      onCommit={(value) => onScenario(setLaneAmount(scenario, keys[e], field, value, base[field][e]))}
+                    />
+                  </td>
+                ))}
+                <td className="lw-num">{amounts.closed[e] ? 'closed' : formatMoney(net, network.exponent)}</td>
+                <td>
+                  <input type="checkbox" aria-label={`Lane ${name}, row ${network.laneRow[e]} open`} checked={!amounts.closed[e]} onChange={(ev) => onScenario(setLaneClosed(scenario, keys[e], !ev.target.checked))} />
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

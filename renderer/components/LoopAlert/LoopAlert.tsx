@@ -1,0 +1,77 @@
+// The rebate-loop warning: a banner that cannot be missed, announced to screen readers at once,
+// listing each loop's lanes with their file rows and contract references and the net per lap.
+
+import { FLAG_LIMIT_HIDES_LOOP } from '../../model/flags';
+import { formatMoneyWithCode } from '../../model/format';
+import type { LaneAmounts } from '../../model/scenario-edits';
+import type { NetworkView, SolveView } from '../../worker/protocol';
+
+export interface LoopAlertProps {
+  network: NetworkView;
+  solve: SolveView;
+  /** Lane amounts under the active scenario. */
+  amounts: LaneAmounts;
+  onReview(): void;
+}
+
+export function LoopAlert({ network, solve, amounts, onReview }: LoopAlertProps) {
+  if (solve.loops.length === 0) return null;
+  const unbounded = solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0);
+  const limited = solve.settings.maxLegs !== null;
+  const hidden = solve.flags.reduce((n, f) => n + ((f & FLAG_LIMIT_HIDES_LOOP) !== 0 ? 1 : 0), 0);
+  const id = (d: number) => network.depotIds[d];
+  return (
+    <section className="lw-loop-alert" role="alert" aria-labelledby="lw-loop-alert-title">
+      <h2 id="lw-loop-alert-title">
+        <span className="lw-alert-icon" aria-hidden="true">
+          ⚠
+        </span>{' '}
+        Rebate loop: costs are unbounded — the contract terms need fixing
+      </h2>
+      <p>
+        {solve.loops.length === 1 ? 'A loop of lanes' : `${solve.loops.length} loops of lanes`} from origin {id(solve.origin)} earn more in rebates than they cost, so a truck could circle forever and “cheapest” has no answer.{' '}
+        {limited
+          ? `With the ${solve.settings.maxLegs}-leg limit every cost shown is finite, but without it ${hidden} depot${hidden === 1 ? ' is' : 's are'} unbounded (flag “limit hides loop”).`
+          : `${unbounded} depot${unbounded === 1 ? ' is' : 's are'} marked unbounded (∞ diamond on the map, “unbounded” in the table); no route is given for them.`}
+      </p>
+      {solve.loops.map((loop, i) => (
+        <div key={i} className="lw-loop">
+          <h3>
+            Loop {i + 1}: {loop.depots.map(id).join(' → ')} → {id(loop.depots[0])} · net per lap {formatMoneyWithCode(loop.netPerLap, network.currency, network.exponent)}
+          </h3>
+          <table className="lw-compact">
+            <caption className="lw-visually-hidden">Lanes of loop {i + 1}</caption>
+            <thead>
+              <tr>
+                <th scope="col">Lane</th>
+                <th scope="col">File row</th>
+                <th scope="col">Contract ref</th>
+                <th scope="col">Net</th>
+                <th scope="col">Rebate</th>
+              </tr>
+            </thead>
+            <tbody>
+              {loop.lanes.map((e) => {
+                const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+                return (
+                  <tr key={e}>
+                    <td>
+                      {id(network.laneFrom[e])} → {id(network.laneTo[e])}
+                    </td>
+                    <td>{network.laneRow[e]}</td>
+                    <td>{network.laneRef[e] ?? '—'}</td>
+                    <td className="lw-num">{formatMoneyWithCode(net, network.currency, network.exponent)}</td>
+                    <td className="lw-num">{formatMoneyWithCode(amounts.rebate[e], network.currency, network.exponent)}</td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+      ))}
+      <button type="button" onClick={onReview}>
+        Open contract review
+      </button>
+    </section>
+  );
+}

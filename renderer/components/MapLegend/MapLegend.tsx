@@ -1,0 +1,46 @@
+// Key to the map's symbols. Each entry pairs a drawn sample with words, since line width, dash
+// pattern and marker shape (not colour alone) tell the states apart.
+
+export function MapLegend() {
+  return (
+    <ul className="lw-legend" aria-label="Map key">
+      <li>
+        <svg width="28" height="10" aria-hidden="true">
+          <line x1="0" y1="5" x2="28" y2="5" stroke="#8d9aa0" strokeWidth="1" />
+        </svg>
+        lane
+      </li>
+      <li>
+        <svg width="28" height="10" aria-hidden="true">
+          <line x1="0" y1="5" x2="28" y2="5" stroke="#1d5f86" strokeWidth="3" />
+        </svg>
+        cheapest-route tree
+      </li>
+      <li>
+        <svg width="28" height="10" aria-hidden="true">
+          <line x1="0" y1="5" x2="28" y2="5" stroke="#111" strokeWidth="7" />
+          <line x1="0" y1="5" x2="28" y2="5" stroke="#f2b233" strokeWidth="4" />
+        </svg>
+        selected route
+      </li>
+      <li>
+        <svg width="28" height="10" aria-hidden="true">
+          <line x1="0" y1="5" x2="28" y2="5" stroke="#a3123a" strokeWidth="5" strokeDasharray="7 4" />
+        </svg>
+        rebate loop (labelled)
+      </li>
+      <li>
+        <span className="lw-legend-diamond" aria-hidden="true">
+          ∞
+        </span>
+        unbounded depot
+      </li>
+      <li>
+        <svg width="14" height="14" aria-hidden="true">
+          <circle cx="7" cy="7" r="5" fill="#d0d4d6" stroke="#77858b" strokeDasharray="2 2" />
+        </svg>
+        unreachable depot
+      </li>
+    </ul>
+  );
+}

@@ -1,0 +1,80 @@
+// What the active scenario moved: its changes lane by lane, then every depot whose status or cost
+// differs from the base contract, largest change first. Each change can be undone on its own.
+
+import { laneKeyText } from '../../../engine/scenario/lane-key';
+import { formatMoney } from '../../model/format';
+import type { Scenario } from '../../model/scenario-edits';
+import type { NetworkView, SolveView } from '../../worker/protocol';
+
+export interface ScenarioCompareProps {
+  network: NetworkView;
+  solve: SolveView;
+  scenario: Scenario;
+  onScenario(next: Scenario): void;
+}
+
+const STATUS = ['unreachable', 'reachable', 'unbounded'];
+
+export function ScenarioCompare({ network, solve, scenario, onScenario }: ScenarioCompareProps) {
+  const money = (v: number) => formatMoney(v, network.exponent);
+  if (scenario.changes.length === 0) {
+    return <p className="lw-muted">The scenario “{scenario.name}” has no changes yet. Edit an amount in the lane table or close a lane; the comparison with the base contract appears here.</p>;
+  }
+  const base = solve.base;
+  const moved: { d: number; text: string; delta: number }[] = [];
+  if (base) {
+    for (let d = 0; d < network.depotIds.length; d++) {
+      if (base.status[d] !== solve.status[d]) moved.push({ d, text: `${STATUS[base.status[d]]} → ${STATUS[solve.status[d]]}`, delta: Infinity });
+      else if (solve.status[d] === 1 && base.cost[d] !== solve.cost[d]) {
+        const delta = solve.cost[d] - base.cost[d];
+        moved.push({ d, text: `${money(base.cost[d])} → ${money(solve.cost[d])} (${delta > 0 ? '+' : ''}${money(delta)})`, delta: Math.abs(delta) });
+      }
+    }
+    moved.sort((a, b) => b.delta - a.delta || a.d - b.d);
+  }
+  const describe = (c: Scenario['changes'][number]) => {
+    if (c.kind === 'set-amount') return `${laneKeyText(c.lane)}: ${c.field} set to ${money(c.amountMinor)}`;
+    if (c.kind === 'close-lane') return `${laneKeyText(c.lane)}: closed`;
+    if (c.kind === 'set-validity') return `${laneKeyText(c.lane)}: valid ${c.validFrom ?? '…'} to ${c.validTo ?? '…'}`;
+    return `new lane ${c.lane.from} → ${c.lane.to}`;
+  };
+  return (
+    <div className="lw-compare" data-testid="scenario-compare">
+      <h3>Changes in “{scenario.name}”</h3>
+      <ul>
+        {scenario.changes.map((c, i) => (
+          <li key={i}>
+            {describe(c)}{' '}
+            <button type="button" onClick={() => onScenario({ ...scenario, changes: scenario.changes.filter((_, j) => j !== i) })}>
+              Undo
+            </button>
+          </li>
+        ))}
+      </ul>
+      <button type="button" onClick={() => onScenario({ ...scenario, changes: [] })}>
+        Back to the base contract
+      </button>
+      <h3>What moved from {network.depotIds[solve.origin]}</h3>
+      {moved.length === 0 ? (
+        <p>No depot’s status or cost changed.</p>
+      ) : (
+        <table className="lw-compact" aria-label="Depots whose cost or status changed">
+          <thead>
+            <tr>
+              <th scope="col">Depot</th>
+              <th scope="col">Base → scenario</th>
+            </tr>
+          </thead>
+          <tbody>
+            {moved.map((m) => (
+              <tr key={m.d} data-moved-depot={network.depotIds[m.d]}>
+                <th scope="row">{network.depotIds[m.d]}</th>
+                <td>{m.text}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </div>
+  );
+}

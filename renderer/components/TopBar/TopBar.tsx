@@ -1,0 +1,66 @@
+// The header: product name, what is loaded, and the commands (sample scenarios, import, save,
+// exports, about). In the desktop app the same commands are also in the application menu.
+
+import type { ExportKind } from '../../worker/protocol';
+
+export interface TopBarProps {
+  datasetName: string;
+  desktop: boolean;
+  dirty: boolean;
+  onSample(loop: boolean): void;
+  onImport(): void;
+  onSave(): void;
+  onExport(kind: ExportKind): void;
+  onAbout(): void;
+}
+
+export function TopBar({ datasetName, desktop, dirty, onSample, onImport, onSave, onExport, onAbout }: TopBarProps) {
+  return (
+    <header className="lw-topbar">
+      <div className="lw-brand">
+        <span className="lw-logo" aria-hidden="true">
+          ◆
+        </span>
+        <h1>Lanewright</h1>
+        <span className="lw-dataset" title="Loaded files">
+          {datasetName}
+          {dirty ? ' • unsaved' : ''}
+        </span>
+      </div>
+      <nav className="lw-commands" aria-label="Commands">
+        <button type="button" onClick={() => onSample(false)}>
+          Sample plan
+        </button>
+        <button type="button" onClick={() => onSample(true)}>
+          Sample with rebate loop
+        </button>
+        <button type="button" onClick={onImport}>
+          Import CSV…
+        </button>
+        <button type="button" onClick={onSave}>
+          {desktop ? 'Save workspace' : 'Keep workspace in browser'}
+        </button>
+        <label className="lw-export">
+          <span className="lw-visually-hidden">Export</span>
+          <select
+            aria-label="Export"
+            value=""
+            onChange={(e) => {
+              if (e.target.value) onExport(e.target.value as ExportKind);
+              e.target.value = '';
+            }}
+          >
+            <option value="">Export…</option>
+            <option value="routes-csv">Routes (CSV)</option>
+            <option value="lanes-csv">Lane costs (CSV)</option>
+            <option value="loops-csv">Rebate loops (CSV)</option>
+            <option value="geojson">Network and routes (GeoJSON)</option>
+          </select>
+        </label>
+        <button type="button" onClick={onAbout}>
+          About &amp; cautions
+        </button>
+      </nav>
+    </header>
+  );
+}

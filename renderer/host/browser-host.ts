@@ -1,0 +1,111 @@
+// The host for `npm run web`: the same API the desktop preload exposes, built from browser parts.
+// File pickers are <input type="file">, exports are downloads from blob URLs, and the workspace is
+// kept in the browser's own storage (there are no paths to grant, so "path" is a file name).
+
+import type { AppInfo, ExportKind, HostResult, InputFileKind, LanewrightHost, MenuCommand, ReadFile, WorkspaceDocument } from '../../main/ipc/contract';
+import { loadFileText, storeFileText, WORKSPACE_KEY, WORKSPACE_SAVED_AT_KEY } from './browser-store';
+
+const WORKSPACE_NAME = 'browser workspace';
+
+function ok<T>(value: T): HostResult<T> {
+  return { ok: true, value };
+}
+
+function failed<T>(error: string, message: string, path: string | null = null): HostResult<T> {
+  return { ok: false, failure: { error, message, path, field: null } };
+}
+
+function stripBom(text: string): string {
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
+
+/** Shows a file chooser; resolves with the chosen file or null when the user cancels. */
+function chooseFile(accept: string): Promise<File | null> {
+  return new Promise((resolve) => {
+    const input = document.createElement('input');
+    input.type = 'file';
+    input.accept = accept;
+    input.style.display = 'none';
+    document.body.append(input);
+    const finish = (file: File | null) => {
+      input.remove();
+      resolve(file);
+    };
+    input.addEventListener('change', () => finish(input.files?.[0] ?? null), { once: true });
+    input.addEventListener('cancel', () => finish(null), { once: true });
+    input.click();
+  });
+}
+
+function download(name: string, text: string, mime: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type: mime }));
+  const link = document.createElement('a');
+  link.href = url;
+  link.download = name;
+  link.style.display = 'none';
+  document.body.append(link);
+  link.click();
+  link.remove();
+  // Revoke later: Chromium starts the download asynchronously from the URL.
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
+
+/** Creates the browser host. `version` is shown in the about box. */
+export function createBrowserHost(version: string): LanewrightHost {
+  const listeners = new Set<(command: MenuCommand) => void>();
+  const readStored = (): WorkspaceDocument | null => {
+    const text = localStorage.getItem(WORKSPACE_KEY);
+    if (!text) return null;
+    try {
+      return JSON.parse(text) as WorkspaceDocument;
+    } catch {
+      return null;
+    }
+  };
+  return {
+    kind: 'web',
+    async openWorkspace() {
+      const document = readStored();
+      return ok(document ? { path: WORKSPACE_NAME, document, migratedFrom: document.version } : null);
+    },
+    async saveWorkspace(document) {
+      try {
+        localStorage.setItem(WORKSPACE_KEY, JSON.stringify(document));
+        localStorage.setItem(WORKSPACE_SAVED_AT_KEY, new Date().toISOString());
+        return ok({ path: WORKSPACE_NAME });
+      } catch (error) {
+        return failed('StorageError', `could not keep the workspace in browser storage: ${(error as Error).message}`);
+      }
+    },
+    async recentWorkspaces() {
+      const openedAt = localStorage.getItem(WORKSPACE_SAVED_AT_KEY);
+      return ok(readStored() && openedAt ? [{ path: WORKSPACE_NAME, name: WORKSPACE_NAME, openedAt }] : []);
+    },
+    async pickFile(kind: InputFileKind) {
+      const file = await chooseFile(kind === 'scenario' ? '.json,application/json' : '.csv,.txt,text/csv');
+      if (!file) return ok<ReadFile | null>(null);
+      const text = stripBom(await file.text());
+      await storeFileText(file.name, text).catch(() => undefined); // storage full: the import still works this session
+      return ok<ReadFile | null>({ path: file.name, name: file.name, text });
+    },
+    async readFile(path) {
+      const text = await loadFileText(path).catch(() => undefined);
+      if (text === undefined) return failed<ReadFile>('FileAccessError', `${path}: not in this browser's storage any more; import it again`, path);
+      return ok({ path, name: path, text });
+    },
+    async saveExport(suggestedName: string, text: string, kind: ExportKind) {
+      download(suggestedName, text, kind === 'geojson' ? 'application/geo+json' : 'text/csv');
+      return ok({ path: suggestedName });
+    },
+    async setDirty() {
+      return ok(null);
+    },
+    async appInfo() {
+      return ok<AppInfo>({ name: 'Lanewright', version, platform: 'web', runtime: null });
+    },
+    onMenuCommand(listener) {
+      listeners.add(listener);
+      return () => listeners.delete(listener);
+    },
+  };
+}

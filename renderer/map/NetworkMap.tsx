@@ -1,0 +1,86 @@
+// The map view: a Leaflet map with the offline basemap, the lanes, the route tree from the origin,
+// rebate loops and the selected route. Leaflet is created once; each layer is swapped on its own
+// when its inputs change, so selecting a depot does not redraw 50,000 lanes.
+
+import L from 'leaflet';
+import 'leaflet/dist/leaflet.css';
+import { useEffect, useRef, useState } from 'react';
+import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
+import { addBasemap } from './basemap';
+import { depotLayer, laneLayer, loopLayer, routeLayer, treeLayer } from './network-layers';
+import './map.css';
+
+export interface NetworkMapProps {
+  network: NetworkView | null;
+  solve: SolveView | null;
+  route: RouteView | null;
+  selected: number | null;
+  onSelect(depot: number): void;
+}
+
+/** Replaces one layer slot of the map whenever `build` changes. */
+function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps: unknown[]) {
+  useEffect(() => {
+    if (!map || !build) return;
+    const layer = build();
+    if (!layer) return;
+    layer.addTo(map);
+    return () => {
+      layer.remove();
+    };
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [map, ...deps]);
+}
+
+export function NetworkMap({ network, solve, route, selected, onSelect }: NetworkMapProps) {
+  const element = useRef<HTMLDivElement>(null);
+  const mapRef = useRef<{ map: L.Map; renderer: L.Renderer } | null>(null);
+  const selectRef = useRef(onSelect);
+  selectRef.current = onSelect;
+  // Bumped once the map exists, so the layer effects run after it is created.
+  const [ready, setReady] = useState(0);
+
+  useEffect(() => {
+    if (!element.current) return;
+    const renderer = L.canvas({ padding: 0.5, tolerance: 4 });
+    const map = L.map(element.current, { preferCanvas: true, zoomSnap: 0.25, worldCopyJump: false, attributionControl: true, renderer });
+    map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)');
+    map.setView([49.5, 6], 5);
+    addBasemap(map, renderer);
+    mapRef.current = { map, renderer };
+    setReady((n) => n + 1);
+    return () => {
+      map.remove();
+      mapRef.current = null;
+    };
+  }, []);
+
+  const map = ready > 0 ? mapRef.current?.map ?? null : null;
+  const renderer = mapRef.current?.renderer ?? null;
+
+  useEffect(() => {
+    if (!map || !network || network.depotIds.length === 0) return;
+    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number]));
+    map.fitBounds(bounds.pad(0.08));
+  }, [map, network]);
+
+  useLayer(map, network && renderer ? () => laneLayer(network, renderer) : null, [network]);
+  useLayer(map, network && solve && renderer ? () => treeLayer(network, solve, renderer) : null, [network, solve]);
+  useLayer(map, network && route && renderer ? () => routeLayer(network, route, renderer) : null, [network, route]);
+  useLayer(map, network && solve && solve.loops.length > 0 && renderer ? () => loopLayer(network, solve, renderer) : null, [network, solve]);
+  useLayer(map, network && renderer ? () => depotLayer(network, solve, selected, renderer, { onSelect: (d) => selectRef.current(d) }) : null, [network, solve, selected]);
+
+  const loopCount = solve?.loops.length ?? 0;
+  const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
+  return (
+    <div
+      className="lw-map"
+      ref={element}
+      role="region"
+      aria-label={`Network map: ${network?.depotIds.length ?? 0} depots, ${network?.laneFrom.length ?? 0} lanes${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
+      data-loops={loopCount}
+      data-unbounded={unbounded}
+      data-tree-lanes={solve?.treeLanes.length ?? 0}
+    />
+  );
+}

@@ -1,0 +1,32 @@
+// Caution flags the results table shows per depot. Bits are set by the worker and named here, so
+// the table, its filter and the CSV of the table all read the same words.
+
+export const FLAG_UNBOUNDED = 1;
+export const FLAG_LIMIT_HIDES_LOOP = 2;
+export const FLAG_LONG_DRIVE = 4;
+export const FLAG_NEGATIVE_COST = 8;
+export const FLAG_DRIVE_UNKNOWN = 16;
+
+/** Daily driving limit used for the long-drive flag: 9 h (EU rule for most trucks; common practice, no source). */
+export const LONG_DRIVE_MINUTES = 9 * 60;
+
+const NAMES: readonly [number, string, string][] = [
+  [FLAG_UNBOUNDED, 'rebate loop', 'Cost unbounded: reachable through a rebate loop with negative net cost'],
+  [FLAG_LIMIT_HIDES_LOOP, 'limit hides loop', 'Cost is finite only because of the leg limit; without it a rebate loop makes it unbounded'],
+  [FLAG_LONG_DRIVE, 'over 9 h driving', 'Drive time exceeds one daily driving period; a rest or a second driver is needed'],
+  [FLAG_NEGATIVE_COST, 'earns money', 'Net route cost below zero: rebates exceed costs; check the contract terms'],
+  [FLAG_DRIVE_UNKNOWN, 'drive time unknown', 'At least one lane on the route has no drive time'],
+];
+
+/** Short labels of the flags set in `bits`, in a fixed order. */
+export function flagLabels(bits: number): string[] {
+  return NAMES.filter(([bit]) => (bits & bit) !== 0).map(([, label]) => label);
+}
+
+/** Long explanation of the flags set in `bits` (tooltips and screen readers). */
+export function flagExplanations(bits: number): string[] {
+  return NAMES.filter(([bit]) => (bits & bit) !== 0).map(([, , text]) => text);
+}
+
+/** Every flag label, for the filter menu. */
+export const ALL_FLAG_LABELS: readonly string[] = NAMES.map(([, label]) => label);

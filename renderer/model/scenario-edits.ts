@@ -1,0 +1,98 @@
+// The scenario edit model: a what-if is the engine's Scenario (changes keyed by LaneKey, see
+// DEVELOPERS.md) over the imported contract. The lane table, the worker and the workspace all go
+// through this module, so the engine's scenario functions can take over here without touching components.
+
+import { laneKeyId, laneKeyIndex, sameLaneKey, type LaneKey } from '../../engine/scenario/lane-key';
+import type { Scenario, ScenarioChange } from '../../engine/workspace/scenario-shape';
+
+export type { Scenario, ScenarioChange } from '../../engine/workspace/scenario-shape';
+export type { LaneKey } from '../../engine/scenario/lane-key';
+
+/** The lane amounts a dispatcher may change in a scenario. */
+export type EditableField = 'toll' | 'fuel' | 'fees' | 'rebate';
+
+export const EDITABLE_FIELDS: readonly EditableField[] = ['toll', 'fuel', 'fees', 'rebate'];
+
+/** A fresh scenario with no changes. */
+export function emptyScenario(name = 'What-if 1'): Scenario {
+  return { name, description: null, changes: [] };
+}
+
+function sameTarget(a: ScenarioChange, b: ScenarioChange): boolean {
+  if (a.kind === 'add-lane' || b.kind === 'add-lane') return false;
+  if (!sameLaneKey(a.lane, b.lane)) return false;
+  if (a.kind === 'set-amount' && b.kind === 'set-amount') return a.field === b.field;
+  return a.kind === b.kind;
+}
+
+/**
+ * Puts a change in the scenario, replacing an earlier change of the same lane and field. A change
+ * back to the contract's own value (`isOriginal`) removes the earlier change instead.
+ */
+export function withLaneChange(scenario: Scenario, change: ScenarioChange, isOriginal: boolean): Scenario {
+  const rest = scenario.changes.filter((c) => !sameTarget(c, change));
+  return { ...scenario, changes: isOriginal ? rest : [...rest, change] };
+}
+
+/** Sets one amount of a lane (minor units). */
+export function setLaneAmount(scenario: Scenario, lane: LaneKey, field: EditableField, amountMinor: number, originalMinor: number): Scenario {
+  return withLaneChange(scenario, { kind: 'set-amount', lane, field, amountMinor, note: null }, amountMinor === originalMinor);
+}
+
+/** Closes or reopens a lane. */
+export function setLaneClosed(scenario: Scenario, lane: LaneKey, closed: boolean): Scenario {
+  return withLaneChange(scenario, { kind: 'close-lane', lane, note: null }, !closed);
+}
+
+/** Lane amounts after the scenario. */
+export interface LaneAmounts {
+  toll: Float64Array;
+  fuel: Float64Array;
+  fees: Float64Array;
+  rebate: Float64Array;
+  closed: Uint8Array;
+  /** Lanes some change touches. */
+  changed: Uint8Array;
+  /** Changes whose lane is not in the network (kept in the scenario, listed as problems). */
+  unresolved: number[];
+}
+
+export interface BaseAmounts {
+  toll: Float64Array;
+  fuel: Float64Array;
+  fees: Float64Array;
+  rebate: Float64Array;
+}
+
+/** Applies the scenario's amount and closure changes to the base amounts, lanes found by key. */
+export function applyScenarioAmounts(base: BaseAmounts, keys: readonly LaneKey[], scenario: Scenario | null): LaneAmounts {
+  const n = base.toll.length;
+  const out: LaneAmounts = {
+    toll: base.toll.slice(),
+    fuel: base.fuel.slice(),
+    fees: base.fees.slice(),
+    rebate: base.rebate.slice(),
+    closed: new Uint8Array(n),
+    changed: new Uint8Array(n),
+    unresolved: [],
+  };
+  if (!scenario || scenario.changes.length === 0) return out;
+  const index = laneKeyIndex(keys);
+  scenario.changes.forEach((change, i) => {
+    if (change.kind === 'add-lane' || change.kind === 'set-validity') return;
+    const e = index.get(laneKeyId(change.lane));
+    if (e === undefined) {
+      out.unresolved.push(i);
+      return;
+    }
+    out.changed[e] = 1;
+    if (change.kind === 'close-lane') out.closed[e] = 1;
+    else out[change.field][e] = change.amountMinor;
+  });
+  return out;
+}
+
+/** True when the scenario changes anything. */
+export function hasChanges(scenario: Scenario | null): boolean {
+  return !!scenario && scenario.changes.length > 0;
+}

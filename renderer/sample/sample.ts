@@ -1,0 +1,32 @@
+// The bundled sample scenario (fictional carrier Brightwater & Fennick Haulage) so a first run shows
+// a working plan at once, offline, and the loop variant for seeing the rebate-loop warning.
+
+import depotsText from '../../sample-data/depots.csv?raw';
+import lanesText from '../../sample-data/lanes.csv?raw';
+import loopLanesText from '../../sample-data/lanes-rebate-loop.csv?raw';
+import type { NamedText } from '../worker/protocol';
+
+/** Workspace "paths" of bundled files start with this, so they are never asked of the host. */
+export const SAMPLE_PREFIX = 'sample:';
+
+export const SAMPLE_ORIGIN = 'RTM';
+
+const FILES: Record<string, string> = {
+  'depots.csv': depotsText,
+  'lanes.csv': lanesText,
+  'lanes-rebate-loop.csv': loopLanesText,
+};
+
+/** The sample depots and lanes; `loop` picks the variant whose rebates form a loop. */
+export function sampleFiles(loop: boolean): { depots: NamedText; lanes: NamedText } {
+  const lanes = loop ? 'lanes-rebate-loop.csv' : 'lanes.csv';
+  return {
+    depots: { name: `${SAMPLE_PREFIX}depots.csv`, text: FILES['depots.csv'] },
+    lanes: { name: `${SAMPLE_PREFIX}${lanes}`, text: FILES[lanes] },
+  };
+}
+
+/** Text of a bundled file by its workspace path, or undefined when it is not a sample path. */
+export function sampleText(path: string): string | undefined {
+  return path.startsWith(SAMPLE_PREFIX) ? FILES[path.slice(SAMPLE_PREFIX.length)] : undefined;
+}

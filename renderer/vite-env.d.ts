@@ -1,0 +1,7 @@
+// Module shapes vite provides at build time: `?raw` imports give the file's text (the bundled
+// sample scenario), and `*.css` imports are side effects.
+declare module '*?raw' {
+  const text: string;
+  export default text;
+}
+declare module '*.css';

@@ -1,0 +1,115 @@
+// Messages between the UI thread and the engine worker. Everything here is structured-clone data
+// (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
+
+import type { Scenario } from '../model/scenario-edits';
+
+/** A CSV file as text, with the name shown in reports. */
+export interface NamedText {
+  name: string;
+  text: string;
+}
+
+/** One rejected row of an import, located as a spreadsheet shows it (header = row 1). */
+export interface ImportIssue {
+  file: string;
+  row: number | null;
+  column: string | null;
+  value: string | null;
+  reason: string;
+}
+
+export interface ImportReport {
+  depots: { file: string; total: number; accepted: number; rejected: number };
+  lanes: { file: string; total: number; accepted: number; rejected: number };
+  issues: ImportIssue[];
+  /** True when nothing could be imported at all (the network was not replaced). */
+  fatal: boolean;
+}
+
+/** The network as the UI draws and edits it; one entry per depot / lane, lanes in input order. */
+export interface NetworkView {
+  currency: string;
+  exponent: number;
+  depotIds: string[];
+  depotNames: string[];
+  lat: Float64Array;
+  lon: Float64Array;
+  laneFrom: Int32Array;
+  laneTo: Int32Array;
+  laneToll: Float64Array;
+  laneFuel: Float64Array;
+  laneFees: Float64Array;
+  laneRebate: Float64Array;
+  laneRow: Int32Array;
+  laneRef: (string | undefined)[];
+  laneDistanceKm: Float64Array;
+  laneDriveMinutes: Float64Array;
+  /** Vehicle classes the lanes file prices (empty when tolls do not depend on the class). */
+  vehicleClasses: string[];
+}
+
+export interface PlanSettings {
+  origin: string;
+  /** null = no limit on the number of lanes. */
+  maxLegs: number | null;
+  vehicleClass: string;
+  /** ISO 8601 date (YYYY-MM-DD). */
+  dispatchDate: string;
+}
+
+export interface LoopView {
+  depots: number[];
+  lanes: number[];
+  netPerLap: number;
+}
+
+/** Result of one solve, per depot (index = depot index). */
+export interface SolveView {
+  settings: PlanSettings;
+  origin: number;
+  /** 0 unreachable, 1 reachable, 2 unbounded (engine STATUS_* codes). */
+  status: Uint8Array;
+  /** Exact cost in minor units; NaN where not reachable. */
+  cost: Float64Array;
+  legs: Int32Array;
+  /** Sum of lane drive minutes along the route; NaN where unknown or unreachable. */
+  driveMinutes: Float64Array;
+  /** Caution flags per depot, FLAG_* bits of model/flags.ts. */
+  flags: Uint8Array;
+  /** Lanes drawn as the cheapest-route tree (each reachable depot's last lane). */
+  treeLanes: Int32Array;
+  loops: LoopView[];
+  /** Same arrays for the scenario's base (no edits), when the scenario has edits. */
+  base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null;
+  solveMs: number;
+}
+
+/** One depot's route with its lanes in travel order. */
+export interface RouteView {
+  target: number;
+  depots: number[];
+  lanes: number[];
+}
+
+export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
+
+export type ToWorker =
+  | { kind: 'load'; id: number; depots: NamedText; lanes: NamedText; acceptPartial: boolean }
+  | { kind: 'solve'; id: number; settings: PlanSettings; scenario: Scenario | null }
+  | { kind: 'route'; id: number; target: number }
+  | { kind: 'export'; id: number; what: ExportKind }
+  | { kind: 'review'; id: number };
+
+export interface WorkerErrorView {
+  name: string;
+  message: string;
+}
+
+export type FromWorker =
+  | { kind: 'progress'; id: number; phase: string; fraction: number }
+  | { kind: 'loaded'; id: number; network: NetworkView | null; report: ImportReport }
+  | { kind: 'solved'; id: number; result: SolveView }
+  | { kind: 'route'; id: number; route: RouteView | null }
+  | { kind: 'exported'; id: number; fileName: string; mime: string; text: string }
+  | { kind: 'reviewed'; id: number; review: unknown }
+  | { kind: 'error'; id: number; error: WorkerErrorView };

@@ -1,0 +1,79 @@
+// One planning solve as the UI shows it: scenario edits become a weight per lane position (the
+// network is never rebuilt for a what-if), then the engine solves from the origin with or without
+// a leg limit, and each depot gets its drive time and caution flags.
+
+import { depotIndexOf } from '../../engine/network/build';
+import type { Network } from '../../engine/network/types';
+import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../../engine/routes/cheapest-routes';
+import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/routes/leg-limited';
+import { routePath } from '../../engine/routes/route-path';
+import { laneKeysOf } from '../../engine/scenario/lane-key';
+import { applyScenarioAmounts, hasChanges, type Scenario } from '../model/scenario-edits';
+import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED, LONG_DRIVE_MINUTES } from '../model/flags';
+import type { PlanSettings, RouteView, SolveView } from './protocol';
+
+export type Solved = RouteTree | LegLimitedRoutes;
+
+/** Net cost per CSR position after the scenario's changes; closed lanes get +Infinity. Undefined when nothing is edited. */
+export function scenarioWeights(network: Network, scenario: Scenario | null): Float64Array | undefined {
+  if (!hasChanges(scenario)) return undefined;
+  const base = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
+  const amounts = applyScenarioAmounts(base, laneKeysOf(network), scenario);
+  const weights = new Float64Array(network.laneCount);
+  for (let p = 0; p < network.laneCount; p++) {
+    const e = network.outLane[p];
+    const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+    if (!Number.isSafeInteger(net)) throw new RangeError(`scenario: net cost of the lane from row ${network.laneRow[e]} is out of the exact range`);
+    weights[p] = amounts.closed[e] ? Infinity : net;
+  }
+  return weights;
+}
+
+/** Runs the engine solve for the settings. */
+export function solveFor(network: Network, settings: PlanSettings, weights?: Float64Array): Solved {
+  const origin = depotIndexOf(network, settings.origin, 'origin');
+  return settings.maxLegs === null ? cheapestRoutes(network, origin, weights) : legLimitedRoutes(network, origin, settings.maxLegs, weights);
+}
+
+/** Lanes of a depot's route in travel order, or null when it has none. */
+export function pathOf(network: Network, solved: Solved, target: number): RouteView | null {
+  if (solved.status[target] !== STATUS_REACHABLE) return null;
+  const path = 'maxLegs' in solved ? solved.path(target) : routePath(network, solved, target);
+  return path ? { target, depots: path.depots, lanes: path.lanes } : null;
+}
+
+/** The solve's per-depot view: drive time, flags and the tree to draw. */
+export function solveView(network: Network, settings: PlanSettings, solved: Solved, solveMs: number): SolveView {
+  const n = network.depotCount;
+  const driveMinutes = new Float64Array(n).fill(NaN);
+  const flags = new Uint8Array(n);
+  const treeLaneList: number[] = [];
+  const limited = 'maxLegs' in solved;
+  for (let d = 0; d < n; d++) {
+    if (solved.status[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_UNBOUNDED;
+    if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
+    if (solved.status[d] !== STATUS_REACHABLE) continue;
+    if (solved.cost[d] < 0) flags[d] |= FLAG_NEGATIVE_COST;
+    const route = pathOf(network, solved, d);
+    if (!route) continue;
+    let minutes = 0;
+    for (const lane of route.lanes) minutes += network.laneDriveMinutes[lane];
+    driveMinutes[d] = route.lanes.length === 0 ? 0 : minutes;
+    if (Number.isNaN(minutes)) flags[d] |= FLAG_DRIVE_UNKNOWN;
+    else if (minutes > LONG_DRIVE_MINUTES) flags[d] |= FLAG_LONG_DRIVE;
+    if (route.lanes.length > 0) treeLaneList.push(route.lanes[route.lanes.length - 1]);
+  }
+  return {
+    settings,
+    origin: solved.origin,
+    status: solved.status.slice(),
+    cost: solved.cost.slice(),
+    legs: solved.legs.slice(),
+    driveMinutes,
+    flags,
+    treeLanes: Int32Array.from(treeLaneList),
+    loops: solved.loops.map((loop) => ({ depots: loop.depots, lanes: loop.lanes, netPerLap: loop.netPerLap })),
+    base: null,
+    solveMs,
+  };
+}
