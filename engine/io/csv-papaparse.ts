@@ -1,6 +1,6 @@
-// The one module that imports papaparse. It turns CSV text into rows of strings and nothing more;
-// header matching, amounts and validation live in engine/import. papaparse's string parser uses
-// no DOM and no Node APIs, so this adapter keeps the engine runnable in a worker, main and the CLI.
+// The one module that imports papaparse. It turns CSV text into rows of strings and rows back into
+// CSV, nothing more; header matching, amounts and validation live in engine/import. papaparse's
+// string parser uses no DOM and no Node APIs, so this adapter runs in a worker, main and the CLI.
 
 import Papa from 'papaparse';
 
@@ -36,7 +36,37 @@ export function parseCsvText(text: string): CsvTable {
   };
 }
 
+/**
+ * Parses a block of whole records with a known delimiter and line break. The streaming reader
+ * (csv-record-stream.ts) cuts blocks only at line breaks outside quotes, so every record is whole.
+ * A block that ends with a line break yields no empty record for it.
+ */
+export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n'): { rows: string[][]; unclosedQuote: boolean } {
+  const result = Papa.parse<string[]>(block, { delimiter, newline, skipEmptyLines: false });
+  const rows = result.data;
+  if (block.endsWith('\n') && rows.length > 0) {
+    const last = rows[rows.length - 1];
+    if (last.length === 1 && last[0] === '') rows.pop();
+  }
+  return { rows, unclosedQuote: result.errors.some((e) => e.code === 'MissingQuotes') };
+}
+
+// A text cell a spreadsheet would run as a formula; plain numbers such as -12.50 or +3 are exempt,
+// because the exporters write amounts as text to keep their exact decimals.
+const FORMULA_LIKE = /^(?![-+]?(?:\d+(?:\.\d*)?|\.\d+)$)[=+\-@\t\r]/;
+
+export interface CsvWriteOptions {
+  /** Prefix formula-like text cells with an apostrophe (OWASP CSV-injection advice). Default true. */
+  escapeFormulae?: boolean;
+}
+
 /** Writes rows as RFC 4180 CSV (CRLF line ends, quotes only where needed). */
-export function formatCsvRows(rows: readonly (readonly (string | number | null)[])[]): string {
-  return Papa.unparse(rows as unknown[][], { newline: '\r\n', quotes: false }) + '\r\n';
+export function formatCsvRows(rows: readonly (readonly (string | number | null)[])[], options: CsvWriteOptions = {}): string {
+  return (
+    Papa.unparse(rows as unknown[][], {
+      newline: '\r\n',
+      quotes: false,
+      escapeFormulae: options.escapeFormulae === false ? false : FORMULA_LIKE,
+    }) + '\r\n'
+  );
 }

@@ -1,0 +1,127 @@
+// Reads depot records (id, name, lat, lon, optional type and notes) as they stream in, checking
+// each row and keeping the accepted ones. Duplicate ids keep the first row and reject the others.
+
+import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
+import { cellText } from './cells';
+import { readNumber } from './decimal-text';
+import { matchDepotHeaders, type DepotField, type HeaderMatch } from './headers';
+import type { ReportCollector } from './report-collector';
+import { streamIssueToReport } from './stream-issues';
+import type { DepotRecord, FileCounts } from './types';
+
+const REQUIRED: DepotField[] = ['id', 'lat', 'lon'];
+const LABEL: Record<DepotField, string> = { id: 'id', name: 'name', lat: 'lat', lon: 'lon', type: 'type', notes: 'notes' };
+
+export class DepotsReader implements CsvRecordSink {
+  readonly depots: DepotRecord[] = [];
+  readonly index = new Map<string, number>();
+  private header: HeaderMatch<DepotField> | null = null;
+  private headerCells: string[] = [];
+  private unusable = false;
+  private readonly counts: FileCounts;
+  decimalComma = false;
+
+  constructor(private readonly file: string, private readonly report: ReportCollector) {
+    this.counts = report.file(file, 'depots');
+  }
+
+  get rows(): number {
+    return this.counts.total;
+  }
+
+  records(records: string[][], firstRow: number): void {
+    for (let i = 0; i < records.length; i++) {
+      const cells = records[i];
+      const row = firstRow + i;
+      if (cells.every((c) => c.trim() === '')) continue;
+      if (this.header === null) {
+        this.readHeader(cells);
+        continue;
+      }
+      this.counts.total++;
+      if (this.unusable || !this.readRow(cells, row)) this.counts.rejected++;
+      else this.counts.accepted++;
+    }
+  }
+
+  issue(issue: CsvStreamIssue): void {
+    const lost = this.header === null ? issue.linesLost - 1 : issue.linesLost;
+    this.counts.total += lost;
+    this.counts.rejected += lost;
+    streamIssueToReport(this.report, this.file, issue, this.headerCells);
+  }
+
+  finish(): void {
+    if (this.header === null) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
+    else if (this.header !== null && this.counts.total === 0) this.report.error(this.file, null, null, null, 'no-data-rows', 'the file has a header but no depots');
+  }
+
+  private readHeader(cells: string[]): void {
+    this.headerCells = cells.map((c) => c.trim());
+    this.header = matchDepotHeaders(cells);
+    for (const field of REQUIRED) {
+      if (!this.header.columns.has(field)) {
+        this.report.error(this.file, 1, LABEL[field], null, 'missing-column', `required column "${LABEL[field]}" is missing; no depot can be read`);
+        this.unusable = true;
+      }
+    }
+    for (const d of this.header.duplicates) this.report.error(this.file, 1, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
+    for (const u of this.header.unknown) this.report.warning(this.file, 1, u.header, null, 'unknown-column', 'unknown column, kept with the depot but not used');
+  }
+
+  private readRow(cells: string[], row: number): boolean {
+    const cols = this.header!.columns;
+    const at = (f: DepotField) => cols.get(f)?.index;
+    let ok = true;
+    const fail = (column: string, value: string | null, code: Parameters<ReportCollector['error']>[4], message: string) => {
+      this.report.error(this.file, row, column, value, code, message);
+      ok = false;
+    };
+    if (cells.length > this.headerCells.length) {
+      fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
+    }
+    const id = cellText(cells, at('id'));
+    if (id === '') fail('id', '', 'missing-value', 'depot id is empty');
+    const coordinate = (field: 'lat' | 'lon', limit: number): number => {
+      const column = cols.get(field)!.header;
+      const text = cellText(cells, at(field));
+      if (text === '') {
+        fail(column, '', 'missing-value', `${field === 'lat' ? 'latitude' : 'longitude'} is empty`);
+        return NaN;
+      }
+      const read = readNumber(text, { decimalComma: this.decimalComma, allowGrouping: false });
+      if (!read.ok) {
+        fail(column, text, read.code, read.reason);
+        return NaN;
+      }
+      if (Math.abs(read.value) > limit) {
+        fail(column, text, field === 'lat' ? 'latitude-range' : 'longitude-range', `outside -${limit}..${limit} degrees (WGS 84 decimal degrees)`);
+        return NaN;
+      }
+      return read.value;
+    };
+    const lat = coordinate('lat', 90);
+    const lon = coordinate('lon', 180);
+    if (id !== '' && this.index.has(id)) {
+      fail(cols.get('id')!.header, id, 'duplicate-depot', `duplicate depot id; first defined at row ${this.depots[this.index.get(id)!].sourceRow}`);
+    }
+    if (!ok) return false;
+    let extra: Record<string, string> | null = null;
+    for (const u of this.header!.unknown) {
+      const value = cellText(cells, u.index);
+      if (value !== '') (extra ??= {})[u.header] = value;
+    }
+    this.index.set(id, this.depots.length);
+    this.depots.push({
+      id,
+      name: cellText(cells, at('name')) || id,
+      lat,
+      lon,
+      type: cellText(cells, at('type')) || null,
+      notes: cellText(cells, at('notes')) || null,
+      sourceRow: row,
+      extra,
+    });
+    return true;
+  }
+}

@@ -1,0 +1,199 @@
+// The importer's entry points: a push session (feed chunks of the depots file, then of the lanes
+// file) and the one-call forms over whole texts or chunk sequences. Reads, validates, checks for
+// duplicate lanes, plans for the requested day and class, and builds the network when allowed.
+
+import { CsvRecordStream } from '../io/csv-record-stream';
+import { planLanes } from '../planning/plan-network';
+import type { PlanRequest } from '../planning/types';
+import { DepotsReader } from './depots-reader';
+import { findDuplicateLanes } from './duplicate-lanes';
+import { ImportCancelledError } from './import-errors';
+import { LanesReader } from './lanes-reader';
+import { ReportCollector } from './report-collector';
+import type { ImportOptions, ImportResult, TextSource, ValidationReport } from './types';
+
+/** A streaming import: depots first, then lanes, then `result()`. */
+export interface ImportSession {
+  feedDepots(chunk: string, fraction?: number): void;
+  finishDepots(): void;
+  feedLanes(chunk: string, fraction?: number): void;
+  finishLanes(): void;
+  result(): ImportResult;
+}
+
+/** Starts a streaming import. */
+export function startImport(options: ImportOptions = {}): ImportSession {
+  const depotsFile = options.depotsFile ?? 'depots.csv';
+  const lanesFile = options.lanesFile ?? 'lanes.csv';
+  const collector = new ReportCollector(options.maxItems ?? 1000);
+  const depots = new DepotsReader(depotsFile, collector);
+  const depotStream = new CsvRecordStream({
+    records: (rows, first) => {
+      depots.decimalComma = depotStream.delimiter === ';';
+      depots.records(rows, first);
+    },
+    issue: (issue) => depots.issue(issue),
+  });
+  let lanes: LanesReader | null = null;
+  let laneStream: CsvRecordStream | null = null;
+  let phase: 'depots' | 'lanes' | 'done' = 'depots';
+
+  const check = (file: string, rows: number) => {
+    if (options.signal?.aborted) throw new ImportCancelledError(file, rows);
+  };
+  const progress = (file: 'depots' | 'lanes', rows: number, fraction?: number) => {
+    options.onProgress?.({ file, rows, fraction: fraction === undefined ? null : Math.min(1, Math.max(0, fraction)) });
+  };
+  const openLanes = () => {
+    if (phase === 'depots') session.finishDepots();
+    if (lanes === null) {
+      const reader = new LanesReader(lanesFile, collector, depots.index, { currency: options.currency, exchangeRates: options.exchangeRates });
+      lanes = reader;
+      const stream: CsvRecordStream = new CsvRecordStream({
+        records: (rows, first) => {
+          reader.decimalComma = stream.delimiter === ';';
+          reader.records(rows, first);
+        },
+        issue: (issue) => reader.issue(issue),
+      });
+      laneStream = stream;
+    }
+    return { reader: lanes as LanesReader, stream: laneStream as unknown as CsvRecordStream };
+  };
+
+  const session: ImportSession = {
+    feedDepots(chunk, fraction) {
+      if (phase !== 'depots') throw new Error('import: depots are finished; feed lanes now');
+      check(depotsFile, depots.rows);
+      depotStream.feed(chunk);
+      progress('depots', depots.rows, fraction);
+    },
+    finishDepots() {
+      if (phase !== 'depots') return;
+      depotStream.finish();
+      depots.finish();
+      phase = 'lanes';
+      progress('depots', depots.rows, 1);
+    },
+    feedLanes(chunk, fraction) {
+      const { reader, stream } = openLanes();
+      if (phase !== 'lanes') throw new Error('import: lanes are finished');
+      check(lanesFile, reader.rows);
+      stream.feed(chunk);
+      progress('lanes', reader.rows, fraction);
+    },
+    finishLanes() {
+      const { reader, stream } = openLanes();
+      if (phase !== 'lanes') return;
+      stream.finish();
+      reader.finish();
+      phase = 'done';
+      progress('lanes', reader.rows, 1);
+    },
+    result() {
+      if (phase !== 'done') session.finishLanes();
+      return assemble(collector, depots, lanes!, lanesFile, options);
+    },
+  };
+  return session;
+}
+
+function assemble(collector: ReportCollector, depots: DepotsReader, lanes: LanesReader, lanesFile: string, options: ImportOptions): ImportResult {
+  const table = lanes.table.build();
+  for (const dup of findDuplicateLanes(table, depots.depots.length)) {
+    collector.warning(lanesFile, table.sourceRow[dup.lane], null, null, 'duplicate-lane', `repeats the lane at row ${table.sourceRow[dup.first]} (same from, to, reference, class and validity)`);
+  }
+  const notes: string[] = [];
+  for (const [code, rows] of lanes.converted) notes.push(`${rows} lane row(s) converted from ${code} to ${lanes.currency} at ${options.exchangeRates?.[code]}.`);
+  const importReport = collector.report();
+  const base = {
+    depots: depots.depots,
+    lanes: table,
+    currency: lanes.currency!,
+    exponent: lanes.exponent,
+    vehicleClasses: table.classTolls.length > 0 ? table.classTolls.map((c) => c.name) : table.classNames.slice(),
+    importReport,
+    notes,
+  };
+  return planFrom(base, options.plan ?? {}, options.skipInvalid ?? false, lanesFile);
+}
+
+type ImportBase = Omit<ImportResult, 'network' | 'report' | 'plan'>;
+
+function planFrom(base: ImportBase, request: PlanRequest, skipInvalid: boolean, lanesFile: string): ImportResult {
+  const importReport = base.importReport;
+  const dry = planLanes({ ...base, lanesFile }, request, false);
+  const report = mergeReport(importReport, dry.errors, dry.warnings, dry.rejected, lanesFile);
+  // The stored errors are capped, but the first ones are always kept: none stored means none found.
+  const buildable = report.errors.length === 0 || skipInvalid;
+  const outcome = buildable ? planLanes({ ...base, lanesFile }, request, true) : dry;
+  return { ...base, network: outcome.plan.network, report, plan: outcome.plan, notes: [...base.notes, ...outcome.plan.notes] };
+}
+
+function mergeReport(base: ValidationReport, errors: ValidationReport['errors'], warnings: ValidationReport['warnings'], rejected: number, lanesFile: string): ValidationReport {
+  const files = base.files.map((f) => (f.kind === 'lanes' && f.file === lanesFile ? { ...f, accepted: f.accepted - rejected, rejected: f.rejected + rejected } : { ...f }));
+  return {
+    total: base.total,
+    accepted: base.accepted - rejected,
+    rejected: base.rejected + rejected,
+    errors: [...base.errors, ...errors],
+    warnings: [...base.warnings, ...warnings],
+    files,
+    omitted: base.omitted,
+  };
+}
+
+/**
+ * Re-plans an import for another date, vehicle class or settings without reading the files again.
+ * The result's report is the import's problems plus this plan's.
+ */
+export function planNetwork(result: ImportResult, request: PlanRequest, options: { skipInvalid?: boolean } = {}): ImportResult {
+  const { network: _n, report: _r, plan: _p, ...base } = result;
+  return planFrom({ ...base, notes: base.notes.filter((n) => !result.plan.notes.includes(n)) }, request, options.skipInvalid ?? false, lanesFileOf(result));
+}
+
+function lanesFileOf(result: ImportResult): string {
+  return result.importReport.files.find((f) => f.kind === 'lanes')?.file ?? 'lanes.csv';
+}
+
+function feedAll(source: TextSource, feed: (chunk: string, fraction?: number) => void): void {
+  if (typeof source === 'string') {
+    // Whole texts are fed in slices too, so progress and cancelling work the same way.
+    const step = 1 << 20;
+    if (source.length === 0) return;
+    for (let at = 0; at < source.length; at += step) feed(source.slice(at, at + step), Math.min(1, (at + step) / source.length));
+    return;
+  }
+  for (const chunk of source) feed(chunk);
+}
+
+/** Imports depots and lanes from whole texts or chunk sequences (synchronous). */
+export function importNetwork(depots: TextSource, lanes: TextSource, options: ImportOptions = {}): ImportResult {
+  const session = startImport(options);
+  feedAll(depots, session.feedDepots);
+  session.finishDepots();
+  feedAll(lanes, session.feedLanes);
+  session.finishLanes();
+  return session.result();
+}
+
+/** Like importNetwork, for async chunk sources (a File's stream through TextDecoderStream); yields between chunks. */
+export async function importNetworkAsync(
+  depots: TextSource | AsyncIterable<string>,
+  lanes: TextSource | AsyncIterable<string>,
+  options: ImportOptions = {},
+): Promise<ImportResult> {
+  const session = startImport(options);
+  const pump = async (source: TextSource | AsyncIterable<string>, feed: (chunk: string) => void) => {
+    if (typeof source === 'string' || Symbol.iterator in (source as object)) {
+      feedAll(source as TextSource, feed);
+      return;
+    }
+    for await (const chunk of source as AsyncIterable<string>) feed(chunk);
+  };
+  await pump(depots, session.feedDepots);
+  session.finishDepots();
+  await pump(lanes, session.feedLanes);
+  session.finishLanes();
+  return session.result();
+}

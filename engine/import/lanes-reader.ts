@@ -1,0 +1,342 @@
+// Reads lane records as they stream in: depots resolved to indices, amounts read exactly in the
+// network currency (converted only with a user-given rate), distance with its unit, drive time,
+// validity, vehicle class (one toll column per class, or a vehicle_class column), reference, notes.
+
+import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
+import { readAmount } from './amount-text';
+import { cellText, readDriveMinutes, readIsoDate } from './cells';
+import { convertMinor, readRate } from './currency-convert';
+import { currencyExponent, lookupCurrency } from './currencies';
+import { readNumber } from './decimal-text';
+import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './headers';
+import { LaneTableBuilder } from './lane-table';
+import type { ReportCollector } from './report-collector';
+import { streamIssueToReport } from './stream-issues';
+import type { FileCounts, IssueCode } from './types';
+
+const KM_PER_MILE = 1.609344; // international mile, exact by definition
+const MONEY: LaneField[] = ['toll', 'fuel', 'fees', 'rebate'];
+
+export interface LanesReaderOptions {
+  currency?: string;
+  exchangeRates?: Record<string, string>;
+}
+
+// V8 keeps a substring pointing into its parent; copying stored strings lets each parsed block go.
+function own(text: string): string {
+  return text.length > 12 ? (' ' + text).slice(1) : text;
+}
+
+export class LanesReader implements CsvRecordSink {
+  readonly table = new LaneTableBuilder();
+  currency: string | null;
+  exponent = 2;
+  decimalComma = false;
+  readonly converted = new Map<string, number>();
+  private header: HeaderMatch<LaneField> | null = null;
+  private headerCells: string[] = [];
+  private unusable = false;
+  private readonly counts: FileCounts;
+  private readonly classIndex = new Map<string, number>();
+  private col: Partial<Record<LaneField, number>> = {};
+  private rowOk = true;
+  private row = 0;
+  private rowCurrency: string | null = null;
+
+  constructor(
+    private readonly file: string,
+    private readonly report: ReportCollector,
+    private readonly depotIndex: ReadonlyMap<string, number>,
+    private readonly options: LanesReaderOptions,
+  ) {
+    this.counts = report.file(file, 'lanes');
+    this.currency = options.currency ? options.currency.toUpperCase() : null;
+    if (this.currency) this.exponent = currencyExponent(this.currency) ?? 2;
+  }
+
+  get rows(): number {
+    return this.counts.total;
+  }
+
+  records(records: string[][], firstRow: number): void {
+    let start = 0;
+    if (this.header === null) {
+      while (start < records.length && records[start].every((c) => c.trim() === '')) start++;
+      if (start === records.length) return;
+      this.readHeader(records[start]);
+      start++;
+    }
+    if (this.currency === null) this.pickCurrency(records, start);
+    for (let i = start; i < records.length; i++) {
+      const cells = records[i];
+      if (cells.length === 1 && cells[0].trim() === '') continue;
+      if (cells.every((c) => c.trim() === '')) continue;
+      this.counts.total++;
+      if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
+      else this.counts.accepted++;
+    }
+  }
+
+  issue(issue: CsvStreamIssue): void {
+    const lost = this.header === null ? issue.linesLost - 1 : issue.linesLost;
+    this.counts.total += lost;
+    this.counts.rejected += lost;
+    streamIssueToReport(this.report, this.file, issue, this.headerCells);
+  }
+
+  finish(): void {
+    if (this.header === null) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
+    else if (this.header !== null && this.counts.total === 0) this.report.warning(this.file, null, null, null, 'no-data-rows', 'the file has a header but no lanes');
+    if (this.currency === null) {
+      this.currency = 'EUR';
+      this.exponent = 2;
+    }
+  }
+
+  private readHeader(cells: string[]): void {
+    this.headerCells = cells.map((c) => c.trim());
+    const h = matchLaneHeaders(cells);
+    this.header = h;
+    for (const [field, column] of h.columns) this.col[field] = column.index;
+    for (const field of ['from', 'to'] as const) {
+      if (!h.columns.has(field)) {
+        this.report.error(this.file, 1, field, null, 'missing-column', `required column "${field}" is missing; no lane can be read`);
+        this.unusable = true;
+      }
+    }
+    for (const d of h.duplicates) this.report.error(this.file, 1, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
+    for (const u of h.unknown) {
+      this.report.warning(this.file, 1, u.header, null, 'unknown-column', 'unknown column, kept with the lane but not used');
+      this.table.extra.push({ column: u.header, values: [] });
+    }
+    for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length) });
+    if (h.columns.has('vehicle_class')) this.table.vehicleClass = new Int16Array(this.table.from.length);
+    const distanceUnit = h.columns.get('distance')?.unit;
+    if (distanceUnit && !['km', 'mi', 'miles', 'mile', 'kilometres', 'kilometers'].includes(distanceUnit)) {
+      this.report.error(this.file, 1, h.columns.get('distance')!.header, distanceUnit, 'bad-unit', 'distance unit must be km or mi');
+      this.unusable = true;
+    }
+  }
+
+  // The network currency: the first one the file names (currency column, bracketed header unit or
+  // a mark in an amount), else EUR. Decided before the first row is read so every amount has its digits.
+  private pickCurrency(records: string[][], start: number): void {
+    const h = this.header!;
+    let found: string | null = null;
+    for (const field of MONEY) {
+      const unit = h.columns.get(field)?.unit;
+      if (!found && unit && /^[a-z]{3}$/.test(unit) && currencyExponent(unit) !== undefined) found = unit.toUpperCase();
+    }
+    for (let i = start; i < records.length && !found; i++) {
+      const code = cellText(records[i], this.col.currency);
+      if (code !== '') {
+        const c = lookupCurrency(code);
+        if ('code' in c) found = c.code;
+        continue;
+      }
+      for (const field of MONEY) {
+        const text = cellText(records[i], this.col[field]);
+        if (text === '') continue;
+        const r = readAmount(text, 2, this.decimalComma);
+        if (r.ok && r.currency) found = r.currency;
+        if (found) break;
+      }
+    }
+    this.currency = found ?? 'EUR';
+    this.exponent = currencyExponent(this.currency) ?? 2;
+  }
+
+  private fail(column: string | null, value: string | null, code: IssueCode, message: string): void {
+    this.report.error(this.file, this.row, column, value, code, message);
+    this.rowOk = false;
+  }
+
+  private headerOf(field: LaneField): string {
+    return this.header!.columns.get(field)!.header;
+  }
+
+  private readRow(cells: string[], row: number): boolean {
+    this.row = row;
+    this.rowOk = true;
+    const h = this.header!;
+    const col = this.col;
+    if (cells.length > this.headerCells.length) {
+      this.fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
+    }
+    const from = this.depot(cells, 'from');
+    const to = this.depot(cells, 'to');
+
+    // Currency of this row: its currency column, else the network's; a mark in an amount must agree.
+    this.rowCurrency = null;
+    const code = cellText(cells, col.currency);
+    if (code !== '') {
+      const c = lookupCurrency(code);
+      if ('code' in c) this.rowCurrency = c.code;
+      else this.fail(this.headerOf('currency'), code, 'unknown-currency', c.detail);
+    }
+    let toll = this.amount(cells, col.toll, 'toll');
+    const classTolls = h.classTolls.map((c) => this.amountAt(cells, c.index, c.header));
+    let fuel = this.amount(cells, col.fuel, 'fuel');
+    let fees = this.amount(cells, col.fees, 'fees');
+    let rebate = this.amount(cells, col.rebate, 'rebate');
+    const rowCurrency = this.rowCurrency ?? this.currency!;
+    if (rowCurrency !== this.currency) {
+      const rateText = this.options.exchangeRates?.[rowCurrency];
+      const rate = rateText === undefined ? null : readRate(rateText);
+      if (rate === null) {
+        this.fail(col.currency !== undefined ? this.headerOf('currency') : 'currency', rowCurrency, 'mixed-currency', `currency ${rowCurrency} differs from the network's ${this.currency}; one currency per network unless an exchange rate is given`);
+      } else {
+        const fromExp = currencyExponent(rowCurrency) ?? 2;
+        const conv = (v: number) => (Number.isNaN(v) ? v : convertMinor(v, fromExp, this.exponent, rate));
+        toll = conv(toll);
+        fuel = conv(fuel);
+        fees = conv(fees);
+        rebate = conv(rebate);
+        for (let k = 0; k < classTolls.length; k++) classTolls[k] = conv(classTolls[k]);
+        this.converted.set(rowCurrency, (this.converted.get(rowCurrency) ?? 0) + 1);
+      }
+    }
+
+    const distanceKm = this.distance(cells);
+    const driveMinutes = this.drive(cells);
+    const validFrom = this.date(cells, 'valid_from');
+    const validTo = this.date(cells, 'valid_to');
+    if (validFrom > 0 && validTo > 0 && validFrom > validTo) {
+      this.fail(this.headerOf('valid_to'), cellText(cells, col.valid_to), 'bad-period', `validity ends before it starts (${cellText(cells, col.valid_from)})`);
+    }
+    if (!this.rowOk) return false;
+
+    const t = this.table;
+    const i = t.add();
+    t.from[i] = from;
+    t.to[i] = to;
+    t.sourceRow[i] = row;
+    t.toll[i] = toll;
+    for (let k = 0; k < classTolls.length; k++) t.classTolls[k].toll[i] = classTolls[k];
+    t.fuel[i] = fuel;
+    t.fees[i] = Number.isNaN(fees) ? 0 : fees;
+    t.rebate[i] = Number.isNaN(rebate) ? 0 : rebate;
+    t.distanceKm[i] = distanceKm;
+    t.driveMinutes[i] = driveMinutes;
+    t.validFrom[i] = validFrom;
+    t.validTo[i] = validTo;
+    if (t.vehicleClass) t.vehicleClass[i] = this.vehicleClass(cells);
+    const ref = cellText(cells, col.ref);
+    t.ref.push(ref === '' ? undefined : own(ref));
+    const notes = cellText(cells, col.notes);
+    t.notes.push(notes === '' ? undefined : own(notes));
+    for (let k = 0; k < h.unknown.length; k++) {
+      const value = cellText(cells, h.unknown[k].index);
+      t.extra[k].values.push(value === '' ? undefined : own(value));
+    }
+    if (from === to) this.report.warning(this.file, row, this.headerOf('to'), cellText(cells, col.to), 'self-lane', 'lane from a depot to itself; it never shortens a route');
+    return true;
+  }
+
+  private depot(cells: string[], field: 'from' | 'to'): number {
+    const id = cellText(cells, this.col[field]);
+    if (id === '') {
+      this.fail(this.headerOf(field), '', 'missing-value', `${field} depot is empty`);
+      return -1;
+    }
+    const index = this.depotIndex.get(id);
+    if (index === undefined) {
+      this.fail(this.headerOf(field), id, 'unknown-depot', 'no depot with this id in the depots file');
+      return -1;
+    }
+    return index;
+  }
+
+  private amount(cells: string[], index: number | undefined, field: LaneField): number {
+    if (index === undefined) return NaN;
+    return this.amountAt(cells, index, this.headerOf(field));
+  }
+
+  private amountAt(cells: string[], index: number, column: string): number {
+    const text = cellText(cells, index);
+    if (text === '') return NaN;
+    const digits = currencyExponent(this.rowCurrency ?? this.currency!) ?? 2;
+    const r = readAmount(text, digits, this.decimalComma, (c) => currencyExponent(c) ?? 2);
+    if (!r.ok) {
+      this.fail(column, text, r.code, r.reason);
+      return NaN;
+    }
+    if (r.currency !== null) {
+      if (this.rowCurrency === null) this.rowCurrency = r.currency;
+      else if (r.currency !== this.rowCurrency) {
+        this.fail(column, text, 'mixed-currency', `amount in ${r.currency} on a row in ${this.rowCurrency}`);
+        return NaN;
+      }
+    }
+    return r.minor;
+  }
+
+  private distance(cells: string[]): number {
+    const text = cellText(cells, this.col.distance);
+    if (text === '') return NaN;
+    const column = this.headerOf('distance');
+    let unit = this.header!.columns.get('distance')!.unit ?? 'km';
+    const unitText = cellText(cells, this.col.distance_unit).toLowerCase();
+    if (unitText !== '') {
+      if (['km', 'kilometres', 'kilometers'].includes(unitText)) unit = 'km';
+      else if (['mi', 'mile', 'miles'].includes(unitText)) unit = 'mi';
+      else {
+        this.fail(this.headerOf('distance_unit'), unitText, 'bad-unit', 'distance unit must be km or mi');
+        return NaN;
+      }
+    }
+    const r = readNumber(text, { decimalComma: this.decimalComma, allowGrouping: true });
+    if (!r.ok) {
+      this.fail(column, text, r.code, r.reason);
+      return NaN;
+    }
+    if (r.value < 0) {
+      this.fail(column, text, 'negative-value', 'distance cannot be negative');
+      return NaN;
+    }
+    return unit === 'km' || unit.startsWith('kilo') ? r.value : r.value * KM_PER_MILE;
+  }
+
+  private drive(cells: string[]): number {
+    const text = cellText(cells, this.col.drive);
+    if (text === '') return NaN;
+    const column = this.headerOf('drive');
+    if (/^-/.test(text)) {
+      this.fail(column, text, 'negative-value', 'drive time cannot be negative');
+      return NaN;
+    }
+    const minutes = readDriveMinutes(text, this.header!.columns.get('drive')!.unit, (t) => {
+      const r = readNumber(t, { decimalComma: this.decimalComma, allowGrouping: false });
+      return r.ok ? r.value : null;
+    });
+    if (minutes === null || !Number.isFinite(minutes)) {
+      this.fail(column, text, 'bad-duration', 'drive time must be minutes, hours per the header, h:mm or an ISO 8601 duration (PT4H30M)');
+      return NaN;
+    }
+    return minutes;
+  }
+
+  private date(cells: string[], field: 'valid_from' | 'valid_to'): number {
+    const text = cellText(cells, this.col[field]);
+    if (text === '') return 0;
+    const value = readIsoDate(text);
+    if (value === null) {
+      this.fail(this.headerOf(field), text, 'bad-date', 'not an ISO 8601 calendar date (YYYY-MM-DD)');
+      return 0;
+    }
+    return value;
+  }
+
+  private vehicleClass(cells: string[]): number {
+    const text = cellText(cells, this.col.vehicle_class);
+    if (text === '') return -1;
+    const key = classKey(text);
+    let index = this.classIndex.get(key);
+    if (index === undefined) {
+      index = this.table.classNames.length;
+      this.classIndex.set(key, index);
+      this.table.classNames.push(own(text));
+    }
+    return index;
+  }
+}

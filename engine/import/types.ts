@@ -1,0 +1,193 @@
+// The shapes the importer hands to every front end: the validation report, the accepted depots and
+// the columnar lane table. Kept apart from the reading code so the desktop app can import the types
+// alone (see DEVELOPERS.md, "Import, planning and exports").
+
+import type { Network } from '../network/types';
+import type { PlannedNetwork, PlanRequest } from '../planning/types';
+
+/** What kind of problem an item reports; stable, so front ends can group and tests can check. */
+export type IssueCode =
+  // errors
+  | 'empty-file'
+  | 'not-text'
+  | 'unbalanced-quotes'
+  | 'missing-column'
+  | 'duplicate-column'
+  | 'too-many-fields'
+  | 'missing-value'
+  | 'not-a-number'
+  | 'not-finite'
+  | 'ambiguous-number'
+  | 'bad-amount'
+  | 'negative-value'
+  | 'latitude-range'
+  | 'longitude-range'
+  | 'bad-date'
+  | 'bad-period'
+  | 'bad-unit'
+  | 'bad-duration'
+  | 'unknown-depot'
+  | 'duplicate-depot'
+  | 'unknown-currency'
+  | 'mixed-currency'
+  | 'no-toll-for-class'
+  | 'no-fuel-price'
+  // warnings
+  | 'unknown-column'
+  | 'duplicate-lane'
+  | 'self-lane'
+  | 'net-negative-lane'
+  | 'no-data-rows';
+
+/** One problem, located as a spreadsheet shows it. `row` 1 is the header; null = the whole file. */
+export interface ValidationItem {
+  file: string;
+  row: number | null;
+  column: string | null;
+  value: string | null;
+  message: string;
+  code: IssueCode;
+}
+
+export interface FileCounts {
+  file: string;
+  kind: 'depots' | 'lanes';
+  total: number;
+  accepted: number;
+  rejected: number;
+}
+
+/** The report every front end shows. accepted + rejected = total (data rows of both files). */
+export interface ValidationReport {
+  total: number;
+  accepted: number;
+  rejected: number;
+  errors: ValidationItem[];
+  warnings: ValidationItem[];
+  files: FileCounts[];
+  /** Items left out past the cap (the counts above stay exact). */
+  omitted: number;
+}
+
+/** An accepted depot row. */
+export interface DepotRecord {
+  id: string;
+  name: string;
+  lat: number;
+  lon: number;
+  type: string | null;
+  notes: string | null;
+  sourceRow: number;
+  /** Values of columns the importer does not know, by header text. */
+  extra: Record<string, string> | null;
+}
+
+/** Tolls of one vehicle class, one entry per lane row (NaN = no toll given for this class). */
+export interface ClassTolls {
+  /** As written in the header, e.g. "5axle". */
+  name: string;
+  /** Matching key: lower case without spaces, hyphens or underscores. */
+  key: string;
+  toll: Float64Array;
+}
+
+/**
+ * Every accepted lane row, all classes and validity periods, in columns so a million rows stay
+ * affordable. Amounts are minor units of the network currency; NaN marks a blank cell.
+ */
+export interface LaneTable {
+  count: number;
+  from: Int32Array;
+  to: Int32Array;
+  sourceRow: Int32Array;
+  /** Default toll (the `toll` column); NaN when blank. */
+  toll: Float64Array;
+  /** Wide layout: one toll column per vehicle class. */
+  classTolls: ClassTolls[];
+  /** Long layout (a vehicle_class column): index into `classNames` per row, -1 = every class. */
+  vehicleClass: Int16Array | null;
+  classNames: string[];
+  /** NaN when blank: estimated at planning from distance, consumption and fuel price. */
+  fuel: Float64Array;
+  fees: Float64Array;
+  rebate: Float64Array;
+  /** NaN when blank: great-circle distance times the detour factor at planning. */
+  distanceKm: Float64Array;
+  /** NaN when blank: distance over the planning average speed. */
+  driveMinutes: Float64Array;
+  /** Inclusive validity as yyyymmdd numbers; 0 = open. */
+  validFrom: Int32Array;
+  validTo: Int32Array;
+  ref: (string | undefined)[];
+  notes: (string | undefined)[];
+  /** Columns the importer does not know, kept with their values. */
+  extra: { column: string; values: (string | undefined)[] }[];
+}
+
+/** One lane row as an object, for a lane table on screen. */
+export interface LaneRecord {
+  index: number;
+  sourceRow: number;
+  from: string;
+  to: string;
+  ref: string | null;
+  vehicleClass: string | null;
+  /** Formatted amounts ("12.50"), null when blank. */
+  toll: string | null;
+  classTolls: Record<string, string | null>;
+  fuel: string | null;
+  fees: string | null;
+  rebate: string | null;
+  distanceKm: number | null;
+  driveMinutes: number | null;
+  validFrom: string | null;
+  validTo: string | null;
+  notes: string | null;
+  extra: Record<string, string>;
+}
+
+export interface ProgressEvent {
+  file: 'depots' | 'lanes';
+  /** Data rows read so far in this file. */
+  rows: number;
+  /** Share of the file read (0..1) when the size is known. */
+  fraction: number | null;
+}
+
+export interface ImportOptions {
+  /** Names shown in the report; default "depots.csv" and "lanes.csv". */
+  depotsFile?: string;
+  lanesFile?: string;
+  plan?: PlanRequest;
+  /** ISO 4217 code of the network; default: the first currency the lanes file names, else EUR. */
+  currency?: string;
+  /** Code -> decimal rate: 1 unit of that currency is `rate` units of the network currency. */
+  exchangeRates?: Record<string, string>;
+  /** Build the network from the accepted rows even when the report has errors. */
+  skipInvalid?: boolean;
+  onProgress?: (progress: ProgressEvent) => void;
+  /** Checked between chunks; when set, the import stops with ImportCancelledError. */
+  signal?: { readonly aborted: boolean };
+  /** Cap on stored errors and on stored warnings each; default 1000. */
+  maxItems?: number;
+}
+
+export interface ImportResult {
+  /** Null when the report has errors and skipInvalid is not set. */
+  network: Network | null;
+  report: ValidationReport;
+  depots: DepotRecord[];
+  lanes: LaneTable;
+  currency: string;
+  exponent: number;
+  /** Vehicle classes the lanes file names, in file order. */
+  vehicleClasses: string[];
+  plan: PlannedNetwork;
+  /** The report of reading the files alone, before planning; `report` adds the plan's problems. */
+  importReport: ValidationReport;
+  /** Things worth knowing that are not problems (currency conversions, the class planned for). */
+  notes: string[];
+}
+
+/** Text in one piece or in chunks, in order. */
+export type TextSource = string | Iterable<string>;

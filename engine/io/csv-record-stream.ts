@@ -1,0 +1,192 @@
+// Incremental CSV reading on top of papaparse's whole-string parser: chunks are buffered and cut at
+// the last line break that lies outside quotes (quote parity is tracked across chunks), so papaparse
+// only ever sees whole records and a million-lane file never sits in memory as one string.
+
+import { parseCsvBlock } from './csv-papaparse';
+
+/** A problem with the file as a whole or with its quoting, before any column is looked at. */
+export interface CsvStreamIssue {
+  code: 'not-text' | 'unbalanced-quotes';
+  /** Row as a spreadsheet numbers it (header = 1). */
+  row: number | null;
+  /** Column position (0-based) when known. */
+  columnIndex: number | null;
+  value: string | null;
+  /** Data lines that could not be read because of this problem (they count as rejected rows). */
+  linesLost: number;
+}
+
+export interface CsvRecordSink {
+  /** Records in order; `firstRow` is the spreadsheet row of records[0]. Blank records are included (as [""]). */
+  records(records: string[][], firstRow: number): void;
+  issue(issue: CsvStreamIssue): void;
+}
+
+// A quoted field longer than this is taken to be an unclosed quote rather than data, so a broken
+// file cannot make the reader buffer the rest of a huge file.
+const MAX_QUOTED_CHARS = 4_000_000;
+
+export class CsvRecordStream {
+  private pending = '';
+  private scanned = 0;
+  private inQuotes = false;
+  private started = false;
+  private stopped = false;
+  private swallowing = false;
+  private swallowLines = 0;
+  private swallowRow = 0;
+  private nextRow = 1;
+  private charsSeen = 0;
+  delimiter = ',';
+  newline: '\n' | '\r\n' = '\n';
+
+  constructor(private readonly sink: CsvRecordSink) {}
+
+  /** Characters fed so far (after the BOM). */
+  get chars(): number {
+    return this.charsSeen;
+  }
+
+  /** True once the file was found not to be text; later chunks are ignored. */
+  get isStopped(): boolean {
+    return this.stopped;
+  }
+
+  feed(chunk: string): void {
+    if (this.stopped || chunk.length === 0) return;
+    if (!this.started) {
+      if (chunk.charCodeAt(0) === 0xfeff) chunk = chunk.slice(1);
+      if (chunk.length === 0) return;
+      this.started = true;
+      // NUL never occurs in UTF-8 text; UTF-16 files and binaries are full of it.
+      if (chunk.slice(0, 65536).includes('\u0000')) {
+        this.stopped = true;
+        this.sink.issue({ code: 'not-text', row: null, columnIndex: null, value: null, linesLost: 0 });
+        return;
+      }
+    }
+    this.charsSeen += chunk.length;
+    if (this.swallowing) {
+      this.countSwallowed(chunk);
+      return;
+    }
+    this.pending += chunk;
+    const cut = this.scan();
+    if (cut > 0) this.emit(this.pending.slice(0, cut), false);
+    if (cut > 0) {
+      this.pending = this.pending.slice(cut);
+      this.scanned -= cut;
+    }
+    if (this.inQuotes && this.pending.length > MAX_QUOTED_CHARS) this.startSwallowing();
+  }
+
+  finish(): void {
+    if (this.stopped) return;
+    if (this.swallowing) {
+      this.endSwallowing();
+      return;
+    }
+    if (this.pending.length === 0) return;
+    if (!this.inQuotes) {
+      this.emit(this.pending, true);
+      this.pending = '';
+      return;
+    }
+    this.startSwallowing();
+    this.endSwallowing();
+  }
+
+  // Scans the unscanned part of `pending` and returns the offset just after the last line break
+  // outside quotes (0 when there is none yet).
+  private scan(): number {
+    const s = this.pending;
+    const len = s.length;
+    let i = this.scanned;
+    let q = this.inQuotes;
+    let cut = 0;
+    while (i < len) {
+      const quote = s.indexOf('"', i);
+      if (!q) {
+        const end = quote === -1 ? len : quote;
+        if (end > i) {
+          const nl = s.lastIndexOf('\n', end - 1);
+          if (nl >= i) cut = nl + 1;
+        }
+      }
+      if (quote === -1) break;
+      q = !q;
+      i = quote + 1;
+    }
+    this.scanned = len;
+    this.inQuotes = q;
+    return cut;
+  }
+
+  private emit(block: string, last: boolean): void {
+    if (!last || this.nextRow === 1) this.detectLayout(block);
+    const { rows } = parseCsvBlock(block, this.delimiter, this.newline);
+    if (rows.length === 0) return;
+    const first = this.nextRow;
+    this.nextRow += rows.length;
+    this.sink.records(rows, first);
+  }
+
+  private detectLayout(block: string): void {
+    if (this.nextRow !== 1) return;
+    const end = block.indexOf('\n');
+    const line = end === -1 ? block : block.slice(0, end);
+    this.newline = end > 0 && block.charCodeAt(end - 1) === 13 ? '\r\n' : '\n';
+    const counts = [',', ';', '\t'].map((d) => line.split(d).length - 1);
+    const best = Math.max(...counts);
+    this.delimiter = best === 0 ? ',' : [',', ';', '\t'][counts.indexOf(best)];
+  }
+
+  // An opening quote never closes: the records before it are read, the record that holds it and
+  // every line after it are lost, and the loss is counted so accepted + rejected still equals total.
+  private startSwallowing(): void {
+    const s = this.pending;
+    let q = false;
+    let cut = 0;
+    for (let i = 0; i < s.length; i++) {
+      const c = s.charCodeAt(i);
+      if (c === 34) q = !q;
+      else if (c === 10 && !q) cut = i + 1;
+    }
+    if (cut > 0) this.emit(s.slice(0, cut), false);
+    const rest = s.slice(cut);
+    if (this.nextRow === 1) this.detectLayout(rest);
+    const { rows } = parseCsvBlock(rest, this.delimiter, this.newline);
+    const broken = rows[0] ?? [''];
+    this.swallowRow = this.nextRow;
+    this.swallowing = true;
+    this.swallowLines = 0;
+    this.pending = '';
+    this.scanned = 0;
+    this.pendingIssue = { columnIndex: broken.length - 1, value: broken[broken.length - 1].slice(0, 40).trim() };
+    this.countSwallowed(rest);
+  }
+
+  private pendingIssue: { columnIndex: number; value: string } | null = null;
+  private lineOpen = false;
+
+  private countSwallowed(text: string): void {
+    let start = 0;
+    for (;;) {
+      const nl = text.indexOf('\n', start);
+      const line = nl === -1 ? text.slice(start) : text.slice(start, nl);
+      if (line.trim() !== '') this.lineOpen = true;
+      if (nl === -1) break;
+      if (this.lineOpen) this.swallowLines++;
+      this.lineOpen = false;
+      start = nl + 1;
+    }
+  }
+
+  private endSwallowing(): void {
+    if (this.lineOpen) this.swallowLines++;
+    this.lineOpen = false;
+    this.stopped = true;
+    const issue = this.pendingIssue ?? { columnIndex: null, value: null };
+    this.sink.issue({ code: 'unbalanced-quotes', row: this.swallowRow, columnIndex: issue.columnIndex, value: issue.value, linesLost: Math.max(1, this.swallowLines) });
+  }
+}

@@ -1,0 +1,198 @@
+// Turns the imported lane table into the network for one day and one vehicle class: lanes outside
+// their validity or of another class are left out, the class's toll applies, blanks are filled from
+// the planning settings (great-circle distance x detour, fuel from consumption and price, drive time).
+
+import { greatCircleKm } from '../geo/turf';
+import { classKey } from '../import/headers';
+import { isoDateText, readIsoDate } from '../import/cells';
+import { PlanRequestError } from '../import/import-errors';
+import type { DepotRecord, IssueCode, LaneTable, ValidationItem } from '../import/types';
+import { formatMinor, parseMinor, type Minor } from '../money/minor';
+import { buildNetwork } from '../network/build';
+import { planningSettings } from './settings';
+import type { PlannedLane, PlannedNetwork, PlanRequest } from './types';
+
+export interface PlanInput {
+  depots: readonly DepotRecord[];
+  lanes: LaneTable;
+  currency: string;
+  exponent: number;
+  lanesFile: string;
+}
+
+export interface PlanOutcome {
+  plan: PlannedNetwork;
+  errors: ValidationItem[];
+  warnings: ValidationItem[];
+  /** Lane rows accepted by the import but rejected by this plan (e.g. no toll for the class). */
+  rejected: number;
+}
+
+function money(text: string | null, digits: number, option: string): number {
+  if (text === null) return NaN;
+  try {
+    return parseMinor(text, digits);
+  } catch {
+    throw new PlanRequestError(option, text, 'not a decimal amount');
+  }
+}
+
+/** Plans the lanes; builds the network only when `build` is true (the caller decides on errors). */
+export function planLanes(input: PlanInput, request: PlanRequest, build: boolean): PlanOutcome {
+  const { lanes: t, depots, exponent, currency, lanesFile } = input;
+  const settings = planningSettings(request.settings);
+  const errors: ValidationItem[] = [];
+  const warnings: ValidationItem[] = [];
+  const notes: string[] = [];
+  const item = (row: number, column: string, value: string | null, code: IssueCode, message: string): ValidationItem => ({ file: lanesFile, row, column, value, message, code });
+
+  const date = request.date === undefined ? 0 : readIsoDate(request.date.trim());
+  if (date === null) throw new PlanRequestError('date', request.date!, 'not an ISO 8601 calendar date (YYYY-MM-DD)');
+  if (!(settings.detourFactor >= 1 && settings.detourFactor <= 5)) throw new PlanRequestError('detour factor', String(settings.detourFactor), 'must be between 1 and 5');
+  if (!(settings.fuelLitresPer100Km > 0 && settings.fuelLitresPer100Km < 200)) throw new PlanRequestError('fuel consumption', String(settings.fuelLitresPer100Km), 'must be between 0 and 200 l/100 km');
+  if (!(settings.averageSpeedKmh > 0 && settings.averageSpeedKmh <= 130)) throw new PlanRequestError('average speed', String(settings.averageSpeedKmh), 'must be between 0 and 130 km/h');
+
+  // Which class's tolls apply.
+  const wide = t.classTolls.length > 0;
+  const classes = wide ? t.classTolls.map((c) => c.name) : t.classNames;
+  let hasDefaultToll = false;
+  for (let i = 0; i < t.count && !hasDefaultToll; i++) if (!Number.isNaN(t.toll[i])) hasDefaultToll = true;
+  let chosen = -1;
+  if (request.vehicleClass !== undefined && request.vehicleClass.trim() !== '') {
+    const key = classKey(request.vehicleClass);
+    chosen = wide ? t.classTolls.findIndex((c) => c.key === key) : t.classNames.findIndex((n) => classKey(n) === key);
+    if (chosen === -1) {
+      throw new PlanRequestError('vehicle class', request.vehicleClass, classes.length === 0 ? 'the lanes file has no tolls per vehicle class' : `not in the lanes file (classes: ${classes.join(', ')})`);
+    }
+  } else if (classes.length > 0 && !(wide && hasDefaultToll)) {
+    chosen = 0;
+    notes.push(`No vehicle class chosen: planning for "${classes[0]}", the first class in the lanes file (classes: ${classes.join(', ')}).`);
+  } else if (classes.length > 0) {
+    notes.push(`No vehicle class chosen: the default toll column applies (classes in the file: ${classes.join(', ')}).`);
+  }
+  const className = chosen === -1 ? null : classes[chosen];
+  const defaultToll = money(settings.defaultToll, exponent, 'default toll');
+
+  // Fuel price in minor units x 1000, so prices such as 1.659 per litre stay exact.
+  const priceCurrency = request.settings?.fuelPricePerLitre !== undefined && request.settings?.fuelPriceCurrency === undefined ? currency : settings.fuelPriceCurrency;
+  const priceMilli = priceCurrency.toUpperCase() === currency ? money(settings.fuelPricePerLitre, exponent + 3, 'fuel price') : NaN;
+
+  // Long layout: which lanes (from, to, reference) have a row for the chosen class, among rows valid on the date.
+  const validOn = (i: number) => date === 0 || ((t.validFrom[i] === 0 || t.validFrom[i] <= date) && (t.validTo[i] === 0 || t.validTo[i] >= date));
+  const long = t.vehicleClass;
+  const groupKey = (i: number) => `${t.from[i]}|${t.to[i]}|${t.ref[i] ?? ''}`;
+  const withClass = new Set<string>();
+  const withDefault = new Set<string>();
+  if (long && chosen !== -1) {
+    for (let i = 0; i < t.count; i++) {
+      if (!validOn(i)) continue;
+      if (long[i] === chosen) withClass.add(groupKey(i));
+      else if (long[i] === -1) withDefault.add(groupKey(i));
+    }
+  }
+
+  const lanes: PlannedLane[] = [];
+  const record: number[] = [];
+  let excluded = 0;
+  let rejected = 0;
+  const missingReported = new Set<string>();
+  for (let i = 0; i < t.count; i++) {
+    if (!validOn(i)) {
+      excluded++;
+      continue;
+    }
+    let toll: number;
+    if (long) {
+      const c = long[i];
+      if (chosen !== -1 && c !== -1 && c !== chosen) {
+        const key = groupKey(i);
+        excluded++;
+        if (!withClass.has(key) && !withDefault.has(key) && !missingReported.has(key)) {
+          missingReported.add(key);
+          if (Number.isNaN(defaultToll)) {
+            errors.push(item(t.sourceRow[i], 'vehicle_class', t.classNames[c], 'no-toll-for-class', `this lane has no row for vehicle class "${className}" and no default toll is set`));
+          }
+        }
+        continue;
+      }
+      if (c === -1 && chosen !== -1 && withClass.has(groupKey(i))) {
+        excluded++; // the class's own row overrides the all-classes row
+        continue;
+      }
+      toll = t.toll[i];
+      if (Number.isNaN(toll)) toll = classes.length > 0 ? defaultToll : 0;
+    } else if (wide && chosen !== -1) {
+      toll = t.classTolls[chosen].toll[i];
+      if (Number.isNaN(toll)) toll = t.toll[i];
+      if (Number.isNaN(toll)) toll = defaultToll;
+    } else {
+      toll = t.toll[i];
+      if (Number.isNaN(toll)) toll = wide ? defaultToll : 0;
+    }
+    if (Number.isNaN(toll)) {
+      errors.push(item(t.sourceRow[i], wide && chosen !== -1 ? `toll_${className}` : 'toll', '', 'no-toll-for-class', `no toll for vehicle class "${className ?? '(default)'}" and no default toll is set`));
+      rejected++;
+      continue;
+    }
+
+    const from = t.from[i];
+    const to = t.to[i];
+    let distanceKm = t.distanceKm[i];
+    const distanceEstimated = Number.isNaN(distanceKm);
+    if (distanceEstimated) {
+      const a = depots[from];
+      const b = depots[to];
+      distanceKm = Math.round(greatCircleKm(a.lat, a.lon, b.lat, b.lon) * settings.detourFactor * 10) / 10;
+    }
+    let driveMinutes = t.driveMinutes[i];
+    const driveEstimated = Number.isNaN(driveMinutes);
+    if (driveEstimated) driveMinutes = Math.round((distanceKm / settings.averageSpeedKmh) * 60);
+    let fuel = t.fuel[i];
+    const fuelEstimated = Number.isNaN(fuel);
+    if (fuelEstimated) {
+      if (Number.isNaN(priceMilli)) {
+        errors.push(item(t.sourceRow[i], 'fuel', '', 'no-fuel-price', `fuel is blank and there is no fuel price in ${currency} to estimate it; give a fuel price`));
+        rejected++;
+        continue;
+      }
+      fuel = Math.round((distanceKm * settings.fuelLitresPer100Km * priceMilli) / 100_000);
+    }
+    const fees = t.fees[i];
+    const rebate = t.rebate[i];
+    const net = toll + fuel + fees - rebate;
+    if (net < 0) {
+      const f = (v: number) => formatMinor(v as Minor, exponent);
+      warnings.push(
+        item(t.sourceRow[i], 'rebate', f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
+      );
+    }
+    record.push(i);
+    lanes.push({
+      from: depots[from].id,
+      to: depots[to].id,
+      toll: toll as Minor,
+      fuel: fuel as Minor,
+      fees: fees as Minor,
+      rebate: rebate as Minor,
+      sourceRow: t.sourceRow[i],
+      ref: t.ref[i],
+      distanceKm,
+      driveMinutes,
+      validFrom: isoDateText(t.validFrom[i]),
+      validTo: isoDateText(t.validTo[i]),
+      vehicleClass: long ? (long[i] === -1 ? null : t.classNames[long[i]]) : className,
+      distanceEstimated,
+      fuelEstimated,
+      driveEstimated,
+    });
+  }
+  if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
+
+  const network = build ? buildNetwork(depots, lanes, { currency, exponent }) : null;
+  return {
+    plan: { network, lanes, laneRecord: Int32Array.from(record), date: date === 0 ? null : isoDateText(date), vehicleClass: className, settings, excluded, notes },
+    errors,
+    warnings,
+    rejected,
+  };
+}
