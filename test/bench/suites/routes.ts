@@ -221,7 +221,7 @@ export const suite: BenchSuite = {
 
     const looped = withRebateLoop(20_000, 100_000, 37);
     const { network, origin } = looped;
-    const engine = timeBest(() => cheapestRoutes(network, origin), 5);
+    const engine = timeBest(() => cheapestRoutes(network, origin), 10);
     let unbounded = 0;
     for (let d = 0; d < network.depotCount; d++) if (engine.result.status[d] === STATUS_UNBOUNDED) unbounded++;
     // The baseline needs V rounds to tell a loop apart; a full run here takes about a minute, so it
