@@ -82,6 +82,7 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
     steps.push({ lane, cut, loop });
     options.onProgress?.(steps.length, steps.length + 1);
   }
+  options.onProgress?.(steps.length, steps.length);
 
   const touched = [...new Set(steps.map((s) => s.lane))].sort((a, b) => a - b);
   const changes = touched.map((lane) => ({

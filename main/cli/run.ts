@@ -5,6 +5,8 @@ import { LanewrightError } from '../../engine/errors';
 import { parseArgs, UsageError } from './args';
 import { writeTextFileAtomic } from './files';
 import { routesFlags, runRoutes } from './commands/routes';
+import { auditFlags, runAudit } from './commands/audit';
+import { compareFlags, runCompare } from './commands/compare';
 
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
@@ -15,12 +17,17 @@ export interface CommandOutput {
 
 const USAGE = `usage:
   lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--max-legs K] [--json] [--out FILE] [--timings]
+  lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
+                   [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
+  lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
 
 Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
 local regulations apply; defer to local codes and licensed practice.`;
 
 const COMMANDS: Record<string, { flags: string[]; run: (args: ReturnType<typeof parseArgs>, out: CommandOutput) => number }> = {
   routes: { flags: routesFlags, run: runRoutes },
+  audit: { flags: auditFlags, run: runAudit },
+  compare: { flags: compareFlags, run: runCompare },
 };
 
 /** Runs the command line; returns the exit status. */

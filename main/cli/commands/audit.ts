@@ -1,0 +1,67 @@
+// `lanewright audit`: the contract review of the whole network, independent of any origin: every
+// distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one row per
+// lane) or JSON; --loops-csv also writes one row per lane of each loop.
+
+import { auditNetwork } from '../../../engine/audit/network-audit';
+import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/report/audit-report';
+import { formatCsvRows } from '../../../engine/io/csv-papaparse';
+import { UsageError, type ParsedArgs } from '../args';
+import { writeTextFileAtomic } from '../files';
+import { loadNetwork } from '../load-network';
+import type { CommandOutput } from '../run';
+
+export const auditFlags = ['json', 'progress', 'timings', 'skip-invalid'];
+
+export function runAudit(args: ParsedArgs, out: CommandOutput): number {
+  const loopCap = wholeNumber(args, 'loop-cap', 1);
+  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const loopsCsv = args.values.get('loops-csv');
+
+  const readStart = performance.now();
+  const network = loadNetwork(args);
+  const readMs = performance.now() - readStart;
+
+  let lastLine = '';
+  const solveStart = performance.now();
+  const audit = auditNetwork(network, {
+    loopCap,
+    negotiable,
+    onProgress: args.flags.has('progress')
+      ? ({ phase, done, total }) => {
+          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+          if (line !== lastLine) out.warn((lastLine = line));
+        }
+      : undefined,
+  });
+  const solveMs = performance.now() - solveStart;
+
+  const report = auditReport(network, audit);
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
+  if (loopsCsv) writeTextFileAtomic(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
+  if (args.flags.has('timings')) out.timing({ read_ms: round(readMs), audit_ms: round(solveMs), depots: network.depotCount, lanes: network.laneCount });
+
+  if (report.loops.length > 0) {
+    out.warn(
+      `WARNING: ${report.loops.length}${report.loop_cap_reached ? '+' : ''} rebate loop(s) in the network: costs through them are unbounded and the contract terms need fixing`,
+    );
+    if (report.loop_cap_reached) out.warn(`WARNING: more loops exist than the ${report.loops.length} reported (raise --loop-cap to see them)`);
+    if (report.fix_plan_verified) {
+      out.warn(`fix plan: ${report.fix_plan.length} rebate cut(s) remove every loop (checked by solving the changed network); headroom is computed after the fix plan`);
+    } else {
+      out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
+    }
+  }
+  return 0;
+}
+
+function wholeNumber(args: ParsedArgs, name: string, min: number): number | undefined {
+  const text = args.values.get(name);
+  if (text === undefined) return undefined;
+  const value = Number(text);
+  if (!/^\d+$/.test(text) || !Number.isSafeInteger(value) || value < min) throw new UsageError(`--${name} must be a whole number >= ${min}, got "${text}"`);
+  return value;
+}
+
+function round(ms: number): number {
+  return Math.round(ms * 100) / 100;
+}

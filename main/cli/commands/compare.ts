@@ -1,0 +1,38 @@
+// `lanewright compare`: a what-if scenario against the base from one origin: each depot's cost
+// before and after, the routes that changed and the rebate loops that appear or disappear.
+// Changes that no longer fit the lanes file are printed as warnings; the scenario file is never rewritten.
+
+import { compareScenario } from '../../../engine/scenario/compare';
+import { parseScenarioDocument } from '../../../engine/scenario/document';
+import { compareReport, compareReportRows } from '../../../engine/report/compare-report';
+import { formatCsvRows } from '../../../engine/io/csv-papaparse';
+import { required, UsageError, type ParsedArgs } from '../args';
+import { readTextFile } from '../files';
+import { loadNetwork } from '../load-network';
+import type { CommandOutput } from '../run';
+
+export const compareFlags = ['json', 'skip-invalid'];
+
+export function runCompare(args: ParsedArgs, out: CommandOutput): number {
+  const originId = required(args, 'from');
+  const scenarioPath = required(args, 'scenario');
+  const capText = args.values.get('loop-cap');
+  if (capText !== undefined && (!/^\d+$/.test(capText) || Number(capText) < 1)) throw new UsageError(`--loop-cap must be a whole number >= 1, got "${capText}"`);
+  const scenario = parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
+  const network = loadNetwork(args);
+
+  const comparison = compareScenario(network, scenario, originId, {
+    date: args.values.get('date') ?? null,
+    loopCap: capText === undefined ? undefined : Number(capText),
+  });
+  const report = compareReport(comparison);
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));
+
+  for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
+  for (const loop of report.loops_appeared) {
+    out.warn(`WARNING: the scenario creates a rebate loop ${loop.depots.join(' > ')} netting ${loop.net_per_lap_minor} minor units per lap${loop.reached_from_origin ? `; costs from ${originId} through it are unbounded` : ''}`);
+  }
+  for (const loop of report.loops_disappeared) out.warn(`the scenario removes the rebate loop ${loop.depots.join(' > ')}`);
+  if (report.loop_cap_reached) out.warn('WARNING: more loops exist than were compared (raise --loop-cap)');
+  return 0;
+}

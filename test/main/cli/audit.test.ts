@@ -1,0 +1,74 @@
+import { describe, expect, it } from 'vitest';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { runCli, tempFiles } from './cli-harness';
+import { referenceHasNegativeLoop } from '../../engine/audit/reference';
+
+const depots = ['id,name,lat,lon', 'A,Alpha yard,51.0,4.0', 'B,Bravo yard,51.1,4.1', 'C,Charlie yard,51.2,4.2', 'D,Delta yard,51.3,4.3'].join('\n');
+// Rows 2-3 form a loop A>B>A netting 10.00 - 12.50 = -2.50 per lap; D has no way back to anything.
+const lanes = ['from,to,toll,fuel,fees,rebate', 'A,B,4.00,5.00,1.00,0', 'B,A,3.00,4.00,0.50,20.00', 'B,C,2.00,3.00,0,0', 'C,D,1.00,0,0,0', 'C,B,6.00,0,0,0'].join('\n');
+
+describe('lanewright audit', () => {
+  it('prints the JSON the contract review asks for, with a verified fix plan and headroom after it', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
+    const { status, stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+    expect(status).toBe(0);
+    const report = JSON.parse(stdout);
+    for (const k of ['loops', 'fix_plan', 'headroom', 'headroom_after_fix_plan', 'loop_cap_reached']) expect(report).toHaveProperty(k);
+    expect(report.loops).toHaveLength(1);
+    expect(report.loops[0]).toMatchObject({ depots: ['A', 'B'], lanes: [2, 3], net_per_lap_minor: -250, unbounded_depots: ['A', 'B', 'C', 'D'] });
+    expect(report.fix_plan).toEqual([expect.objectContaining({ row: 3, from: 'B', to: 'A', net_minor: -1250, new_net_minor: -1000 })]);
+    expect(report.headroom_after_fix_plan).toBe(true);
+    expect(report.loop_cap_reached).toBe(false);
+    // After the fix, A>B (10.00) may drop to -(B>A = -10.00) = 10.00: no headroom left; C>D has no way back.
+    const head = (row: number) => report.headroom.find((h: { row: number }) => h.row === row);
+    expect(head(2)).toMatchObject({ from: 'A', to: 'B', net_minor: 1000, floor_minor: 1000 });
+    expect(head(5)).toMatchObject({ from: 'C', to: 'D', floor_minor: null });
+    // The plan, checked outside the engine: no negative loop remains.
+    const ids = ['A', 'B', 'C', 'D'];
+    const after = report.headroom.map((h: { from: string; to: string; net_minor: number }) => [ids.indexOf(h.from), ids.indexOf(h.to), h.net_minor]);
+    expect(referenceHasNegativeLoop(4, after)).toBe(false);
+    expect(stderr).toMatch(/WARNING/);
+  });
+
+  it('writes the lane table with --out and the loop table with --loops-csv, leaving no temporary files', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
+    const { status } = await runCli([
+      'audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--out', join(dir, 'audit.csv'), '--loops-csv', join(dir, 'loops.csv'),
+    ]);
+    expect(status).toBe(0);
+    const laneRows = readFileSync(join(dir, 'audit.csv'), 'utf8').trim().split('\r\n');
+    expect(laneRows[0]).toBe('row,from,to,ref,toll,fuel,fees,rebate,net,on_loops,new_rebate,new_net,floor,headroom');
+    expect(laneRows[2]).toBe('3,B,A,,3.00,4.00,0.50,20.00,-12.50,1,17.50,-10.00,-10.00,0.00');
+    expect(laneRows[4]).toBe('5,C,D,,1.00,0.00,0.00,0.00,1.00,,,,no limit,no limit');
+    const loopRows = readFileSync(join(dir, 'loops.csv'), 'utf8').trim().split('\r\n');
+    expect(loopRows).toHaveLength(3);
+    expect(loopRows[1].startsWith('1,1,2,A,B,')).toBe(true);
+    expect(readdirSync(dir).filter((f) => f.endsWith('.tmp'))).toEqual([]);
+  });
+
+  it('a loop-free network: no loops, no plan, headroom on the network as is', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes.replace('20.00', '5.00') });
+    const { stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+    const report = JSON.parse(stdout);
+    expect([report.loops, report.fix_plan, report.headroom_after_fix_plan]).toEqual([[], [], false]);
+    expect(stderr).toBe('');
+  });
+
+  it('reports progress on stderr with --progress', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
+    const { stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress']);
+    expect(stderr).toMatch(/audit: headroom 100%/);
+  });
+
+  it('refuses a bad --loop-cap and a missing file with one line each', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
+    const bad = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--loop-cap', '0']);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
+    const missing = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'nope.csv')]);
+    expect(missing.status).toBe(1);
+    expect(missing.stderr).toMatch(/nope\.csv/);
+    expect(existsSync(join(dir, 'nope.csv'))).toBe(false);
+  });
+});

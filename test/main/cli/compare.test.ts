@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { runCli, tempFiles } from './cli-harness';
+
+const depots = ['id,name,lat,lon', 'A,Alpha yard,51.0,4.0', 'B,Bravo yard,51.1,4.1', 'C,Charlie yard,51.2,4.2'].join('\n');
+const lanes = ['from,to,toll,fuel,fees,rebate', 'A,B,10.00,0,0,0', 'B,C,10.00,0,0,0', 'A,C,25.00,0,0,0', 'C,B,2.00,0,0,0'].join('\n');
+const scenario = JSON.stringify({
+  format: 'lanewright-scenario',
+  version: 1,
+  name: 'Toll rise on A-B and a backhaul credit',
+  description: null,
+  changes: [
+    { kind: 'set-amount', lane: { from: 'A', to: 'B', ref: null, occurrence: 1 }, field: 'toll', amountMinor: 2000, note: null },
+    { kind: 'set-amount', lane: { from: 'C', to: 'B', ref: null, occurrence: 1 }, field: 'rebate', amountMinor: 1500, note: null },
+    { kind: 'close-lane', lane: { from: 'C', to: 'A', ref: null, occurrence: 1 }, note: null },
+  ],
+});
+
+describe('lanewright compare', () => {
+  it('prints per-depot changes, changed routes, appearing loops and problems', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes, 'what-if.json': scenario });
+    const args = ['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'A'];
+    const { status, stdout, stderr } = await runCli([...args, '--json']);
+    expect(status).toBe(0);
+    const report = JSON.parse(stdout);
+    expect(report.depots.map((d: { id: string; base_status: string; scenario_status: string }) => [d.id, d.base_status, d.scenario_status])).toEqual([
+      ['A', 'reachable', 'reachable'],
+      ['B', 'reachable', 'unbounded'], // B>C>B nets 10 - 13 = -3 per lap in the scenario
+      ['C', 'reachable', 'unbounded'],
+    ]);
+    expect(report.loops_appeared).toMatchObject([{ depots: ['B', 'C'], rows: [3, 5], net_per_lap_minor: -300, reached_from_origin: true }]);
+    expect(report.problems).toMatchObject([{ change: 3, code: 'lane-missing', lane: 'C>A||1' }]);
+    expect(stderr).toMatch(/C>A\|\|1/);
+    expect(stderr).toMatch(/creates a rebate loop B > C/);
+
+    const csv = await runCli([...args, '--out', join(dir, 'compare.csv')]);
+    expect(csv.status).toBe(0);
+    expect(readFileSync(join(dir, 'compare.csv'), 'utf8').split('\r\n')[0]).toBe('id,name,base_status,scenario_status,base_cost,scenario_cost,change,route_changed,base_route,scenario_route');
+    // The scenario file is read, never rewritten.
+    expect(readFileSync(join(dir, 'what-if.json'), 'utf8')).toBe(scenario);
+  });
+
+  it('names the scenario file and field when the scenario is malformed', async () => {
+    const broken = scenario.replace('"amountMinor":2000', '"amountMinor":"20.00"');
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes, 'what-if.json': broken });
+    const { status, stderr } = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'A']);
+    expect(status).toBe(1);
+    expect(stderr).toMatch(/what-if\.json/);
+    expect(stderr).toMatch(/changes\[0\]\.amountMinor/);
+  });
+
+  it('refuses an unknown origin and a missing --scenario', async () => {
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes, 'what-if.json': scenario });
+    const unknown = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'ZZ']);
+    expect(unknown.status).toBe(1);
+    expect(unknown.stderr).toMatch(/ZZ/);
+    const missing = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--from', 'A']);
+    expect(missing.status).toBe(2);
+  });
+});
