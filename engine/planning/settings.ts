@@ -42,8 +42,8 @@ export const DEFAULT_PLANNING_SETTINGS: PlanningSettings = {
 
 /** The caution shown beside every driving-time flag. */
 export const DRIVING_LIMIT_CAUTION =
-  'The driving-time flag is an estimate from lane drive times against a daily driving limit. It does not plan rest breaks, ' +
-  'weekly limits or working time; local rules, tachograph records and licensed practice apply.';
+  'The driving-time flag is an estimate: summed lane drive times against a daily driving limit. Rest breaks, weekly ' +
+  'and fortnightly limits, working time, local rules and licensed practice apply, and this flag does not plan them.';
 
 /** Settings with the user's choices laid over the defaults. */
 export function planningSettings(overrides: Partial<PlanningSettings> = {}): PlanningSettings {

@@ -1,17 +1,111 @@
 // The one place the command line turns --depots/--lanes files into a Network. Every command goes
-// through here, so the importer can change without touching the commands.
+// through here, so --date, --vehicle-class, --skip-invalid and the planning options work the same
+// for all of them. Files stream in 1 MB chunks into the engine's importer.
 
-import { buildNetwork } from '../../engine/network/build';
+import { startImport } from '../../engine/import/import-network';
+import { InvalidInputError } from '../../engine/import/import-errors';
+import { formatItem } from '../../engine/import/report-collector';
+import type { ImportOptions, ImportResult } from '../../engine/import/types';
 import type { Network } from '../../engine/network/types';
-import { readDepotsCsv, readLanesCsv } from '../../engine/import/basic-reader';
-import { required, type ParsedArgs } from './args';
-import { readTextFile } from './files';
+import { drivingLimitOf } from '../../engine/planning/settings';
+import type { PlanningSettings } from '../../engine/planning/types';
+import { required, UsageError, type ParsedArgs } from './args';
+import { readTextChunks } from './read-chunks';
 
-/** Reads --depots and --lanes and builds the network. */
-export function loadNetwork(args: ParsedArgs): Network {
+/** Boolean flags every command that loads a network accepts; list them among the command's flags. */
+export const LOAD_NETWORK_FLAGS = ['skip-invalid'];
+
+/** Usage text of the options read here, for the help screen. */
+export const LOAD_NETWORK_USAGE =
+  '[--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid] [--drive-limit eu|us|HOURS] [--detour-factor F]\n' +
+  '    [--fuel-consumption L_PER_100KM] [--fuel-price PRICE] [--average-speed KMH] [--default-toll AMOUNT]\n' +
+  '    [--currency CODE] [--rates CODE=RATE,...]';
+
+function positive(args: ParsedArgs, name: string): number | undefined {
+  const text = args.values.get(name);
+  if (text === undefined) return undefined;
+  if (!/^\d+(\.\d+)?$/.test(text) || Number(text) <= 0) throw new UsageError(`--${name} must be a positive number, got "${text}"`);
+  return Number(text);
+}
+
+/** The importer options the command line asks for. */
+export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
+  const settings: Partial<PlanningSettings> = {};
+  settings.detourFactor = positive(args, 'detour-factor');
+  settings.fuelLitresPer100Km = positive(args, 'fuel-consumption');
+  settings.averageSpeedKmh = positive(args, 'average-speed');
+  const price = args.values.get('fuel-price');
+  if (price !== undefined) {
+    if (!/^\d+(\.\d+)?$/.test(price)) throw new UsageError(`--fuel-price must be a decimal price per litre such as 1.659, got "${price}"`);
+    settings.fuelPricePerLitre = price;
+  }
+  const toll = args.values.get('default-toll');
+  if (toll !== undefined) {
+    if (!/^-?\d+(\.\d+)?$/.test(toll)) throw new UsageError(`--default-toll must be a decimal amount, got "${toll}"`);
+    settings.defaultToll = toll;
+  }
+  const limit = args.values.get('drive-limit');
+  if (limit !== undefined) {
+    const parsed = drivingLimitOf(limit);
+    if (!parsed) throw new UsageError(`--drive-limit must be eu, us or a number of hours up to 24, got "${limit}"`);
+    settings.drivingLimit = parsed;
+  }
+  let exchangeRates: Record<string, string> | undefined;
+  const rates = args.values.get('rates');
+  if (rates !== undefined) {
+    exchangeRates = {};
+    for (const part of rates.split(',')) {
+      const m = /^\s*([A-Za-z]{3})\s*=\s*(\d+(?:\.\d+)?)\s*$/.exec(part);
+      if (!m) throw new UsageError(`--rates takes CODE=RATE pairs such as USD=0.92, got "${part}"`);
+      exchangeRates[m[1].toUpperCase()] = m[2];
+    }
+  }
+  const date = args.values.get('date');
+  const vehicleClass = args.values.get('vehicle-class');
+  return {
+    depotsFile: args.values.get('depots'),
+    lanesFile: args.values.get('lanes'),
+    currency: args.values.get('currency'),
+    exchangeRates,
+    skipInvalid: args.flags.has('skip-invalid'),
+    plan: { date, vehicleClass, settings },
+  };
+}
+
+/**
+ * Reads --depots and --lanes and plans the network. The report is always returned; nothing is
+ * printed and nothing is thrown for problems in the files (the `check` command wants them all).
+ */
+export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult {
   const depotsPath = required(args, 'depots');
   const lanesPath = required(args, 'lanes');
-  const depots = readDepotsCsv(depotsPath, readTextFile(depotsPath));
-  const lanes = readLanesCsv(lanesPath, readTextFile(lanesPath));
-  return buildNetwork(depots, lanes);
+  const session = startImport({ ...importOptionsFromArgs(args), ...extra });
+  for (const chunk of readTextChunks(depotsPath)) session.feedDepots(chunk.text, chunk.fraction);
+  session.finishDepots();
+  for (const chunk of readTextChunks(lanesPath)) session.feedLanes(chunk.text, chunk.fraction);
+  session.finishLanes();
+  return session.result();
+}
+
+/**
+ * Reads and plans; prints warnings and notes to stderr (and the errors, with --skip-invalid);
+ * throws InvalidInputError, one line per problem, when there are errors and no --skip-invalid.
+ */
+export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult & { network: Network } {
+  const result = readImport(args, extra);
+  if (result.network === null) throw new InvalidInputError(result.report);
+  const lines = [
+    ...result.report.errors.map((e) => formatItem(e, 'error')),
+    ...result.report.warnings.map((w) => formatItem(w, 'warning')),
+    ...(result.report.omitted > 0 ? [`... ${result.report.omitted} more problem(s) not listed (see lanewright check)`] : []),
+    ...result.notes.map((n) => `note: ${n}`),
+  ];
+  if (result.report.errors.length > 0) lines.push(`note: --skip-invalid: planning with ${result.report.accepted} accepted row(s), ${result.report.rejected} rejected`);
+  for (const line of lines) process.stderr.write(line + '\n');
+  return result as ImportResult & { network: Network };
+}
+
+/** Reads --depots and --lanes and builds the network for --date and --vehicle-class. */
+export function loadNetwork(args: ParsedArgs): Network {
+  return loadImport(args).network;
 }

@@ -5,6 +5,8 @@ import { LanewrightError } from '../../engine/errors';
 import { parseArgs, UsageError } from './args';
 import { writeTextFileAtomic } from './files';
 import { routesFlags, runRoutes } from './commands/routes';
+import { checkFlags, runCheck } from './commands/check';
+import { exportFlags, runExport } from './commands/export';
 import { auditFlags, runAudit } from './commands/audit';
 import { compareFlags, runCompare } from './commands/compare';
 
@@ -17,6 +19,12 @@ export interface CommandOutput {
 
 const USAGE = `usage:
   lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--max-legs K] [--json] [--out FILE] [--timings]
+  lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
+  lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
+                    [--loops-out FILE] [--geojson-out FILE]
+  Planning options (routes, export, audit, compare): [--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid]
+    [--drive-limit eu|us|HOURS] [--detour-factor F] [--fuel-consumption L_PER_100KM] [--fuel-price PRICE]
+    [--average-speed KMH] [--default-toll AMOUNT] [--currency CODE] [--rates CODE=RATE,...]
   lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
                    [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
   lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
@@ -26,6 +34,8 @@ local regulations apply; defer to local codes and licensed practice.`;
 
 const COMMANDS: Record<string, { flags: string[]; run: (args: ReturnType<typeof parseArgs>, out: CommandOutput) => number }> = {
   routes: { flags: routesFlags, run: runRoutes },
+  check: { flags: checkFlags, run: runCheck },
+  export: { flags: exportFlags, run: runExport },
   audit: { flags: auditFlags, run: runAudit },
   compare: { flags: compareFlags, run: runCompare },
 };

@@ -1,0 +1,37 @@
+// `lanewright check`: reads the depots and lanes files and prints the validation report, as lines or
+// JSON. Exit status 0 when there are no errors, 1 when there are; warnings alone do not fail.
+
+import { formatReport } from '../../../engine/import/report-collector';
+import type { ParsedArgs } from '../args';
+import { LOAD_NETWORK_FLAGS, readImport } from '../load-network';
+import type { CommandOutput } from '../run';
+
+export const checkFlags = ['json', ...LOAD_NETWORK_FLAGS];
+
+export function runCheck(args: ParsedArgs, out: CommandOutput): number {
+  // Building the network is not needed to report on the files.
+  const result = readImport(args, { skipInvalid: false });
+  const { report } = result;
+  if (args.flags.has('json')) {
+    out.write(
+      JSON.stringify({
+        total: report.total,
+        accepted: report.accepted,
+        rejected: report.rejected,
+        errors: report.errors.map(({ file, row, column, value, message, code }) => ({ file, row, column, value, message, code })),
+        warnings: report.warnings.map(({ file, row, column, value, message, code }) => ({ file, row, column, value, message, code })),
+        files: report.files,
+        omitted: report.omitted,
+        currency: result.currency,
+        vehicle_classes: result.vehicleClasses,
+        notes: result.notes,
+      }) + '\n',
+    );
+  } else {
+    const lines = formatReport(report);
+    lines.push(`total ${report.total} row(s): ${report.accepted} accepted, ${report.rejected} rejected; ${report.errors.length} error(s), ${report.warnings.length} warning(s)`);
+    for (const note of result.notes) lines.push(`note: ${note}`);
+    out.write(lines.join('\n') + '\n');
+  }
+  return report.errors.length > 0 ? 1 : 0;
+}

@@ -1,0 +1,59 @@
+// `lanewright export`: writes the lanes CSV, the routes CSV from an origin, the loops CSV and a
+// GeoJSON of depots, routes and loops; options choose which. Every file is written atomically.
+
+import { findDistinctLoops } from '../../../engine/audit/distinct-loops';
+import { geoJsonText } from '../../../engine/export/geojson-text';
+import { lanesCsv } from '../../../engine/export/lanes-csv';
+import { loopsCsv } from '../../../engine/export/loops-csv';
+import { routesCsv } from '../../../engine/export/routes-csv';
+import { networkGeoJson } from '../../../engine/export/geojson';
+import { depotIndexOf } from '../../../engine/network/build';
+import { routesReport, type RoutesReport } from '../../../engine/report/routes-report';
+import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
+import { UsageError, type ParsedArgs } from '../args';
+import { writeTextFileAtomic } from '../files';
+import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
+import type { CommandOutput } from '../run';
+
+export const exportFlags = [...LOAD_NETWORK_FLAGS];
+
+export function runExport(args: ParsedArgs, out: CommandOutput): number {
+  const lanesOut = args.values.get('lanes-out');
+  const routesOut = args.values.get('routes-out');
+  const loopsOut = args.values.get('loops-out');
+  const geojsonOut = args.values.get('geojson-out');
+  if (!lanesOut && !routesOut && !loopsOut && !geojsonOut) {
+    throw new UsageError('export needs at least one of --lanes-out, --routes-out, --loops-out, --geojson-out');
+  }
+  const originId = args.values.get('from');
+  if (routesOut && !originId) throw new UsageError('--routes-out needs --from DEPOT_ID');
+
+  const imported = loadImport(args);
+  const network = imported.network;
+  let report: RoutesReport | undefined;
+  if (originId) {
+    const solved = cheapestRoutes(network, depotIndexOf(network, originId, '--from'));
+    report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
+  }
+  const loops = findDistinctLoops(network).loops;
+  const written: string[] = [];
+  if (lanesOut) {
+    writeTextFileAtomic(lanesOut, lanesCsv(imported, loops));
+    written.push(`lanes: ${lanesOut} (${network.laneCount} lane(s))`);
+  }
+  if (routesOut && report) {
+    writeTextFileAtomic(routesOut, routesCsv(report));
+    written.push(`routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  }
+  if (loopsOut) {
+    writeTextFileAtomic(loopsOut, loopsCsv(network, loops));
+    written.push(`loops: ${loopsOut} (${loops.length} loop(s))`);
+  }
+  if (geojsonOut) {
+    writeTextFileAtomic(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })));
+    written.push(`GeoJSON: ${geojsonOut}`);
+  }
+  out.write(written.map((w) => `wrote ${w}`).join('\n') + '\n');
+  if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
+  return 0;
+}
