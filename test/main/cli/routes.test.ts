@@ -42,7 +42,8 @@ function expectOneLineError(result: ReturnType<typeof run>, mentions: string) {
 
 // A -> B 10.00, B -> C 10.00 (with a 2.50 rebate), A -> C 50.00 direct; D has no lanes.
 const depots = file('depots.csv', 'id,name,lat,lon\nA,Alpha yard,51.9,4.1\nB,Bravo dock,51.2,4.3\nC,Charlie hub,50.6,3.0\nD,Delta depot,48.7,2.3\n');
-const lanes = file('lanes.csv', 'from,to,toll,fuel,fees,rebate\nA,B,2.00,7.00,1.00,0\nB,C,0,10.00,,2.50\nA,C,50,,,\n');
+// Every fuel figure is given (the importer may estimate a missing one); the empty fees count as 0.
+const lanes = file('lanes.csv', 'from,to,toll,fuel,fees,rebate\nA,B,2.00,7.00,1.00,0\nB,C,0,10.00,,2.50\nA,C,50,0,0,0\n');
 
 describe('lanewright routes', () => {
   it('prints CSV by default: one row per depot with id, name, status, cost, legs and path', () => {
@@ -130,10 +131,19 @@ describe('lanewright routes', () => {
     expectOneLineError(run('routes', '--depots', depots, '--lanes', missing, '--from', 'A'), missing);
   });
 
-  it('an unreadable CSV or a folder given as a file is one line on stderr naming it, non-zero exit', () => {
-    const broken = file('broken.csv', 'from,to,toll\nA,"B,1.00\nB,C,2.00\n');
-    expectOneLineError(run('routes', '--depots', depots, '--lanes', broken, '--from', 'A'), broken);
+  it('a folder given as a file is one line on stderr naming it, non-zero exit', () => {
     expectOneLineError(run('routes', '--depots', work, '--lanes', lanes, '--from', 'A'), work);
+  });
+
+  it('an unreadable CSV is refused with the file and row named, non-zero exit, no stack trace', () => {
+    // The importer lists every bad row and the accepted/rejected counts, so this may be more than
+    // one line; the line naming the problem must name the file and the row.
+    const broken = file('broken.csv', 'from,to,toll\nA,"B,1.00\nB,C,2.00\n');
+    const result = run('routes', '--depots', depots, '--lanes', broken, '--from', 'A');
+    expect(result.status).not.toBe(0);
+    expect(result.stdout).toBe('');
+    expect(result.stderr).not.toMatch(/^\s+at /m);
+    expect(result.stderr.split('\n').some((line) => line.includes(broken) && /row 2\b/.test(line))).toBe(true);
   });
 
   it('runs as `npx lanewright` from the repository root', () => {
