@@ -44,12 +44,12 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const solve = plan.solve && network && plan.solve.status.length === network.depotIds.length ? plan.solve : null;
   const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
   return (
-    <div className="lw-app">
+    <div className="lw-app" data-ready={solve ? 'yes' : 'no'}>
       <a className="lw-skip" href="#lw-lower">
         Skip to results
       </a>
       <TopBar datasetName={datasetName} desktop={host.kind === 'desktop'} dirty={bench.dirty} onSample={(loop) => void bench.openSample(loop)} onImport={ui.openImport} onSave={() => void bench.save(false)} onExport={(k) => void exportFile(k)} onAbout={ui.openAbout} />
-      <ProgressBar progress={bench.engine.progress} onCancel={bench.engine.cancel} />
+      <ProgressBar progress={bench.progress} onCancel={bench.engine.cancel} />
       {(dataset.error || plan.error) && (
         <p className="lw-error" role="alert">
           {dataset.error ?? plan.error}

@@ -42,7 +42,7 @@ export function LowerPanel({ bench, network, solve, amounts, keys, tab, onTab, o
           <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} />
         </div>
       )}
-      {tab === 'review' && <ContractReview engine={bench.engine} network={network} scenario={scenario} />}
+      {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={keys} scenario={scenario} onScenario={onScenario} />}
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
     </Tabs>
   );

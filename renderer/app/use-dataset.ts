@@ -3,7 +3,7 @@
 // replaces the network already on screen.
 
 import { useCallback, useState } from 'react';
-import type { ImportReport, NamedText, NetworkView } from '../worker/protocol';
+import type { ImportReport, NamedText, NetworkView, PlanChoice } from '../worker/protocol';
 import { WorkCancelledError, type Engine } from './use-engine';
 
 export interface DatasetFiles {
@@ -14,6 +14,7 @@ export interface DatasetFiles {
 /** An import waiting for the user's decision (its report lists rejected rows). */
 export interface PendingImport {
   files: DatasetFiles;
+  plan: PlanChoice;
   report: ImportReport;
 }
 
@@ -24,8 +25,10 @@ export interface Dataset {
   report: ImportReport | null;
   pending: PendingImport | null;
   error: string | null;
-  /** Imports files; with issues the import waits in `pending` unless `acceptPartial`. Resolves true when loaded. */
-  load(files: DatasetFiles, acceptPartial?: boolean): Promise<boolean>;
+  /** Imports files planned for `plan`; with issues the import waits in `pending` unless `acceptPartial`. Resolves true when loaded. */
+  load(files: DatasetFiles, plan: PlanChoice, acceptPartial?: boolean): Promise<boolean>;
+  /** Plans the loaded import for another day or vehicle class. */
+  replan(plan: PlanChoice): Promise<boolean>;
   continueWithAccepted(): Promise<boolean>;
   dismissPending(): void;
 }
@@ -38,16 +41,16 @@ export function useDataset(engine: Engine): Dataset {
   const [error, setError] = useState<string | null>(null);
 
   const load = useCallback(
-    async (next: DatasetFiles, acceptPartial = false): Promise<boolean> => {
+    async (next: DatasetFiles, plan: PlanChoice, acceptPartial = false): Promise<boolean> => {
       setError(null);
       try {
-        const request = { kind: 'load' as const, depots: next.depots, lanes: next.lanes, acceptPartial };
+        const request = { kind: 'load' as const, depots: next.depots, lanes: next.lanes, acceptPartial, plan };
         const answer = await engine.track((onProgress) => engine.client.request<'loaded'>(request, onProgress), 'Importing');
         if (!answer.network) {
-          setPending({ files: next, report: answer.report });
+          setPending({ files: next, plan, report: answer.report });
           return false;
         }
-        engine.client.rememberLoad(request);
+        engine.client.rememberLoad({ ...request, acceptPartial: true });
         setFiles(next);
         setNetwork(answer.network);
         setReport(answer.report);
@@ -61,8 +64,28 @@ export function useDataset(engine: Engine): Dataset {
     [engine],
   );
 
-  const continueWithAccepted = useCallback(async () => (pending ? load(pending.files, true) : false), [load, pending]);
+  const continueWithAccepted = useCallback(async () => (pending ? load(pending.files, pending.plan, true) : false), [load, pending]);
+
+  const replan = useCallback(
+    async (plan: PlanChoice): Promise<boolean> => {
+      try {
+        const answer = await engine.track((onProgress) => engine.client.request<'loaded'>({ kind: 'replan', plan }, onProgress), 'Planning');
+        if (!answer.network) {
+          setError(`The plan for ${plan.date}${plan.vehicleClass ? `, class ${plan.vehicleClass}` : ''} has errors: ${answer.report.issues[0]?.reason ?? 'no usable lanes'}`);
+          return false;
+        }
+        setNetwork(answer.network);
+        setReport(answer.report);
+        setError(null);
+        return true;
+      } catch (caught) {
+        if (!(caught instanceof WorkCancelledError)) setError((caught as Error).message);
+        return false;
+      }
+    },
+    [engine],
+  );
   const dismissPending = useCallback(() => setPending(null), []);
 
-  return { files, network, report, pending, error, load, continueWithAccepted, dismissPending };
+  return { files, network, report, pending, error, load, replan, continueWithAccepted, dismissPending };
 }

@@ -1,7 +1,7 @@
 // One engine worker per window, with the progress of whatever it is doing and a way to cancel it.
 // Progress shows only for work that lasts over a moment, so quick solves do not flash a bar.
 
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { EngineClient, WorkCancelledError } from '../worker/client';
 
 export interface Progress {
@@ -11,15 +11,15 @@ export interface Progress {
 
 const SHOW_AFTER_MS = 150;
 
+/** Stable for the window's lifetime, so effects depending on it run only when their data changes. */
 export interface Engine {
   client: EngineClient;
-  progress: Progress | null;
   /** Runs a request with progress reporting; rejects with WorkCancelledError when cancelled. */
   track<T>(work: (onProgress: (phase: string, fraction: number) => void) => Promise<T>, phase: string): Promise<T>;
   cancel(): void;
 }
 
-export function useEngine(): Engine {
+export function useEngine(): { engine: Engine; progress: Progress | null } {
   const clientRef = useRef<EngineClient | null>(null);
   if (clientRef.current === null) {
     clientRef.current = new EngineClient(() => new Worker(new URL('../worker/engine.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-engine' }));
@@ -58,7 +58,8 @@ export function useEngine(): Engine {
     setProgress(null);
   }, [client]);
 
-  return { client, progress, track, cancel };
+  const engine = useMemo(() => ({ client, track, cancel }), [client, track, cancel]);
+  return { engine, progress };
 }
 
 export { WorkCancelledError };

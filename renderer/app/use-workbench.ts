@@ -5,14 +5,18 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
-import type { PlanSettings } from '../worker/protocol';
+import type { PlanChoice, PlanSettings } from '../worker/protocol';
 import { useDataset, type DatasetFiles } from './use-dataset';
 import { useEngine } from './use-engine';
 import { usePlan } from './use-plan';
 import { defaultSettings, documentOf, filesOf, stateOf } from './workspace-doc';
 
+function planOf(settings: PlanSettings): PlanChoice {
+  return { date: settings.dispatchDate, vehicleClass: settings.vehicleClass };
+}
+
 export function useWorkbench(host: LanewrightHost) {
-  const engine = useEngine();
+  const { engine, progress } = useEngine();
   const dataset = useDataset(engine);
   const [settings, setSettings] = useState<PlanSettings>(() => defaultSettings(SAMPLE_ORIGIN));
   const [scenario, setScenario] = useState<Scenario>(() => emptyScenario());
@@ -21,11 +25,13 @@ export function useWorkbench(host: LanewrightHost) {
   const [savedPath, setSavedPath] = useState<string | null>(null);
   const [dirty, setDirty] = useState(false);
   const restored = useRef(false);
+  const settingsRef = useRef(settings);
+  settingsRef.current = settings;
   const plan = usePlan(engine, dataset.network, settings, scenario, selected);
 
   const openSample = useCallback(
     async (loop: boolean) => {
-      const ok = await dataset.load(sampleFiles(loop));
+      const ok = await dataset.load(sampleFiles(loop), planOf(settingsRef.current));
       if (ok) {
         setSettings((s) => ({ ...s, origin: SAMPLE_ORIGIN }));
         setScenario(emptyScenario());
@@ -40,7 +46,7 @@ export function useWorkbench(host: LanewrightHost) {
     async (doc: Parameters<typeof stateOf>[0]) => {
       const state = stateOf(doc);
       const files = await filesOf(host, doc);
-      if (files && (await dataset.load(files))) {
+      if (files && (await dataset.load(files, planOf(state.settings)))) {
         setSettings(state.settings);
         setScenario(state.scenario);
         setSelected(null);
@@ -72,6 +78,15 @@ export function useWorkbench(host: LanewrightHost) {
       await openSample(false);
     })();
   }, [host, openDocument, openSample]);
+
+  // A new day or vehicle class re-plans the import (lanes valid that day, that class's tolls).
+  const { network } = dataset;
+  const { replan } = dataset;
+  useEffect(() => {
+    if (!network) return;
+    const wanted = planOf(settings);
+    if (wanted.date !== network.plan.date || wanted.vehicleClass !== network.plan.vehicleClass) void replan(wanted);
+  }, [network, settings, replan]);
 
   const document = useMemo(() => documentOf(dataset.files, settings, scenario), [dataset.files, settings, scenario]);
 
@@ -121,14 +136,14 @@ export function useWorkbench(host: LanewrightHost) {
 
   const importFiles = useCallback(
     async (files: DatasetFiles) => {
-      const ok = await dataset.load(files);
+      const ok = await dataset.load(files, planOf(settingsRef.current));
       if (ok) setSelected(null);
       return ok;
     },
     [dataset],
   );
 
-  return { host, engine, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles };
+  return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles };
 }
 
 export type Workbench = ReturnType<typeof useWorkbench>;

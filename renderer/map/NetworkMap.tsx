@@ -39,6 +39,8 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
   selectRef.current = onSelect;
   // Bumped once the map exists, so the layer effects run after it is created.
   const [ready, setReady] = useState(0);
+  const autoFit = useRef(true);
+  const fitTo = useRef<L.LatLngBounds | null>(null);
 
   useEffect(() => {
     if (!element.current) return;
@@ -49,7 +51,19 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
     addBasemap(map, renderer);
     mapRef.current = { map, renderer };
     setReady((n) => n + 1);
+    // The panels around the map resize (loop banner, window); Leaflet must re-measure its box.
+    // Until the user pans or zooms, the map keeps the whole network in view as its box changes.
+    const resize = new ResizeObserver(() => {
+      map.invalidateSize();
+      if (autoFit.current && fitTo.current) map.fitBounds(fitTo.current);
+    });
+    resize.observe(element.current);
+    const stopAutoFit = () => (autoFit.current = false);
+    element.current.addEventListener('wheel', stopAutoFit, { passive: true });
+    element.current.addEventListener('mousedown', stopAutoFit);
+    element.current.addEventListener('keydown', stopAutoFit);
     return () => {
+      resize.disconnect();
       map.remove();
       mapRef.current = null;
     };
@@ -60,8 +74,10 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
 
   useEffect(() => {
     if (!map || !network || network.depotIds.length === 0) return;
-    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number]));
-    map.fitBounds(bounds.pad(0.08));
+    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number])).pad(0.08);
+    fitTo.current = bounds;
+    autoFit.current = true;
+    map.fitBounds(bounds);
   }, [map, network]);
 
   useLayer(map, network && renderer ? () => laneLayer(network, renderer) : null, [network]);

@@ -68,7 +68,8 @@ function escapeHtml(text: string): string {
 function diamond(id: string): L.DivIcon {
   return L.divIcon({
     className: 'lw-unbounded-marker',
-    html: `<span role="img" aria-label="${escapeHtml(id)}: cost unbounded">∞</span>`,
+    // Leaflet positions the icon with a transform, so the rotated diamond is an inner element.
+    html: `<span class="lw-diamond" role="img" aria-label="${escapeHtml(id)}: cost unbounded"><span>∞</span></span>`,
     iconSize: [22, 22],
     iconAnchor: [11, 11],
   });

@@ -7,13 +7,10 @@ export const FLAG_LONG_DRIVE = 4;
 export const FLAG_NEGATIVE_COST = 8;
 export const FLAG_DRIVE_UNKNOWN = 16;
 
-/** Daily driving limit used for the long-drive flag: 9 h (EU rule for most trucks; common practice, no source). */
-export const LONG_DRIVE_MINUTES = 9 * 60;
-
 const NAMES: readonly [number, string, string][] = [
   [FLAG_UNBOUNDED, 'rebate loop', 'Cost unbounded: reachable through a rebate loop with negative net cost'],
   [FLAG_LIMIT_HIDES_LOOP, 'limit hides loop', 'Cost is finite only because of the leg limit; without it a rebate loop makes it unbounded'],
-  [FLAG_LONG_DRIVE, 'over 9 h driving', 'Drive time exceeds one daily driving period; a rest or a second driver is needed'],
+  [FLAG_LONG_DRIVE, 'over daily driving limit', 'Drive time exceeds the daily driving limit of the planning settings; a rest or a second driver is needed'],
   [FLAG_NEGATIVE_COST, 'earns money', 'Net route cost below zero: rebates exceed costs; check the contract terms'],
   [FLAG_DRIVE_UNKNOWN, 'drive time unknown', 'At least one lane on the route has no drive time'],
 ];

@@ -2,7 +2,8 @@
 // DEVELOPERS.md) over the imported contract. The lane table, the worker and the workspace all go
 // through this module, so the engine's scenario functions can take over here without touching components.
 
-import { laneKeyId, laneKeyIndex, sameLaneKey, type LaneKey } from '../../engine/scenario/lane-key';
+import { withChange, withoutChange } from '../../engine/scenario/edit';
+import { laneKeyId, laneKeyIndex, type LaneKey } from '../../engine/scenario/lane-key';
 import type { Scenario, ScenarioChange } from '../../engine/workspace/scenario-shape';
 
 export type { Scenario, ScenarioChange } from '../../engine/workspace/scenario-shape';
@@ -18,20 +19,13 @@ export function emptyScenario(name = 'What-if 1'): Scenario {
   return { name, description: null, changes: [] };
 }
 
-function sameTarget(a: ScenarioChange, b: ScenarioChange): boolean {
-  if (a.kind === 'add-lane' || b.kind === 'add-lane') return false;
-  if (!sameLaneKey(a.lane, b.lane)) return false;
-  if (a.kind === 'set-amount' && b.kind === 'set-amount') return a.field === b.field;
-  return a.kind === b.kind;
-}
-
 /**
  * Puts a change in the scenario, replacing an earlier change of the same lane and field. A change
  * back to the contract's own value (`isOriginal`) removes the earlier change instead.
  */
 export function withLaneChange(scenario: Scenario, change: ScenarioChange, isOriginal: boolean): Scenario {
-  const rest = scenario.changes.filter((c) => !sameTarget(c, change));
-  return { ...scenario, changes: isOriginal ? rest : [...rest, change] };
+  const next = withChange(scenario, change);
+  return isOriginal ? withoutChange(next, next.changes.indexOf(change)) : next;
 }
 
 /** Sets one amount of a lane (minor units). */
@@ -90,6 +84,23 @@ export function applyScenarioAmounts(base: BaseAmounts, keys: readonly LaneKey[]
     else out[change.field][e] = change.amountMinor;
   });
   return out;
+}
+
+/** The scenario plus one rebate change per fix-plan row (rows of the lanes file name the lanes). */
+export function fixPlanScenario(
+  scenario: Scenario,
+  network: { laneRow: Int32Array; laneRebate: Float64Array },
+  keys: readonly LaneKey[],
+  rows: readonly { row: number; new_rebate_minor: number }[],
+): Scenario {
+  const laneOfRow = new Map<number, number>();
+  network.laneRow.forEach((row, e) => laneOfRow.set(row, e));
+  let next = scenario;
+  for (const r of rows) {
+    const e = laneOfRow.get(r.row);
+    if (e !== undefined) next = setLaneAmount(next, keys[e], 'rebate', r.new_rebate_minor, network.laneRebate[e]);
+  }
+  return next;
 }
 
 /** True when the scenario changes anything. */

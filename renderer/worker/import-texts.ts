@@ -1,81 +1,47 @@
-// Turns the two CSV texts into depots, lanes and an import report. The one place the worker reaches
-// the engine's importer, so a new importer changes this file only.
+// Turns the two CSV texts into an import result and the UI's report, and re-plans an import for
+// another day or vehicle class. The one place the worker reaches the engine's importer.
 
-import { InputFileError } from '../../engine/errors';
-import { readDepotsCsv, readLanesCsv } from '../../engine/import/basic-reader';
-import type { DepotInput, LaneInput } from '../../engine/network/types';
-import type { ImportIssue, ImportReport, NamedText } from './protocol';
+import { importNetwork, planNetwork } from '../../engine/import/import-network';
+import type { ImportResult, ValidationItem } from '../../engine/import/types';
+import type { ImportIssue, ImportReport, NamedText, PlanChoice } from './protocol';
 
-export interface ImportedTexts {
-  depots: DepotInput[];
-  lanes: LaneInput[];
-  report: ImportReport;
+function issue(item: ValidationItem): ImportIssue {
+  return { file: item.file, row: item.row, column: item.column, value: item.value, reason: item.message, code: item.code };
 }
 
-function dataRows(text: string): number {
-  const lines = text.split(/\r\n|\n|\r/).filter((line) => line.trim() !== '');
-  return Math.max(0, lines.length - 1);
+/** The UI's report of an import result. */
+export function reportOf(result: ImportResult): ImportReport {
+  const r = result.report;
+  return {
+    files: r.files.map((f) => ({ ...f })),
+    issues: r.errors.map(issue),
+    warnings: r.warnings.map(issue),
+    omitted: r.omitted,
+    excluded: result.plan.excluded,
+    notes: [...result.notes, ...result.plan.notes.filter((n) => !result.notes.includes(n))],
+    fatal: result.network === null,
+  };
 }
 
-function issueOf(error: unknown, file: string): ImportIssue {
-  if (error instanceof InputFileError) {
-    return { file: error.file, row: error.row, column: error.column, value: error.value, reason: error.reason };
-  }
-  return { file, row: null, column: null, value: null, reason: error instanceof Error ? error.message : String(error) };
+function request(plan: PlanChoice) {
+  return { date: plan.date || undefined, vehicleClass: plan.vehicleClass || undefined };
 }
 
 /**
- * Reads both files. With the basic reader a bad row stops the file, so the report then holds that
- * one issue and nothing is accepted from that file (fatal).
+ * Reads both files. The network is always built from the accepted rows (skipInvalid), so the UI
+ * can offer "continue with the accepted rows"; whether to use it is the caller's choice.
  */
-export function importTexts(depotsFile: NamedText, lanesFile: NamedText): ImportedTexts {
-  const issues: ImportIssue[] = [];
-  let depots: DepotInput[] = [];
-  let lanes: LaneInput[] = [];
-  const depotTotal = dataRows(depotsFile.text);
-  const laneTotal = dataRows(lanesFile.text);
-  try {
-    depots = readDepotsCsv(depotsFile.name, depotsFile.text);
-  } catch (error) {
-    issues.push(issueOf(error, depotsFile.name));
-  }
-  try {
-    lanes = readLanesCsv(lanesFile.name, lanesFile.text);
-  } catch (error) {
-    issues.push(issueOf(error, lanesFile.name));
-  }
-  // Lanes naming unknown depots are rejected per row so the rest of the network still builds.
-  if (issues.length === 0) {
-    const known = new Set<string>();
-    const duplicates: ImportIssue[] = [];
-    depots = depots.filter((d, i) => {
-      if (known.has(d.id)) {
-        duplicates.push({ file: depotsFile.name, row: i + 2, column: 'id', value: d.id, reason: 'duplicate depot id' });
-        return false;
-      }
-      known.add(d.id);
-      return true;
-    });
-    issues.push(...duplicates);
-    lanes = lanes.filter((lane) => {
-      for (const end of ['from', 'to'] as const) {
-        if (!known.has(lane[end])) {
-          issues.push({ file: lanesFile.name, row: lane.sourceRow, column: end, value: lane[end], reason: 'no depot with this id' });
-          return false;
-        }
-      }
-      return true;
-    });
-  }
-  const fatal = depots.length === 0 || (issues.length > 0 && (depots.length === 0 || lanes.length === 0));
-  return {
-    depots,
-    lanes,
-    report: {
-      depots: { file: depotsFile.name, total: depotTotal, accepted: depots.length, rejected: depotTotal - depots.length },
-      lanes: { file: lanesFile.name, total: laneTotal, accepted: lanes.length, rejected: laneTotal - lanes.length },
-      issues,
-      fatal,
-    },
-  };
+export function importTexts(depots: NamedText, lanes: NamedText, plan: PlanChoice, onProgress?: (phase: string, fraction: number) => void): ImportResult {
+  return importNetwork(depots.text, lanes.text, {
+    depotsFile: depots.name,
+    lanesFile: lanes.name,
+    plan: request(plan),
+    skipInvalid: true,
+    onProgress: (p) => onProgress?.(`Reading ${p.file === 'depots' ? depots.name : lanes.name}`, (p.file === 'depots' ? 0 : 0.3) + 0.6 * (p.fraction ?? 0.5) * (p.file === 'depots' ? 0.5 : 1)),
+  });
+}
+
+/** The same import planned for another day or vehicle class. */
+export function replanImport(result: ImportResult, plan: PlanChoice): ImportResult {
+  return planNetwork(result, request(plan), { skipInvalid: true });
 }

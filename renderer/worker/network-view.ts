@@ -2,10 +2,10 @@
 // transferables, so the worker keeps its own arrays intact.
 
 import type { Network } from '../../engine/network/types';
-import type { NetworkView } from './protocol';
+import type { NetworkView, PlanChoice } from './protocol';
 
-/** The UI's view of a network; `vehicleClasses` lists the priced classes (none yet in plain files). */
-export function networkView(network: Network, vehicleClasses: string[] = []): NetworkView {
+/** The UI's view of a planned network; `vehicleClasses` lists the classes the lanes file prices. */
+export function networkView(network: Network, vehicleClasses: string[], plan: PlanChoice, driveLimitMinutes: number): NetworkView {
   return {
     currency: network.currency,
     exponent: network.exponent,
@@ -24,6 +24,8 @@ export function networkView(network: Network, vehicleClasses: string[] = []): Ne
     laneDistanceKm: network.laneDistanceKm.slice(),
     laneDriveMinutes: network.laneDriveMinutes.slice(),
     vehicleClasses,
+    plan,
+    driveLimitMinutes,
   };
 }
 

@@ -9,21 +9,35 @@ export interface NamedText {
   text: string;
 }
 
-/** One rejected row of an import, located as a spreadsheet shows it (header = row 1). */
+/** One problem of an import, located as a spreadsheet shows it (header = row 1). */
 export interface ImportIssue {
   file: string;
   row: number | null;
   column: string | null;
   value: string | null;
   reason: string;
+  code: string;
 }
 
 export interface ImportReport {
-  depots: { file: string; total: number; accepted: number; rejected: number };
-  lanes: { file: string; total: number; accepted: number; rejected: number };
+  /** Per file: accepted + rejected = total data rows. */
+  files: { file: string; kind: 'depots' | 'lanes'; total: number; accepted: number; rejected: number }[];
+  /** Errors: each rejects a row (or the file). */
   issues: ImportIssue[];
-  /** True when nothing could be imported at all (the network was not replaced). */
+  warnings: ImportIssue[];
+  /** Items past the report's cap (counts stay exact). */
+  omitted: number;
+  /** Lane rows left out of the plan because they are not valid on the date or are for another class. */
+  excluded: number;
+  notes: string[];
+  /** True when nothing usable could be built (the network on screen was not replaced). */
   fatal: boolean;
+}
+
+/** Which day and vehicle class the network is planned for ('' = the file's default class). */
+export interface PlanChoice {
+  date: string;
+  vehicleClass: string;
 }
 
 /** The network as the UI draws and edits it; one entry per depot / lane, lanes in input order. */
@@ -46,6 +60,9 @@ export interface NetworkView {
   laneDriveMinutes: Float64Array;
   /** Vehicle classes the lanes file prices (empty when tolls do not depend on the class). */
   vehicleClasses: string[];
+  /** The plan this view was built for, and its daily driving limit (minutes) for the long-drive caution. */
+  plan: PlanChoice;
+  driveLimitMinutes: number;
 }
 
 export interface PlanSettings {
@@ -94,11 +111,12 @@ export interface RouteView {
 export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
 
 export type ToWorker =
-  | { kind: 'load'; id: number; depots: NamedText; lanes: NamedText; acceptPartial: boolean }
+  | { kind: 'load'; id: number; depots: NamedText; lanes: NamedText; acceptPartial: boolean; plan: PlanChoice }
+  | { kind: 'replan'; id: number; plan: PlanChoice }
   | { kind: 'solve'; id: number; settings: PlanSettings; scenario: Scenario | null }
   | { kind: 'route'; id: number; target: number }
   | { kind: 'export'; id: number; what: ExportKind }
-  | { kind: 'review'; id: number };
+  | { kind: 'review'; id: number; scenario: Scenario | null };
 
 export interface WorkerErrorView {
   name: string;

@@ -1,24 +1,28 @@
-// Contract review for the review panel: every rebate loop in the whole network (not only those
-// reachable from the chosen origin), one per strongly connected part that holds one.
+// Contract review for the review tab: the engine's audit (every rebate loop in the whole contract,
+// not only those reachable from the origin; the fix plan; rebate headroom per lane) of the network
+// under the active scenario.
 
-import { findNegativeLoop } from '../../engine/loops/find-negative-loop';
-import { componentHasCycle, strongComponents } from '../../engine/loops/strong-components';
+import { auditNetwork } from '../../engine/audit/network-audit';
 import type { Network } from '../../engine/network/types';
-import type { LoopView } from './protocol';
+import { auditReport, type AuditReport } from '../../engine/report/audit-report';
+import { applyScenario } from '../../engine/scenario/apply';
+import { hasChanges, type Scenario } from '../model/scenario-edits';
 
-export interface ContractReviewView {
-  loops: LoopView[];
-}
+export type ContractReviewView = AuditReport & { scenarioProblems: string[] };
 
-/** Reviews the network under the scenario's weights. */
-export function reviewContract(network: Network, weights?: Float64Array): ContractReviewView {
-  const all = new Uint8Array(network.depotCount).fill(1);
-  const { members } = strongComponents(network, all, weights);
-  const loops: LoopView[] = [];
-  for (const component of members) {
-    if (!componentHasCycle(network, component, weights)) continue;
-    const loop = findNegativeLoop(network, component, weights);
-    if (loop) loops.push({ depots: loop.depots, lanes: loop.lanes, netPerLap: loop.netPerLap });
+/** Audits the network, with the scenario's changes applied first when it has any. */
+export function reviewContract(network: Network, scenario: Scenario | null, date: string | null, onProgress?: (phase: string, fraction: number) => void): ContractReviewView {
+  let target = network;
+  let scenarioProblems: string[] = [];
+  if (scenario && hasChanges(scenario)) {
+    const applied = applyScenario(network, scenario, { date });
+    target = applied.network;
+    scenarioProblems = applied.problems.map((p) => p.message);
   }
-  return { loops };
+  const phases = { loops: 'Finding rebate loops', 'fix-plan': 'Working out a fix plan', headroom: 'Rebate headroom per lane' } as const;
+  const order = { loops: 0, 'fix-plan': 1, headroom: 2 } as const;
+  const audit = auditNetwork(target, {
+    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / 3),
+  });
+  return { ...auditReport(target, audit), scenarioProblems };
 }

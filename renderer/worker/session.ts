@@ -1,22 +1,24 @@
 // The worker's state and message handling, free of any worker global so unit tests drive it
-// directly: the imported network, the last solve (for routes and exports) and the base solve of
-// the current scenario (for the comparison).
+// directly: the import result (re-planned when the day or vehicle class changes), the last solve
+// (for routes and exports) and the base solve of the active scenario (for the comparison).
 
 import { LanewrightError } from '../../engine/errors';
-import { buildNetwork } from '../../engine/network/build';
+import type { ImportResult } from '../../engine/import/types';
 import type { Network } from '../../engine/network/types';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
-import { importTexts } from './import-texts';
+import { importTexts, replanImport, reportOf } from './import-texts';
 import { networkView, transferablesOf } from './network-view';
-import type { FromWorker, PlanSettings, ToWorker } from './protocol';
+import type { FromWorker, PlanChoice, PlanSettings, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
 export class WorkerSession {
+  private imported: ImportResult | null = null;
   private network: Network | null = null;
+  private plan: PlanChoice = { date: '', vehicleClass: '' };
   private solved: Solved | null = null;
   private weights: Float64Array | undefined;
   private baseKey = '';
@@ -28,12 +30,7 @@ export class WorkerSession {
     try {
       this.dispatch(message);
     } catch (error) {
-      const known = error instanceof LanewrightError || error instanceof RangeError;
-      this.post({
-        kind: 'error',
-        id: message.id,
-        error: { name: error instanceof Error ? error.name : 'Error', message: known || error instanceof Error ? (error as Error).message : String(error) },
-      });
+      this.post({ kind: 'error', id: message.id, error: { name: error instanceof Error ? error.name : 'Error', message: error instanceof Error ? error.message : String(error) } });
     }
   }
 
@@ -41,6 +38,8 @@ export class WorkerSession {
     switch (message.kind) {
       case 'load':
         return this.load(message);
+      case 'replan':
+        return this.replan(message.id, message.plan);
       case 'solve':
         return this.solve(message.id, message.settings, message.scenario);
       case 'route': {
@@ -53,9 +52,11 @@ export class WorkerSession {
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
       }
-      case 'review':
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.need(), this.weights) });
+      case 'review': {
+        const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
+        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.need(), message.scenario, this.plan.date || null, progress) });
         return;
+      }
     }
   }
 
@@ -64,31 +65,51 @@ export class WorkerSession {
     return this.network;
   }
 
-  private load(message: Extract<ToWorker, { kind: 'load' }>): void {
-    this.post({ kind: 'progress', id: message.id, phase: 'Reading depots and lanes', fraction: 0.1 });
-    const imported = importTexts(message.depots, message.lanes);
-    const refuse = imported.report.fatal || (imported.report.issues.length > 0 && !message.acceptPartial);
-    if (refuse) {
-      this.post({ kind: 'loaded', id: message.id, network: null, report: imported.report });
-      return;
-    }
-    this.post({ kind: 'progress', id: message.id, phase: 'Compiling the network', fraction: 0.6 });
-    this.network = buildNetwork(imported.depots, imported.lanes);
+  private adopt(id: number, result: ImportResult, plan: PlanChoice): void {
+    this.imported = result;
+    this.network = result.network;
+    this.plan = plan;
     this.solved = null;
     this.base = null;
     this.baseKey = '';
-    const view = networkView(this.network);
-    this.post({ kind: 'loaded', id: message.id, network: view, report: imported.report }, transferablesOf(view));
+    const view = networkView(result.network!, result.vehicleClasses, plan, result.plan.settings.drivingLimit.dailyDrivingMinutes);
+    this.post({ kind: 'loaded', id, network: view, report: reportOf(result) }, transferablesOf(view));
+  }
+
+  private load(message: Extract<ToWorker, { kind: 'load' }>): void {
+    const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
+    progress('Reading depots and lanes', 0);
+    const result = importTexts(message.depots, message.lanes, message.plan, progress);
+    const report = reportOf(result);
+    // With rejected rows the import waits for the user's choice; the network on screen stays.
+    if (!result.network || (report.issues.length > 0 && !message.acceptPartial)) {
+      this.post({ kind: 'loaded', id: message.id, network: null, report });
+      return;
+    }
+    progress('Compiling the network', 0.95);
+    this.adopt(message.id, result, message.plan);
+  }
+
+  private replan(id: number, plan: PlanChoice): void {
+    if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
+    this.post({ kind: 'progress', id, phase: 'Planning for the day and vehicle class', fraction: 0.2 });
+    const result = replanImport(this.imported, plan);
+    if (!result.network) {
+      this.post({ kind: 'loaded', id, network: null, report: reportOf(result) });
+      return;
+    }
+    this.adopt(id, result, plan);
   }
 
   private solve(id: number, settings: PlanSettings, scenario: Scenario | null): void {
     const network = this.need();
+    const driveLimit = this.imported?.plan.settings.drivingLimit.dailyDrivingMinutes ?? 9 * 60;
     this.post({ kind: 'progress', id, phase: 'Solving routes', fraction: 0.3 });
     const started = performance.now();
     this.weights = scenarioWeights(network, scenario);
     this.solved = solveFor(network, settings, this.weights);
     const solveMs = performance.now() - started;
-    const view = solveView(network, settings, this.solved, solveMs);
+    const view = solveView(network, settings, this.solved, solveMs, driveLimit);
     if (hasChanges(scenario)) {
       const key = JSON.stringify(settings);
       if (key !== this.baseKey || !this.base) {

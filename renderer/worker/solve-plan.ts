@@ -9,7 +9,7 @@ import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/routes/leg
 import { routePath } from '../../engine/routes/route-path';
 import { laneKeysOf } from '../../engine/scenario/lane-key';
 import { applyScenarioAmounts, hasChanges, type Scenario } from '../model/scenario-edits';
-import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED, LONG_DRIVE_MINUTES } from '../model/flags';
+import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
 import type { PlanSettings, RouteView, SolveView } from './protocol';
 
 export type Solved = RouteTree | LegLimitedRoutes;
@@ -43,12 +43,14 @@ export function pathOf(network: Network, solved: Solved, target: number): RouteV
 }
 
 /** The solve's per-depot view: drive time, flags and the tree to draw. */
-export function solveView(network: Network, settings: PlanSettings, solved: Solved, solveMs: number): SolveView {
+export function solveView(network: Network, settings: PlanSettings, solved: Solved, solveMs: number, driveLimitMinutes: number): SolveView {
   const n = network.depotCount;
   const driveMinutes = new Float64Array(n).fill(NaN);
   const flags = new Uint8Array(n);
   const treeLaneList: number[] = [];
   const limited = 'maxLegs' in solved;
+  // Files without drive times would flag every depot; the flag only means something when some lanes have them.
+  const anyDriveData = network.laneDriveMinutes.some((m) => !Number.isNaN(m));
   for (let d = 0; d < n; d++) {
     if (solved.status[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_UNBOUNDED;
     if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
@@ -59,8 +61,10 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     let minutes = 0;
     for (const lane of route.lanes) minutes += network.laneDriveMinutes[lane];
     driveMinutes[d] = route.lanes.length === 0 ? 0 : minutes;
-    if (Number.isNaN(minutes)) flags[d] |= FLAG_DRIVE_UNKNOWN;
-    else if (minutes > LONG_DRIVE_MINUTES) flags[d] |= FLAG_LONG_DRIVE;
+    if (Number.isNaN(minutes)) {
+      if (anyDriveData) flags[d] |= FLAG_DRIVE_UNKNOWN;
+    }
+    else if (minutes > driveLimitMinutes) flags[d] |= FLAG_LONG_DRIVE;
     if (route.lanes.length > 0) treeLaneList.push(route.lanes[route.lanes.length - 1]);
   }
   return {

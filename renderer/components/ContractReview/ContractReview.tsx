@@ -1,27 +1,32 @@
-// The contract-review view: every rebate loop in the whole contract (not only those reachable from
-// the origin), with the lanes, file rows and references that form it. Computed in the worker on demand.
+// The contract-review view: the engine's audit of the whole contract under the active scenario —
+// every rebate loop with the lanes and references that form it, a fix plan (which rebates to cut,
+// and by how much) that can be tried as a scenario, and rebate headroom per lane.
 
 import { useEffect, useState } from 'react';
-import { formatMoneyWithCode } from '../../model/format';
-import type { Scenario } from '../../model/scenario-edits';
-import type { ContractReviewView } from '../../worker/review';
-import type { NetworkView } from '../../worker/protocol';
 import type { Engine } from '../../app/use-engine';
+import { formatMoney, formatMoneyWithCode } from '../../model/format';
+import { fixPlanScenario, type LaneKey, type Scenario } from '../../model/scenario-edits';
+import type { NetworkView } from '../../worker/protocol';
+import type { ContractReviewView } from '../../worker/review';
+import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
 
 export interface ContractReviewProps {
   engine: Engine;
   network: NetworkView;
+  keys: readonly LaneKey[];
   scenario: Scenario;
+  onScenario(next: Scenario): void;
 }
 
-export function ContractReview({ engine, network, scenario }: ContractReviewProps) {
+export function ContractReview({ engine, network, keys, scenario, onScenario }: ContractReviewProps) {
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   useEffect(() => {
     let live = true;
     setReview(null);
+    setProblem(null);
     engine
-      .track((onProgress) => engine.client.request<'reviewed'>({ kind: 'review' }, onProgress), 'Reviewing the contract')
+      .track((onProgress) => engine.client.request<'reviewed'>({ kind: 'review', scenario }, onProgress), 'Reviewing the contract')
       .then((answer) => live && setReview(answer.review as ContractReviewView))
       .catch((error: Error) => live && setProblem(error.message));
     return () => {
@@ -30,25 +35,38 @@ export function ContractReview({ engine, network, scenario }: ContractReviewProp
   }, [engine, network, scenario]);
   if (problem) return <p className="lw-warn">{problem}</p>;
   if (!review) return <p aria-busy="true">Reviewing the contract…</p>;
-  const id = (d: number) => network.depotIds[d];
+  const money = (v: number) => formatMoney(v, network.exponent);
   return (
     <div className="lw-review" data-testid="contract-review">
-      <h3>Rebate loops in the whole contract{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}</h3>
-      {review.loops.length === 0 ? (
-        <p>No loop of lanes has a negative net cost: every cheapest route is well defined.</p>
-      ) : (
-        <ol>
-          {review.loops.map((loop, i) => (
-            <li key={i}>
-              <strong>
-                {loop.depots.map(id).join(' → ')} → {id(loop.depots[0])}
-              </strong>{' '}
-              — net per lap {formatMoneyWithCode(loop.netPerLap, network.currency, network.exponent)}; lanes file rows {loop.lanes.map((e) => network.laneRow[e]).join(', ')}
-              {loop.lanes.some((e) => network.laneRef[e]) && <> (refs {loop.lanes.map((e) => network.laneRef[e] ?? '—').join(', ')})</>}
-            </li>
-          ))}
-        </ol>
+      {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
+      <h3>
+        Rebate loops in the whole contract{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
+        {review.loop_cap_reached ? ' (list capped)' : ''}
+      </h3>
+      {review.loops.length === 0 && <p>No loop of lanes has a negative net cost: every cheapest route is well defined.</p>}
+      {review.loops.map((loop, i) => (
+        <section key={i} className="lw-review-loop" aria-label={`Loop ${i + 1}`}>
+          <h4>
+            ⚠ Loop {i + 1}: {loop.depots.join(' → ')} → {loop.depots[0]} · net per lap {formatMoneyWithCode(loop.net_per_lap_minor, review.currency, network.exponent)} · makes {loop.unbounded_depots.length} depot(s) unbounded
+          </h4>
+          <LoopLanes loop={loop} money={money} />
+        </section>
+      ))}
+      {review.fix_plan.length > 0 && (
+        <section aria-label="Fix plan">
+          <h3>Fix plan: cut {review.fix_plan.length} rebate(s){review.fix_plan_verified ? ' (checked: no loop remains)' : ' (not verified)'}</h3>
+          <FixPlanTable rows={review.fix_plan} money={money} />
+          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, keys, review.fix_plan))}>
+            Try the fix plan as a scenario
+          </button>
+        </section>
       )}
+      {review.unfixable_loops.length > 0 && <p className="lw-warn">{review.unfixable_loops.length} loop(s) carry no rebate at all; no rebate cut fixes them — check the amounts on their lanes.</p>}
+      <section aria-label="Rebate headroom">
+        <h3>Rebate headroom per lane{review.headroom_after_fix_plan ? ' (after the fix plan)' : ''}</h3>
+        <p className="lw-muted">How much more rebate each lane could carry before some loop of lanes pays for itself.</p>
+        {review.headroom.length > 0 ? <HeadroomTable rows={review.headroom} exponent={network.exponent} /> : <p>Not available while a loop has no fix.</p>}
+      </section>
     </div>
   );
 }

@@ -33,7 +33,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
     if (await onImport({ depots, lanes })) onClose();
   };
   if (pending) {
-    const accepted = pending.report.depots.accepted + pending.report.lanes.accepted;
+    const accepted = pending.report.files.reduce((n, f) => n + f.accepted, 0);
     return (
       <Dialog title="Import report" onClose={onFix} className="lw-wide">
         <p role="status">

@@ -7,12 +7,21 @@ export function ImportReportTable({ report }: { report: ImportReport }) {
   return (
     <div className="lw-import-report" data-testid="import-report">
       <ul className="lw-counts">
-        {[report.depots, report.lanes].map((f) => (
-          <li key={f.file}>
-            <strong>{f.file}</strong>: {f.total} rows, {f.accepted} accepted, {f.rejected} rejected
+        {report.files.map((f) => (
+          <li key={`${f.kind}-${f.file}`}>
+            <strong>{f.file}</strong> ({f.kind}): {f.total} rows, {f.accepted} accepted, {f.rejected} rejected
           </li>
         ))}
+        {report.excluded > 0 && <li>{report.excluded} lane rows are not part of this plan (not valid on the dispatch date, or priced for another vehicle class).</li>}
+        {report.omitted > 0 && <li>{report.omitted} further problems are not listed (the counts above are exact).</li>}
       </ul>
+      {report.notes.length > 0 && (
+        <ul className="lw-notes">
+          {report.notes.map((n) => (
+            <li key={n}>{n}</li>
+          ))}
+        </ul>
+      )}
       {report.issues.length === 0 ? (
         <p>Every row was accepted.</p>
       ) : (
@@ -40,6 +49,21 @@ export function ImportReportTable({ report }: { report: ImportReport }) {
             ))}
           </tbody>
         </table>
+      )}
+      {report.warnings.length > 0 && (
+        <details>
+          <summary>{report.warnings.length} warnings (rows kept)</summary>
+          <ul>
+            {report.warnings.map((w, i) => (
+              <li key={i}>
+                {w.file}
+                {w.row !== null ? `, row ${w.row}` : ''}
+                {w.column ? `, column ${w.column}` : ''}
+                {w.value !== null ? `, value “${w.value}”` : ''}: {w.reason}
+              </li>
+            ))}
+          </ul>
+        </details>
       )}
     </div>
   );

@@ -38,7 +38,7 @@ export function Tabs({ tabs, active, onChange, children, label }: TabsProps) {
           </button>
         ))}
       </div>
-      <div role="tabpanel" id={`panel-${active}`} aria-labelledby={`tab-${active}`} tabIndex={0} className="lw-tabpanel">
+      <div key={active} role="tabpanel" id={`panel-${active}`} aria-labelledby={`tab-${active}`} tabIndex={0} className="lw-tabpanel">
         {children}
       </div>
     </div>
