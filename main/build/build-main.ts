@@ -2,6 +2,7 @@
 // JavaScript only; one CommonJS file each keeps start-up fast, and the sandboxed preload may only
 // require('electron'), so everything else it uses must be inlined.
 
+import { copyFileSync, existsSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build, type Metafile } from 'esbuild';
@@ -38,6 +39,12 @@ export async function buildMain(outDir: string = MAIN_OUT_DIR): Promise<BundleIm
     build({ ...common, platform: 'node', entryPoints: { main: path.join(REPO_ROOT, 'main/electron/main.ts') } }),
     build({ ...common, platform: 'browser', entryPoints: { preload: path.join(REPO_ROOT, 'main/preload/preload.ts') } }),
   ]);
+  // The window icon (Linux, Windows) sits beside main.cjs so it is inside the packaged app too.
+  const icon = path.join(REPO_ROOT, 'build', 'icon.png');
+  if (existsSync(icon)) {
+    mkdirSync(outDir, { recursive: true });
+    copyFileSync(icon, path.join(outDir, 'icon.png'));
+  }
   return { main: runtimeImports(mainResult.metafile), preload: runtimeImports(preloadResult.metafile) };
 }
 

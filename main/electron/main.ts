@@ -17,11 +17,11 @@ import { ElectronDialogs } from './native-dialogs';
 import { QuitGuard } from './quit-guard';
 import { guardWebContents, installSessionGuards } from './security';
 
-// Bundled layout: dist/main/main.cjs, dist/main/preload.cjs, dist/renderer/index.html, build/icon.png.
+// Bundled layout: dist/main/main.cjs, dist/main/preload.cjs, dist/main/icon.png, dist/renderer/index.html.
 const here = __dirname;
 const rendererDir = path.join(here, '..', 'renderer');
 const preloadPath = path.join(here, 'preload.cjs');
-const iconPath = path.join(here, '..', '..', 'build', 'icon.png');
+const iconPath = path.join(here, 'icon.png');
 
 // Must happen before 'ready'.
 protocol.registerSchemesAsPrivileged([APP_SCHEME_PRIVILEGES]);
