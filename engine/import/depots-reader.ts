@@ -29,7 +29,8 @@ export class DepotsReader implements CsvRecordSink {
     return this.counts.total;
   }
 
-  records(records: string[][], firstRow: number): void {
+  records(records: string[][], firstRow: number, badQuotes: readonly number[] = []): void {
+    const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
     for (let i = 0; i < records.length; i++) {
       const cells = records[i];
       const row = firstRow + i;
@@ -39,6 +40,11 @@ export class DepotsReader implements CsvRecordSink {
         continue;
       }
       this.counts.total++;
+      if (bad?.has(i)) {
+        this.counts.rejected++;
+        this.report.error(this.file, firstRow + i, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
+        continue;
+      }
       if (this.unusable || !this.readRow(cells, row)) this.counts.rejected++;
       else this.counts.accepted++;
     }

@@ -58,7 +58,8 @@ export class LanesReader implements CsvRecordSink {
     return this.counts.total;
   }
 
-  records(records: string[][], firstRow: number): void {
+  records(records: string[][], firstRow: number, badQuotes: readonly number[] = []): void {
+    const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
     let start = 0;
     if (this.header === null) {
       while (start < records.length && records[start].every((c) => c.trim() === '')) start++;
@@ -72,6 +73,11 @@ export class LanesReader implements CsvRecordSink {
       if (cells.length === 1 && cells[0].trim() === '') continue;
       if (cells.every((c) => c.trim() === '')) continue;
       this.counts.total++;
+      if (bad?.has(i)) {
+        this.counts.rejected++;
+        this.report.error(this.file, firstRow + i, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
+        continue;
+      }
       if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
       else this.counts.accepted++;
     }

@@ -41,14 +41,16 @@ export function parseCsvText(text: string): CsvTable {
  * (csv-record-stream.ts) cuts blocks only at line breaks outside quotes, so every record is whole.
  * A block that ends with a line break yields no empty record for it.
  */
-export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n'): { rows: string[][]; unclosedQuote: boolean } {
+export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n'): { rows: string[][]; unclosedQuote: boolean; badQuoteRows: number[] } {
   const result = Papa.parse<string[]>(block, { delimiter, newline, skipEmptyLines: false });
   const rows = result.data;
   if (block.endsWith('\n') && rows.length > 0) {
     const last = rows[rows.length - 1];
     if (last.length === 1 && last[0] === '') rows.pop();
   }
-  return { rows, unclosedQuote: result.errors.some((e) => e.code === 'MissingQuotes') };
+  // A quote inside a field that is not itself quoted, or a closing quote followed by text.
+  const badQuoteRows = result.errors.filter((e) => e.code === 'InvalidQuotes' && typeof e.row === 'number').map((e) => e.row as number);
+  return { rows, unclosedQuote: result.errors.some((e) => e.code === 'MissingQuotes'), badQuoteRows };
 }
 
 // A text cell a spreadsheet would run as a formula; plain numbers such as -12.50 or +3 are exempt,

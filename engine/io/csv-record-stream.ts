@@ -17,8 +17,11 @@ export interface CsvStreamIssue {
 }
 
 export interface CsvRecordSink {
-  /** Records in order; `firstRow` is the spreadsheet row of records[0]. Blank records are included (as [""]). */
-  records(records: string[][], firstRow: number): void;
+  /**
+   * Records in order; `firstRow` is the spreadsheet row of records[0]. Blank records are included
+   * (as [""]). `badQuotes` lists positions in `records` whose quoting is malformed.
+   */
+  records(records: string[][], firstRow: number, badQuotes: readonly number[]): void;
   issue(issue: CsvStreamIssue): void;
 }
 
@@ -124,11 +127,11 @@ export class CsvRecordStream {
 
   private emit(block: string, last: boolean): void {
     if (!last || this.nextRow === 1) this.detectLayout(block);
-    const { rows } = parseCsvBlock(block, this.delimiter, this.newline);
+    const { rows, badQuoteRows } = parseCsvBlock(block, this.delimiter, this.newline);
     if (rows.length === 0) return;
     const first = this.nextRow;
     this.nextRow += rows.length;
-    this.sink.records(rows, first);
+    this.sink.records(rows, first, badQuoteRows);
   }
 
   private detectLayout(block: string): void {
@@ -162,7 +165,7 @@ export class CsvRecordStream {
     this.swallowLines = 0;
     this.pending = '';
     this.scanned = 0;
-    this.pendingIssue = { columnIndex: broken.length - 1, value: broken[broken.length - 1].slice(0, 40).trim() };
+    this.pendingIssue = { columnIndex: broken.length - 1, value: broken[broken.length - 1].split('\n')[0].slice(0, 40).trim() };
     this.countSwallowed(rest);
   }
 
