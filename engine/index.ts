@@ -13,7 +13,6 @@ export * from './loops/strong-components';
 export * from './loops/find-negative-loop';
 export * from './loops/find-negative-loops';
 export * from './report/routes-report';
-export * from './routes/indexed-min-heap';
 export * from './routes/dijkstra';
 export * from './routes/johnson-potentials';
 export * from './audit/distinct-loops';

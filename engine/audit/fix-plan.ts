@@ -43,8 +43,9 @@ const allDepots = (n: number) => Int32Array.from({ length: n }, (_, d) => d);
 
 /**
  * Builds the plan. Among a loop's rebate lanes it prefers, in order: negotiable lanes; lanes whose
- * rebate covers the whole amount (one cut fixes the loop); the cut that is the smallest share of the
- * lane's rebate; the largest rebate (when none covers the amount); the lowest source row.
+ * rebate covers the whole amount (one cut fixes the loop); lanes the plan already cuts (fewer clauses
+ * to renegotiate); the cut that is the smallest share of the lane's rebate; the largest rebate (when
+ * none covers the amount); the lowest source row.
  */
 export function buildFixPlan(network: Network, options: FixPlanOptions = {}): FixPlan {
   const n = network.depotCount;
@@ -56,6 +57,8 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
   const negotiable = options.negotiable;
   const maxSteps = options.maxSteps ?? 10 * network.laneCount + 1000;
   const steps: FixPlan['steps'] = [];
+  // Lanes already in the plan: cutting one of them again keeps the number of clauses to renegotiate down.
+  const cut = new Uint8Array(network.laneCount);
   const unfixable: RebateLoop[] = [];
 
   for (;;) {
@@ -68,7 +71,7 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
       unfixable.push(loop);
       break;
     }
-    const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], -rebate[e], network.laneRow[e]];
+    const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, cut[e] ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], -rebate[e], network.laneRow[e]];
     candidates.sort((a, b) => {
       const ra = rank(a);
       const rb = rank(b);
@@ -76,10 +79,11 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
       return a - b;
     });
     const lane = candidates[0];
-    const cut = Math.min(amount, rebate[lane]) as Minor;
-    rebate[lane] -= cut;
-    weights[positionOf[lane]] = sumMinor([weights[positionOf[lane]], cut], 'net cost after a rebate cut');
-    steps.push({ lane, cut, loop });
+    const amountCut = Math.min(amount, rebate[lane]) as Minor;
+    rebate[lane] -= amountCut;
+    weights[positionOf[lane]] = sumMinor([weights[positionOf[lane]], amountCut], 'net cost after a rebate cut');
+    cut[lane] = 1;
+    steps.push({ lane, cut: amountCut, loop });
     options.onProgress?.(steps.length, steps.length + 1);
   }
   options.onProgress?.(steps.length, steps.length);

@@ -4,7 +4,6 @@
 
 import { MoneyOverflowError } from '../errors';
 import type { Network } from '../network/types';
-import { IndexedMinHeap } from './indexed-min-heap';
 
 /** Reusable arrays for repeated runs on one network. */
 export interface DijkstraWorkspace {
@@ -14,7 +13,10 @@ export interface DijkstraWorkspace {
   readonly parentPos: Int32Array;
   /** 1 for depots whose cost is final. */
   readonly settled: Uint8Array;
-  readonly heap: IndexedMinHeap;
+  /** The binary heap: depots in heap order, keyed by `dist`. */
+  readonly heap: Int32Array;
+  /** Position of each depot in `heap`, or -1 when absent. */
+  readonly heapPos: Int32Array;
   /** Per depot: the run number that made it a target (see `targets`). */
   readonly targetMark: Int32Array;
   run: number;
@@ -25,7 +27,8 @@ export function createDijkstraWorkspace(depotCount: number): DijkstraWorkspace {
     dist: new Float64Array(depotCount),
     parentPos: new Int32Array(depotCount),
     settled: new Uint8Array(depotCount),
-    heap: new IndexedMinHeap(depotCount),
+    heap: new Int32Array(depotCount),
+    heapPos: new Int32Array(depotCount).fill(-1),
     targetMark: new Int32Array(depotCount),
     run: 0,
   };
@@ -40,20 +43,21 @@ export interface DijkstraOptions {
 }
 
 /**
- * Cheapest costs from `source`. Throws RangeError on a negative weight it meets (the caller must
- * reweight first) and MoneyOverflowError past the exact range. Returns the workspace it filled.
+ * Cheapest costs from `source`. Throws RangeError when a negative weight would change a cost (the
+ * caller must reweight first) and MoneyOverflowError past the exact range. Returns the workspace it
+ * filled. The heap is written out inline: this loop runs once per lane destination in an audit.
  */
 export function dijkstra(network: Network, source: number, options: DijkstraOptions = {}): DijkstraWorkspace {
   const n = network.depotCount;
   const { outStart, outTo } = network;
   const weights = options.weights ?? network.outNet;
   const ws = options.workspace ?? createDijkstraWorkspace(n);
-  const { dist, parentPos, settled, heap, targetMark } = ws;
+  const { dist, parentPos, settled, heap, heapPos, targetMark } = ws;
   const MAX = Number.MAX_SAFE_INTEGER;
   dist.fill(Infinity);
   parentPos.fill(-1);
   settled.fill(0);
-  heap.clear();
+  heapPos.fill(-1);
 
   const run = ++ws.run;
   let remaining = -1;
@@ -70,24 +74,56 @@ export function dijkstra(network: Network, source: number, options: DijkstraOpti
   }
 
   dist[source] = 0;
-  heap.push(source, 0);
-  while (heap.size > 0) {
-    const u = heap.pop();
+  heap[0] = source;
+  heapPos[source] = 0;
+  let count = 1;
+  while (count > 0) {
+    // Pop the cheapest depot and sift the last heap entry down from the top.
+    const u = heap[0];
+    heapPos[u] = -1;
     settled[u] = 1;
+    const last = heap[--count];
+    if (count > 0) {
+      const key = dist[last];
+      let at = 0;
+      for (;;) {
+        let child = 2 * at + 1;
+        if (child >= count) break;
+        if (child + 1 < count && dist[heap[child + 1]] < dist[heap[child]]) child++;
+        if (dist[heap[child]] >= key) break;
+        heap[at] = heap[child];
+        heapPos[heap[at]] = at;
+        at = child;
+      }
+      heap[at] = last;
+      heapPos[last] = at;
+    }
     if (remaining > 0 && targetMark[u] === run && --remaining === 0) break;
+
     const du = dist[u];
     for (let p = outStart[u], end = outStart[u + 1]; p < end; p++) {
       const v = outTo[p];
-      if (settled[v]) continue;
       const w = weights[p];
-      if (w < 0) throw new RangeError(`dijkstra: negative weight ${w} on a lane from depot "${network.depotIds[u]}"`);
       const nd = du + w;
-      if (nd < dist[v]) {
-        if (nd > MAX) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
-        dist[v] = nd;
-        parentPos[v] = p;
-        heap.push(v, nd);
+      // A settled depot is never improved by a weight >= 0, so no separate settled test is needed.
+      if (!(nd < dist[v])) continue;
+      if (w < 0) throw new RangeError(`dijkstra: negative weight ${w} on a lane from depot "${network.depotIds[u]}"`);
+      if (nd > MAX) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
+      dist[v] = nd;
+      parentPos[v] = p;
+      // Insert v, or move it up after its key dropped.
+      let at = heapPos[v];
+      if (at === -1) at = count++;
+      while (at > 0) {
+        const parentAt = (at - 1) >> 1;
+        const parent = heap[parentAt];
+        if (dist[parent] <= nd) break;
+        heap[at] = parent;
+        heapPos[parent] = at;
+        at = parentAt;
       }
+      heap[at] = v;
+      heapPos[v] = at;
     }
   }
   return ws;
