@@ -113,6 +113,26 @@ describe('rebate loops on random networks match reference libraries', () => {
     );
   });
 
+  it('with lanes closed by a weights array, only open lanes count for loops and unbounded depots', () => {
+    fc.assert(
+      fc.property(loopy, fc.infiniteStream(fc.boolean()), (spec, closeStream) => {
+        const net = toNetwork(spec);
+        const closed = new Set(spec.lanes.map((_, i) => i).filter(() => closeStream.next().value));
+        const weights = new Float64Array(net.laneCount);
+        for (let p = 0; p < net.laneCount; p++) weights[p] = closed.has(net.outLane[p]) ? Infinity : net.outNet[p];
+        // Closed lanes drop out of the reference; lane indices shift, so compare depot sets only.
+        const open: Spec = { ...spec, lanes: spec.lanes.filter((_, i) => !closed.has(i)) };
+        const tree = cheapestRoutes(net, spec.origin, weights);
+        expect(setOf(tree.status, STATUS_UNBOUNDED)).toEqual(unboundedByReference(open));
+        for (const loop of tree.loops) {
+          expect(loop.lanes.some((lane) => closed.has(lane))).toBe(false);
+          expectRealLoop(spec, loop);
+        }
+      }),
+      { seed: SEED + 7, numRuns: 1500 },
+    );
+  });
+
   it('paths to unbounded depots are refused; paths to the others hold', () => {
     fc.assert(
       fc.property(loopy, (spec) => {
