@@ -7,10 +7,10 @@ import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/repor
 import { formatCsvRows } from '../../../engine/io/csv-papaparse';
 import { UsageError, type ParsedArgs } from '../args';
 import { writeTextFileAtomic } from '../files';
-import { loadNetwork } from '../load-network';
+import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';
 
-export const auditFlags = ['json', 'progress', 'timings', 'skip-invalid'];
+export const auditFlags = ['json', 'progress', 'timings', ...LOAD_NETWORK_FLAGS];
 
 export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const loopCap = wholeNumber(args, 'loop-cap', 1);

@@ -8,10 +8,10 @@ import { compareReport, compareReportRows } from '../../../engine/report/compare
 import { formatCsvRows } from '../../../engine/io/csv-papaparse';
 import { required, UsageError, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
-import { loadNetwork } from '../load-network';
+import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';
 
-export const compareFlags = ['json', 'skip-invalid'];
+export const compareFlags = ['json', ...LOAD_NETWORK_FLAGS];
 
 export function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
