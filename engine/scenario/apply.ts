@@ -118,7 +118,9 @@ export function applyScenario(base: ScenarioBase, scenario: Scenario, options: A
     }
     const e = index.get(laneKeyId(change.lane));
     if (e === undefined) {
-      problem('lane-missing', change.lane, `change ${changeIndex + 1} (${change.kind}) names lane ${laneKeyText(change.lane)}, which the lanes file no longer has`);
+      const near = keys.filter((k) => k.from === change.lane.from && k.to === change.lane.to).map(laneKeyText);
+      const hint = near.length > 0 ? ` (lanes ${change.lane.from} > ${change.lane.to} in the file now: ${near.slice(0, 5).join(', ')})` : '';
+      problem('lane-missing', change.lane, `change ${changeIndex + 1} (${change.kind}) names lane ${laneKeyText(change.lane)}, which the lanes file no longer has${hint}`);
       return;
     }
     applyToLane(work[e], change, closed, e, (message) => problem('amount-overflow', change.lane, `change ${changeIndex + 1}: ${message}`));
