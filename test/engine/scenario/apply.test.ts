@@ -4,7 +4,7 @@ import { laneKeysOf, laneKeyText, parseLaneKeyText } from '../../../engine/scena
 import { parseScenarioDocument, serializeScenarioDocument } from '../../../engine/scenario/document';
 import type { Scenario } from '../../../engine/scenario/types';
 import { buildNetwork } from '../../../engine/network/build';
-import { readLanesCsv } from '../../../engine/import/basic-reader';
+import { importNetwork } from '../../../engine/import/import-network';
 import type { Minor } from '../../../engine/money/minor';
 
 const depots = ['A', 'B', 'C', 'D'].map((id) => ({ id, name: id, lat: 0, lon: 0 }));
@@ -72,36 +72,47 @@ describe('applying a scenario', () => {
 });
 
 describe('scenario changes survive a save, a reload and a re-import', () => {
-  const v1 = ['from,to,toll,fuel,fees,rebate', 'A,B,10.00,0,0,0', 'B,C,20.00,0,0,5.00', 'C,A,5.00,0,0,0', 'C,A,7.00,0,0,0', 'C,D,3.00,0,0,0'].join('\n');
-  // The file edited: two new rows on top, another lane's toll changed, C->D deleted, rows reordered.
-  const v2 = ['from,to,toll,fuel,fees,rebate', 'D,A,1.00,0,0,0', 'A,D,2.00,0,0,0', 'C,A,5.00,0,0,0', 'B,C,20.00,0,0,5.00', 'A,B,12.00,0,0,0', 'C,A,7.00,0,0,0'].join('\n');
+  // Read through the real importer, so rows, references and validity come as they do in the app.
+  const depotsCsv = ['id,name,lat,lon', 'A,Alpha,51.0,4.0', 'B,Bravo,51.1,4.1', 'C,Charlie,51.2,4.2', 'D,Delta,51.3,4.3'].join('\n');
+  const header = 'from,to,ref,toll,fuel,fees,rebate,valid_from,valid_to';
+  const v1 = [header, 'A,B,K-1,10.00,0,0,0,,', 'B,C,K-2,20.00,0,0,5.00,,', 'C,A,,5.00,0,0,0,,', 'C,A,,7.00,0,0,0,,', 'C,D,K-9,3.00,0,0,0,,'].join('\n');
+  // The file edited: two new rows on top, the A>B toll changed, C>D deleted, rows reordered.
+  const v2 = [header, 'D,A,K-7,1.00,0,0,0,,', 'A,D,K-8,2.00,0,0,0,,', 'C,A,,5.00,0,0,0,,', 'B,C,K-2,20.00,0,0,5.00,,', 'A,B,K-1,12.00,0,0,0,,', 'C,A,,7.00,0,0,0,,'].join('\n');
+  const load = (lanesCsv: string) => {
+    const result = importNetwork(depotsCsv, lanesCsv, { depotsFile: 'depots.csv', lanesFile: 'lanes.csv' });
+    expect(result.report.errors).toEqual([]);
+    return { depots: result.depots, lanes: result.plan.lanes, currency: result.currency, exponent: result.exponent };
+  };
 
   it('applies to the same lanes by key although every row number moved', () => {
     const scenario: Scenario = {
       name: 'credit cut',
       description: null,
       changes: [
-        { kind: 'set-amount', lane: key('B', 'C'), field: 'rebate', amountMinor: 100, note: 'halve it' },
+        { kind: 'set-amount', lane: key('B', 'C', 'K-2'), field: 'rebate', amountMinor: 100, note: 'halve it' },
         { kind: 'set-amount', lane: key('C', 'A', null, 2), field: 'toll', amountMinor: 650, note: null },
-        { kind: 'close-lane', lane: key('C', 'D'), note: null },
+        { kind: 'set-validity', lane: key('A', 'B', 'K-1'), validFrom: '2026-04-01', validTo: null, note: null },
+        { kind: 'close-lane', lane: key('C', 'D', 'K-9'), note: null },
       ],
     };
     const saved = serializeScenarioDocument(scenario);
     const reloaded = parseScenarioDocument(saved, 'credit-cut.json');
     expect(reloaded).toEqual(scenario);
 
-    const first = applyScenario({ depots, lanes: readLanesCsv('lanes.csv', v1) }, reloaded);
+    const first = applyScenario(load(v1), reloaded);
     expect(first.problems).toEqual([]);
-    const rowsOf = (a: typeof first, k: string) => a.lanes.filter((_, i) => laneKeyText(a.laneKeys[i]) === k);
-    expect(rowsOf(first, 'B>C||1').map((l) => [l.sourceRow, l.rebate])).toEqual([[3, 100]]);
-    expect(rowsOf(first, 'C>A||2').map((l) => [l.sourceRow, l.toll])).toEqual([[5, 650]]);
+    const lanesOf = (a: typeof first, k: string) => a.lanes.filter((_, i) => laneKeyText(a.laneKeys[i]) === k);
+    expect(lanesOf(first, 'B>C|K-2|1').map((l) => [l.sourceRow, l.rebate])).toEqual([[3, 100]]);
+    expect(lanesOf(first, 'C>A||2').map((l) => [l.sourceRow, l.toll])).toEqual([[5, 650]]);
+    expect(lanesOf(first, 'C>D|K-9|1')).toEqual([]);
 
-    const second = applyScenario({ depots, lanes: readLanesCsv('lanes.csv', v2) }, reloaded);
-    expect(rowsOf(second, 'B>C||1').map((l) => [l.sourceRow, l.rebate])).toEqual([[5, 100]]);
-    expect(rowsOf(second, 'C>A||2').map((l) => [l.sourceRow, l.toll])).toEqual([[7, 650]]);
-    expect(rowsOf(second, 'A>B||1').map((l) => l.toll)).toEqual([1200]); // the file's own edit stays
-    // C->D is gone from the file: the change is reported, not dropped, and survives another save.
-    expect(second.problems.map((p) => [p.changeIndex, p.code, laneKeyText(p.lane)])).toEqual([[2, 'lane-missing', 'C>D||1']]);
-    expect(parseScenarioDocument(serializeScenarioDocument(reloaded)).changes).toHaveLength(3);
+    const second = applyScenario(load(v2), reloaded);
+    expect(lanesOf(second, 'B>C|K-2|1').map((l) => [l.sourceRow, l.rebate])).toEqual([[5, 100]]);
+    expect(lanesOf(second, 'C>A||2').map((l) => [l.sourceRow, l.toll])).toEqual([[7, 650]]);
+    expect(lanesOf(second, 'A>B|K-1|1').map((l) => [l.sourceRow, l.toll, l.validFrom])).toEqual([[6, 1200, '2026-04-01']]); // the file's own edit stays
+    expect(applyScenario(load(v2), reloaded, { date: '2026-03-31' }).lanes.some((l) => l.from === 'A' && l.to === 'B')).toBe(false);
+    // C>D is gone from the file: the change is reported, not dropped, and survives another save.
+    expect(second.problems.map((p) => [p.changeIndex, p.code, laneKeyText(p.lane)])).toEqual([[3, 'lane-missing', 'C>D|K-9|1']]);
+    expect(parseScenarioDocument(serializeScenarioDocument(reloaded)).changes).toEqual(scenario.changes);
   });
 });
