@@ -18,6 +18,7 @@ export class DepotsReader implements CsvRecordSink {
   private header: HeaderMatch<DepotField> | null = null;
   private headerCells: string[] = [];
   private unusable = false;
+  private notText = false;
   private readonly counts: FileCounts;
   decimalComma = false;
 
@@ -51,6 +52,7 @@ export class DepotsReader implements CsvRecordSink {
   }
 
   issue(issue: CsvStreamIssue): void {
+    if (issue.code === 'not-text') this.notText = true;
     const lost = this.header === null ? issue.linesLost - 1 : issue.linesLost;
     this.counts.total += lost;
     this.counts.rejected += lost;
@@ -58,7 +60,7 @@ export class DepotsReader implements CsvRecordSink {
   }
 
   finish(): void {
-    if (this.header === null) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
+    if (this.header === null && !this.notText) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
     else if (this.header !== null && this.counts.total === 0) this.report.error(this.file, null, null, null, 'no-data-rows', 'the file has a header but no depots');
   }
 

@@ -36,6 +36,7 @@ export class LanesReader implements CsvRecordSink {
   private header: HeaderMatch<LaneField> | null = null;
   private headerCells: string[] = [];
   private unusable = false;
+  private notText = false;
   private readonly counts: FileCounts;
   private readonly classIndex = new Map<string, number>();
   private col: Partial<Record<LaneField, number>> = {};
@@ -84,6 +85,7 @@ export class LanesReader implements CsvRecordSink {
   }
 
   issue(issue: CsvStreamIssue): void {
+    if (issue.code === 'not-text') this.notText = true;
     const lost = this.header === null ? issue.linesLost - 1 : issue.linesLost;
     this.counts.total += lost;
     this.counts.rejected += lost;
@@ -91,7 +93,7 @@ export class LanesReader implements CsvRecordSink {
   }
 
   finish(): void {
-    if (this.header === null) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
+    if (this.header === null && !this.notText) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
     else if (this.header !== null && this.counts.total === 0) this.report.warning(this.file, null, null, null, 'no-data-rows', 'the file has a header but no lanes');
     if (this.currency === null) {
       this.currency = 'EUR';
