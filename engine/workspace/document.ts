@@ -2,7 +2,7 @@
 // settings and the what-if scenarios). Shared by the Electron main process (reads and writes the file)
 // and the renderer (edits it). Plain JSON data only, so it crosses IPC and storage unchanged.
 
-import type { Scenario } from './scenario-shape';
+import type { Scenario } from '../scenario/types';
 
 /** Value of the `format` field; a file without it is not a workspace. */
 export const WORKSPACE_FORMAT = 'lanewright-workspace';

@@ -14,7 +14,9 @@ import {
   FieldCheckFailure,
   showValue,
 } from './check';
-import { checkScenario } from './scenario-check';
+import { SCENARIO_FORMAT, SCENARIO_VERSION, scenarioFromJson, scenarioToJson } from '../scenario/document';
+import { ScenarioFormatError } from '../errors';
+import type { Scenario } from '../scenario/types';
 
 /** Longest file path accepted (Windows long paths reach 32,767). */
 export const MAX_PATH_LENGTH = 32_767;
@@ -44,10 +46,33 @@ function checkSettings(value: unknown): PlanningSettings {
 }
 
 /**
+ * How scenarios appear: in memory (and over IPC) as the engine's `Scenario`; on disk as scenario
+ * documents with their own `format` and `version`, so the scenario format can evolve on its own.
+ */
+export type ScenarioForm = 'memory' | 'stored';
+
+// Scenario errors name fields like "changes[2].lane.occurrence"; the workspace names JSON pointers.
+function pointerOf(path: string): string {
+  return path === '' ? '' : `/${path.replace(/\[(\d+)\]/g, '.$1').split('.').join('/')}`;
+}
+
+function readScenario(value: unknown, field: string, form: ScenarioForm): Scenario {
+  try {
+    if (form === 'stored') return scenarioFromJson(value, field);
+    if (typeof value !== 'object' || value === null || Array.isArray(value)) throw new FieldCheckFailure(field, showValue(value), 'must be an object');
+    const { format: _format, version: _version, ...scenario } = value as Record<string, unknown>;
+    return scenarioFromJson({ ...scenario, format: SCENARIO_FORMAT, version: SCENARIO_VERSION }, field);
+  } catch (error) {
+    if (error instanceof ScenarioFormatError) throw new FieldCheckFailure(`${field}${pointerOf(error.path)}`, error.value, error.reason);
+    throw error;
+  }
+}
+
+/**
  * Checks a value that should be a current-version workspace document (already migrated) and returns a
  * fresh copy holding only the known fields. Throws WorkspaceFormatError naming `source` and the field.
  */
-export function checkWorkspace(value: unknown, source: string): WorkspaceDocument {
+export function checkWorkspace(value: unknown, source: string, form: ScenarioForm = 'memory'): WorkspaceDocument {
   try {
     const o = checkObject(value, '', TOP_FIELDS);
     if (o.format !== WORKSPACE_FORMAT) {
@@ -56,7 +81,7 @@ export function checkWorkspace(value: unknown, source: string): WorkspaceDocumen
     if (o.version !== WORKSPACE_VERSION) {
       throw new FieldCheckFailure('/version', showValue(o.version), `must be ${WORKSPACE_VERSION}`);
     }
-    const scenarios = checkArray(o.scenarios, '/scenarios', MAX_SCENARIOS).map((s, i) => checkScenario(s, `/scenarios/${i}`));
+    const scenarios = checkArray(o.scenarios, '/scenarios', MAX_SCENARIOS).map((s, i) => readScenario(s, `/scenarios/${i}`, form));
     const names = new Set<string>();
     scenarios.forEach((s, i) => {
       if (names.has(s.name)) throw new FieldCheckFailure(`/scenarios/${i}/name`, showValue(s.name), 'another scenario has this name; names must be unique');
@@ -100,7 +125,7 @@ export function parseWorkspace(text: string, source: string): { document: Worksp
     throw new WorkspaceFormatError(source, '/format', record.format === undefined ? null : showValue(record.format), `must be "${WORKSPACE_FORMAT}"; this is not a Lanewright workspace`);
   }
   const { raw, migratedFrom } = migrateWorkspace(record, source);
-  return { document: checkWorkspace(raw, source), migratedFrom };
+  return { document: checkWorkspace(raw, source, 'stored'), migratedFrom };
 }
 
 /**
@@ -108,5 +133,7 @@ export function parseWorkspace(text: string, source: string): { document: Worksp
  * indented so a diff of two saves is readable, ending in a newline.
  */
 export function serializeWorkspace(document: WorkspaceDocument, source = 'document'): string {
-  return `${JSON.stringify(checkWorkspace(document, source), null, 2)}\n`;
+  const checked = checkWorkspace(document, source);
+  const stored = { ...checked, scenarios: checked.scenarios.map((s) => scenarioToJson(s)) };
+  return `${JSON.stringify(stored, null, 2)}\n`;
 }

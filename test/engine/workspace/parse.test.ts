@@ -40,8 +40,9 @@ function failure(text: string): WorkspaceFormatError {
   throw new Error('expected a WorkspaceFormatError');
 }
 
+// Mutates the file form of the sample (scenarios stored as scenario documents) and returns its text.
 function withField(mutate: (doc: Record<string, any>) => void): string {
-  const doc = JSON.parse(JSON.stringify(sampleWorkspace()));
+  const doc = JSON.parse(serializeWorkspace(sampleWorkspace()));
   mutate(doc);
   return JSON.stringify(doc);
 }
@@ -92,7 +93,7 @@ describe('parseWorkspace', () => {
     expect(failure(withField((d) => (d.colour = 'red')))).toMatchObject({ field: '/colour', reason: 'unknown field' });
     expect(failure(withField((d) => (d.settings.speed = 3)))).toMatchObject({ field: '/settings/speed' });
     expect(failure(withField((d) => delete d.files.lanes))).toMatchObject({ field: '/files/lanes', value: null, reason: 'missing' });
-    expect(failure(withField((d) => (d.scenarios[0].changes[1].extra = 1)))).toMatchObject({ field: '/scenarios/0/changes/1/extra' });
+    expect(failure(withField((d) => delete d.scenarios[0].changes[1].lane.occurrence))).toMatchObject({ field: '/scenarios/0/changes/1/lane/occurrence' });
   });
 
   it('checks every planning setting', () => {
@@ -118,9 +119,22 @@ describe('parseWorkspace', () => {
     expect(checkWorkspace({ ...sampleWorkspace(), savedAt: '2026-03-02T07:45:00+01:00' }, 'x').savedAt).toBe('2026-03-02T07:45:00+01:00');
   });
 
+  it('stores each scenario as a scenario document with its own format and version', () => {
+    const stored = JSON.parse(serializeWorkspace(sampleWorkspace()));
+    expect(stored.scenarios[0]).toMatchObject({ format: 'lanewright-scenario', version: 1, name: 'Cap the backhaul credit' });
+    expect(failure(withField((d) => (d.scenarios[0].version = 99)))).toMatchObject({ field: '/scenarios/0/version' });
+  });
+
+  it('keeps unknown fields of an in-memory scenario out of the checked copy', () => {
+    const doc = sampleWorkspace() as any;
+    doc.scenarios[0].changes[1].extra = 1;
+    expect(checkWorkspace(doc, 'ipc').scenarios[0].changes[1]).not.toHaveProperty('extra');
+  });
+
   it('checks scenarios: change kinds, lane keys, whole minor units, unique names, active scenario', () => {
     expect(failure(withField((d) => (d.scenarios[0].changes[0].kind = 'raise')))).toMatchObject({ field: '/scenarios/0/changes/0/kind' });
     expect(failure(withField((d) => (d.scenarios[0].changes[0].amountMinor = 45.5)))).toMatchObject({ field: '/scenarios/0/changes/0/amountMinor' });
+    expect(failure(withField((d) => (d.scenarios[0].changes[0].amountMinor = -1)))).toMatchObject({ field: '/scenarios/0/changes/0/amountMinor' });
     expect(failure(withField((d) => (d.scenarios[0].changes[0].lane.occurrence = 0)))).toMatchObject({ field: '/scenarios/0/changes/0/lane/occurrence' });
     expect(failure(withField((d) => d.scenarios.push(d.scenarios[0])))).toMatchObject({ field: '/scenarios/1/name' });
     expect(failure(withField((d) => (d.activeScenario = 'Nope')))).toMatchObject({ field: '/activeScenario' });
