@@ -7,9 +7,15 @@ import type { WorkspaceDocument, WorkspaceFiles } from '../../engine/workspace/d
 
 type PathApi = Pick<typeof path, 'dirname' | 'relative' | 'resolve' | 'isAbsolute' | 'sep'>;
 
+// Names like "sample:lanes.csv" are not file paths but references the renderer resolves itself (the
+// bundled sample); they are stored and returned untouched. A Windows drive ("C:") is one letter.
+function isOpaqueName(name: string, api: PathApi): boolean {
+  return !api.isAbsolute(name) && /^[a-z][a-z0-9+.-]+:/i.test(name);
+}
+
 /** Form of one input path as stored in the workspace at `workspacePath`. */
 export function storedPath(inputPath: string, workspacePath: string, api: PathApi = path): string {
-  if (!api.isAbsolute(inputPath)) return inputPath;
+  if (!api.isAbsolute(inputPath) || isOpaqueName(inputPath, api)) return inputPath;
   const relative = api.relative(api.dirname(workspacePath), inputPath);
   if (relative === '' || relative.startsWith('..') || api.isAbsolute(relative)) return inputPath;
   return relative.split(api.sep).join('/');
@@ -17,7 +23,7 @@ export function storedPath(inputPath: string, workspacePath: string, api: PathAp
 
 /** Absolute form of a stored input path, resolved against the workspace's folder. */
 export function resolvedPath(stored: string, workspacePath: string, api: PathApi = path): string {
-  if (api.isAbsolute(stored)) return stored;
+  if (api.isAbsolute(stored) || isOpaqueName(stored, api)) return stored;
   return api.resolve(api.dirname(workspacePath), stored.split('/').join(api.sep));
 }
 

@@ -86,6 +86,14 @@ describe('workspaces', () => {
     expect(await h.service['workspace:save']({ document: { ...emptyWorkspace(), files: { depots: 'depots.csv', lanes: null } }, path: null, saveAs: true })).toEqual({ path: join(h.dir, 'w.json') });
   });
 
+  it('saves and reopens the bundled sample\'s references unchanged', async () => {
+    const target = join(h.dir, 'sample.lwspace.json');
+    h.dialogs.chooseWorkspaceTarget = target;
+    const doc = { ...emptyWorkspace(), files: { depots: 'sample:depots.csv', lanes: 'sample:lanes.csv' } };
+    await h.service['workspace:save']({ document: doc, path: null, saveAs: true });
+    expect((await h.service['workspace:open']({ path: target }))!.document.files).toEqual(doc.files);
+  });
+
   it('reports a cancelled save as null to the caller and to the quit guard', async () => {
     expect(await h.service['workspace:save']({ document: emptyWorkspace(), path: null, saveAs: true })).toBeNull();
     expect(h.saves).toEqual([null]);

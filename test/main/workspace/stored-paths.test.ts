@@ -30,6 +30,17 @@ describe('stored input paths (Windows)', () => {
   });
 });
 
+describe('names that are not paths', () => {
+  it('keeps references such as the bundled sample untouched both ways, on both systems', () => {
+    for (const api of [path.posix, path.win32]) {
+      expect(storedPath('sample:lanes.csv', '/srv/plan/w.json', api)).toBe('sample:lanes.csv');
+      expect(resolvedPath('sample:lanes.csv', '/srv/plan/w.json', api)).toBe('sample:lanes.csv');
+    }
+    // A drive-relative Windows path is still a path, not a reference.
+    expect(resolvedPath('data/lanes.csv', 'C:\\Plans\\w.json', path.win32)).toBe('C:\\Plans\\data\\lanes.csv');
+  });
+});
+
 describe('whole documents', () => {
   it('round-trips the files block and leaves null paths alone', () => {
     const doc = { ...emptyWorkspace(), files: { depots: '/srv/plan/depots.csv', lanes: null } };
