@@ -84,7 +84,6 @@ export function findDistinctLoops(network: Network, options: DistinctLoopsOption
     componentOfLoop.push(component);
     expand(root, loop);
   });
-  options.onProgress?.(candidates.length, candidates.length);
 
   // Breadth-first over branches; past the cap, keep probing only to learn whether one more exists.
   let probes = 0;
@@ -93,6 +92,7 @@ export function findDistinctLoops(network: Network, options: DistinctLoopsOption
       capReached = true;
       break;
     }
+    if (head % 16 === 0) options.onProgress?.(candidates.length + head, candidates.length + Math.min(queue.length, searchBudget));
     const branch = queue[head];
     const loop = search(branch);
     if (!loop) continue;
@@ -108,5 +108,6 @@ export function findDistinctLoops(network: Network, options: DistinctLoopsOption
     }
     expand(branch, loop);
   }
+  options.onProgress?.(1, 1);
   return { loops, componentOfLoop, capReached, componentOf, components: members };
 }

@@ -35,6 +35,8 @@ export interface FixPlan {
   weights: Float64Array;
   /** Loops no rebate cut can fix (no lane on them carries a rebate); the plan stops at the first. */
   unfixable: RebateLoop[];
+  /** True when the plan stopped at maxSteps with loops left (then `verified` is false). */
+  stepLimitReached: boolean;
   /** True when a final solve of the changed network finds no loop and no lane got cheaper. */
   verified: boolean;
 }
@@ -60,6 +62,7 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
   // Lanes already in the plan: cutting one of them again keeps the number of clauses to renegotiate down.
   const cut = new Uint8Array(network.laneCount);
   const unfixable: RebateLoop[] = [];
+  let stepLimitReached = false;
 
   for (;;) {
     const solved = labelCorrect(network, { sources, weights, onLoop: 'stop' });
@@ -67,8 +70,12 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
     const loop = toRebateLoop(network, solved.loops[0], weights);
     const amount = -loop.netPerLap;
     const candidates = loop.lanes.filter((e) => rebate[e] > 0);
-    if (candidates.length === 0 || steps.length >= maxSteps) {
+    if (candidates.length === 0) {
       unfixable.push(loop);
+      break;
+    }
+    if (steps.length >= maxSteps) {
+      stepLimitReached = true;
       break;
     }
     const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, cut[e] ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], -rebate[e], network.laneRow[e]];
@@ -99,8 +106,8 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
   }));
 
   // Independent of the loop above: one more solve of the final network, and every lane compared.
-  let verified = unfixable.length === 0 && labelCorrect(network, { sources, weights, onLoop: 'stop' }).loops.length === 0;
+  let verified = unfixable.length === 0 && !stepLimitReached && labelCorrect(network, { sources, weights, onLoop: 'stop' }).loops.length === 0;
   for (let p = 0; p < weights.length && verified; p++) if (weights[p] < network.outNet[p]) verified = false;
   for (let e = 0; e < rebate.length && verified; e++) if (rebate[e] < 0) verified = false;
-  return { changes, steps, weights, unfixable, verified };
+  return { changes, steps, weights, unfixable, stepLimitReached, verified };
 }

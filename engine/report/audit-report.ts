@@ -59,6 +59,8 @@ export interface AuditReport {
   fix_plan: FixPlanRow[];
   /** True when a final solve of the changed network found no loop. */
   fix_plan_verified: boolean;
+  /** True when the plan stopped at its step limit with loops left. */
+  fix_plan_incomplete: boolean;
   /** Loops that no rebate cut can fix (no lane on them has a rebate); headroom is then empty. */
   unfixable_loops: { depots: string[]; lanes: number[]; net_per_lap_minor: number }[];
   headroom: HeadroomRow[];
@@ -102,6 +104,7 @@ export function auditReport(network: Network, audit: NetworkAudit): AuditReport 
       negotiable: c.negotiable,
     })),
     fix_plan_verified: plan ? plan.verified : true,
+    fix_plan_incomplete: plan ? plan.stepLimitReached : false,
     unfixable_loops: (plan?.unfixable ?? []).map((loop) => ({ depots: ids(loop.depots), lanes: rows(loop.lanes), net_per_lap_minor: loop.netPerLap })),
     headroom: audit.headroom ? headroomRows(network, audit.headroom.floor, audit.headroom.net, end, ref) : [],
     headroom_after_fix_plan: audit.headroomAfterFixPlan,

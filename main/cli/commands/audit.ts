@@ -47,6 +47,8 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
     if (report.loop_cap_reached) out.warn(`WARNING: more loops exist than the ${report.loops.length} reported (raise --loop-cap to see them)`);
     if (report.fix_plan_verified) {
       out.warn(`fix plan: ${report.fix_plan.length} rebate cut(s) remove every loop (checked by solving the changed network); headroom is computed after the fix plan`);
+    } else if (report.fix_plan_incomplete) {
+      out.warn(`WARNING: the fix plan stopped after ${report.fix_plan.length} lane change(s) with loops left; headroom is not available`);
     } else {
       out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
     }

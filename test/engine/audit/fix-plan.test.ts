@@ -48,6 +48,12 @@ describe('fix plan', () => {
     expect(both.changes.map((c) => [c.oldRebate, c.newRebate])).toEqual([[5, 0], [50, 0]]);
   });
 
+  it('says so when it stops at its step limit with loops left', () => {
+    const net = buildNetwork(depots(['A', 'B']), [lane('A', 'B', 0, 5, 2), lane('B', 'A', 0, 50, 3)]);
+    const plan = buildFixPlan(net, { maxSteps: 1 }); // the lap of -55 needs two cuts
+    expect([plan.stepLimitReached, plan.verified, plan.unfixable.length]).toEqual([true, false, 0]);
+  });
+
   it('reports a loop that no rebate cut can fix (a negative toll), and does not pretend', () => {
     const net = buildNetwork(depots(['A', 'B']), [lane('A', 'B', -10, 0, 2), lane('B', 'A', 5, 0, 3)]);
     const plan = buildFixPlan(net);
