@@ -122,11 +122,9 @@ type ImportBase = Omit<ImportResult, 'network' | 'report' | 'plan'>;
 
 function planFrom(base: ImportBase, request: PlanRequest, skipInvalid: boolean, lanesFile: string): ImportResult {
   const importReport = base.importReport;
-  const dry = planLanes({ ...base, lanesFile }, request, false);
-  const report = mergeReport(importReport, dry.errors, dry.warnings, dry.rejected, lanesFile);
   // The stored errors are capped, but the first ones are always kept: none stored means none found.
-  const buildable = report.errors.length === 0 || skipInvalid;
-  const outcome = buildable ? planLanes({ ...base, lanesFile }, request, true) : dry;
+  const outcome = planLanes({ ...base, lanesFile }, request, (planErrors) => skipInvalid || (importReport.errors.length === 0 && planErrors === 0));
+  const report = mergeReport(importReport, outcome.errors, outcome.warnings, outcome.rejected, lanesFile);
   return { ...base, network: outcome.plan.network, report, plan: outcome.plan, notes: [...base.notes, ...outcome.plan.notes] };
 }
 

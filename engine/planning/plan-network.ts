@@ -37,8 +37,8 @@ function money(text: string | null, digits: number, option: string): number {
   }
 }
 
-/** Plans the lanes; builds the network only when `build` is true (the caller decides on errors). */
-export function planLanes(input: PlanInput, request: PlanRequest, build: boolean): PlanOutcome {
+/** Plans the lanes; builds the network only when `build` says so, given this plan's error count. */
+export function planLanes(input: PlanInput, request: PlanRequest, build: (planErrors: number) => boolean): PlanOutcome {
   const { lanes: t, depots, exponent, currency, lanesFile } = input;
   const settings = planningSettings(request.settings);
   const errors: ValidationItem[] = [];
@@ -188,7 +188,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: boolean
   }
   if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
 
-  const network = build ? buildNetwork(depots, lanes, { currency, exponent }) : null;
+  const network = build(errors.length) ? buildNetwork(depots, lanes, { currency, exponent }) : null;
   return {
     plan: { network, lanes, laneRecord: Int32Array.from(record), date: date === 0 ? null : isoDateText(date), vehicleClass: className, settings, excluded, notes },
     errors,
