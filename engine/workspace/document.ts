@@ -24,7 +24,7 @@ export interface WorkspaceFiles {
 }
 
 /** The planning controls: the selected origin, dispatch date, vehicle class and maximum legs. */
-export interface PlanningSettings {
+export interface WorkspaceSettings {
   /** Depot id of the selected origin, or null before one is chosen. */
   origin: string | null;
   /** Dispatch date, ISO 8601 calendar date (YYYY-MM-DD), or null for "undated". */
@@ -48,7 +48,7 @@ export interface WorkspaceDocument {
   /** ISO 8601 timestamp of the last save, or null when never saved. */
   savedAt: string | null;
   files: WorkspaceFiles;
-  settings: PlanningSettings;
+  settings: WorkspaceSettings;
   scenarios: WorkspaceScenario[];
   /** Name of the scenario being viewed, or null for the base contract. */
   activeScenario: string | null;

@@ -1,7 +1,7 @@
 // Reads and writes the workspace file: JSON text in, a checked and migrated WorkspaceDocument out,
 // and back. Pure (no file access); the Electron main process and the browser host both use it.
 
-import { WORKSPACE_FORMAT, WORKSPACE_VERSION, type PlanningSettings, type WorkspaceDocument, type WorkspaceFiles } from './document';
+import { WORKSPACE_FORMAT, WORKSPACE_VERSION, type WorkspaceSettings, type WorkspaceDocument, type WorkspaceFiles } from './document';
 import { WorkspaceFormatError } from './errors';
 import { migrateWorkspace } from './migrate';
 import {
@@ -35,7 +35,7 @@ function checkFiles(value: unknown): WorkspaceFiles {
   };
 }
 
-function checkSettings(value: unknown): PlanningSettings {
+function checkSettings(value: unknown): WorkspaceSettings {
   const o = checkObject(value, '/settings', ['origin', 'dispatchDate', 'vehicleClass', 'maxLegs']);
   return {
     origin: checkOptionalText(o.origin, '/settings/origin', 200),
