@@ -45,6 +45,7 @@ export interface HeadroomRow {
   row: number;
   from: string;
   to: string;
+  /** The net the floor applies to: after the fix plan when headroom_after_fix_plan is true. */
   net_minor: number;
   /** Lowest net the lane can carry without a loop; null for no limit. */
   floor_minor: number | null;
