@@ -10,6 +10,8 @@ import { APP_SCHEME, contentTypeFor, resolveAppAsset } from './app-page';
  * Registration of the app scheme; must be passed to protocol.registerSchemesAsPrivileged before the
  * app is ready. `standard` gives the pages an origin and relative URLs; `secure` makes it a secure
  * context; fetch is allowed for the page's own bundled assets (the basemap). CSP is never bypassed.
+ * `corsEnabled` stays off: page, module scripts and worker share one origin, and off keeps the
+ * scheme's files unreadable from any other origin.
  */
 export const APP_SCHEME_PRIVILEGES: CustomScheme = {
   scheme: APP_SCHEME,
