@@ -8,6 +8,7 @@ import { componentHasCycle, strongComponents } from '../loops/strong-components'
 import { findNegativeLoop } from '../loops/find-negative-loop';
 import { loopKey, type RebateLoop } from '../loops/rebate-loop';
 import type { Network } from '../network/types';
+import { labelCorrect, UNBOUNDED } from '../routes/label-correcting';
 
 export interface DistinctLoopsOptions {
   /** Most loops to report (default 100); the first loop of each component is reported even past it. */
@@ -71,8 +72,12 @@ export function findDistinctLoops(network: Network, options: DistinctLoopsOption
     }
   };
 
+  // One solve over the whole network first: a component holding a loop always ends up unbounded, so
+  // components left in the tree need no search of their own (the common, loop-free case costs one solve).
+  const all = Int32Array.from({ length: network.depotCount }, (_, d) => d);
+  const state = labelCorrect(network, { sources: all, weights: base, onLoop: 'mark' }).state;
   // First pass: one loop per component, so every component with a loop is reported even under a small cap.
-  const candidates = members.map((m, c) => c).filter((c) => componentHasCycle(network, members[c], base));
+  const candidates = members.map((m, c) => c).filter((c) => state[members[c][0]] === UNBOUNDED && componentHasCycle(network, members[c], base));
   let capReached = false;
   candidates.forEach((component, i) => {
     options.onProgress?.(i, candidates.length);

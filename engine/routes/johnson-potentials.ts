@@ -26,9 +26,8 @@ export function johnsonReweighting(network: Network, weights: Float64Array = net
   if (solved.loops.length > 0) {
     throw new RebateLoopPresentError(solved.loops[0].depots.map((d) => network.depotIds[d]), 'johnson reweighting');
   }
-  // A single depot is its own root (cost 0); with several, every depot hangs under the virtual root.
+  // Every depot is a source at cost 0, so every potential is finite and <= 0.
   const potential = solved.dist.slice(0, n);
-  if (n === 1) potential[0] = 0;
 
   const { outStart, outTo } = network;
   const reweighted = new Float64Array(weights.length);
