@@ -51,11 +51,10 @@ function refreshMenu(recent: RecentStore): void {
     send,
     developer: !app.isPackaged,
     clearRecent: () => {
-      void (async () => {
-        for (const entry of recentEntries) await recent.forget(entry.path);
-        recentEntries = [];
+      void recent.clear().then((entries) => {
+        recentEntries = entries;
         refreshMenu(recent);
-      })();
+      });
     },
   });
   Menu.setApplicationMenu(Menu.buildFromTemplate(template));

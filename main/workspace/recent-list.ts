@@ -114,6 +114,12 @@ export class RecentStore {
     return this.list();
   }
 
+  /** Empties the list ("Clear list" in the menu). */
+  async clear(): Promise<RecentWorkspace[]> {
+    await this.store([]);
+    return this.list();
+  }
+
   /** True when `workspacePath` is on the list. */
   has(workspacePath: string): boolean {
     const key = samePathKey(workspacePath);

@@ -60,5 +60,8 @@ describe('RecentStore', () => {
     expect(second.has(b)).toBe(false);
     await second.forget(a);
     expect(JSON.parse(await readFile(store, 'utf8')).entries).toEqual([]);
+    await second.touch(a, t(2));
+    expect(await second.clear()).toEqual([]);
+    expect(await new RecentStore(store).load()).toEqual([]);
   });
 });
