@@ -3,7 +3,7 @@
 // renamed over the target, which every supported OS does atomically within one file system.
 
 import { randomBytes } from 'node:crypto';
-import { open, rename, stat, unlink } from 'node:fs/promises';
+import { open, readdir, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { fileAccessError } from './errors';
 
@@ -50,6 +50,23 @@ export async function writeFileAtomic(target: string, text: string, hooks: Atomi
     throw fileAccessError(target, 'write', error);
   }
   await syncFolder(dirname(target));
+  await removeLeftovers(target);
+}
+
+// A save cut short by a crash or power cut leaves its temporary file behind (the target itself is
+// intact). The next successful save of the same file removes such leftovers.
+async function removeLeftovers(target: string): Promise<void> {
+  const prefix = `.${basename(target)}.`;
+  const pattern = /^\d+\.[0-9a-f]{8}\.tmp$/;
+  try {
+    for (const name of await readdir(dirname(target))) {
+      if (name.startsWith(prefix) && pattern.test(name.slice(prefix.length))) {
+        await unlink(join(dirname(target), name)).catch(() => undefined);
+      }
+    }
+  } catch {
+    // Listing the folder is not essential to the save.
+  }
 }
 
 // The rename is recorded in the folder; flushing the folder makes it survive a power cut. Windows

@@ -37,6 +37,15 @@ describe('writeFileAtomic', () => {
     }
   });
 
+  it('removes temporary files left by an earlier interrupted save of the same file, and only those', async () => {
+    const target = join(dir, 'plan.json');
+    await writeFile(join(dir, '.plan.json.4242.0a1b2c3d.tmp'), 'half');
+    await writeFile(join(dir, '.other.json.4242.0a1b2c3d.tmp'), 'someone else');
+    await writeFile(join(dir, '.plan.json.notes'), 'keep');
+    await writeFileAtomic(target, 'whole');
+    expect((await readdir(dir)).sort()).toEqual(['.other.json.4242.0a1b2c3d.tmp', '.plan.json.notes', 'plan.json']);
+  });
+
   it('reports a missing folder as FileAccessError with ENOENT', async () => {
     const target = join(dir, 'no-such-folder', 'plan.json');
     await expect(writeFileAtomic(target, 'x')).rejects.toMatchObject({ name: 'FileAccessError', code: 'ENOENT', path: target });
