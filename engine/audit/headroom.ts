@@ -59,7 +59,7 @@ export function laneFloors(network: Network, options: HeadroomOptions = {}): Lan
     if (first === last) continue;
     targets.length = 0;
     for (let i = first; i < last; i++) targets.push(network.laneFrom[inLane[i]]);
-    const { dist } = dijkstra(network, v, { weights: reweighted, workspace, targets });
+    const { dist } = dijkstra(network, v, { weights: reweighted, workspace, targets, tree: false });
     for (let i = first; i < last; i++) {
       const e = inLane[i];
       const u = network.laneFrom[e];

@@ -13,8 +13,9 @@ export interface DijkstraWorkspace {
   readonly parentPos: Int32Array;
   /** 1 for depots whose cost is final. */
   readonly settled: Uint8Array;
-  /** The binary heap: depots in heap order, keyed by `dist`. */
+  /** The binary heap: depots in heap order, with each entry's key beside it (no indirection when sifting). */
   readonly heap: Int32Array;
+  readonly heapKey: Float64Array;
   /** Position of each depot in `heap`, or -1 when absent. */
   readonly heapPos: Int32Array;
   /** Per depot: the run number that made it a target (see `targets`). */
@@ -28,6 +29,7 @@ export function createDijkstraWorkspace(depotCount: number): DijkstraWorkspace {
     parentPos: new Int32Array(depotCount),
     settled: new Uint8Array(depotCount),
     heap: new Int32Array(depotCount),
+    heapKey: new Float64Array(depotCount),
     heapPos: new Int32Array(depotCount).fill(-1),
     targetMark: new Int32Array(depotCount),
     run: 0,
@@ -40,6 +42,8 @@ export interface DijkstraOptions {
   workspace?: DijkstraWorkspace;
   /** Stop as soon as all these depots are settled; others may then hold provisional costs. */
   targets?: ArrayLike<number>;
+  /** Record `parentPos` and `settled` (default true); costs alone are faster. */
+  tree?: boolean;
 }
 
 /**
@@ -52,12 +56,15 @@ export function dijkstra(network: Network, source: number, options: DijkstraOpti
   const { outStart, outTo } = network;
   const weights = options.weights ?? network.outNet;
   const ws = options.workspace ?? createDijkstraWorkspace(n);
-  const { dist, parentPos, settled, heap, heapPos, targetMark } = ws;
+  const { dist, parentPos, settled, heap, heapKey, heapPos, targetMark } = ws;
+  const tree = options.tree !== false;
   const MAX = Number.MAX_SAFE_INTEGER;
   dist.fill(Infinity);
-  parentPos.fill(-1);
-  settled.fill(0);
   heapPos.fill(-1);
+  if (tree) {
+    parentPos.fill(-1);
+    settled.fill(0);
+  }
 
   const run = ++ws.run;
   let remaining = -1;
@@ -75,27 +82,31 @@ export function dijkstra(network: Network, source: number, options: DijkstraOpti
 
   dist[source] = 0;
   heap[0] = source;
+  heapKey[0] = 0;
   heapPos[source] = 0;
   let count = 1;
   while (count > 0) {
     // Pop the cheapest depot and sift the last heap entry down from the top.
     const u = heap[0];
     heapPos[u] = -1;
-    settled[u] = 1;
+    if (tree) settled[u] = 1;
     const last = heap[--count];
     if (count > 0) {
-      const key = dist[last];
+      const key = heapKey[count];
       let at = 0;
       for (;;) {
         let child = 2 * at + 1;
         if (child >= count) break;
-        if (child + 1 < count && dist[heap[child + 1]] < dist[heap[child]]) child++;
-        if (dist[heap[child]] >= key) break;
+        let childKey = heapKey[child];
+        if (child + 1 < count && heapKey[child + 1] < childKey) childKey = heapKey[++child];
+        if (childKey >= key) break;
         heap[at] = heap[child];
+        heapKey[at] = childKey;
         heapPos[heap[at]] = at;
         at = child;
       }
       heap[at] = last;
+      heapKey[at] = key;
       heapPos[last] = at;
     }
     if (remaining > 0 && targetMark[u] === run && --remaining === 0) break;
@@ -110,19 +121,22 @@ export function dijkstra(network: Network, source: number, options: DijkstraOpti
       if (w < 0) throw new RangeError(`dijkstra: negative weight ${w} on a lane from depot "${network.depotIds[u]}"`);
       if (nd > MAX) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
       dist[v] = nd;
-      parentPos[v] = p;
+      if (tree) parentPos[v] = p;
       // Insert v, or move it up after its key dropped.
       let at = heapPos[v];
       if (at === -1) at = count++;
       while (at > 0) {
         const parentAt = (at - 1) >> 1;
+        const parentKey = heapKey[parentAt];
+        if (parentKey <= nd) break;
         const parent = heap[parentAt];
-        if (dist[parent] <= nd) break;
         heap[at] = parent;
+        heapKey[at] = parentKey;
         heapPos[parent] = at;
         at = parentAt;
       }
       heap[at] = v;
+      heapKey[at] = nd;
       heapPos[v] = at;
     }
   }
