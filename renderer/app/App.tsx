@@ -4,6 +4,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
 import { laneKeysOf } from '../../engine/scenario/lane-key';
+import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
 import { AboutDialog } from '../components/AboutDialog/AboutDialog';
 import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';
 import { ImportDialog } from '../components/ImportPanel/ImportDialog';
@@ -41,10 +42,11 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
     if (network && network.depotIds.length > 0 && !network.depotIds.includes(settings.origin)) setSettings({ ...settings, origin: network.depotIds[0] });
   }, [network, settings, setSettings]);
 
-  const solve = plan.solve && network && plan.solve.status.length === network.depotIds.length ? plan.solve : null;
+  const solve = plan.solve && network && plan.solvedFor === network ? plan.solve : null;
+  const route = solve ? plan.route : null;
   const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
   return (
-    <div className="lw-app" data-ready={solve ? 'yes' : 'no'}>
+    <div className="lw-app" data-ready={solve && !plan.solving ? 'yes' : 'no'} data-solves={plan.solveCount}>
       <a className="lw-skip" href="#lw-lower">
         Skip to results
       </a>
@@ -60,17 +62,21 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         <aside className="lw-side" aria-label="Plan and route">
           {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
           {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
-            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={plan.route} onPlanFrom={(d) => (setSettings({ ...settings, origin: network.depotIds[d] }), setSelected(null))} />
+            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} onPlanFrom={(d) => (setSettings({ ...settings, origin: network.depotIds[d] }), setSelected(null))} />
           )}
           {network && solve && selected === null && <p className="lw-muted">Pick a depot on the map or in the results to see its route and cost breakdown.</p>}
         </aside>
         <section className="lw-mapwrap" aria-label="Map">
-          <NetworkMap network={network} solve={solve} route={plan.route} selected={selected} onSelect={setSelected} />
+          <ErrorBoundary what="map">
+            <NetworkMap network={network} solve={solve} route={route} selected={selected} onSelect={setSelected} />
+          </ErrorBoundary>
           <MapLegend />
         </section>
       </main>
       <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
-        {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} />}
+        <ErrorBoundary what="results panel">
+          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} />}
+        </ErrorBoundary>
       </section>
       <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />
       <FirstRunNotice />

@@ -11,19 +11,25 @@ const DEBOUNCE_MS = 120;
 
 export interface Plan {
   solve: SolveView | null;
+  /** The network `solve` was computed on; a solve of an older network is never shown. */
+  solvedFor: NetworkView | null;
   /** Time from sending the solve to having its answer on the UI thread. */
   roundTripMs: number | null;
   route: RouteView | null;
   error: string | null;
   solving: boolean;
+  /** Number of solves shown so far (lets tests and screen readers tell a new answer from the last). */
+  solveCount: number;
 }
 
 export function usePlan(engine: Engine, network: NetworkView | null, settings: PlanSettings, scenario: Scenario | null, selected: number | null): Plan {
   const [solve, setSolve] = useState<SolveView | null>(null);
+  const [solvedFor, setSolvedFor] = useState<NetworkView | null>(null);
   const [roundTripMs, setRoundTrip] = useState<number | null>(null);
   const [route, setRoute] = useState<RouteView | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [solving, setSolving] = useState(false);
+  const [solveCount, setSolveCount] = useState(0);
   const latest = useRef(0);
 
   useEffect(() => {
@@ -39,6 +45,8 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
         const answer = await engine.track((onProgress) => engine.client.request<'solved'>({ kind: 'solve', settings, scenario }, onProgress), 'Solving');
         if (ticket !== latest.current) return;
         setSolve(answer.result);
+        setSolvedFor(network);
+        setSolveCount((n) => n + 1);
         setRoundTrip(performance.now() - started);
         setError(null);
       } catch (caught) {
@@ -65,5 +73,5 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
     };
   }, [engine, solve, selected]);
 
-  return { solve, roundTripMs, route, error, solving };
+  return { solve, solvedFor, roundTripMs, route, error, solving, solveCount };
 }

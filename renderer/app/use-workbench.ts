@@ -4,7 +4,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
-import { SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
+import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
 import type { PlanChoice, PlanSettings } from '../worker/protocol';
 import { useDataset, type DatasetFiles } from './use-dataset';
 import { useEngine } from './use-engine';
@@ -31,9 +31,10 @@ export function useWorkbench(host: LanewrightHost) {
 
   const openSample = useCallback(
     async (loop: boolean) => {
-      const ok = await dataset.load(sampleFiles(loop), planOf(settingsRef.current));
+      const next = { ...settingsRef.current, origin: SAMPLE_ORIGIN, dispatchDate: SAMPLE_DATE };
+      const ok = await dataset.load(sampleFiles(loop), planOf(next));
       if (ok) {
-        setSettings((s) => ({ ...s, origin: SAMPLE_ORIGIN }));
+        setSettings(next);
         setScenario(emptyScenario());
         setSelected(null);
         setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');

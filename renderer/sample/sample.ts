@@ -11,6 +11,10 @@ export const SAMPLE_PREFIX = 'sample:';
 
 export const SAMPLE_ORIGIN = 'RTM';
 
+/** Dispatch date the sample opens at: inside the period of its date-limited rebate clauses, so the
+ *  loop variant shows its loop (the volume refund it needs runs 2026-03-01 to 2026-09-30). */
+export const SAMPLE_DATE = '2026-08-15';
+
 const FILES: Record<string, string> = {
   'depots.csv': depotsText,
   'lanes.csv': lanesText,

@@ -33,11 +33,12 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
     if (await onImport({ depots, lanes })) onClose();
   };
   if (pending) {
-    const accepted = pending.report.files.reduce((n, f) => n + f.accepted, 0);
+    const rejected = pending.report.files.reduce((n, f) => n + f.rejected, 0);
+    const acceptedText = pending.report.files.map((f) => `${f.accepted} ${f.kind}`).join(', ');
     return (
       <Dialog title="Import report" onClose={onFix} className="lw-wide">
         <p role="status">
-          {pending.report.issues.length} row{pending.report.issues.length === 1 ? ' was' : 's were'} rejected. Nothing has changed yet.
+          {rejected} row{rejected === 1 ? ' was' : 's were'} rejected ({pending.report.issues.length} problem{pending.report.issues.length === 1 ? '' : 's'} listed). Nothing has changed yet.
         </p>
         <ImportReportTable report={pending.report} />
         <div className="lw-dialog-buttons">
@@ -46,7 +47,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
           </button>
           {!pending.report.fatal && (
             <button type="button" className="lw-primary" onClick={async () => (await onContinue()) && onClose()}>
-              Continue with the {accepted} accepted rows
+              Continue with the accepted rows ({acceptedText})
             </button>
           )}
         </div>

@@ -1,0 +1,92 @@
+// Starts what an end-to-end run needs: the built renderer on a free localhost port, Debian's
+// Chromium headless through playwright-core, and a log of every request the page makes so a test
+// can prove nothing left localhost.
+
+import { existsSync, mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { serveStatic, type RunningServer } from '../../../main/web/static-server';
+
+export const CHROMIUM = '/usr/bin/chromium';
+export const SCREENSHOTS = 'test-output/screenshots';
+
+export interface Session {
+  server: RunningServer;
+  browser: Browser;
+  context: BrowserContext;
+  page: Page;
+  /** Every URL the page requested, in order. */
+  requests: string[];
+  /** Console errors and uncaught page errors. */
+  errors: string[];
+  close(): Promise<void>;
+}
+
+/** Serves dist/renderer and opens it in a fresh headless Chromium profile. */
+export async function openApp(viewport = { width: 1440, height: 920 }): Promise<Session> {
+  if (!existsSync('dist/renderer/index.html')) throw new Error('dist/renderer is missing: run "npm run build:renderer" (npm run test:e2e does)');
+  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: apt-get install -y chromium`);
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  const server = await serveStatic('dist/renderer', 0);
+  const browser = await chromium.launch({
+    executablePath: CHROMIUM,
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+  });
+  const context = await browser.newContext({ viewport, acceptDownloads: true });
+  const page = await context.newPage();
+  const requests: string[] = [];
+  const errors: string[] = [];
+  page.on('request', (request) => requests.push(request.url()));
+  page.on('console', (message) => {
+    if (message.type() === 'error') errors.push(message.text());
+  });
+  page.on('pageerror', (error) => errors.push(error.message));
+  await page.goto(server.url);
+  return {
+    server,
+    browser,
+    context,
+    page,
+    requests,
+    errors,
+    close: async () => {
+      await browser.close();
+      await server.close();
+    },
+  };
+}
+
+/** URLs that went anywhere but the local server (data: and blob: URLs stay in the page). */
+export function offsiteRequests(session: Session): string[] {
+  return session.requests.filter((url) => !url.startsWith(session.server.url) && !url.startsWith('data:') && !url.startsWith('blob:'));
+}
+
+/** Waits until a plan is on screen and no solve is pending; `after` = the solve count seen before a change. */
+export async function waitForPlan(page: Page, after = -1): Promise<void> {
+  await page.waitForFunction(
+    (seen) => {
+      const app = document.querySelector('.lw-app');
+      return !!app && app.getAttribute('data-ready') === 'yes' && Number(app.getAttribute('data-solves')) > seen;
+    },
+    after,
+    { timeout: 60_000 },
+  );
+}
+
+/** Number of solves the page has shown so far. */
+export async function solveCount(page: Page): Promise<number> {
+  return Number(await page.locator('.lw-app').getAttribute('data-solves'));
+}
+
+/** Saves a screenshot of the whole window under test-output/screenshots. */
+export async function snap(page: Page, name: string): Promise<string> {
+  const path = join(SCREENSHOTS, `${name}.png`);
+  await page.screenshot({ path });
+  return path;
+}
+
+/** Picks a file through the next file chooser that `click` opens. */
+export async function chooseFile(page: Page, click: () => Promise<void>, name: string, text: string): Promise<void> {
+  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), click()]);
+  await chooser.setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(text, 'utf8') });
+}

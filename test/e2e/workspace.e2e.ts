@@ -1,0 +1,207 @@
+// The desktop workspace in a real browser (browser mode of the same renderer): first run opens the
+// sample plan, costs match the engine run here in Node, the rebate-loop variant raises the warning
+// and draws the loop, a rebate edit changes the scenario, a broken file gets its report, and the
+// routes CSV export re-reads to the same costs. No request may leave localhost.
+
+import { readFileSync } from 'node:fs';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parseCsvText } from '../../engine/io/csv-papaparse';
+import { formatMinor, type Minor } from '../../engine/money/minor';
+import { importNetwork } from '../../engine/import/import-network';
+import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { expectedPlan, sample } from './support/expected';
+
+let session: Session;
+let page: Page;
+let date: string;
+
+/** Depot id -> cost in minor units ('' when none) as the results table shows it. */
+async function shownCosts(p: Page): Promise<Map<string, string>> {
+  const rows = await p.locator('[data-testid="results-table"] tbody tr').evaluateAll((trs) => trs.map((tr) => [tr.getAttribute('data-depot') ?? '', tr.getAttribute('data-cost-minor') ?? '']));
+  return new Map(rows as [string, string][]);
+}
+
+function expectCostsMatch(shown: Map<string, string>, expected: Map<string, number>, unbounded: Set<string>) {
+  for (const [id, cost] of expected) expect(shown.get(id), `cost of ${id}`).toBe(String(cost));
+  for (const id of unbounded) expect(shown.get(id), `unbounded ${id} has no cost`).toBe('');
+}
+
+beforeAll(async () => {
+  session = await openApp();
+  page = session.page;
+});
+
+afterAll(async () => {
+  await session?.close();
+});
+
+describe('workspace in the browser', () => {
+  it('shows the first-run cautions once, then the sample plan from RTM with the engine costs', async () => {
+    const notice = page.getByRole('dialog', { name: 'Before you plan' });
+    await expect.poll(() => notice.isVisible()).toBe(true);
+    const text = await notice.innerText();
+    expect(text).toMatch(/cost estimates/i);
+    expect(text).toMatch(/hazardous goods/i);
+    expect(text).toMatch(/driver hours/i);
+    await snap(page, 'first-run-notice');
+    await page.getByRole('button', { name: 'I understand' }).click();
+    await waitForPlan(page);
+
+    date = await page.getByLabel('Dispatch date').inputValue();
+    const expected = expectedPlan(sample('depots.csv'), sample('lanes.csv'), 'RTM', date);
+    expect(expected.cost.size).toBeGreaterThan(5);
+    expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
+    await snap(page, 'plan-overview');
+
+    // Remembered: a reload does not show the notice again.
+    await page.reload();
+    await waitForPlan(page);
+    expect(await page.getByRole('dialog', { name: 'Before you plan' }).count()).toBe(0);
+  });
+
+  it('picks an origin from the searchable list with the keyboard and shows a route breakdown', async () => {
+    const before = await solveCount(page);
+    const search = page.getByRole('combobox', { name: 'Origin depot' });
+    await search.fill('Lyon');
+    await search.press('ArrowDown');
+    await search.press('Enter');
+    await waitForPlan(page, before);
+    const expected = expectedPlan(sample('depots.csv'), sample('lanes.csv'), 'LYS', date);
+    expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
+
+    await page.locator('tr[data-depot="RTM"]').click();
+    const breakdown = page.locator('[data-testid="route-breakdown"]');
+    await breakdown.waitFor();
+    const total = await breakdown.locator('tfoot td').last().innerText();
+    expect(total.replace(/,/g, '')).toBe(formatMinor(expected.cost.get('RTM')! as Minor));
+    await expect.poll(() => page.locator('svg.lw-chart').count()).toBe(1);
+    await snap(page, 'route-breakdown');
+  });
+
+  it('warns about the rebate loop, marks unbounded depots and draws the loop on the map', async () => {
+    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    const alert = page.getByRole('alert').filter({ hasText: 'Rebate loop' });
+    await alert.waitFor();
+    await waitForPlan(page);
+    const expected = expectedPlan(sample('depots.csv'), sample('lanes-rebate-loop.csv'), 'RTM', date);
+    expect(expected.loops.length).toBeGreaterThan(0);
+    const alertText = await alert.innerText();
+    for (const loop of expected.loops) {
+      expect(alertText).toContain(loop.depots.join(' → '));
+      for (const row of loop.rows) expect(alertText).toContain(String(row));
+    }
+    const shown = await shownCosts(page);
+    expectCostsMatch(shown, expected.cost, expected.unbounded);
+    // The map draws the loop with a text label and each unbounded depot as a labelled diamond.
+    const map = page.getByRole('region', { name: /Network map/ });
+    expect(Number(await map.getAttribute('data-loops'))).toBe(expected.loops.length);
+    expect(await page.locator('.lw-loop-label').first().innerText()).toContain(expected.loops[0].depots[0]);
+    expect(await page.locator('.lw-diamond').count()).toBe(expected.unbounded.size);
+    expect(await page.getByRole('img', { name: /: cost unbounded/ }).count()).toBe(expected.unbounded.size);
+    await snap(page, 'rebate-loop-warning');
+
+    await page.getByRole('tab', { name: /Contract review/ }).click();
+    const review = page.locator('[data-testid="contract-review"]');
+    await review.waitFor();
+    expect(await review.innerText()).toMatch(/Fix plan/);
+    await snap(page, 'contract-review');
+  });
+
+  it('turns a rebate edit into a scenario change and shows what moved', async () => {
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    await page.getByLabel('Filter lanes by depot or contract ref').fill('FRA');
+    const loopLane = expectedPlan(sample('depots.csv'), sample('lanes-rebate-loop.csv'), 'RTM', date).loops[0];
+    const row = loopLane.rows[0];
+    const cell = page.locator(`tr[data-lane-row="${row}"] input[aria-label^="rebate of lane"]`);
+    const laneName = (await page.locator(`tr[data-lane-row="${row}"] th`).innerText()).split(' → ');
+    const refText = await page.locator(`tr[data-lane-row="${row}"] td`).nth(1).innerText();
+    const ref = refText === '—' ? null : refText;
+    const before = await solveCount(page);
+    await cell.fill('0.00');
+    await cell.press('Enter');
+    await waitForPlan(page, before);
+
+    const scenario = {
+      name: 'What-if 1',
+      description: null,
+      changes: [{ kind: 'set-amount' as const, lane: { from: laneName[0], to: laneName[1], ref, occurrence: 1 }, field: 'rebate' as const, amountMinor: 0, note: null }],
+    };
+    const expected = expectedPlan(sample('depots.csv'), sample('lanes-rebate-loop.csv'), 'RTM', date, scenario);
+    expect(expected.unbounded.size).toBe(0);
+    expect(await page.getByRole('alert').filter({ hasText: 'Rebate loop' }).count()).toBe(0);
+    const compare = page.locator('[data-testid="scenario-compare"]');
+    expect(await compare.innerText()).toContain('rebate set to 0.00');
+    expect(await compare.locator('[data-moved-depot]').count()).toBeGreaterThan(0);
+    expect(await compare.innerText()).toMatch(/unbounded → reachable/);
+    await snap(page, 'scenario-edit');
+    await page.getByRole('tab', { name: 'Results' }).click();
+    expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
+  });
+
+  it('imports a broken lanes file, lists every rejected row, and continues with the accepted rows', async () => {
+    const broken = sample('broken/lanes-broken.csv');
+    const engineReport = importNetwork(sample('depots.csv'), broken, { depotsFile: 'depots.csv', lanesFile: 'lanes-broken.csv', plan: { date }, skipInvalid: true }).report;
+    expect(engineReport.errors.length).toBeGreaterThanOrEqual(5);
+
+    await page.getByRole('button', { name: 'Import CSV…' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
+    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'depots.csv', sample('depots.csv'));
+    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'lanes-broken.csv', broken);
+    await dialog.getByRole('button', { name: 'Import', exact: true }).click();
+    const report = page.getByRole('dialog', { name: 'Import report' });
+    await report.waitFor();
+    const rows = await report.locator('table tbody tr').evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')));
+    for (const error of engineReport.errors) {
+      expect(rows, `${error.file} row ${error.row}`).toContainEqual([error.file, String(error.row ?? '—'), error.column ?? '—', error.value ?? '—', error.message]);
+    }
+    expect(rows.length).toBe(engineReport.errors.length);
+    await snap(page, 'import-report');
+
+    const lanesCounts = engineReport.files.find((f) => f.kind === 'lanes')!;
+    expect(lanesCounts.accepted + lanesCounts.rejected).toBe(lanesCounts.total);
+    await report.getByRole('button', { name: /Continue with the/ }).click();
+    const planned = expectedPlan(sample('depots.csv'), broken, 'RTM', date);
+    await expect.poll(() => page.locator('.lw-status').innerText()).toContain(`${planned.depotCount} depots · ${planned.laneCount} lanes`);
+    await waitForPlan(page);
+    expect(await page.locator('.lw-dataset').innerText()).toContain('lanes-broken.csv');
+    // The rejected rows stay listed in the import report tab.
+    await page.getByRole('tab', { name: /Import report/ }).click();
+    expect(await page.locator('[data-testid="import-report"] table tbody tr').count()).toBe(engineReport.errors.length);
+  });
+
+  it('exports the routes CSV, which re-reads to the costs the engine gives', async () => {
+    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await waitForPlan(page);
+    await page.getByRole('tab', { name: 'Results' }).click();
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export routes CSV' }).click()]);
+    const path = await download.path();
+    const { rows } = parseCsvText(readFileSync(path, 'utf8'));
+    const header = rows[0];
+    const id = header.indexOf('id');
+    const cost = header.indexOf('cost');
+    expect(id).toBeGreaterThanOrEqual(0);
+    expect(cost).toBeGreaterThanOrEqual(0);
+    const origin = (await page.locator('.lw-origin-current').innerText()).split(' · ')[0];
+    const expected = expectedPlan(sample('depots.csv'), sample('lanes.csv'), origin, date);
+    const exported = new Map(rows.slice(1).map((r) => [r[id], r[cost]]));
+    expect(exported.size).toBe(expected.depotCount);
+    for (const [depot, minor] of expected.cost) expect(exported.get(depot), depot).toBe(formatMinor(minor as Minor));
+  });
+
+  it('opens the about box with the cautions from the keyboard', async () => {
+    await page.getByRole('button', { name: 'About & cautions' }).focus();
+    await page.keyboard.press('Enter');
+    const about = page.getByRole('dialog', { name: 'About Lanewright' });
+    await about.waitFor();
+    expect(await about.innerText()).toMatch(/licensed professional practice/);
+    await page.keyboard.press('Escape');
+    expect(await about.count()).toBe(0);
+  });
+
+  it('made no request outside localhost and logged no errors', () => {
+    expect(session.requests.length).toBeGreaterThan(3);
+    expect(offsiteRequests(session)).toEqual([]);
+    expect(session.errors).toEqual([]);
+  });
+});
