@@ -55,6 +55,18 @@ describe('lanewright audit', () => {
     expect(stderr).toBe('');
   });
 
+  it('--negotiable moves the cut to the named contract', async () => {
+    // A>B nets -2.00, B>A 0.00: the lap pays 2.00. Both rebates cover it; by default the cut that is the
+    // smaller share (2 of 12 on K-1, not 2 of 10 on K-2) is chosen.
+    const withRefs = ['from,to,ref,toll,fuel,fees,rebate', 'A,B,K-1,10.00,0,0,12.00', 'B,A,K-2,10.00,0,0,10.00'].join('\n');
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': withRefs });
+    const args = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json'];
+    const plain = JSON.parse((await runCli(args)).stdout);
+    expect(plain.fix_plan.map((f: { ref: string; new_rebate_minor: number }) => [f.ref, f.new_rebate_minor])).toEqual([['K-1', 1000]]);
+    const chosen = JSON.parse((await runCli([...args, '--negotiable', 'K-2'])).stdout);
+    expect(chosen.fix_plan.map((f: { ref: string; new_rebate_minor: number; negotiable: boolean }) => [f.ref, f.new_rebate_minor, f.negotiable])).toEqual([['K-2', 800, true]]);
+  });
+
   it('reports progress on stderr with --progress', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
     const { stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress']);
