@@ -6,7 +6,7 @@ import type { LaneKey } from './lane-key';
 
 export type { LaneKey } from './lane-key';
 
-/** A lane amount a scenario may set. */
+/** A lane amount a scenario may set; `toll` is the toll of the vehicle class the network is planned for. */
 export type ScenarioAmountField = 'toll' | 'fuel' | 'fees' | 'rebate';
 
 export const SCENARIO_AMOUNT_FIELDS: readonly ScenarioAmountField[] = ['toll', 'fuel', 'fees', 'rebate'];
