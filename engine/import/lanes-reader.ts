@@ -14,12 +14,18 @@ import type { ReportCollector } from './report-collector';
 import { streamIssueToReport } from './stream-issues';
 import type { FileCounts, IssueCode } from './types';
 
+const digitsOf = (code: string) => currencyExponent(code) ?? 2;
 const KM_PER_MILE = 1.609344; // international mile, exact by definition
 const MONEY: LaneField[] = ['toll', 'fuel', 'fees', 'rebate'];
 
 export interface LanesReaderOptions {
   currency?: string;
   exchangeRates?: Record<string, string>;
+}
+
+function isBlank(cells: readonly string[]): boolean {
+  for (let k = 0; k < cells.length; k++) if (cells[k] !== '' && cells[k].trim() !== '') return false;
+  return true;
 }
 
 // V8 keeps a substring pointing into its parent; copying stored strings lets each parsed block go.
@@ -40,6 +46,9 @@ export class LanesReader implements CsvRecordSink {
   private readonly counts: FileCounts;
   private readonly classIndex = new Map<string, number>();
   private col: Partial<Record<LaneField, number>> = {};
+  private name: Partial<Record<LaneField, string>> = {};
+  private rowDigits = 2;
+  private driveUnit: string | null = null;
   private rowOk = true;
   private row = 0;
   private rowCurrency: string | null = null;
@@ -105,7 +114,12 @@ export class LanesReader implements CsvRecordSink {
     this.headerCells = cells.map((c) => c.trim());
     const h = matchLaneHeaders(cells);
     this.header = h;
-    for (const [field, column] of h.columns) this.col[field] = column.index;
+    for (const [field, column] of h.columns) {
+      this.col[field] = column.index;
+      this.name[field] = column.header;
+    }
+    const driveUnit = h.columns.get('drive')?.unit ?? null;
+    this.driveUnit = driveUnit === 'hours' || driveUnit === 'hour' ? 'h' : driveUnit;
     for (const field of ['from', 'to'] as const) {
       if (!h.columns.has(field)) {
         this.report.error(this.file, 1, field, null, 'missing-column', `required column "${field}" is missing; no lane can be read`);
@@ -160,7 +174,7 @@ export class LanesReader implements CsvRecordSink {
   }
 
   private headerOf(field: LaneField): string {
-    return this.header!.columns.get(field)!.header;
+    return this.name[field] ?? field;
   }
 
   private readRow(cells: string[], row: number): boolean {
@@ -176,14 +190,16 @@ export class LanesReader implements CsvRecordSink {
 
     // Currency of this row: its currency column, else the network's; a mark in an amount must agree.
     this.rowCurrency = null;
+    this.rowDigits = this.exponent;
     const code = cellText(cells, col.currency);
-    if (code !== '') {
+    if (code !== '' && code !== this.currency) {
       const c = lookupCurrency(code);
-      if ('code' in c) this.rowCurrency = c.code;
+      if ('code' in c) this.setRowCurrency(c.code);
       else this.fail(this.headerOf('currency'), code, 'unknown-currency', c.detail);
-    }
+    } else if (code !== '') this.rowCurrency = code;
     let toll = this.amount(cells, col.toll, 'toll');
-    const classTolls = h.classTolls.map((c) => this.amountAt(cells, c.index, c.header));
+    const classTolls: number[] = [];
+    for (let k = 0; k < h.classTolls.length; k++) classTolls.push(this.amountAt(cells, h.classTolls[k].index, h.classTolls[k].header));
     let fuel = this.amount(cells, col.fuel, 'fuel');
     let fees = this.amount(cells, col.fees, 'fees');
     let rebate = this.amount(cells, col.rebate, 'rebate');
@@ -241,6 +257,11 @@ export class LanesReader implements CsvRecordSink {
     return true;
   }
 
+  private setRowCurrency(code: string): void {
+    this.rowCurrency = code;
+    this.rowDigits = currencyExponent(code) ?? 2;
+  }
+
   private depot(cells: string[], field: 'from' | 'to'): number {
     const id = cellText(cells, this.col[field]);
     if (id === '') {
@@ -263,14 +284,13 @@ export class LanesReader implements CsvRecordSink {
   private amountAt(cells: string[], index: number, column: string): number {
     const text = cellText(cells, index);
     if (text === '') return NaN;
-    const digits = currencyExponent(this.rowCurrency ?? this.currency!) ?? 2;
-    const r = readAmount(text, digits, this.decimalComma, (c) => currencyExponent(c) ?? 2);
+    const r = readAmount(text, this.rowDigits, this.decimalComma, digitsOf);
     if (!r.ok) {
       this.fail(column, text, r.code, r.reason);
       return NaN;
     }
     if (r.currency !== null) {
-      if (this.rowCurrency === null) this.rowCurrency = r.currency;
+      if (this.rowCurrency === null) this.setRowCurrency(r.currency);
       else if (r.currency !== this.rowCurrency) {
         this.fail(column, text, 'mixed-currency', `amount in ${r.currency} on a row in ${this.rowCurrency}`);
         return NaN;
@@ -313,7 +333,8 @@ export class LanesReader implements CsvRecordSink {
       this.fail(column, text, 'negative-value', 'drive time cannot be negative');
       return NaN;
     }
-    const minutes = readDriveMinutes(text, this.header!.columns.get('drive')!.unit, (t) => {
+    // Plain whole minutes, the common case, without the general reader.
+    const minutes = /^\d+$/.test(text) && this.driveUnit !== 'h' ? Number(text) : readDriveMinutes(text, this.driveUnit, (t) => {
       const r = readNumber(t, { decimalComma: this.decimalComma, allowGrouping: false });
       return r.ok ? r.value : null;
     });

@@ -8,7 +8,7 @@ import { isoDateText, readIsoDate } from '../import/cells';
 import { PlanRequestError } from '../import/import-errors';
 import type { DepotRecord, IssueCode, LaneTable, ValidationItem } from '../import/types';
 import { formatMinor, parseMinor, type Minor } from '../money/minor';
-import { buildNetwork } from '../network/build';
+import { buildPlannedNetwork, plannedLanes, type PlannedColumns } from './planned-columns';
 import { planningSettings } from './settings';
 import type { PlannedLane, PlannedNetwork, PlanRequest } from './types';
 
@@ -91,8 +91,15 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     }
   }
 
-  const lanes: PlannedLane[] = [];
-  const record: number[] = [];
+  // Planned lanes in columns; a million PlannedLane objects would cost more than the network itself.
+  const cap = t.count;
+  const record = new Int32Array(cap);
+  const tolls = new Float64Array(cap);
+  const fuels = new Float64Array(cap);
+  const distances = new Float64Array(cap);
+  const drives = new Float64Array(cap);
+  const estimated = new Uint8Array(cap);
+  let n = 0;
   let excluded = 0;
   let rejected = 0;
   const missingReported = new Set<string>();
@@ -166,31 +173,41 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
         item(t.sourceRow[i], 'rebate', f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
       );
     }
-    record.push(i);
-    lanes.push({
-      from: depots[from].id,
-      to: depots[to].id,
-      toll: toll as Minor,
-      fuel: fuel as Minor,
-      fees: fees as Minor,
-      rebate: rebate as Minor,
-      sourceRow: t.sourceRow[i],
-      ref: t.ref[i],
-      distanceKm,
-      driveMinutes,
-      validFrom: isoDateText(t.validFrom[i]),
-      validTo: isoDateText(t.validTo[i]),
-      vehicleClass: long ? (long[i] === -1 ? null : t.classNames[long[i]]) : className,
-      distanceEstimated,
-      fuelEstimated,
-      driveEstimated,
-    });
+    record[n] = i;
+    tolls[n] = toll;
+    fuels[n] = fuel;
+    distances[n] = distanceKm;
+    drives[n] = driveMinutes;
+    estimated[n] = (distanceEstimated ? 1 : 0) | (fuelEstimated ? 2 : 0) | (driveEstimated ? 4 : 0);
+    n++;
   }
   if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
 
-  const network = build(errors.length) ? buildNetwork(depots, lanes, { currency, exponent }) : null;
+  const columns: PlannedColumns = {
+    record: record.slice(0, n),
+    toll: tolls.slice(0, n),
+    fuel: fuels.slice(0, n),
+    distanceKm: distances.slice(0, n),
+    driveMinutes: drives.slice(0, n),
+    estimated: estimated.slice(0, n),
+  };
+  const network = build(errors.length) ? buildPlannedNetwork(depots, t, columns, currency, exponent) : null;
+  let lanes: PlannedLane[] | null = null;
+  const plan: PlannedNetwork = {
+    network,
+    // Made on first use: the CLI never needs them, the desktop app and scenarios do.
+    get lanes() {
+      return (lanes ??= plannedLanes(depots, t, columns, className));
+    },
+    laneRecord: columns.record,
+    date: date === 0 ? null : isoDateText(date),
+    vehicleClass: className,
+    settings,
+    excluded,
+    notes,
+  };
   return {
-    plan: { network, lanes, laneRecord: Int32Array.from(record), date: date === 0 ? null : isoDateText(date), vehicleClass: className, settings, excluded, notes },
+    plan,
     errors,
     warnings,
     rejected,
