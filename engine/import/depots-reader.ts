@@ -30,8 +30,9 @@ export class DepotsReader implements CsvRecordSink {
     return this.counts.total;
   }
 
-  records(records: string[][], firstRow: number, badQuotes: readonly number[] = []): void {
+  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = []): void {
     const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
+    const notUtf8 = badText.length > 0 ? new Set(badText) : null;
     for (let i = 0; i < records.length; i++) {
       const cells = records[i];
       const row = firstRow + i;
@@ -44,6 +45,12 @@ export class DepotsReader implements CsvRecordSink {
       if (bad?.has(i)) {
         this.counts.rejected++;
         this.report.error(this.file, firstRow + i, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
+        continue;
+      }
+      if (notUtf8?.has(i)) {
+        this.counts.rejected++;
+        const k = cells.findIndex((c) => c.includes('\uFFFD'));
+        this.report.error(this.file, firstRow + i, this.headerCells[k] ?? `(column ${k + 1})`, cells[k], 'not-text', 'holds bytes that are not UTF-8 text (the file may be saved as Latin-1 or Windows-1252); save it as UTF-8');
         continue;
       }
       if (this.unusable || !this.readRow(cells, row)) this.counts.rejected++;

@@ -28,9 +28,9 @@ export function startImport(options: ImportOptions = {}): ImportSession {
   const collector = new ReportCollector(options.maxItems ?? 1000);
   const depots = new DepotsReader(depotsFile, collector);
   const depotStream = new CsvRecordStream({
-    records: (rows, first, bad) => {
+    records: (rows, first, bad, text) => {
       depots.decimalComma = depotStream.delimiter === ';';
-      depots.records(rows, first, bad);
+      depots.records(rows, first, bad, text);
     },
     issue: (issue) => depots.issue(issue),
   });
@@ -50,9 +50,9 @@ export function startImport(options: ImportOptions = {}): ImportSession {
       const reader = new LanesReader(lanesFile, collector, depots.index, { currency: options.currency, exchangeRates: options.exchangeRates });
       lanes = reader;
       const stream: CsvRecordStream = new CsvRecordStream({
-        records: (rows, first, bad) => {
+        records: (rows, first, bad, text) => {
           reader.decimalComma = stream.delimiter === ';';
-          reader.records(rows, first, bad);
+          reader.records(rows, first, bad, text);
         },
         issue: (issue) => reader.issue(issue),
       });

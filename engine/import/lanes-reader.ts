@@ -68,8 +68,9 @@ export class LanesReader implements CsvRecordSink {
     return this.counts.total;
   }
 
-  records(records: string[][], firstRow: number, badQuotes: readonly number[] = []): void {
+  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = []): void {
     const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
+    const notUtf8 = badText.length > 0 ? new Set(badText) : null;
     let start = 0;
     if (this.header === null) {
       while (start < records.length && records[start].every((c) => c.trim() === '')) start++;
@@ -86,6 +87,12 @@ export class LanesReader implements CsvRecordSink {
       if (bad?.has(i)) {
         this.counts.rejected++;
         this.report.error(this.file, firstRow + i, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
+        continue;
+      }
+      if (notUtf8?.has(i)) {
+        this.counts.rejected++;
+        const k = cells.findIndex((c) => c.includes('\uFFFD'));
+        this.report.error(this.file, firstRow + i, this.headerCells[k] ?? `(column ${k + 1})`, cells[k], 'not-text', 'holds bytes that are not UTF-8 text (the file may be saved as Latin-1 or Windows-1252); save it as UTF-8');
         continue;
       }
       if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;

@@ -19,9 +19,10 @@ export interface CsvStreamIssue {
 export interface CsvRecordSink {
   /**
    * Records in order; `firstRow` is the spreadsheet row of records[0]. Blank records are included
-   * (as [""]). `badQuotes` lists positions in `records` whose quoting is malformed.
+   * (as [""]). `badQuotes` lists positions in `records` whose quoting is malformed; `badText`
+   * those holding U+FFFD, which a decoder puts where bytes were not UTF-8 (a Latin-1 file, say).
    */
-  records(records: string[][], firstRow: number, badQuotes: readonly number[]): void;
+  records(records: string[][], firstRow: number, badQuotes: readonly number[], badText: readonly number[]): void;
   issue(issue: CsvStreamIssue): void;
 }
 
@@ -131,7 +132,9 @@ export class CsvRecordStream {
     if (rows.length === 0) return;
     const first = this.nextRow;
     this.nextRow += rows.length;
-    this.sink.records(rows, first, badQuoteRows);
+    const badText: number[] = [];
+    if (block.includes('\uFFFD')) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD')) && badText.push(i));
+    this.sink.records(rows, first, badQuoteRows, badText);
   }
 
   private detectLayout(block: string): void {

@@ -215,3 +215,30 @@ describe('planning by date and vehicle class', () => {
     expect(r.network!.laneDistanceKm[1]).toBeGreaterThan(0);
   });
 });
+
+describe('importer extras', () => {
+  it('rejects rows holding bytes that were not UTF-8 (U+FFFD from the decoder)', () => {
+    const r = importNetwork('id,name,lat,lon\nA,K\ufffdln,50,6\nB,b,51,5\n', 'from,to\nB,B\n');
+    expect(r.report.errors[0]).toMatchObject({ code: 'not-text', row: 2, column: 'name' });
+    expect(r.report.files[0]).toMatchObject({ total: 2, accepted: 1, rejected: 1 });
+  });
+
+  it('importNetworkAsync reads async chunk sources like the synchronous form', async () => {
+    const { importNetworkAsync } = await import('../../../engine/import/import-network');
+    async function* chunks(text: string) {
+      for (let i = 0; i < text.length; i += 7) yield text.slice(i, i + 7);
+    }
+    const a = await importNetworkAsync(chunks(DEPOTS_MESSY), chunks(LANES_MESSY));
+    expect(lanesOf(a)).toEqual(lanesOf(importNetwork(DEPOTS, LANES)));
+  });
+
+  it('keeps the lane table for the UI: every class, validity, reference and notes', async () => {
+    const { laneRecordAt } = await import('../../../engine/import/lane-table');
+    const r = importNetwork(DEPOTS, 'from,to,ref,toll,toll_2axle,valid_from,valid_to,notes\nA,B,R-1,9.00,2.00,2026-01-01,2026-06-30,"Backhaul, clause 4"\n', { plan: { date: '2027-01-01' } });
+    // Not valid on the planned date, so not in the network, but still in the lane table.
+    expect(r.network!.laneCount).toBe(0);
+    expect(laneRecordAt(r.lanes, r.depots, r.exponent, 0)).toMatchObject({
+      from: 'A', to: 'B', ref: 'R-1', toll: '9.00', classTolls: { '2axle': '2.00' }, validFrom: '2026-01-01', validTo: '2026-06-30', notes: 'Backhaul, clause 4', sourceRow: 2,
+    });
+  });
+});
