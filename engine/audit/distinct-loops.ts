@@ -6,6 +6,7 @@
 
 import { componentHasCycle, strongComponents } from '../loops/strong-components';
 import { findNegativeLoop } from '../loops/find-negative-loop';
+import { findNegativeLoops } from '../loops/find-negative-loops';
 import { loopKey, type RebateLoop } from '../loops/rebate-loop';
 import type { Network } from '../network/types';
 import { labelCorrect, UNBOUNDED } from '../routes/label-correcting';
@@ -79,10 +80,13 @@ export function findDistinctLoops(network: Network, options: DistinctLoopsOption
   // First pass: one loop per component, so every component with a loop is reported even under a small cap.
   const candidates = members.map((m, c) => c).filter((c) => state[members[c][0]] === UNBOUNDED && componentHasCycle(network, members[c], base));
   let capReached = false;
+  // All first searches share one solve: one call per component would allocate network-sized arrays
+  // each time, which is quadratic when thousands of small components hold loops.
+  const firstLoops = findNegativeLoops(network, candidates.map((c) => members[c]), base);
   candidates.forEach((component, i) => {
     options.onProgress?.(i, candidates.length);
     const root: Branch = { component, closed: [] };
-    const loop = search(root);
+    const loop = firstLoops[i];
     if (!loop) return;
     known.add(loopKey(loop));
     loops.push(loop);
