@@ -4,19 +4,18 @@
 
 import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
 import { readAmount } from './amount-text';
-import { cellText, readDriveMinutes, readIsoDate } from './cells';
+import { cellText, readIsoDate } from './cells';
 import { convertMinor, readRate } from './currency-convert';
 import { currencyExponent, lookupCurrency } from './currencies';
-import { readNumber } from './decimal-text';
+import { readDistanceKm, readDriveTime } from './lane-cells';
 import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './headers';
 import { LaneTableBuilder } from './lane-table';
+import { firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { streamIssueToReport } from './stream-issues';
 import type { FileCounts, IssueCode } from './types';
 
 const digitsOf = (code: string) => currencyExponent(code) ?? 2;
-const KM_PER_MILE = 1.609344; // international mile, exact by definition
-const MONEY: LaneField[] = ['toll', 'fuel', 'fees', 'rebate'];
 
 export interface LanesReaderOptions {
   currency?: string;
@@ -147,31 +146,8 @@ export class LanesReader implements CsvRecordSink {
     }
   }
 
-  // The network currency: the first one the file names (currency column, bracketed header unit or
-  // a mark in an amount), else EUR. Decided before the first row is read so every amount has its digits.
   private pickCurrency(records: string[][], start: number): void {
-    const h = this.header!;
-    let found: string | null = null;
-    for (const field of MONEY) {
-      const unit = h.columns.get(field)?.unit;
-      if (!found && unit && /^[a-z]{3}$/.test(unit) && currencyExponent(unit) !== undefined) found = unit.toUpperCase();
-    }
-    for (let i = start; i < records.length && !found; i++) {
-      const code = cellText(records[i], this.col.currency);
-      if (code !== '') {
-        const c = lookupCurrency(code);
-        if ('code' in c) found = c.code;
-        continue;
-      }
-      for (const field of MONEY) {
-        const text = cellText(records[i], this.col[field]);
-        if (text === '') continue;
-        const r = readAmount(text, 2, this.decimalComma);
-        if (r.ok && r.currency) found = r.currency;
-        if (found) break;
-      }
-    }
-    this.currency = found ?? 'EUR';
+    this.currency = firstCurrencyNamed(records, start, this.header!, this.decimalComma) ?? 'EUR';
     this.exponent = currencyExponent(this.currency) ?? 2;
   }
 
@@ -309,47 +285,23 @@ export class LanesReader implements CsvRecordSink {
   private distance(cells: string[]): number {
     const text = cellText(cells, this.col.distance);
     if (text === '') return NaN;
-    const column = this.headerOf('distance');
-    let unit = this.header!.columns.get('distance')!.unit ?? 'km';
-    const unitText = cellText(cells, this.col.distance_unit).toLowerCase();
-    if (unitText !== '') {
-      if (['km', 'kilometres', 'kilometers'].includes(unitText)) unit = 'km';
-      else if (['mi', 'mile', 'miles'].includes(unitText)) unit = 'mi';
-      else {
-        this.fail(this.headerOf('distance_unit'), unitText, 'bad-unit', 'distance unit must be km or mi');
-        return NaN;
-      }
-    }
-    const r = readNumber(text, { decimalComma: this.decimalComma, allowGrouping: true });
-    if (!r.ok) {
-      this.fail(column, text, r.code, r.reason);
-      return NaN;
-    }
-    if (r.value < 0) {
-      this.fail(column, text, 'negative-value', 'distance cannot be negative');
-      return NaN;
-    }
-    return unit === 'km' || unit.startsWith('kilo') ? r.value : r.value * KM_PER_MILE;
+    const unitText = cellText(cells, this.col.distance_unit);
+    const r = readDistanceKm(text, this.header!.columns.get('distance')!.unit, unitText, this.decimalComma);
+    if (typeof r === 'number') return r;
+    if (r.code === 'bad-unit') this.fail(this.headerOf('distance_unit'), unitText, r.code, r.reason);
+    else this.fail(this.headerOf('distance'), text, r.code, r.reason);
+    return NaN;
   }
 
   private drive(cells: string[]): number {
     const text = cellText(cells, this.col.drive);
     if (text === '') return NaN;
-    const column = this.headerOf('drive');
-    if (/^-/.test(text)) {
-      this.fail(column, text, 'negative-value', 'drive time cannot be negative');
-      return NaN;
-    }
     // Plain whole minutes, the common case, without the general reader.
-    const minutes = /^\d+$/.test(text) && this.driveUnit !== 'h' ? Number(text) : readDriveMinutes(text, this.driveUnit, (t) => {
-      const r = readNumber(t, { decimalComma: this.decimalComma, allowGrouping: false });
-      return r.ok ? r.value : null;
-    });
-    if (minutes === null || !Number.isFinite(minutes)) {
-      this.fail(column, text, 'bad-duration', 'drive time must be minutes, hours per the header, h:mm or an ISO 8601 duration (PT4H30M)');
-      return NaN;
-    }
-    return minutes;
+    if (this.driveUnit !== 'h' && /^\d+$/.test(text)) return Number(text);
+    const r = readDriveTime(text, this.driveUnit, this.decimalComma);
+    if (typeof r === 'number') return r;
+    this.fail(this.headerOf('drive'), text, r.code, r.reason);
+    return NaN;
   }
 
   private date(cells: string[], field: 'valid_from' | 'valid_to'): number {
