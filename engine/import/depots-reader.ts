@@ -15,6 +15,8 @@ const LABEL: Record<DepotField, string> = { id: 'id', name: 'name', lat: 'lat', 
 export class DepotsReader implements CsvRecordSink {
   readonly depots: DepotRecord[] = [];
   readonly index = new Map<string, number>();
+  /** Ids of depot rows that were rejected, with their row, so lanes naming them can say why. */
+  readonly rejectedIds = new Map<string, number>();
   private header: HeaderMatch<DepotField> | null = null;
   private headerCells: string[] = [];
   private unusable = false;
@@ -120,7 +122,11 @@ export class DepotsReader implements CsvRecordSink {
     if (id !== '' && this.index.has(id)) {
       fail(cols.get('id')!.header, id, 'duplicate-depot', `duplicate depot id; first defined at row ${this.depots[this.index.get(id)!].sourceRow}`);
     }
-    if (!ok) return false;
+    if (!ok) {
+      if (id !== '' && !this.index.has(id) && !this.rejectedIds.has(id)) this.rejectedIds.set(id, row);
+      return false;
+    }
+    this.rejectedIds.delete(id);
     let extra: Record<string, string> | null = null;
     for (const u of this.header!.unknown) {
       const value = cellText(cells, u.index);

@@ -47,7 +47,7 @@ export function startImport(options: ImportOptions = {}): ImportSession {
   const openLanes = () => {
     if (phase === 'depots') session.finishDepots();
     if (lanes === null) {
-      const reader = new LanesReader(lanesFile, collector, depots.index, { currency: options.currency, exchangeRates: options.exchangeRates });
+      const reader = new LanesReader(lanesFile, collector, depots.index, { currency: options.currency, exchangeRates: options.exchangeRates }, depots.rejectedIds, depotsFile);
       lanes = reader;
       const stream: CsvRecordStream = new CsvRecordStream({
         records: (rows, first, bad, text) => {

@@ -57,6 +57,8 @@ export class LanesReader implements CsvRecordSink {
     private readonly report: ReportCollector,
     private readonly depotIndex: ReadonlyMap<string, number>,
     private readonly options: LanesReaderOptions,
+    private readonly rejectedDepots: ReadonlyMap<string, number> = new Map(),
+    private readonly depotsFile = 'the depots file',
   ) {
     this.counts = report.file(file, 'lanes');
     this.currency = options.currency ? options.currency.toUpperCase() : null;
@@ -253,7 +255,13 @@ export class LanesReader implements CsvRecordSink {
     }
     const index = this.depotIndex.get(id);
     if (index === undefined) {
-      this.fail(this.headerOf(field), id, 'unknown-depot', 'no depot with this id in the depots file');
+      const rejectedAt = this.rejectedDepots.get(id);
+      this.fail(
+        this.headerOf(field),
+        id,
+        'unknown-depot',
+        rejectedAt === undefined ? `no depot with this id in ${this.depotsFile}` : `the depot's row ${rejectedAt} in ${this.depotsFile} was rejected (see its error)`,
+      );
       return -1;
     }
     return index;

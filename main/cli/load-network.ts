@@ -100,7 +100,10 @@ export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
     ...(result.report.omitted > 0 ? [`... ${result.report.omitted} more problem(s) not listed (see lanewright check)`] : []),
     ...result.notes.map((n) => `note: ${n}`),
   ];
-  if (result.report.errors.length > 0) lines.push(`note: --skip-invalid: planning with ${result.report.accepted} accepted row(s), ${result.report.rejected} rejected`);
+  if (result.report.errors.length > 0) {
+    for (const f of result.report.files) lines.push(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
+    lines.push(`note: --skip-invalid: planning with the ${result.report.accepted} accepted row(s); ${result.report.rejected} rejected`);
+  }
   for (const line of lines) process.stderr.write(line + '\n');
   return result as ImportResult & { network: Network };
 }
