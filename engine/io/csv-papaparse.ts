@@ -41,10 +41,10 @@ export function parseCsvText(text: string): CsvTable {
  * (csv-record-stream.ts) cuts blocks only at line breaks outside quotes, so every record is whole.
  * A block that ends with a line break yields no empty record for it.
  */
-export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n'): { rows: string[][]; unclosedQuote: boolean; badQuoteRows: number[] } {
+export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r'): { rows: string[][]; unclosedQuote: boolean; badQuoteRows: number[] } {
   const result = Papa.parse<string[]>(block, { delimiter, newline, skipEmptyLines: false });
   const rows = result.data;
-  if (block.endsWith('\n') && rows.length > 0) {
+  if (block.endsWith(newline) && rows.length > 0) {
     const last = rows[rows.length - 1];
     if (last.length === 1 && last[0] === '') rows.pop();
   }

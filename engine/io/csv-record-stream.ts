@@ -41,8 +41,10 @@ export class CsvRecordStream {
   private swallowRow = 0;
   private nextRow = 1;
   private charsSeen = 0;
+  private pendingIssue: { columnIndex: number; value: string } | null = null;
+  private lineOpen = false;
   delimiter = ',';
-  newline: '\n' | '\r\n' = '\n';
+  newline: '\n' | '\r\n' | '\r' = '\n';
 
   constructor(private readonly sink: CsvRecordSink) {}
 
@@ -76,8 +78,8 @@ export class CsvRecordStream {
     }
     this.pending += chunk;
     const cut = this.scan();
-    if (cut > 0) this.emit(this.pending.slice(0, cut), false);
     if (cut > 0) {
+      this.emit(this.pending.slice(0, cut));
       this.pending = this.pending.slice(cut);
       this.scanned -= cut;
     }
@@ -92,7 +94,7 @@ export class CsvRecordStream {
     }
     if (this.pending.length === 0) return;
     if (!this.inQuotes) {
-      this.emit(this.pending, true);
+      this.emit(this.pending);
       this.pending = '';
       return;
     }
@@ -126,8 +128,8 @@ export class CsvRecordStream {
     return cut;
   }
 
-  private emit(block: string, last: boolean): void {
-    if (!last || this.nextRow === 1) this.detectLayout(block);
+  private emit(block: string): void {
+    this.detectLayout(block);
     const { rows, badQuoteRows } = parseCsvBlock(block, this.delimiter, this.newline);
     if (rows.length === 0) return;
     const first = this.nextRow;
@@ -140,8 +142,12 @@ export class CsvRecordStream {
   private detectLayout(block: string): void {
     if (this.nextRow !== 1) return;
     const end = block.indexOf('\n');
-    const line = end === -1 ? block : block.slice(0, end);
-    this.newline = end > 0 && block.charCodeAt(end - 1) === 13 ? '\r\n' : '\n';
+    const cr = block.indexOf('\r');
+    // Old Mac files break lines with CR alone; they are buffered whole (no LF to cut at) and read here.
+    const crOnly = end === -1 && cr !== -1;
+    const lineEnd = crOnly ? cr : end;
+    const line = lineEnd === -1 ? block : block.slice(0, lineEnd);
+    this.newline = crOnly ? '\r' : end > 0 && block.charCodeAt(end - 1) === 13 ? '\r\n' : '\n';
     const counts = [',', ';', '\t'].map((d) => line.split(d).length - 1);
     const best = Math.max(...counts);
     this.delimiter = best === 0 ? ',' : [',', ';', '\t'][counts.indexOf(best)];
@@ -158,7 +164,7 @@ export class CsvRecordStream {
       if (c === 34) q = !q;
       else if (c === 10 && !q) cut = i + 1;
     }
-    if (cut > 0) this.emit(s.slice(0, cut), false);
+    if (cut > 0) this.emit(s.slice(0, cut));
     const rest = s.slice(cut);
     if (this.nextRow === 1) this.detectLayout(rest);
     const { rows } = parseCsvBlock(rest, this.delimiter, this.newline);
@@ -171,9 +177,6 @@ export class CsvRecordStream {
     this.pendingIssue = { columnIndex: broken.length - 1, value: broken[broken.length - 1].split('\n')[0].slice(0, 40).trim() };
     this.countSwallowed(rest);
   }
-
-  private pendingIssue: { columnIndex: number; value: string } | null = null;
-  private lineOpen = false;
 
   private countSwallowed(text: string): void {
     let start = 0;

@@ -38,6 +38,14 @@ describe('CsvRecordStream', () => {
     expect(read(['id\tname\nA\tB\n']).records[1].cells).toEqual(['A', 'B']);
   });
 
+  it('reads CR-only line breaks (old Mac files)', () => {
+    expect(read(['id,name\rA,"x\ry"\rB,z\r']).records.map((r) => [r.row, r.cells])).toEqual([
+      [1, ['id', 'name']],
+      [2, ['A', 'x\ry']],
+      [3, ['B', 'z']],
+    ]);
+  });
+
   it('gives the same records however the text is cut into chunks', () => {
     const cell = fc.string({ unit: fc.constantFrom('a', 'b', ',', '"', '\n', '\r\n', ' ', '1', '.') });
     fc.assert(
