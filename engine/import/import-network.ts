@@ -175,19 +175,31 @@ export function importNetwork(depots: TextSource, lanes: TextSource, options: Im
   return session.result();
 }
 
-/** Like importNetwork, for async chunk sources (a File's stream through TextDecoderStream); yields between chunks. */
+/**
+ * Like importNetwork, for async chunk sources (a File's stream through TextDecoderStream). Between
+ * chunks it awaits `pause` when given (a worker passes a zero-delay timer so a cancel message can
+ * arrive and set the signal), since the engine itself has no timers.
+ */
 export async function importNetworkAsync(
   depots: TextSource | AsyncIterable<string>,
   lanes: TextSource | AsyncIterable<string>,
-  options: ImportOptions = {},
+  options: ImportOptions & { pause?: () => Promise<void> } = {},
 ): Promise<ImportResult> {
   const session = startImport(options);
-  const pump = async (source: TextSource | AsyncIterable<string>, feed: (chunk: string) => void) => {
+  const pump = async (source: TextSource | AsyncIterable<string>, feed: (chunk: string, fraction?: number) => void) => {
+    const chunks: { text: string; fraction?: number }[] = [];
     if (typeof source === 'string' || Symbol.iterator in (source as object)) {
-      feedAll(source as TextSource, feed);
+      feedAll(source as TextSource, (text, fraction) => chunks.push({ text, fraction }));
+      for (const c of chunks) {
+        feed(c.text, c.fraction);
+        if (options.pause) await options.pause();
+      }
       return;
     }
-    for await (const chunk of source as AsyncIterable<string>) feed(chunk);
+    for await (const chunk of source as AsyncIterable<string>) {
+      feed(chunk);
+      if (options.pause) await options.pause();
+    }
   };
   await pump(depots, session.feedDepots);
   session.finishDepots();

@@ -242,3 +242,19 @@ describe('importer extras', () => {
     });
   });
 });
+
+describe('importNetworkAsync cancelling', () => {
+  it('awaits pause between chunks, so a cancel that arrives meanwhile stops the import', async () => {
+    const { importNetworkAsync } = await import('../../../engine/import/import-network');
+    const signal = { aborted: false };
+    let pauses = 0;
+    const big = 'from,to,toll\n' + 'A,B,1.00\n'.repeat(300_000);
+    const run = importNetworkAsync(DEPOTS, big, {
+      signal,
+      pause: async () => {
+        if (++pauses === 2) signal.aborted = true;
+      },
+    });
+    await expect(run).rejects.toBeInstanceOf(ImportCancelledError);
+  });
+});
