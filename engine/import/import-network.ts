@@ -115,29 +115,41 @@ function assemble(collector: ReportCollector, depots: DepotsReader, lanes: Lanes
     importReport,
     notes,
   };
-  return planFrom(base, options.plan ?? {}, options.skipInvalid ?? false, lanesFile);
+  return planFrom(base, options.plan ?? {}, options.skipInvalid ?? false, lanesFile, options.maxItems ?? 1000);
 }
 
 type ImportBase = Omit<ImportResult, 'network' | 'report' | 'plan'>;
 
-function planFrom(base: ImportBase, request: PlanRequest, skipInvalid: boolean, lanesFile: string): ImportResult {
+function planFrom(base: ImportBase, request: PlanRequest, skipInvalid: boolean, lanesFile: string, maxItems: number): ImportResult {
   const importReport = base.importReport;
   // The stored errors are capped, but the first ones are always kept: none stored means none found.
   const outcome = planLanes({ ...base, lanesFile }, request, (planErrors) => skipInvalid || (importReport.errors.length === 0 && planErrors === 0));
-  const report = mergeReport(importReport, outcome.errors, outcome.warnings, outcome.rejected, lanesFile);
+  const report = mergeReport(importReport, outcome.errors, outcome.warnings, outcome.rejected, lanesFile, maxItems, outcome.dropped);
   return { ...base, network: outcome.plan.network, report, plan: outcome.plan, notes: [...base.notes, ...outcome.plan.notes] };
 }
 
-function mergeReport(base: ValidationReport, errors: ValidationReport['errors'], warnings: ValidationReport['warnings'], rejected: number, lanesFile: string): ValidationReport {
+function mergeReport(
+  base: ValidationReport,
+  errors: ValidationReport['errors'],
+  warnings: ValidationReport['warnings'],
+  rejected: number,
+  lanesFile: string,
+  maxItems: number,
+  dropped: number,
+): ValidationReport {
   const files = base.files.map((f) => (f.kind === 'lanes' && f.file === lanesFile ? { ...f, accepted: f.accepted - rejected, rejected: f.rejected + rejected } : { ...f }));
+  // The plan's items obey the same cap as the import's, so a million net-negative lanes stay cheap.
+  const allErrors = [...base.errors, ...errors];
+  const allWarnings = [...base.warnings, ...warnings];
+  const omitted = Math.max(0, allErrors.length - maxItems) + Math.max(0, allWarnings.length - maxItems);
   return {
     total: base.total,
     accepted: base.accepted - rejected,
     rejected: base.rejected + rejected,
-    errors: [...base.errors, ...errors],
-    warnings: [...base.warnings, ...warnings],
+    errors: allErrors.slice(0, maxItems),
+    warnings: allWarnings.slice(0, maxItems),
     files,
-    omitted: base.omitted,
+    omitted: base.omitted + omitted + dropped,
   };
 }
 
@@ -145,9 +157,9 @@ function mergeReport(base: ValidationReport, errors: ValidationReport['errors'],
  * Re-plans an import for another date, vehicle class or settings without reading the files again.
  * The result's report is the import's problems plus this plan's.
  */
-export function planNetwork(result: ImportResult, request: PlanRequest, options: { skipInvalid?: boolean } = {}): ImportResult {
+export function planNetwork(result: ImportResult, request: PlanRequest, options: { skipInvalid?: boolean; maxItems?: number } = {}): ImportResult {
   const { network: _n, report: _r, plan: _p, ...base } = result;
-  return planFrom({ ...base, notes: base.notes.filter((n) => !result.plan.notes.includes(n)) }, request, options.skipInvalid ?? false, lanesFileOf(result));
+  return planFrom({ ...base, notes: base.notes.filter((n) => !result.plan.notes.includes(n)) }, request, options.skipInvalid ?? false, lanesFileOf(result), options.maxItems ?? 1000);
 }
 
 function lanesFileOf(result: ImportResult): string {

@@ -32,12 +32,13 @@ export type IssueCode =
   | 'mixed-currency'
   | 'no-toll-for-class'
   | 'no-fuel-price'
+  // errors or warnings
+  | 'no-data-rows' // an error for depots (nothing to plan), a warning for lanes
   // warnings
   | 'unknown-column'
   | 'duplicate-lane'
   | 'self-lane'
-  | 'net-negative-lane'
-  | 'no-data-rows';
+  | 'net-negative-lane';
 
 /** One problem, located as a spreadsheet shows it. `row` 1 is the header; null = the whole file. */
 export interface ValidationItem {

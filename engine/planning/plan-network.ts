@@ -12,6 +12,9 @@ import { buildPlannedNetwork, plannedLanes, type PlannedColumns } from './planne
 import { planningSettings } from './settings';
 import type { PlannedLane, PlannedNetwork, PlanRequest } from './types';
 
+// Items past this are dropped before the report's own cap; counting them is not worth the strings.
+const MAX_PLAN_ITEMS = 100_000;
+
 export interface PlanInput {
   depots: readonly DepotRecord[];
   lanes: LaneTable;
@@ -26,6 +29,8 @@ export interface PlanOutcome {
   warnings: ValidationItem[];
   /** Lane rows accepted by the import but rejected by this plan (e.g. no toll for the class). */
   rejected: number;
+  /** Warnings counted but not made into items (past a cap). */
+  dropped: number;
 }
 
 function money(text: string | null, digits: number, option: string): number {
@@ -102,6 +107,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   let n = 0;
   let excluded = 0;
   let rejected = 0;
+  let dropped = 0;
   const missingReported = new Set<string>();
   for (let i = 0; i < t.count; i++) {
     if (!validOn(i)) {
@@ -167,7 +173,8 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     const fees = t.fees[i];
     const rebate = t.rebate[i];
     const net = toll + fuel + fees - rebate;
-    if (net < 0) {
+    if (net < 0 && warnings.length >= MAX_PLAN_ITEMS) dropped++;
+    else if (net < 0) {
       const f = (v: number) => formatMinor(v as Minor, exponent);
       warnings.push(
         item(t.sourceRow[i], 'rebate', f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
@@ -211,5 +218,6 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     errors,
     warnings,
     rejected,
+    dropped,
   };
 }

@@ -258,3 +258,15 @@ describe('importNetworkAsync cancelling', () => {
     await expect(run).rejects.toBeInstanceOf(ImportCancelledError);
   });
 });
+
+describe('report cap', () => {
+  it('stores at most maxItems items of each kind and counts the rest as omitted', () => {
+    const lanes = 'from,to,toll,fuel,rebate\n' + 'A,B,1,0,5\n'.repeat(30) + 'A,Z,1,0,0\n'.repeat(20);
+    const r = importNetwork(DEPOTS, lanes, { maxItems: 10, skipInvalid: true });
+    expect(r.report.errors).toHaveLength(10);
+    expect(r.report.warnings).toHaveLength(10);
+    // 20 unknown-depot errors, 29 duplicate lanes and 30 net-negative lanes: 10 + 10 kept.
+    expect(r.report.omitted).toBe(20 - 10 + (29 + 30) - 10);
+    expect(r.report.files[1]).toMatchObject({ total: 50, accepted: 30, rejected: 20 });
+  });
+});
