@@ -22,12 +22,12 @@ const USAGE = `usage:
   lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
   lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
                     [--loops-out FILE] [--geojson-out FILE]
-  Planning options (routes, export, audit, compare): [--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid]
-    [--drive-limit eu|us|HOURS] [--detour-factor F] [--fuel-consumption L_PER_100KM] [--fuel-price PRICE]
-    [--average-speed KMH] [--default-toll AMOUNT] [--currency CODE] [--rates CODE=RATE,...]
   lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
                    [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
   lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
+  Planning options (routes, check, export, audit, compare): [--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid]
+    [--drive-limit eu|us|HOURS] [--detour-factor F] [--fuel-consumption L_PER_100KM] [--fuel-price PRICE]
+    [--average-speed KMH] [--default-toll AMOUNT] [--currency CODE] [--rates CODE=RATE,...]
 
 Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
 local regulations apply; defer to local codes and licensed practice.`;
