@@ -3,7 +3,7 @@
 
 import { useEffect, useMemo, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { laneKeysOf } from '../../engine/scenario/lane-key';
+import { laneKeyIndex, laneKeysOf } from '../../engine/scenario/lane-key';
 import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
 import { AboutDialog } from '../components/AboutDialog/AboutDialog';
 import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';
@@ -32,9 +32,10 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const { exportFile } = useCommands(bench, ui);
 
   const keys = useMemo(() => (network ? laneKeysOf(Array.from(network.laneFrom, (a, e) => ({ from: network.depotIds[a], to: network.depotIds[network.laneTo[e]], ref: network.laneRef[e] }))) : []), [network]);
+  const keyIndex = useMemo(() => laneKeyIndex(keys), [keys]);
   const amounts = useMemo(
-    () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario) : null),
-    [network, keys, scenario],
+    () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario, keyIndex) : null),
+    [network, keys, scenario, keyIndex],
   );
 
   // A newly imported network without the chosen origin starts from its first depot.

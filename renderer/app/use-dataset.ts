@@ -66,6 +66,7 @@ export function useDataset(engine: Engine): Dataset {
 
   const continueWithAccepted = useCallback(async () => (pending ? load(pending.files, pending.plan, true) : false), [load, pending]);
 
+
   const replan = useCallback(
     async (plan: PlanChoice): Promise<boolean> => {
       try {

@@ -138,7 +138,11 @@ export function useWorkbench(host: LanewrightHost) {
   const importFiles = useCallback(
     async (files: DatasetFiles) => {
       const ok = await dataset.load(files, planOf(settingsRef.current));
-      if (ok) setSelected(null);
+      if (ok) {
+        setSelected(null);
+        setScenario(emptyScenario());
+        setMessage(`Imported ${files.depots.name} and ${files.lanes.name}.`);
+      }
       return ok;
     },
     [dataset],

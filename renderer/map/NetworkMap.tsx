@@ -7,7 +7,7 @@ import 'leaflet/dist/leaflet.css';
 import { useEffect, useRef, useState } from 'react';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { addBasemap } from './basemap';
-import { depotLayer, laneLayer, loopLayer, routeLayer, treeLayer } from './network-layers';
+import { depotMarkers, laneLayer, loopLayer, routeLayer, solveMarkers, styleDepots, treeLayer } from './network-layers';
 import './map.css';
 
 export interface NetworkMapProps {
@@ -84,7 +84,22 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
   useLayer(map, network && solve && renderer ? () => treeLayer(network, solve, renderer) : null, [network, solve]);
   useLayer(map, network && route && renderer ? () => routeLayer(network, route, renderer) : null, [network, route]);
   useLayer(map, network && solve && solve.loops.length > 0 && renderer ? () => loopLayer(network, solve, renderer) : null, [network, solve]);
-  useLayer(map, network && renderer ? () => depotLayer(network, solve, selected, renderer, { onSelect: (d) => selectRef.current(d) }) : null, [network, solve, selected]);
+  // Depot circles are made once per network (thousands of them) and only restyled per solve.
+  const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);
+  useEffect(() => {
+    if (!map || !network || !renderer) return;
+    const made = depotMarkers(network, renderer, { onSelect: (d) => selectRef.current(d) });
+    made.layer.addTo(map);
+    setDepots(made.markers);
+    return () => {
+      made.layer.remove();
+      setDepots(null);
+    };
+  }, [map, network, renderer]);
+  useEffect(() => {
+    if (depots && network && depots.length === network.depotIds.length) styleDepots(depots, solve, selected);
+  }, [depots, network, solve, selected]);
+  useLayer(map, network && solve ? () => solveMarkers(network, solve, { onSelect: (d) => selectRef.current(d) }) : null, [network, solve]);
 
   const loopCount = solve?.loops.length ?? 0;
   const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;

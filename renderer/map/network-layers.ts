@@ -75,27 +75,60 @@ function diamond(id: string): L.DivIcon {
   });
 }
 
-/** Depot markers by status: circles for bounded depots, diamonds marked ∞ for unbounded ones. */
-export function depotLayer(network: NetworkView, solve: SolveView | null, selected: number | null, renderer: L.Renderer, handlers: DepotHandlers): L.Layer {
-  const group = L.layerGroup();
-  const unboundedCount = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
+/** One canvas circle per depot, created once per network; styles follow the solve (styleDepots). */
+export function depotMarkers(network: NetworkView, renderer: L.Renderer, handlers: DepotHandlers): { layer: L.LayerGroup; markers: L.CircleMarker[] } {
+  const markers: L.CircleMarker[] = [];
   for (let d = 0; d < network.depotIds.length; d++) {
-    const at: L.LatLngExpression = [network.lat[d], network.lon[d]];
-    const status = solve ? solve.status[d] : -1;
-    const title = `${network.depotIds[d]} · ${network.depotNames[d]}`;
-    let marker: L.Layer;
-    if (status === 2 && unboundedCount <= MAX_DIAMONDS) {
-      marker = L.marker(at, { icon: diamond(network.depotIds[d]), title: `${title} (cost unbounded: rebate loop)`, alt: network.depotIds[d], keyboard: false });
-    } else {
-      const style = solve && d === solve.origin ? STYLE.origin : d === selected ? STYLE.selected : status === 1 ? STYLE.reachable : status === 0 ? STYLE.unreachable : status === 2 ? { ...STYLE.unreachable, color: STYLE.loop.color, weight: 3 } : STYLE.depot;
-      marker = L.circleMarker(at, { ...style, renderer }).bindTooltip(title, { direction: 'top' });
-    }
+    const marker = L.circleMarker([network.lat[d], network.lon[d]], { ...STYLE.depot, renderer }).bindTooltip(`${network.depotIds[d]} · ${network.depotNames[d]}`, { direction: 'top' });
     marker.on('click', () => handlers.onSelect(d));
-    group.addLayer(marker);
+    markers.push(marker);
   }
-  if (solve) {
-    const o = solve.origin;
-    group.addLayer(L.tooltip({ permanent: true, direction: 'right', offset: [10, 0], className: 'lw-origin-label' }).setLatLng([network.lat[o], network.lon[o]]).setContent(`Origin ${network.depotIds[o]}`));
+  return { layer: L.layerGroup(markers), markers };
+}
+
+function unboundedCount(solve: SolveView): number {
+  let n = 0;
+  for (let d = 0; d < solve.status.length; d++) if (solve.status[d] === 2) n++;
+  return n;
+}
+
+/** Restyles the depot circles for a solve: origin, selection, reachable, unreachable (dashed), unbounded (ring). */
+export function styleDepots(markers: readonly L.CircleMarker[], solve: SolveView | null, selected: number | null): void {
+  const ringsOnly = solve !== null && unboundedCount(solve) > MAX_DIAMONDS;
+  // Thousands of depots: smaller circles, so the lanes between them stay visible.
+  const scale = markers.length > 1000 ? 0.5 : 1;
+  markers.forEach((marker, d) => {
+    const status = solve ? solve.status[d] : -1;
+    const style =
+      solve && d === solve.origin
+        ? STYLE.origin
+        : d === selected
+          ? STYLE.selected
+          : status === 1
+            ? STYLE.reachable
+            : status === 0
+              ? STYLE.unreachable
+              : status === 2
+                ? { ...STYLE.unreachable, color: STYLE.loop.color, weight: ringsOnly ? 3 : 0, fillOpacity: ringsOnly ? 1 : 0 }
+                : STYLE.depot;
+    marker.setStyle({ dashArray: undefined, ...style });
+    marker.setRadius(Math.max(2, style.radius * scale));
+  });
+}
+
+/** Unbounded depots as diamonds marked ∞, plus the origin's label; rebuilt per solve (few elements). */
+export function solveMarkers(network: NetworkView, solve: SolveView, handlers: DepotHandlers): L.Layer {
+  const group = L.layerGroup();
+  if (unboundedCount(solve) <= MAX_DIAMONDS) {
+    for (let d = 0; d < solve.status.length; d++) {
+      if (solve.status[d] !== 2) continue;
+      const title = `${network.depotIds[d]} · ${network.depotNames[d]} (cost unbounded: rebate loop)`;
+      const marker = L.marker([network.lat[d], network.lon[d]], { icon: diamond(network.depotIds[d]), title, alt: network.depotIds[d], keyboard: false });
+      marker.on('click', () => handlers.onSelect(d));
+      group.addLayer(marker);
+    }
   }
+  const o = solve.origin;
+  group.addLayer(L.tooltip({ permanent: true, direction: 'right', offset: [10, 0], className: 'lw-origin-label' }).setLatLng([network.lat[o], network.lon[o]]).setContent(`Origin ${network.depotIds[o]}`));
   return group;
 }

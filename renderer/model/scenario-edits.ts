@@ -59,7 +59,7 @@ export interface BaseAmounts {
 }
 
 /** Applies the scenario's amount and closure changes to the base amounts, lanes found by key. */
-export function applyScenarioAmounts(base: BaseAmounts, keys: readonly LaneKey[], scenario: Scenario | null): LaneAmounts {
+export function applyScenarioAmounts(base: BaseAmounts, keys: readonly LaneKey[], scenario: Scenario | null, keyIndex?: ReadonlyMap<string, number>): LaneAmounts {
   const n = base.toll.length;
   const out: LaneAmounts = {
     toll: base.toll.slice(),
@@ -71,7 +71,8 @@ export function applyScenarioAmounts(base: BaseAmounts, keys: readonly LaneKey[]
     unresolved: [],
   };
   if (!scenario || scenario.changes.length === 0) return out;
-  const index = laneKeyIndex(keys);
+  // Building the index costs one string per lane; callers that apply many scenarios pass it in.
+  const index = keyIndex ?? laneKeyIndex(keys);
   scenario.changes.forEach((change, i) => {
     if (change.kind === 'add-lane' || change.kind === 'set-validity') return;
     const e = index.get(laneKeyId(change.lane));

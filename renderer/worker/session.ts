@@ -5,6 +5,7 @@
 import { LanewrightError } from '../../engine/errors';
 import type { ImportResult } from '../../engine/import/types';
 import type { Network } from '../../engine/network/types';
+import { laneKeyIndex, laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { importTexts, replanImport, reportOf } from './import-texts';
@@ -22,6 +23,7 @@ export class WorkerSession {
   private solved: Solved | null = null;
   private weights: Float64Array | undefined;
   private baseKey = '';
+  private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
   constructor(private readonly post: Post) {}
@@ -69,6 +71,8 @@ export class WorkerSession {
     this.imported = result;
     this.network = result.network;
     this.plan = plan;
+    const keys = laneKeysOf(result.network!);
+    this.keys = { keys, index: laneKeyIndex(keys) };
     this.solved = null;
     this.base = null;
     this.baseKey = '';
@@ -106,7 +110,7 @@ export class WorkerSession {
     const driveLimit = this.imported?.plan.settings.drivingLimit.dailyDrivingMinutes ?? 9 * 60;
     this.post({ kind: 'progress', id, phase: 'Solving routes', fraction: 0.3 });
     const started = performance.now();
-    this.weights = scenarioWeights(network, scenario);
+    this.weights = scenarioWeights(network, scenario, this.keys ?? undefined);
     this.solved = solveFor(network, settings, this.weights);
     const solveMs = performance.now() - started;
     const view = solveView(network, settings, this.solved, solveMs, driveLimit);

@@ -7,7 +7,7 @@ import type { Network } from '../../engine/network/types';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../../engine/routes/cheapest-routes';
 import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/routes/leg-limited';
 import { routePath } from '../../engine/routes/route-path';
-import { laneKeysOf } from '../../engine/scenario/lane-key';
+import { laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
 import { applyScenarioAmounts, hasChanges, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
 import type { PlanSettings, RouteView, SolveView } from './protocol';
@@ -15,10 +15,10 @@ import type { PlanSettings, RouteView, SolveView } from './protocol';
 export type Solved = RouteTree | LegLimitedRoutes;
 
 /** Net cost per CSR position after the scenario's changes; closed lanes get +Infinity. Undefined when nothing is edited. */
-export function scenarioWeights(network: Network, scenario: Scenario | null): Float64Array | undefined {
+export function scenarioWeights(network: Network, scenario: Scenario | null, keys?: { keys: LaneKey[]; index: ReadonlyMap<string, number> }): Float64Array | undefined {
   if (!hasChanges(scenario)) return undefined;
   const base = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
-  const amounts = applyScenarioAmounts(base, laneKeysOf(network), scenario);
+  const amounts = keys ? applyScenarioAmounts(base, keys.keys, scenario, keys.index) : applyScenarioAmounts(base, laneKeysOf(network), scenario);
   const weights = new Float64Array(network.laneCount);
   for (let p = 0; p < network.laneCount; p++) {
     const e = network.outLane[p];

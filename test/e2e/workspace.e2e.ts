@@ -148,6 +148,7 @@ describe('workspace in the browser', () => {
     const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'depots.csv', sample('depots.csv'));
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'lanes-broken.csv', broken);
+    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('lanes-broken.csv');
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
     const report = page.getByRole('dialog', { name: 'Import report' });
     await report.waitFor();

@@ -1,0 +1,106 @@
+// The engine worker's session driven directly (no browser): the sample imports with its report,
+// solves match js-graph-algorithms' Bellman-Ford on the planned network, a scenario edit solved
+// through per-lane weights matches the engine's own applyScenario, and exports re-read.
+
+import { readFileSync } from 'node:fs';
+import jsgraphs from 'js-graph-algorithms';
+import { describe, expect, it } from 'vitest';
+import { parseCsvText } from '../../../engine/io/csv-papaparse';
+import { importNetwork } from '../../../engine/import/import-network';
+import { formatMinor, type Minor } from '../../../engine/money/minor';
+import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
+import { applyScenario } from '../../../engine/scenario/apply';
+import { laneKeysOf } from '../../../engine/scenario/lane-key';
+import { emptyScenario, setLaneAmount } from '../../../renderer/model/scenario-edits';
+import type { FromWorker, NetworkView, PlanSettings, SolveView, ToWorker } from '../../../renderer/worker/protocol';
+import { WorkerSession } from '../../../renderer/worker/session';
+
+const text = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
+const DATE = '2026-08-15';
+
+function drive(messages: ToWorker[]): FromWorker[] {
+  const out: FromWorker[] = [];
+  const session = new WorkerSession((m) => out.push(m));
+  messages.forEach((m) => session.handle(m));
+  return out.filter((m) => m.kind !== 'progress');
+}
+
+const load = (lanes: string, acceptPartial = false): ToWorker => ({
+  kind: 'load',
+  id: 1,
+  depots: { name: 'depots.csv', text: text('depots.csv') },
+  lanes: { name: lanes, text: text(lanes) },
+  acceptPartial,
+  plan: { date: DATE, vehicleClass: '' },
+});
+const settings: PlanSettings = { origin: 'RTM', maxLegs: null, vehicleClass: '', dispatchDate: DATE };
+
+describe('worker session', () => {
+  it('solves the sample like js-graph-algorithms Bellman-Ford on the same planned lanes', () => {
+    const [loaded, solved] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario: null }]);
+    expect(loaded.kind).toBe('loaded');
+    const view = (loaded as { network: NetworkView }).network;
+    const result = (solved as { result: SolveView }).result;
+    const graph = new jsgraphs.WeightedDiGraph(view.depotIds.length);
+    for (let e = 0; e < view.laneFrom.length; e++) {
+      const net = view.laneToll[e] + view.laneFuel[e] + view.laneFees[e] - view.laneRebate[e];
+      graph.addEdge(new jsgraphs.Edge(view.laneFrom[e], view.laneTo[e], net));
+    }
+    const origin = view.depotIds.indexOf('RTM');
+    const bf = new jsgraphs.BellmanFord(graph, origin);
+    for (let d = 0; d < view.depotIds.length; d++) {
+      if (bf.hasPathTo(d)) expect(result.cost[d], view.depotIds[d]).toBe(bf.distanceTo(d));
+      else expect(result.status[d]).toBe(0);
+    }
+    expect(result.loops).toEqual([]);
+    expect(result.treeLanes.length).toBe(view.depotIds.length - 1);
+  });
+
+  it('reports the loop variant and solves a rebate edit like the engine applies the scenario', () => {
+    const [loaded, before] = drive([load('lanes-rebate-loop.csv'), { kind: 'solve', id: 2, settings, scenario: null }]);
+    const view = (loaded as { network: NetworkView }).network;
+    const loop = (before as { result: SolveView }).result.loops[0];
+    expect(loop.netPerLap).toBeLessThan(0);
+
+    const lane = loop.lanes.find((e) => view.laneRebate[e] > 0)!;
+    const keys = laneKeysOf(Array.from(view.laneFrom, (a, e) => ({ from: view.depotIds[a], to: view.depotIds[view.laneTo[e]], ref: view.laneRef[e] })));
+    const scenario = setLaneAmount(emptyScenario(), keys[lane], 'rebate', 0, view.laneRebate[lane]);
+    const [, after] = drive([load('lanes-rebate-loop.csv'), { kind: 'solve', id: 3, settings, scenario }]);
+    const result = (after as { result: SolveView }).result;
+
+    const imported = importNetwork(text('depots.csv'), text('lanes-rebate-loop.csv'), { plan: { date: DATE }, skipInvalid: true });
+    const applied = applyScenario(imported.network!, scenario, { date: DATE });
+    expect(applied.problems).toEqual([]);
+    const reference = cheapestRoutes(applied.network, applied.network.depotIndex.get('RTM')!);
+    expect(Array.from(result.status)).toEqual(Array.from(reference.status));
+    expect(Array.from(result.cost)).toEqual(Array.from(reference.cost));
+    expect(result.loops).toEqual([]);
+    expect(result.base).not.toBeNull();
+    expect(Array.from(result.base!.status)).toContain(2); // the base still has the loop
+  });
+
+  it('holds an import with rejected rows for the user, and builds from the accepted rows on request', () => {
+    const [held] = drive([load('broken/lanes-broken.csv')]);
+    expect(held).toMatchObject({ kind: 'loaded', network: null });
+    const report = (held as { report: { files: { kind: string; total: number; accepted: number; rejected: number }[]; issues: unknown[] } }).report;
+    const lanes = report.files.find((f) => f.kind === 'lanes')!;
+    expect(lanes.accepted + lanes.rejected).toBe(lanes.total);
+    expect(report.issues.length).toBeGreaterThan(0);
+    const [built] = drive([load('broken/lanes-broken.csv', true)]);
+    expect((built as { network: NetworkView | null }).network).not.toBeNull();
+  });
+
+  it('exports the routes CSV with the solved costs, and answers errors as messages', () => {
+    const out = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario: null }, { kind: 'export', id: 3, what: 'routes-csv' }]);
+    const file = out[2] as { kind: string; text: string };
+    expect(file.kind).toBe('exported');
+    const { rows } = parseCsvText(file.text);
+    const cost = new Map(rows.slice(1).map((r) => [r[rows[0].indexOf('id')], r[rows[0].indexOf('cost')]]));
+    const result = (out[1] as { result: SolveView }).result;
+    const view = (out[0] as { network: NetworkView }).network;
+    view.depotIds.forEach((id, d) => expect(cost.get(id)).toBe(formatMinor(result.cost[d] as Minor)));
+
+    const [error] = drive([{ kind: 'solve', id: 9, settings, scenario: null }]);
+    expect(error).toMatchObject({ kind: 'error', id: 9, error: { name: 'LanewrightError' } });
+  });
+});
