@@ -24,7 +24,7 @@ export function defaultSettings(origin: string): PlanSettings {
 export function documentOf(files: DatasetFiles | null, settings: PlanSettings, scenario: Scenario): WorkspaceDocument {
   const doc = emptyWorkspace();
   doc.savedAt = new Date().toISOString();
-  doc.files = { depots: files?.depots.name ?? null, lanes: files?.lanes.name ?? null };
+  doc.files = { depots: files ? (files.depots.path ?? files.depots.name) : null, lanes: files ? (files.lanes.path ?? files.lanes.name) : null };
   doc.settings = {
     origin: settings.origin || null,
     dispatchDate: settings.dispatchDate || null,
@@ -47,12 +47,12 @@ export function stateOf(doc: WorkspaceDocument): { settings: PlanSettings; scena
 }
 
 /** Reads one file a document names: bundled sample text, or through the host. */
-async function readNamed(host: LanewrightHost, path: string): Promise<{ name: string; text: string }> {
+async function readNamed(host: LanewrightHost, path: string): Promise<{ name: string; path: string; text: string }> {
   const bundled = sampleText(path);
-  if (bundled !== undefined) return { name: path, text: bundled };
+  if (bundled !== undefined) return { name: path, path, text: bundled };
   const result = await host.readFile(path);
   if (!result.ok) throw new Error(result.failure.message);
-  return { name: result.value.path, text: result.value.text };
+  return { name: result.value.name, path: result.value.path, text: result.value.text };
 }
 
 /** The input files a document names, or null when it names none. */

@@ -1,13 +1,21 @@
-// Export files the UI offers, made in the worker from the current network, scenario and solve. The
-// one place the renderer reaches the engine's writers, so new exporters change this file only.
+// Export files the UI offers, made in the worker with the engine's exporters (the same files the
+// command line writes). With an active scenario they describe the changed contract: the scenario
+// is applied by the engine and the routes are solved again on the result.
 
-import { LanewrightError } from '../../engine/errors';
-import { formatCsvRows } from '../../engine/io/csv-papaparse';
-import { formatMinor, type Minor } from '../../engine/money/minor';
+import { findDistinctLoops } from '../../engine/audit/distinct-loops';
+import { geoJsonText } from '../../engine/export/geojson-text';
+import { networkGeoJson } from '../../engine/export/geojson';
+import { lanesCsv } from '../../engine/export/lanes-csv';
+import { loopsCsv } from '../../engine/export/loops-csv';
+import { routesCsv } from '../../engine/export/routes-csv';
+import type { ImportResult } from '../../engine/import/types';
 import type { Network } from '../../engine/network/types';
-import { routesReport, routesReportRows } from '../../engine/report/routes-report';
-import type { ExportKind } from './protocol';
-import type { Solved } from './solve-plan';
+import type { PlannedLane, PlannedNetwork } from '../../engine/planning/types';
+import { routesReport } from '../../engine/report/routes-report';
+import { applyScenario } from '../../engine/scenario/apply';
+import { hasChanges, type Scenario } from '../model/scenario-edits';
+import type { ExportKind, PlanSettings } from './protocol';
+import { solveFor } from './solve-plan';
 
 export interface ExportFile {
   fileName: string;
@@ -15,39 +23,51 @@ export interface ExportFile {
   text: string;
 }
 
-function laneRows(network: Network, weights: Float64Array | undefined): (string | number | null)[][] {
-  // Scenario weights are per CSR position; the file lists lanes in input order.
-  const net = new Float64Array(network.laneCount);
-  for (let p = 0; p < network.laneCount; p++) net[network.outLane[p]] = weights ? weights[p] : network.outNet[p];
-  const money = (v: number) => (Number.isFinite(v) ? formatMinor(v as Minor, network.exponent) : '');
-  const rows: (string | number | null)[][] = [['row', 'from', 'to', 'toll', 'fuel', 'fees', 'rebate', 'net', 'open']];
-  for (let e = 0; e < network.laneCount; e++) {
-    rows.push([
-      network.laneRow[e],
-      network.depotIds[network.laneFrom[e]],
-      network.depotIds[network.laneTo[e]],
-      money(network.laneToll[e]),
-      money(network.laneFuel[e]),
-      money(network.laneFees[e]),
-      money(network.laneRebate[e]),
-      money(net[e]),
-      Number.isFinite(net[e]) ? 'yes' : 'no',
-    ]);
-  }
-  return rows;
+export interface ExportContext {
+  imported: ImportResult;
+  network: Network;
+  settings: PlanSettings | null;
+  scenario: Scenario | null;
+  date: string | null;
 }
 
-/** Builds one export file. Routes need a solve; the others need only the network. */
-export function exportText(network: Network, solved: Solved | null, weights: Float64Array | undefined, what: ExportKind): ExportFile {
+/** The network and plan the exports describe: the import's, or the scenario's when it changes anything. */
+function target(ctx: ExportContext): { network: Network; plan: PlannedNetwork } {
+  const { imported, network, scenario } = ctx;
+  if (!scenario || !hasChanges(scenario)) return { network, plan: imported.plan };
+  const applied = applyScenario(network, scenario, { date: ctx.date });
+  const lanes: PlannedLane[] = applied.lanes.map((lane, i) => {
+    const b = applied.baseLaneOf[i];
+    const base = b >= 0 ? imported.plan.lanes[b] : { vehicleClass: null, distanceEstimated: false, fuelEstimated: false, driveEstimated: false };
+    return { ...base, ...lane, validFrom: lane.validFrom ?? null, validTo: lane.validTo ?? null };
+  });
+  const laneRecord = Int32Array.from(applied.baseLaneOf, (b) => (b >= 0 ? imported.plan.laneRecord[b] : -1));
+  return { network: applied.network, plan: { ...imported.plan, network: applied.network, lanes, laneRecord } };
+}
+
+const suffix = (ctx: ExportContext) => (ctx.scenario && hasChanges(ctx.scenario) ? `-${ctx.scenario.name.replace(/[^\w-]+/g, '-').toLowerCase()}` : '');
+
+/** Builds one export file. Routes need a chosen origin; the others describe the whole contract. */
+export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
+  const { network, plan } = target(ctx);
+  const tag = suffix(ctx);
+  const loops = () => findDistinctLoops(network).loops;
+  const report = () => {
+    if (!ctx.settings) return undefined;
+    const solved = solveFor(network, ctx.settings);
+    return routesReport(network, solved, { driveLimitMinutes: plan.settings.drivingLimit.dailyDrivingMinutes });
+  };
   switch (what) {
     case 'routes-csv': {
-      if (!solved) throw new LanewrightError('export: no routes have been solved yet');
-      const report = routesReport(network, solved);
-      return { fileName: `routes-from-${report.origin}.csv`, mime: 'text/csv', text: formatCsvRows(routesReportRows(report)) };
+      const routes = report();
+      if (!routes) throw new RangeError('export: choose an origin before exporting routes');
+      return { fileName: `routes-from-${routes.origin}${tag}.csv`, mime: 'text/csv', text: routesCsv(routes) };
     }
     case 'lanes-csv':
-      return { fileName: 'lane-costs.csv', mime: 'text/csv', text: formatCsvRows(laneRows(network, weights)) };
-    default:
-      throw new LanewrightError(`export: ${what} is not available in this build`);
+      return { fileName: `lanes${tag}.csv`, mime: 'text/csv', text: lanesCsv({ plan, lanes: ctx.imported.lanes, currency: network.currency, exponent: network.exponent }, loops()) };
+    case 'loops-csv':
+      return { fileName: `rebate-loops${tag}.csv`, mime: 'text/csv', text: loopsCsv(network, loops()) };
+    case 'geojson':
+      return { fileName: `network${tag}.geojson`, mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
   }
 }

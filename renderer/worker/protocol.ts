@@ -7,6 +7,8 @@ import type { Scenario } from '../model/scenario-edits';
 export interface NamedText {
   name: string;
   text: string;
+  /** Where the host read it (desktop: absolute path), saved in the workspace; defaults to `name`. */
+  path?: string;
 }
 
 /** One problem of an import, located as a spreadsheet shows it (header = row 1). */

@@ -21,8 +21,9 @@ export class WorkerSession {
   private network: Network | null = null;
   private plan: PlanChoice = { date: '', vehicleClass: '' };
   private solved: Solved | null = null;
-  private weights: Float64Array | undefined;
   private baseKey = '';
+  private settings: PlanSettings | null = null;
+  private scenario: Scenario | null = null;
   private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
@@ -50,7 +51,9 @@ export class WorkerSession {
         return;
       }
       case 'export': {
-        const file = exportText(this.need(), this.solved, this.weights, message.what);
+        if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null };
+        const file = exportText(ctx, message.what);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
       }
@@ -110,8 +113,10 @@ export class WorkerSession {
     const driveLimit = this.imported?.plan.settings.drivingLimit.dailyDrivingMinutes ?? 9 * 60;
     this.post({ kind: 'progress', id, phase: 'Solving routes', fraction: 0.3 });
     const started = performance.now();
-    this.weights = scenarioWeights(network, scenario, this.keys ?? undefined);
-    this.solved = solveFor(network, settings, this.weights);
+    this.settings = settings;
+    this.scenario = scenario;
+    const weights = scenarioWeights(network, scenario, this.keys ?? undefined);
+    this.solved = solveFor(network, settings, weights);
     const solveMs = performance.now() - started;
     const view = solveView(network, settings, this.solved, solveMs, driveLimit);
     if (hasChanges(scenario)) {

@@ -26,7 +26,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
   const pick = async (kind: 'depots' | 'lanes') => {
     const result = await host.pickFile(kind);
     if (!result.ok) setProblem(result.failure.message);
-    else if (result.value) (kind === 'depots' ? setDepots : setLanes)({ name: result.value.name, text: result.value.text });
+    else if (result.value) (kind === 'depots' ? setDepots : setLanes)({ name: result.value.name, path: result.value.path, text: result.value.text });
   };
   const run = async () => {
     if (!depots || !lanes) return;

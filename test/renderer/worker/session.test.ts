@@ -104,3 +104,18 @@ describe('worker session', () => {
     expect(error).toMatchObject({ kind: 'error', id: 9, error: { name: 'LanewrightError' } });
   });
 });
+
+describe('worker exports', () => {
+  it('writes a lanes CSV that re-imports to the same planned lanes, and a GeoJSON FeatureCollection', () => {
+    const out = drive([load('lanes-rebate-loop.csv'), { kind: 'solve', id: 2, settings, scenario: null }, { kind: 'export', id: 3, what: 'lanes-csv' }, { kind: 'export', id: 4, what: 'geojson' }, { kind: 'export', id: 5, what: 'loops-csv' }]);
+    const lanes = (out[2] as { text: string }).text;
+    const original = importNetwork(text('depots.csv'), text('lanes-rebate-loop.csv'), { plan: { date: DATE } }).network!;
+    const again = importNetwork(text('depots.csv'), lanes, { plan: { date: DATE } }).network!;
+    expect(Array.from(again.laneNet)).toEqual(Array.from(original.laneNet));
+    const geo = JSON.parse((out[3] as { text: string }).text) as { type: string; features: { geometry: { type: string } }[] };
+    expect(geo.type).toBe('FeatureCollection');
+    expect(geo.features.filter((f) => f.geometry.type === 'Point')).toHaveLength(original.depotCount);
+    const loops = parseCsvText((out[4] as { text: string }).text).rows;
+    expect(loops.length).toBeGreaterThan(1); // header + the loop's lanes
+  });
+});
