@@ -37,16 +37,24 @@ export function parseCsvText(text: string): CsvTable {
 }
 
 /**
- * Parses a block of whole records with a known delimiter and line break. The streaming reader
+ * Parses a block of whole records with a known delimiter. The streaming reader
  * (csv-record-stream.ts) cuts blocks only at line breaks outside quotes, so every record is whole.
- * A block that ends with a line break yields no empty record for it.
+ * Records end at LF (CRLF and LF may even be mixed in one file; the CR is dropped) or, for files
+ * that use CR alone, at CR. A block that ends with a line break yields no empty record for it.
  */
 export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r'): { rows: string[][]; unclosedQuote: boolean; badQuoteRows: number[] } {
-  const result = Papa.parse<string[]>(block, { delimiter, newline, skipEmptyLines: false });
+  const lineBreak = newline === '\r' ? '\r' : '\n';
+  const result = Papa.parse<string[]>(block, { delimiter, newline: lineBreak, skipEmptyLines: false });
   const rows = result.data;
-  if (block.endsWith(newline) && rows.length > 0) {
+  if (block.endsWith(lineBreak) && rows.length > 0) {
     const last = rows[rows.length - 1];
     if (last.length === 1 && last[0] === '') rows.pop();
+  }
+  if (lineBreak === '\n' && block.includes('\r')) {
+    for (const row of rows) {
+      const k = row.length - 1;
+      if (row[k].charCodeAt(row[k].length - 1) === 13) row[k] = row[k].slice(0, -1);
+    }
   }
   // A quote inside a field that is not itself quoted, or a closing quote followed by text.
   const badQuoteRows = result.errors.filter((e) => e.code === 'InvalidQuotes' && typeof e.row === 'number').map((e) => e.row as number);

@@ -38,6 +38,15 @@ describe('CsvRecordStream', () => {
     expect(read(['id\tname\nA\tB\n']).records[1].cells).toEqual(['A', 'B']);
   });
 
+  it('reads a file whose lines end in CRLF and LF mixed', () => {
+    expect(read(['id,name\r\nA,"x"\nB,y\r\nC,"p\r\nq"\r\n']).records.map((r) => r.cells)).toEqual([
+      ['id', 'name'],
+      ['A', 'x'],
+      ['B', 'y'],
+      ['C', 'p\r\nq'],
+    ]);
+  });
+
   it('reads CR-only line breaks (old Mac files)', () => {
     expect(read(['id,name\rA,"x\ry"\rB,z\r']).records.map((r) => [r.row, r.cells])).toEqual([
       [1, ['id', 'name']],
