@@ -55,7 +55,7 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
     // Until the user pans or zooms, the map keeps the whole network in view as its box changes.
     const resize = new ResizeObserver(() => {
       map.invalidateSize();
-      if (autoFit.current && fitTo.current) map.fitBounds(fitTo.current);
+      if (autoFit.current && fitTo.current) map.fitBounds(fitTo.current, { animate: false });
     });
     resize.observe(element.current);
     const stopAutoFit = () => (autoFit.current = false);
@@ -77,7 +77,7 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
     const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number])).pad(0.08);
     fitTo.current = bounds;
     autoFit.current = true;
-    map.fitBounds(bounds);
+    map.fitBounds(bounds, { animate: false });
   }, [map, network]);
 
   useLayer(map, network && renderer ? () => laneLayer(network, renderer) : null, [network]);
