@@ -79,6 +79,11 @@ function match<F extends string>(headers: readonly string[], names: Record<strin
   const seenClass = new Map<string, string>();
   headers.forEach((raw, index) => {
     const header = raw.trim();
+    if (header === '') {
+      // A trailing delimiter on every line makes an unnamed column; any values in it are kept.
+      result.unknown.push({ index, header: `(column ${index + 1})` });
+      return;
+    }
     const { key, unit } = split(header);
     const target = names[key];
     if (target !== undefined) {

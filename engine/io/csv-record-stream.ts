@@ -43,6 +43,8 @@ export class CsvRecordStream {
   private charsSeen = 0;
   private pendingIssue: { columnIndex: number; value: string } | null = null;
   private lineOpen = false;
+  private sepLineSeen = false;
+  private layoutKnown = false;
   delimiter = ',';
   newline: '\n' | '\r\n' | '\r' = '\n';
 
@@ -129,6 +131,16 @@ export class CsvRecordStream {
   }
 
   private emit(block: string): void {
+    if (this.nextRow === 1 && !this.sepLineSeen) {
+      // Spreadsheet programs may write "sep=;" above the header to name the delimiter; it is not a row.
+      const sep = /^sep=(.)\r?\n/i.exec(block);
+      this.sepLineSeen = true;
+      if (sep) {
+        block = block.slice(sep[0].length);
+        this.detectLayout(block);
+        this.delimiter = sep[1];
+      }
+    }
     this.detectLayout(block);
     const { rows, badQuoteRows } = parseCsvBlock(block, this.delimiter, this.newline);
     if (rows.length === 0) return;
@@ -140,7 +152,8 @@ export class CsvRecordStream {
   }
 
   private detectLayout(block: string): void {
-    if (this.nextRow !== 1) return;
+    if (this.nextRow !== 1 || this.layoutKnown) return;
+    this.layoutKnown = true;
     const end = block.indexOf('\n');
     const cr = block.indexOf('\r');
     // Old Mac files break lines with CR alone; they are buffered whole (no LF to cut at) and read here.

@@ -28,6 +28,10 @@ describe('header matching', () => {
     expect(classKey(' 5 axle ')).toBe(classKey('5_Axle'));
   });
 
+  it('names an unnamed column by its position (a trailing delimiter on every line)', () => {
+    expect(matchLaneHeaders(['from', 'to', '']).unknown).toEqual([{ index: 2, header: '(column 3)' }]);
+  });
+
   it('ignores the derived columns of its own lanes export', () => {
     const m = matchLaneHeaders(['from', 'to', 'net', 'net_negative', 'on_rebate_loop', 'distance_source', 'fuel_source']);
     expect(m.unknown).toEqual([]);

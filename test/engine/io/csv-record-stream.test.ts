@@ -47,6 +47,15 @@ describe('CsvRecordStream', () => {
     ]);
   });
 
+  it('takes the delimiter from a "sep=" line and does not count it as a row', () => {
+    const { records, delimiter } = read(['sep=;\r\nid;name,x\r\nA;b,c\r\n']);
+    expect(delimiter).toBe(';');
+    expect(records.map((r) => [r.row, r.cells])).toEqual([
+      [1, ['id', 'name,x']],
+      [2, ['A', 'b,c']],
+    ]);
+  });
+
   it('reads CR-only line breaks (old Mac files)', () => {
     expect(read(['id,name\rA,"x\ry"\rB,z\r']).records.map((r) => [r.row, r.cells])).toEqual([
       [1, ['id', 'name']],
