@@ -7,7 +7,9 @@ import { planLanes } from '../planning/plan-network';
 import type { PlanRequest } from '../planning/types';
 import { DepotsReader } from './depots-reader';
 import { findDuplicateLanes } from './duplicate-lanes';
-import { ImportCancelledError } from './import-errors';
+import { CURRENCY_EXPONENTS, currencyExponent } from './currencies';
+import { readRate } from './currency-convert';
+import { ImportCancelledError, PlanRequestError } from './import-errors';
 import { LanesReader } from './lanes-reader';
 import { ReportCollector } from './report-collector';
 import type { ImportOptions, ImportResult, TextSource, ValidationReport } from './types';
@@ -23,6 +25,13 @@ export interface ImportSession {
 
 /** Starts a streaming import. */
 export function startImport(options: ImportOptions = {}): ImportSession {
+  if (options.currency !== undefined && currencyExponent(options.currency) === undefined) {
+    throw new PlanRequestError('currency', options.currency, `not a supported ISO 4217 code (supported: ${Object.keys(CURRENCY_EXPONENTS).join(', ')})`);
+  }
+  for (const [code, rate] of Object.entries(options.exchangeRates ?? {})) {
+    if (currencyExponent(code) === undefined) throw new PlanRequestError('exchange rate', code, 'not a supported ISO 4217 code');
+    if (readRate(rate) === null) throw new PlanRequestError('exchange rate', `${code}=${rate}`, 'the rate must be a positive decimal number');
+  }
   const depotsFile = options.depotsFile ?? 'depots.csv';
   const lanesFile = options.lanesFile ?? 'lanes.csv';
   const collector = new ReportCollector(options.maxItems ?? 1000);

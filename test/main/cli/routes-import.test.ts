@@ -59,3 +59,17 @@ describe('routes with the importer', () => {
     expect(JSON.parse(result.stdout).errors[0]).toMatchObject({ row: 2, column: 'name' });
   });
 });
+
+describe('currency options', () => {
+  it('--rates converts a second currency; --currency must be a supported ISO 4217 code', () => {
+    const mixed = file('mixed.csv', 'from,to,toll,currency\nA,B,10.00,EUR\nB,C,10.00,USD\n');
+    expect(run('routes', '--depots', depots, '--lanes', mixed, '--from', 'A').status).toBe(1);
+    const converted = run('routes', '--depots', depots, '--lanes', mixed, '--from', 'A', '--rates', 'USD=0.9', '--json', '--fuel-price', '0');
+    expect(converted.status, converted.stderr).toBe(0);
+    // 10.00 EUR + 10.00 USD x 0.9 = 19.00 EUR (fuel priced at 0 so only tolls count).
+    expect(JSON.parse(converted.stdout).depots.find((d: { id: string }) => d.id === 'C').cost).toBe('19.00');
+    const bad = run('check', '--depots', depots, '--lanes', clean, '--currency', 'ABC');
+    expect(bad.status).toBe(1);
+    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
+  });
+});
