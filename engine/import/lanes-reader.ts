@@ -103,7 +103,9 @@ export class LanesReader implements CsvRecordSink {
 
   issue(issue: CsvStreamIssue): void {
     if (issue.code === 'not-text') this.notText = true;
-    const lost = this.header === null ? issue.linesLost - 1 : issue.linesLost;
+    // Lines swallowed by the problem, less the header line when none was read; a file that is not
+    // text has no lines to count (linesLost 0), so this never goes below zero.
+    const lost = Math.max(0, this.header === null ? issue.linesLost - 1 : issue.linesLost);
     this.counts.total += lost;
     this.counts.rejected += lost;
     streamIssueToReport(this.report, this.file, issue, this.headerCells);

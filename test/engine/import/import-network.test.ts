@@ -107,6 +107,9 @@ describe('importNetwork', () => {
     expect(codes(importNetwork('', LANES))).toContain('empty-file');
     expect(codes(importNetwork('  \n\n', LANES))).toContain('empty-file');
     expect(codes(importNetwork(DEPOTS, '\u0000\u0001binary'))).toEqual(['not-text']);
+    const binary = importNetwork(DEPOTS, '\u0000\u0001binary');
+    expect(binary.report.files[1]).toMatchObject({ total: 0, accepted: 0, rejected: 0 }); // never negative counts
+    balanced(binary);
     const quotes = importNetwork(DEPOTS, 'from,to,toll\nA,B,1\nA,"B,2\nB,C,3\n');
     expect(quotes.report.errors[0]).toMatchObject({ code: 'unbalanced-quotes', row: 3, column: 'to' });
     balanced(quotes);
