@@ -75,6 +75,7 @@ export function useDataset(engine: Engine): Dataset {
           setError(`The plan for ${plan.date}${plan.vehicleClass ? `, class ${plan.vehicleClass}` : ''} has errors: ${answer.report.issues[0]?.reason ?? 'no usable lanes'}`);
           return false;
         }
+        engine.client.rememberPlan(plan);
         setNetwork(answer.network);
         setReport(answer.report);
         setError(null);

@@ -19,13 +19,15 @@ export interface Engine {
   cancel(): void;
 }
 
-export function useEngine(): { engine: Engine; progress: Progress | null } {
+export function useEngine(): { engine: Engine; progress: Progress | null; generation: number } {
   const clientRef = useRef<EngineClient | null>(null);
   if (clientRef.current === null) {
     clientRef.current = new EngineClient(() => new Worker(new URL('../worker/engine.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-engine' }));
   }
   const client = clientRef.current;
   const [progress, setProgress] = useState<Progress | null>(null);
+  // Bumped when a cancel replaces the worker: the new worker has the data but no solve yet.
+  const [generation, setGeneration] = useState(0);
   const running = useRef(0);
 
   useEffect(() => () => client.dispose(), [client]);
@@ -54,12 +56,15 @@ export function useEngine(): { engine: Engine; progress: Progress | null } {
   );
 
   const cancel = useCallback(() => {
-    void client.cancel().catch(() => undefined);
+    void client
+      .cancel()
+      .catch(() => undefined)
+      .then(() => setGeneration((g) => g + 1));
     setProgress(null);
   }, [client]);
 
   const engine = useMemo(() => ({ client, track, cancel }), [client, track, cancel]);
-  return { engine, progress };
+  return { engine, progress, generation };
 }
 
 export { WorkCancelledError };

@@ -22,7 +22,7 @@ export interface Plan {
   solveCount: number;
 }
 
-export function usePlan(engine: Engine, network: NetworkView | null, settings: PlanSettings, scenario: Scenario | null, selected: number | null): Plan {
+export function usePlan(engine: Engine, network: NetworkView | null, settings: PlanSettings, scenario: Scenario | null, selected: number | null, generation = 0): Plan {
   const [solve, setSolve] = useState<SolveView | null>(null);
   const [solvedFor, setSolvedFor] = useState<NetworkView | null>(null);
   const [roundTripMs, setRoundTrip] = useState<number | null>(null);
@@ -56,7 +56,7 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
       }
     }, DEBOUNCE_MS);
     return () => clearTimeout(timer);
-  }, [engine, network, settings, scenario]);
+  }, [engine, network, settings, scenario, generation]);
 
   useEffect(() => {
     if (!solve || selected === null || solve.status[selected] !== 1) {

@@ -16,7 +16,7 @@ function planOf(settings: PlanSettings): PlanChoice {
 }
 
 export function useWorkbench(host: LanewrightHost) {
-  const { engine, progress } = useEngine();
+  const { engine, progress, generation } = useEngine();
   const dataset = useDataset(engine);
   const [settings, setSettings] = useState<PlanSettings>(() => defaultSettings(SAMPLE_ORIGIN));
   const [scenario, setScenario] = useState<Scenario>(() => emptyScenario());
@@ -27,7 +27,7 @@ export function useWorkbench(host: LanewrightHost) {
   const restored = useRef(false);
   const settingsRef = useRef(settings);
   settingsRef.current = settings;
-  const plan = usePlan(engine, dataset.network, settings, scenario, selected);
+  const plan = usePlan(engine, dataset.network, settings, scenario, selected, generation);
 
   const openSample = useCallback(
     async (loop: boolean) => {

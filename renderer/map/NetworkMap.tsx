@@ -32,9 +32,31 @@ function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps:
   }, [map, ...deps]);
 }
 
+interface Renderers {
+  base: L.Renderer;
+  lanes: L.Renderer;
+  overlay: L.Renderer;
+  depots: L.Renderer;
+}
+
+// One canvas per kind of content, stacked in their own panes: a new solve repaints only the route
+// tree's canvas, never the basemap's polygons or 50,000 lanes.
+function makeRenderers(map: L.Map): Renderers {
+  const pane = (name: string, zIndex: number) => {
+    map.createPane(name).style.zIndex = String(zIndex);
+    return name;
+  };
+  return {
+    base: L.canvas({ pane: pane('lw-base', 250), padding: 0.5 }),
+    lanes: L.canvas({ pane: pane('lw-lanes', 350), padding: 0.5 }),
+    overlay: L.canvas({ padding: 0.5 }),
+    depots: L.canvas({ pane: pane('lw-depots', 450), padding: 0.5, tolerance: 4 }),
+  };
+}
+
 export function NetworkMap({ network, solve, route, selected, onSelect }: NetworkMapProps) {
   const element = useRef<HTMLDivElement>(null);
-  const mapRef = useRef<{ map: L.Map; renderer: L.Renderer } | null>(null);
+  const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
   // Bumped once the map exists, so the layer effects run after it is created.
@@ -44,12 +66,12 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
 
   useEffect(() => {
     if (!element.current) return;
-    const renderer = L.canvas({ padding: 0.5, tolerance: 4 });
-    const map = L.map(element.current, { preferCanvas: true, zoomSnap: 0.25, worldCopyJump: false, attributionControl: true, renderer });
+    const map = L.map(element.current, { preferCanvas: true, zoomSnap: 0.25, worldCopyJump: false, attributionControl: true });
     map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)');
     map.setView([49.5, 6], 5);
-    addBasemap(map, renderer);
-    mapRef.current = { map, renderer };
+    const renderers = makeRenderers(map);
+    addBasemap(map, renderers.base);
+    mapRef.current = { map, renderers };
     setReady((n) => n + 1);
     // The panels around the map resize (loop banner, window); Leaflet must re-measure its box.
     // Until the user pans or zooms, the map keeps the whole network in view as its box changes.
@@ -70,7 +92,7 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
   }, []);
 
   const map = ready > 0 ? mapRef.current?.map ?? null : null;
-  const renderer = mapRef.current?.renderer ?? null;
+  const renderers = mapRef.current?.renderers ?? null;
 
   useEffect(() => {
     if (!map || !network || network.depotIds.length === 0) return;
@@ -80,22 +102,22 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
     map.fitBounds(bounds, { animate: false });
   }, [map, network]);
 
-  useLayer(map, network && renderer ? () => laneLayer(network, renderer) : null, [network]);
-  useLayer(map, network && solve && renderer ? () => treeLayer(network, solve, renderer) : null, [network, solve]);
-  useLayer(map, network && route && renderer ? () => routeLayer(network, route, renderer) : null, [network, route]);
-  useLayer(map, network && solve && solve.loops.length > 0 && renderer ? () => loopLayer(network, solve, renderer) : null, [network, solve]);
+  useLayer(map, network && renderers ? () => laneLayer(network, renderers.lanes) : null, [network]);
+  useLayer(map, network && solve && renderers ? () => treeLayer(network, solve, renderers.overlay) : null, [network, solve]);
+  useLayer(map, network && route && renderers ? () => routeLayer(network, route, renderers.overlay) : null, [network, route]);
+  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, renderers.overlay) : null, [network, solve]);
   // Depot circles are made once per network (thousands of them) and only restyled per solve.
   const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);
   useEffect(() => {
-    if (!map || !network || !renderer) return;
-    const made = depotMarkers(network, renderer, { onSelect: (d) => selectRef.current(d) });
+    if (!map || !network || !renderers) return;
+    const made = depotMarkers(network, renderers.depots, { onSelect: (d) => selectRef.current(d) });
     made.layer.addTo(map);
     setDepots(made.markers);
     return () => {
       made.layer.remove();
       setDepots(null);
     };
-  }, [map, network, renderer]);
+  }, [map, network, renderers]);
   useEffect(() => {
     if (depots && network && depots.length === network.depotIds.length) styleDepots(depots, solve, selected);
   }, [depots, network, solve, selected]);

@@ -99,6 +99,11 @@ export function styleDepots(markers: readonly L.CircleMarker[], solve: SolveView
   const scale = markers.length > 1000 ? 0.5 : 1;
   markers.forEach((marker, d) => {
     const status = solve ? solve.status[d] : -1;
+    // Restyling a canvas circle schedules a redraw of its area; thousands of unchanged ones are skipped.
+    const key = `${status}|${solve !== null && d === solve.origin}|${d === selected}|${ringsOnly}`;
+    const withKey = marker as L.CircleMarker & { lwStyleKey?: string };
+    if (withKey.lwStyleKey === key) return;
+    withKey.lwStyleKey = key;
     const style =
       solve && d === solve.origin
         ? STYLE.origin

@@ -71,6 +71,11 @@ export class EngineClient {
     this.lastLoad = load;
   }
 
+  /** Keeps the remembered load in step with a re-plan for another day or vehicle class. */
+  rememberPlan(plan: Extract<Request, { kind: 'load' }>['plan']): void {
+    if (this.lastLoad) this.lastLoad = { ...this.lastLoad, plan };
+  }
+
   /** True while any request is unanswered. */
   get busy(): boolean {
     return this.pending.size > 0;

@@ -38,8 +38,28 @@ describe('5,000 depots and 50,000 lanes', () => {
       new PerformanceObserver((list) => list.getEntries().forEach((e) => (window as unknown as { longTasks: number[] }).longTasks.push(e.duration))).observe({ type: 'longtask', buffered: false });
     });
 
+    // A large import shows its progress and can be cancelled; the sample stays on screen and usable.
+    // (A network four times larger, so the import is surely still running when Cancel is pressed.)
+    const huge = bigNetwork(DEPOTS * 4, LANES_PER_DEPOT, 7);
+    const statusBefore = await page.locator('.lw-status').innerText();
     await page.getByRole('button', { name: 'Import CSV…' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
+    let dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
+    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'huge-depots.csv', huge.depotsText);
+    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'huge-lanes.csv', huge.lanesText);
+    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('huge-lanes.csv');
+    await dialog.getByRole('button', { name: 'Import', exact: true }).click();
+    const progress = page.getByRole('group', { name: 'Work in progress' });
+    await progress.waitFor();
+    expect(await progress.locator('progress').count()).toBe(1);
+    const solvesBeforeCancel = await solveCount(page);
+    await progress.getByRole('button', { name: 'Cancel' }).click();
+    await waitForPlan(page, solvesBeforeCancel); // the fresh worker solves the sample again
+    expect(await page.locator('.lw-status').innerText()).toContain(statusBefore.split(' · ').slice(0, 2).join(' · '));
+    await page.getByRole('button', { name: 'Cancel' }).first().click(); // close the import dialog
+    await expect.poll(() => page.getByRole('dialog').count()).toBe(0);
+
+    await page.getByRole('button', { name: 'Import CSV…' }).click();
+    dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'synthetic-depots.csv', depotsText);
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'synthetic-lanes.csv', lanesText);
     await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('synthetic-lanes.csv');
@@ -57,7 +77,10 @@ describe('5,000 depots and 50,000 lanes', () => {
     for (const [id, cost] of shown) if (expected.cost.has(id!)) expect(cost, `cost of ${id}`).toBe(String(expected.cost.get(id!)));
     await snap(page, 'large-network');
 
+    const longTasksOf = () => page.evaluate(() => (window as unknown as { longTasks: number[] }).longTasks.splice(0));
+    const importLongTasks = await longTasksOf();
     await page.getByRole('tab', { name: /Lanes/ }).click();
+    await longTasksOf();
     const roundTrips: number[] = [];
     const engineMs: number[] = [];
     const editToScreen: number[] = [];
@@ -74,7 +97,7 @@ describe('5,000 depots and 50,000 lanes', () => {
       engineMs.push(Number(await status.getAttribute('data-solve-ms')));
     }
     expect(await page.locator('[data-testid="lane-table"] tbody tr.lw-changed-row').count()).toBe(EDITS);
-    const longTasks = await page.evaluate(() => (window as unknown as { longTasks: number[] }).longTasks);
+    const longTasks = await longTasksOf();
 
     const figures = {
       depots: DEPOTS,
@@ -83,11 +106,12 @@ describe('5,000 depots and 50,000 lanes', () => {
       recompute_after_edit_round_trip_ms: { median: median(roundTrips), all: roundTrips },
       engine_solve_ms: { median: median(engineMs), all: engineMs },
       edit_to_screen_ms_including_120ms_debounce: { median: median(editToScreen), all: editToScreen },
-      longest_ui_thread_task_ms: longTasks.length ? Math.max(...longTasks) : 0,
+      longest_ui_thread_task_during_edits_ms: longTasks.length ? Math.max(...longTasks) : 0,
+      longest_ui_thread_task_during_cancel_and_import_ms: importLongTasks.length ? Math.max(...importLongTasks) : 0,
       note: 'shared 2-core machine with other work running; figures are noisy',
     };
     writeFileSync('test-output/e2e-timings.json', JSON.stringify(figures, null, 2) + '\n');
-    console.log(`[e2e timing] ${DEPOTS} depots / ${DEPOTS * LANES_PER_DEPOT} lanes: recompute after an edit ${figures.recompute_after_edit_round_trip_ms.median.toFixed(1)} ms median round trip (engine ${figures.engine_solve_ms.median.toFixed(1)} ms), edit to screen ${figures.edit_to_screen_ms_including_120ms_debounce.median} ms incl. 120 ms debounce; import + first plan ${importMs} ms; longest UI-thread task ${figures.longest_ui_thread_task_ms} ms (target <= 200 ms recompute; noisy shared machine)`);
+    console.log(`[e2e timing] ${DEPOTS} depots / ${DEPOTS * LANES_PER_DEPOT} lanes: recompute after an edit ${figures.recompute_after_edit_round_trip_ms.median.toFixed(1)} ms median round trip (engine ${figures.engine_solve_ms.median.toFixed(1)} ms), edit to screen ${figures.edit_to_screen_ms_including_120ms_debounce.median} ms incl. 120 ms debounce; import + first plan ${importMs} ms; longest UI-thread task during edits ${figures.longest_ui_thread_task_during_edits_ms} ms (during cancel + import ${figures.longest_ui_thread_task_during_cancel_and_import_ms} ms) (target <= 200 ms recompute; noisy shared machine)`);
     expect(offsiteRequests(session)).toEqual([]);
   });
 });

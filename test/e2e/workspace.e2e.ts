@@ -79,6 +79,30 @@ describe('workspace in the browser', () => {
     await snap(page, 'route-breakdown');
   });
 
+  it('re-plans for another vehicle class and for a leg limit, matching the engine', async () => {
+    let before = await solveCount(page);
+    await page.getByLabel('Vehicle class').selectOption('2axle');
+    await waitForPlan(page, before);
+    const byClass = expectedPlan(sample('depots.csv'), sample('lanes.csv'), 'LYS', date, undefined, { vehicleClass: '2axle' });
+    const standard = expectedPlan(sample('depots.csv'), sample('lanes.csv'), 'LYS', date);
+    expect([...byClass.cost.values()]).not.toEqual([...standard.cost.values()]); // the class's tolls matter
+    await expect.poll(async () => (await shownCosts(page)).get('RTM')).toBe(String(byClass.cost.get('RTM')));
+    expectCostsMatch(await shownCosts(page), byClass.cost, byClass.unbounded);
+
+    before = await solveCount(page);
+    await page.getByLabel('Maximum legs').fill('2');
+    await waitForPlan(page, before);
+    const limited = expectedPlan(sample('depots.csv'), sample('lanes.csv'), 'LYS', date, undefined, { vehicleClass: '2axle', maxLegs: 2 });
+    await expect.poll(async () => (await shownCosts(page)).get('RTM')).toBe(limited.cost.has('RTM') ? String(limited.cost.get('RTM')) : '');
+    expectCostsMatch(await shownCosts(page), limited.cost, limited.unbounded);
+    expect(await page.locator('[data-testid="results-table"] .lw-badge-unreachable').count()).toBe(limited.depotCount - limited.cost.size);
+
+    before = await solveCount(page);
+    await page.getByLabel('Maximum legs').fill('');
+    await page.getByLabel('Vehicle class').selectOption('');
+    await waitForPlan(page, before);
+  });
+
   it('warns about the rebate loop, marks unbounded depots and draws the loop on the map', async () => {
     await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
     const alert = page.getByRole('alert').filter({ hasText: 'Rebate loop' });

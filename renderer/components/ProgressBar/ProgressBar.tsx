@@ -1,4 +1,5 @@
-// Progress of long imports and solves, with a cancel button (it stops the worker outright).
+// Progress of long imports and solves, with a cancel button (it stops the worker outright). It floats
+// above everything, dialogs included, so work started from a dialog can still be cancelled.
 
 import type { Progress } from '../../app/use-engine';
 

@@ -4,6 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { importNetwork } from '../../../engine/import/import-network';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED } from '../../../engine/routes/cheapest-routes';
+import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
 import { applyScenario } from '../../../engine/scenario/apply';
 import type { Scenario } from '../../../engine/scenario/types';
 
@@ -20,11 +21,12 @@ export interface ExpectedPlan {
 }
 
 /** Cheapest routes from `origin` as the engine computes them for these files on `date`. */
-export function expectedPlan(depotsText: string, lanesText: string, origin: string, date: string, scenario?: Scenario): ExpectedPlan {
-  const imported = importNetwork(depotsText, lanesText, { plan: { date }, skipInvalid: true });
+export function expectedPlan(depotsText: string, lanesText: string, origin: string, date: string, scenario?: Scenario, options: { vehicleClass?: string; maxLegs?: number } = {}): ExpectedPlan {
+  const imported = importNetwork(depotsText, lanesText, { plan: { date, vehicleClass: options.vehicleClass }, skipInvalid: true });
   if (!imported.network) throw new Error('expected: the files do not import');
   const network = scenario ? applyScenario(imported.network, scenario, { date }).network : imported.network;
-  const tree = cheapestRoutes(network, network.depotIndex.get(origin)!);
+  const from = network.depotIndex.get(origin)!;
+  const tree = options.maxLegs === undefined ? cheapestRoutes(network, from) : legLimitedRoutes(network, from, options.maxLegs);
   const cost = new Map<string, number>();
   const unbounded = new Set<string>();
   for (let d = 0; d < network.depotCount; d++) {
