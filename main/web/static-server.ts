@@ -5,6 +5,7 @@ import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { createServer, type Server } from 'node:http';
 import { extname, join, normalize, resolve, sep } from 'node:path';
+import { CONTENT_SECURITY_POLICY } from '../ipc/content-security-policy';
 
 const TYPES: Record<string, string> = {
   '.html': 'text/html; charset=utf-8',
@@ -48,6 +49,7 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
         'content-type': TYPES[extname(file)] ?? 'application/octet-stream',
         'cache-control': 'no-cache',
         'x-content-type-options': 'nosniff',
+        'content-security-policy': CONTENT_SECURITY_POLICY,
       });
       createReadStream(file).pipe(response);
     } catch {
