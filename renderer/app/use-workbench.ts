@@ -25,6 +25,7 @@ export function useWorkbench(host: LanewrightHost) {
   const [savedPath, setSavedPath] = useState<string | null>(null);
   const [dirty, setDirty] = useState(false);
   const restored = useRef(false);
+  const cleanKey = useRef<string | null>('pending');
   const settingsRef = useRef(settings);
   settingsRef.current = settings;
   const plan = usePlan(engine, dataset.network, settings, scenario, selected, generation);
@@ -37,6 +38,7 @@ export function useWorkbench(host: LanewrightHost) {
         setSettings(next);
         setScenario(emptyScenario());
         setSelected(null);
+        cleanKey.current = 'pending';
         setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');
       }
     },
@@ -51,6 +53,7 @@ export function useWorkbench(host: LanewrightHost) {
         setSettings(state.settings);
         setScenario(state.scenario);
         setSelected(null);
+        cleanKey.current = 'pending';
         return true;
       }
       return false;
@@ -91,20 +94,29 @@ export function useWorkbench(host: LanewrightHost) {
 
   const document = useMemo(() => documentOf(dataset.files, settings, scenario), [dataset.files, settings, scenario]);
 
-  // Browser mode keeps the workspace as it changes; the desktop marks it unsaved and saves on request.
-  const firstDocument = useRef(true);
+  // What was last opened or saved, so "unsaved" means the document really differs from it. An open
+  // sets 'pending': the first document after it (files and settings together) is the clean one.
+  const docKey = useMemo(() => JSON.stringify({ ...document, savedAt: null }), [document]);
+  const docKeyRef = useRef(docKey);
+  docKeyRef.current = docKey;
+
+  // Browser mode keeps the workspace as it changes; the desktop tracks unsaved changes for the quit prompt.
   useEffect(() => {
     if (!dataset.files) return;
-    if (firstDocument.current) {
-      firstDocument.current = false;
+    if (cleanKey.current === 'pending') {
+      cleanKey.current = docKey;
+      setDirty(false);
+      void host.setDirty(false);
       return;
     }
-    if (host.kind === 'web') void host.saveWorkspace(document, null, false);
-    else {
-      setDirty(true);
-      void host.setDirty(true);
+    if (host.kind === 'web') {
+      void host.saveWorkspace(document, null, false);
+      return;
     }
-  }, [host, document, dataset.files]);
+    const changed = docKey !== cleanKey.current;
+    setDirty(changed);
+    void host.setDirty(changed);
+  }, [host, document, docKey, dataset.files]);
 
   const save = useCallback(
     async (saveAs: boolean) => {
@@ -112,6 +124,7 @@ export function useWorkbench(host: LanewrightHost) {
       if (!result.ok) setMessage(`Not saved: ${result.failure.message}`);
       else if (result.value) {
         setSavedPath(result.value.path);
+        cleanKey.current = docKeyRef.current;
         setDirty(false);
         void host.setDirty(false);
         setMessage(`Workspace saved to ${result.value.path}.`);
