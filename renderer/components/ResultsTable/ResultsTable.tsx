@@ -86,7 +86,7 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
               tabIndex={0}
               data-depot={row.id}
               data-cost-minor={Number.isFinite(row.costMinor) ? row.costMinor : ''}
-              aria-selected={row.depot === selected}
+              aria-current={row.depot === selected ? 'true' : undefined}
               className={`lw-status-${row.status}${row.depot === selected ? ' lw-selected' : ''}`}
               onClick={() => onSelect(row.depot)}
               onKeyDown={(event) => moveFocus(event, row.depot)}
