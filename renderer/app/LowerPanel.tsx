@@ -1,6 +1,7 @@
 // The tabbed lower panel: results table, editable lanes with the scenario comparison, the
 // contract review and the last import's report.
 
+import { parseScenarioDocument } from '../../engine/scenario/document';
 import type { Scenario } from '../model/scenario-edits';
 import type { LaneAmounts, LaneKey } from '../model/scenario-edits';
 import type { ExportKind, NetworkView, SolveView } from '../worker/protocol';
@@ -26,6 +27,17 @@ export interface LowerPanelProps {
 export function LowerPanel({ bench, network, solve, amounts, keys, tab, onTab, onExport }: LowerPanelProps) {
   const { scenario, setScenario, selected, setSelected, dataset } = bench;
   const onScenario = (next: Scenario) => setScenario(next);
+  const loadScenarioFile = async () => {
+    const picked = await bench.host.pickFile('scenario');
+    if (!picked.ok) return bench.setMessage(`Scenario not read: ${picked.failure.message}`);
+    if (!picked.value) return;
+    try {
+      setScenario(parseScenarioDocument(picked.value.text, picked.value.name));
+      bench.setMessage(`Loaded scenario file ${picked.value.name}.`);
+    } catch (error) {
+      bench.setMessage(`Scenario not read: ${(error as Error).message}`);
+    }
+  };
   const issues = dataset.report?.issues.length ?? 0;
   const tabs = [
     { id: 'results', label: 'Results' },
@@ -39,7 +51,7 @@ export function LowerPanel({ bench, network, solve, amounts, keys, tab, onTab, o
       {tab === 'lanes' && (
         <div className="lw-split">
           <LaneTable network={network} keys={keys} amounts={amounts} scenario={scenario} onScenario={onScenario} />
-          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} />
+          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} />
         </div>
       )}
       {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={keys} scenario={scenario} onScenario={onScenario} />}

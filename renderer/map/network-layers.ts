@@ -11,6 +11,7 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>): Segments {
   const out: Segments = [];
   for (let i = 0; i < lanes.length; i++) {
     const e = lanes[i];
+    if (e < 0) continue; // a lane a scenario added: not in the drawn network
     const a = network.laneFrom[e];
     const b = network.laneTo[e];
     out.push([

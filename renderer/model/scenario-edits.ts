@@ -104,6 +104,11 @@ export function fixPlanScenario(
   return next;
 }
 
+/** True when the scenario adds lanes or changes validity, so the lane set itself changes. */
+export function needsRebuild(scenario: Scenario | null): boolean {
+  return !!scenario && scenario.changes.some((c) => c.kind === 'add-lane' || c.kind === 'set-validity');
+}
+
 /** True when the scenario changes anything. */
 export function hasChanges(scenario: Scenario | null): boolean {
   return !!scenario && scenario.changes.length > 0;

@@ -6,13 +6,14 @@ import { LanewrightError } from '../../engine/errors';
 import type { ImportResult } from '../../engine/import/types';
 import type { Network } from '../../engine/network/types';
 import { laneKeyIndex, laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
-import { hasChanges, type Scenario } from '../model/scenario-edits';
+import { applyScenario } from '../../engine/scenario/apply';
+import { hasChanges, needsRebuild, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { importTexts, replanImport, reportOf } from './import-texts';
 import { networkView, transferablesOf } from './network-view';
-import type { FromWorker, PlanChoice, PlanSettings, ToWorker } from './protocol';
+import type { FromWorker, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
-import { pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
+import { onBaseLanes, pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -24,6 +25,8 @@ export class WorkerSession {
   private baseKey = '';
   private settings: PlanSettings | null = null;
   private scenario: Scenario | null = null;
+  /** Set when the last solve ran on a network the scenario rebuilt; its lanes map back through baseLaneOf. */
+  private solvedOn: { network: Network; baseLaneOf: Int32Array } | null = null;
   private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
@@ -47,7 +50,9 @@ export class WorkerSession {
         return this.solve(message.id, message.settings, message.scenario);
       case 'route': {
         const network = this.need();
-        this.post({ kind: 'route', id: message.id, route: this.solved ? pathOf(network, this.solved, message.target) : null });
+        const on = this.solvedOn;
+        const route = this.solved ? pathOf(on ? on.network : network, this.solved, message.target) : null;
+        this.post({ kind: 'route', id: message.id, route: route && on ? { ...route, lanes: route.lanes.map((e) => on.baseLaneOf[e]) } : route });
         return;
       }
       case 'export': {
@@ -115,10 +120,20 @@ export class WorkerSession {
     const started = performance.now();
     this.settings = settings;
     this.scenario = scenario;
-    const weights = scenarioWeights(network, scenario, this.keys ?? undefined);
-    this.solved = solveFor(network, settings, weights);
-    const solveMs = performance.now() - started;
-    const view = solveView(network, settings, this.solved, solveMs, driveLimit);
+    let view: SolveView;
+    if (needsRebuild(scenario)) {
+      // Added lanes and validity changes alter the lane set: the engine applies the scenario and the
+      // answer is mapped back onto the base lanes the UI draws.
+      const applied = applyScenario(network, scenario!, { date: this.plan.date || null });
+      this.solved = solveFor(applied.network, settings);
+      this.solvedOn = { network: applied.network, baseLaneOf: applied.baseLaneOf };
+      view = onBaseLanes(solveView(applied.network, settings, this.solved, performance.now() - started, driveLimit), applied.baseLaneOf);
+    } else {
+      const weights = scenarioWeights(network, scenario, this.keys ?? undefined);
+      this.solved = solveFor(network, settings, weights);
+      this.solvedOn = null;
+      view = solveView(network, settings, this.solved, performance.now() - started, driveLimit);
+    }
     if (hasChanges(scenario)) {
       const key = JSON.stringify(settings);
       if (key !== this.baseKey || !this.base) {

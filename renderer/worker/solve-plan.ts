@@ -81,3 +81,15 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     solveMs,
   };
 }
+
+/**
+ * A solve made on a network the scenario rebuilt, with its lanes renumbered as the base network's
+ * (what the UI draws). Lanes the scenario added have no base lane (-1) and are left out of the tree.
+ */
+export function onBaseLanes(view: SolveView, baseLaneOf: Int32Array): SolveView {
+  return {
+    ...view,
+    treeLanes: Int32Array.from(view.treeLanes, (e) => baseLaneOf[e]).filter((e) => e >= 0),
+    loops: view.loops.map((loop) => ({ ...loop, lanes: loop.lanes.map((e) => baseLaneOf[e]) })),
+  };
+}

@@ -9,6 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { formatMinor, type Minor } from '../../engine/money/minor';
 import { importNetwork } from '../../engine/import/import-network';
+import { serializeScenarioDocument } from '../../engine/scenario/document';
 import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { expectedPlan, sample } from './support/expected';
 
@@ -159,6 +160,33 @@ describe('workspace in the browser', () => {
     expect(await compare.locator('[data-moved-depot]').count()).toBeGreaterThan(0);
     expect(await compare.innerText()).toMatch(/unbounded → reachable/);
     await snap(page, 'scenario-edit');
+    await page.getByRole('tab', { name: 'Results' }).click();
+    expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
+  });
+
+  it('loads a scenario file that adds a lane and plans with it', async () => {
+    const scenario = {
+      name: 'Direct Milan run',
+      description: 'what-if: a direct lane and no volume refund',
+      changes: [
+        { kind: 'set-amount' as const, lane: { from: 'FRA', to: 'SXB', ref: 'BFH-L-019', occurrence: 1 }, field: 'rebate' as const, amountMinor: 0, note: null },
+        {
+          kind: 'add-lane' as const,
+          note: null,
+          lane: { from: 'RTM', to: 'MIL', ref: 'WHATIF-1', tollMinor: 9000, feesMinor: 1500, fuelMinor: 30000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null },
+        },
+      ],
+    };
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    const before = await solveCount(page);
+    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Load a scenario file…' }).click()]);
+    await chooser.setFiles({ name: 'direct-milan.json', mimeType: 'application/json', buffer: Buffer.from(serializeScenarioDocument(scenario), 'utf8') });
+    await waitForPlan(page, before);
+    const compare = page.locator('[data-testid="scenario-compare"]');
+    await expect.poll(() => compare.innerText()).toContain('Direct Milan run');
+    expect(await compare.innerText()).toContain('new lane RTM → MIL');
+    const expected = expectedPlan(sample('depots.csv'), sample('lanes-rebate-loop.csv'), 'RTM', date, scenario);
+    expect(expected.cost.get('MIL')).toBe(40500);
     await page.getByRole('tab', { name: 'Results' }).click();
     expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
   });

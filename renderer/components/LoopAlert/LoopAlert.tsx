@@ -51,7 +51,13 @@ export function LoopAlert({ network, solve, amounts, onReview }: LoopAlertProps)
               </tr>
             </thead>
             <tbody>
-              {loop.lanes.map((e) => {
+              {loop.lanes.map((e, k) => {
+                if (e < 0)
+                  return (
+                    <tr key={`added-${k}`}>
+                      <td colSpan={5}>a lane the scenario adds (see the scenario’s changes)</td>
+                    </tr>
+                  );
                 const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
                 return (
                   <tr key={e}>

@@ -19,7 +19,9 @@ export interface RouteDetailProps {
 export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom }: RouteDetailProps) {
   const status = solve.status[depot];
   const label = depotLabel(network.depotIds[depot], network.depotNames[depot]);
-  const sum = (field: 'toll' | 'fuel' | 'fees' | 'rebate') => (route ? route.lanes.reduce((s, e) => s + amounts[field][e], 0) : 0);
+  // Lanes a scenario added (index -1) are not in the lane table; their amounts are in the total cost only.
+  const known = route ? route.lanes.filter((e) => e >= 0) : [];
+  const sum = (field: 'toll' | 'fuel' | 'fees' | 'rebate') => known.reduce((s, e) => s + amounts[field][e], 0);
   const totals = { toll: sum('toll'), fuel: sum('fuel'), fees: sum('fees'), rebate: sum('rebate') };
   const money = (v: number) => formatMoney(v, network.exponent);
   return (
@@ -55,7 +57,12 @@ export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom 
               </tr>
             </thead>
             <tbody>
-              {route.lanes.map((e, i) => (
+              {route.lanes.map((e, i) =>
+                e < 0 ? (
+                  <tr key={`added-${i}`}>
+                    <td colSpan={6}>a lane the scenario adds</td>
+                  </tr>
+                ) : (
                 <tr key={`${e}-${i}`}>
                   <th scope="row" title={`Lanes file row ${network.laneRow[e]}${network.laneRef[e] ? `, ref ${network.laneRef[e]}` : ''}`}>
                     {network.depotIds[network.laneFrom[e]]} → {network.depotIds[network.laneTo[e]]}
@@ -67,7 +74,8 @@ export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom 
                   <td className="lw-num">{amounts.rebate[e] ? `-${money(amounts.rebate[e])}` : money(0)}</td>
                   <td className="lw-num">{money(amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e])}</td>
                 </tr>
-              ))}
+                ),
+              )}
             </tbody>
             <tfoot>
               <tr>

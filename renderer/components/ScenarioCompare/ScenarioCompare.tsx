@@ -11,14 +11,23 @@ export interface ScenarioCompareProps {
   solve: SolveView;
   scenario: Scenario;
   onScenario(next: Scenario): void;
+  /** Replaces the scenario with one read from a scenario file (lanewright-scenario JSON). */
+  onLoadFile(): void;
 }
 
 const STATUS = ['unreachable', 'reachable', 'unbounded'];
 
-export function ScenarioCompare({ network, solve, scenario, onScenario }: ScenarioCompareProps) {
+export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile }: ScenarioCompareProps) {
   const money = (v: number) => formatMoney(v, network.exponent);
   if (scenario.changes.length === 0) {
-    return <p className="lw-muted">The scenario “{scenario.name}” has no changes yet. Edit an amount in the lane table or close a lane; the comparison with the base contract appears here.</p>;
+    return (
+      <div className="lw-compare" data-testid="scenario-compare">
+        <p className="lw-muted">The scenario “{scenario.name}” has no changes yet. Edit an amount in the lane table or close a lane; the comparison with the base contract appears here.</p>
+        <button type="button" onClick={onLoadFile}>
+          Load a scenario file…
+        </button>
+      </div>
+    );
   }
   const base = solve.base;
   const moved: { d: number; text: string; delta: number }[] = [];
@@ -53,7 +62,11 @@ export function ScenarioCompare({ network, solve, scenario, onScenario }: Scenar
       </ul>
       <button type="button" onClick={() => onScenario({ ...scenario, changes: [] })}>
         Back to the base contract
+      </button>{' '}
+      <button type="button" onClick={onLoadFile}>
+        Load a scenario file…
       </button>
+      {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds count in every cost but are not drawn on the map or listed in the lane table.</p>}
       <h3>What moved from {network.depotIds[solve.origin]}</h3>
       {moved.length === 0 ? (
         <p>No depot’s status or cost changed.</p>

@@ -119,3 +119,31 @@ describe('worker exports', () => {
     expect(loops.length).toBeGreaterThan(1); // header + the loop's lanes
   });
 });
+
+describe('scenarios that change the lane set', () => {
+  it('solves an added lane through the engine and maps the answer back onto the drawn lanes', () => {
+    const scenario = {
+      ...emptyScenario(),
+      changes: [
+        {
+          kind: 'add-lane' as const,
+          note: null,
+          lane: { from: 'RTM', to: 'MIL', ref: 'WHATIF-1', tollMinor: 1000, feesMinor: 0, fuelMinor: 5000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null },
+        },
+      ],
+    };
+    const out = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: 0 }]);
+    const view = (out[0] as { network: NetworkView }).network;
+    const result = (out[1] as { result: SolveView }).result;
+    const imported = importNetwork(text('depots.csv'), text('lanes.csv'), { plan: { date: DATE }, skipInvalid: true });
+    const applied = applyScenario(imported.network!, scenario, { date: DATE });
+    const reference = cheapestRoutes(applied.network, applied.network.depotIndex.get('RTM')!);
+    expect(Array.from(result.cost)).toEqual(Array.from(reference.cost));
+    const mil = view.depotIds.indexOf('MIL');
+    expect(result.cost[mil]).toBe(6000);
+    expect(Array.from(result.treeLanes).every((e) => e >= 0 && e < view.laneFrom.length)).toBe(true);
+
+    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil }]);
+    expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([-1]);
+  });
+});
