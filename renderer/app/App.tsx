@@ -43,6 +43,11 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
     if (network && network.depotIds.length > 0 && !network.depotIds.includes(settings.origin)) setSettings({ ...settings, origin: network.depotIds[0] });
   }, [network, settings, setSettings]);
 
+  const planFrom = (d: number) => {
+    if (!network) return;
+    setSettings({ ...settings, origin: network.depotIds[d] });
+    setSelected(null);
+  };
   const solve = plan.solve && network && plan.solvedFor === network ? plan.solve : null;
   const route = solve ? plan.route : null;
   const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
@@ -63,13 +68,13 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         <aside className="lw-side" aria-label="Plan and route">
           {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
           {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
-            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} onPlanFrom={(d) => (setSettings({ ...settings, origin: network.depotIds[d] }), setSelected(null))} />
+            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} onPlanFrom={planFrom} />
           )}
-          {network && solve && selected === null && <p className="lw-muted">Pick a depot on the map or in the results to see its route and cost breakdown.</p>}
+          {network && solve && selected === null && <p className="lw-muted">Click a depot on the map or a row in the results for its route and cost breakdown; double-click a depot on the map to plan from it.</p>}
         </aside>
         <section className="lw-mapwrap" aria-label="Map">
           <ErrorBoundary what="map">
-            <NetworkMap network={network} solve={solve} route={route} selected={selected} onSelect={setSelected} />
+            <NetworkMap network={network} solve={solve} route={route} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} />
           </ErrorBoundary>
           <MapLegend />
         </section>

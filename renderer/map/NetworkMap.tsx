@@ -16,6 +16,7 @@ export interface NetworkMapProps {
   route: RouteView | null;
   selected: number | null;
   onSelect(depot: number): void;
+  onPlanFrom(depot: number): void;
 }
 
 /** Replaces one layer slot of the map whenever `build` changes. */
@@ -54,11 +55,13 @@ function makeRenderers(map: L.Map): Renderers {
   };
 }
 
-export function NetworkMap({ network, solve, route, selected, onSelect }: NetworkMapProps) {
+export function NetworkMap({ network, solve, route, selected, onSelect, onPlanFrom }: NetworkMapProps) {
   const element = useRef<HTMLDivElement>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
+  const planFromRef = useRef(onPlanFrom);
+  planFromRef.current = onPlanFrom;
   // Bumped once the map exists, so the layer effects run after it is created.
   const [ready, setReady] = useState(0);
   const autoFit = useRef(true);
@@ -110,7 +113,7 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
   const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);
   useEffect(() => {
     if (!map || !network || !renderers) return;
-    const made = depotMarkers(network, renderers.depots, { onSelect: (d) => selectRef.current(d) });
+    const made = depotMarkers(network, renderers.depots, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) });
     made.layer.addTo(map);
     setDepots(made.markers);
     return () => {
@@ -121,7 +124,7 @@ export function NetworkMap({ network, solve, route, selected, onSelect }: Networ
   useEffect(() => {
     if (depots && network && depots.length === network.depotIds.length) styleDepots(depots, solve, selected);
   }, [depots, network, solve, selected]);
-  useLayer(map, network && solve ? () => solveMarkers(network, solve, { onSelect: (d) => selectRef.current(d) }) : null, [network, solve]);
+  useLayer(map, network && solve ? () => solveMarkers(network, solve, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) }) : null, [network, solve]);
 
   const loopCount = solve?.loops.length ?? 0;
   const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;

@@ -59,6 +59,8 @@ export function loopLayer(network: NetworkView, solve: SolveView, renderer: L.Re
 
 export interface DepotHandlers {
   onSelect(depot: number): void;
+  /** Double-click: plan from this depot. */
+  onPlanFrom(depot: number): void;
 }
 
 function escapeHtml(text: string): string {
@@ -82,6 +84,10 @@ export function depotMarkers(network: NetworkView, renderer: L.Renderer, handler
   for (let d = 0; d < network.depotIds.length; d++) {
     const marker = L.circleMarker([network.lat[d], network.lon[d]], { ...STYLE.depot, renderer }).bindTooltip(`${network.depotIds[d]} · ${network.depotNames[d]}`, { direction: 'top' });
     marker.on('click', () => handlers.onSelect(d));
+    marker.on('dblclick', (event) => {
+      L.DomEvent.stop(event); // not the map's double-click zoom
+      handlers.onPlanFrom(d);
+    });
     markers.push(marker);
   }
   return { layer: L.layerGroup(markers), markers };
@@ -131,6 +137,10 @@ export function solveMarkers(network: NetworkView, solve: SolveView, handlers: D
       const title = `${network.depotIds[d]} · ${network.depotNames[d]} (cost unbounded: rebate loop)`;
       const marker = L.marker([network.lat[d], network.lon[d]], { icon: diamond(network.depotIds[d]), title, alt: network.depotIds[d], keyboard: false });
       marker.on('click', () => handlers.onSelect(d));
+      marker.on('dblclick', (event) => {
+        L.DomEvent.stop(event);
+        handlers.onPlanFrom(d);
+      });
       group.addLayer(marker);
     }
   }

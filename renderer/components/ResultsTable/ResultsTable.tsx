@@ -31,6 +31,8 @@ const COLUMNS: { key: SortKey; label: string; numeric?: boolean }[] = [
 export function ResultsTable({ network, solve, selected, onSelect, onExport }: ResultsTableProps) {
   const [query, setQuery] = useState<TableQuery>(DEFAULT_QUERY);
   const [shown, setShown] = useState(PAGE);
+  // Roving tab stop: the table is one Tab stop; arrow keys move between rows.
+  const [active, setActive] = useState(0);
   const rows = useMemo(() => resultRows(network, solve), [network, solve]);
   const visible = useMemo(() => queryRows(rows, query), [rows, query]);
   const columns = solve.base ? [...COLUMNS, { key: 'delta' as SortKey, label: 'Change vs base', numeric: true }] : COLUMNS;
@@ -39,6 +41,7 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
     const target = event.key === 'ArrowDown' ? row.nextElementSibling : event.key === 'ArrowUp' ? row.previousElementSibling : null;
     if (target instanceof HTMLElement) {
       event.preventDefault();
+      setActive((i) => i + (event.key === 'ArrowDown' ? 1 : -1));
       target.focus();
     } else if (event.key === 'Enter' || event.key === ' ') {
       event.preventDefault();
@@ -80,15 +83,15 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
           </tr>
         </thead>
         <tbody>
-          {visible.slice(0, shown).map((row) => (
+          {visible.slice(0, shown).map((row, i) => (
             <tr
               key={row.depot}
-              tabIndex={0}
+              tabIndex={i === Math.min(active, visible.length - 1) ? 0 : -1}
               data-depot={row.id}
               data-cost-minor={Number.isFinite(row.costMinor) ? row.costMinor : ''}
               aria-current={row.depot === selected ? 'true' : undefined}
               className={`lw-status-${row.status}${row.depot === selected ? ' lw-selected' : ''}`}
-              onClick={() => onSelect(row.depot)}
+              onClick={() => (onSelect(row.depot), setActive(i))}
               onKeyDown={(event) => moveFocus(event, row.depot)}
             >
               <th scope="row">{row.id}</th>
