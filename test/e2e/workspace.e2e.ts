@@ -242,6 +242,19 @@ describe('workspace in the browser', () => {
     for (const [depot, minor] of expected.cost) expect(exported.get(depot), depot).toBe(formatMinor(minor as Minor));
   });
 
+  it('moves through the results with the arrow keys and opens a route with Enter', async () => {
+    await page.getByRole('tab', { name: 'Results' }).click();
+    const rows = page.locator('[data-testid="results-table"] tbody tr');
+    expect(await rows.locator('xpath=self::*[@tabindex="0"]').count()).toBe(1); // one Tab stop
+    await rows.first().focus();
+    await page.keyboard.press('ArrowDown');
+    await page.keyboard.press('ArrowDown');
+    const id = await page.evaluate(() => document.activeElement?.getAttribute('data-depot'));
+    expect(id).toBe(await rows.nth(2).getAttribute('data-depot'));
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.locator('#lw-route-title').innerText()).toContain(`Route to ${id}`);
+  });
+
   it('opens the about box with the cautions from the keyboard', async () => {
     await page.getByRole('button', { name: 'About & cautions' }).focus();
     await page.keyboard.press('Enter');
