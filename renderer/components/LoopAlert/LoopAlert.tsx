@@ -35,10 +35,12 @@ export function LoopAlert({ network, solve, amounts, onReview }: LoopAlertProps)
           : `${unbounded} depot${unbounded === 1 ? ' is' : 's are'} marked unbounded (∞ diamond on the map, “unbounded” in the table); no route is given for them.`}
       </p>
       {solve.loops.map((loop, i) => (
-        <div key={i} className="lw-loop">
-          <h3>
-            Loop {i + 1}: {loop.depots.map(id).join(' → ')} → {id(loop.depots[0])} · net per lap {formatMoneyWithCode(loop.netPerLap, network.currency, network.exponent)}
-          </h3>
+        <details key={i} className="lw-loop" open={i === 0}>
+          <summary>
+            <strong>
+              Loop {i + 1}: {loop.depots.map(id).join(' → ')} → {id(loop.depots[0])} · net per lap {formatMoneyWithCode(loop.netPerLap, network.currency, network.exponent)}
+            </strong>
+          </summary>
           <table className="lw-compact">
             <caption className="lw-visually-hidden">Lanes of loop {i + 1}</caption>
             <thead>
@@ -73,7 +75,7 @@ export function LoopAlert({ network, solve, amounts, onReview }: LoopAlertProps)
               })}
             </tbody>
           </table>
-        </div>
+        </details>
       ))}
       <button type="button" onClick={onReview}>
         Open contract review
