@@ -19,7 +19,7 @@ export interface NetworkMapProps {
   onPlanFrom(depot: number): void;
 }
 
-/** Replaces one layer slot of the map whenever `build` changes. */
+/** One layer slot of the map, rebuilt when `deps` change (`build` is a new closure every render). */
 function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps: unknown[]) {
   useEffect(() => {
     if (!map || !build) return;
@@ -29,7 +29,6 @@ function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps:
     return () => {
       layer.remove();
     };
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [map, ...deps]);
 }
 
