@@ -12,7 +12,7 @@ import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './
 import { LaneTableBuilder } from './lane-table';
 import { firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
-import { streamIssueToReport } from './stream-issues';
+import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
 import type { FileCounts, IssueCode } from './types';
 
 const digitsOf = (code: string) => currencyExponent(code) ?? 2;
@@ -85,17 +85,8 @@ export class LanesReader implements CsvRecordSink {
       if (cells.length === 1 && cells[0].trim() === '') continue;
       if (cells.every((c) => c.trim() === '')) continue;
       this.counts.total++;
-      if (bad?.has(i)) {
-        this.counts.rejected++;
-        this.report.error(this.file, firstRow + i, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
-        continue;
-      }
-      if (notUtf8?.has(i)) {
-        this.counts.rejected++;
-        const k = cells.findIndex((c) => c.includes('\uFFFD'));
-        this.report.error(this.file, firstRow + i, this.headerCells[k] ?? `(column ${k + 1})`, cells[k], 'not-text', 'holds bytes that are not UTF-8 text (the file may be saved as Latin-1 or Windows-1252); save it as UTF-8');
-        continue;
-      }
+      const flags = { badQuotes: bad?.has(i) ?? false, notUtf8: notUtf8?.has(i) ?? false };
+      if (rejectFlaggedRow(this.report, this.file, this.counts, firstRow + i, cells, this.headerCells, flags)) continue;
       if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
       else this.counts.accepted++;
     }
@@ -103,12 +94,7 @@ export class LanesReader implements CsvRecordSink {
 
   issue(issue: CsvStreamIssue): void {
     if (issue.code === 'not-text') this.notText = true;
-    // Lines swallowed by the problem, less the header line when none was read; a file that is not
-    // text has no lines to count (linesLost 0), so this never goes below zero.
-    const lost = Math.max(0, this.header === null ? issue.linesLost - 1 : issue.linesLost);
-    this.counts.total += lost;
-    this.counts.rejected += lost;
-    streamIssueToReport(this.report, this.file, issue, this.headerCells);
+    takeStreamIssue(this.report, this.file, this.counts, issue, this.header !== null, this.headerCells);
   }
 
   finish(): void {

@@ -3,6 +3,7 @@
 
 import type { CsvStreamIssue } from '../io/csv-record-stream';
 import type { ReportCollector } from './report-collector';
+import type { FileCounts } from './types';
 
 export function streamIssueToReport(report: ReportCollector, file: string, issue: CsvStreamIssue, header: readonly string[]): void {
   if (issue.code === 'not-text') {
@@ -18,4 +19,43 @@ export function streamIssueToReport(report: ReportCollector, file: string, issue
     'unbalanced-quotes',
     `a quoted field opens here and never closes; ${issue.linesLost} line(s) from here to the end of the file could not be read`,
   );
+}
+
+/**
+ * Counts the lines a file-level problem swallowed as rejected rows and reports it. The header line
+ * is not a row, so it is taken off when the header was never read; a file that is not text has no
+ * lines to count (linesLost 0), so the count never goes below zero.
+ */
+export function takeStreamIssue(report: ReportCollector, file: string, counts: FileCounts, issue: CsvStreamIssue, headerRead: boolean, header: readonly string[]): void {
+  const lost = Math.max(0, headerRead ? issue.linesLost : issue.linesLost - 1);
+  counts.total += lost;
+  counts.rejected += lost;
+  streamIssueToReport(report, file, issue, header);
+}
+
+/**
+ * Rejects a row the CSV stream flagged as unreadable (malformed quotes, or bytes that are not
+ * UTF-8) with a report item; returns true when it did, so the caller skips the row.
+ */
+export function rejectFlaggedRow(
+  report: ReportCollector,
+  file: string,
+  counts: FileCounts,
+  row: number,
+  cells: readonly string[],
+  header: readonly string[],
+  flags: { badQuotes: boolean; notUtf8: boolean },
+): boolean {
+  if (flags.badQuotes) {
+    counts.rejected++;
+    report.error(file, row, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
+    return true;
+  }
+  if (flags.notUtf8) {
+    counts.rejected++;
+    const k = cells.findIndex((c) => c.includes('\uFFFD'));
+    report.error(file, row, header[k] ?? `(column ${k + 1})`, cells[k], 'not-text', 'holds bytes that are not UTF-8 text (the file may be saved as Latin-1 or Windows-1252); save it as UTF-8');
+    return true;
+  }
+  return false;
 }

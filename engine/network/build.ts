@@ -2,6 +2,7 @@
 // works on flat arrays, which keeps a million lanes in well under 100 MB.
 
 import { MoneyOverflowError, NetworkBuildError, UnknownDepotError } from '../errors';
+import { compressRows } from './compressed-rows';
 import type { DepotInput, LaneInput, Network } from './types';
 
 export interface BuildOptions {
@@ -44,7 +45,6 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
   const laneDistanceKm = new Float64Array(laneCount);
   const laneDriveMinutes = new Float64Array(laneCount);
   const laneRef: (string | undefined)[] = new Array(laneCount);
-  const outStart = new Int32Array(depotCount + 1);
 
   for (let e = 0; e < laneCount; e++) {
     const lane = lanes[e];
@@ -66,21 +66,6 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
     laneDistanceKm[e] = lane.distanceKm ?? NaN;
     laneDriveMinutes[e] = lane.driveMinutes ?? NaN;
     laneRef[e] = lane.ref;
-    outStart[from + 1]++;
-  }
-  for (let d = 0; d < depotCount; d++) outStart[d + 1] += outStart[d];
-
-  // Counting sort by origin depot; stable, so parallel lanes keep their input order and the
-  // first of two equally cheap contract lines is the one routes use.
-  const fill = outStart.slice(0, depotCount);
-  const outLane = new Int32Array(laneCount);
-  const outTo = new Int32Array(laneCount);
-  const outNet = new Float64Array(laneCount);
-  for (let e = 0; e < laneCount; e++) {
-    const p = fill[laneFrom[e]]++;
-    outLane[p] = e;
-    outTo[p] = laneTo[e];
-    outNet[p] = laneNet[e];
   }
 
   return {
@@ -104,10 +89,7 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
     laneDistanceKm,
     laneDriveMinutes,
     laneRef,
-    outStart,
-    outLane,
-    outTo,
-    outNet,
+    ...compressRows(depotCount, laneFrom, laneTo, laneNet),
   };
 }
 

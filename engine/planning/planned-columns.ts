@@ -6,6 +6,7 @@ import { MoneyOverflowError } from '../errors';
 import { isoDateText } from '../import/cells';
 import type { DepotRecord, LaneTable } from '../import/types';
 import type { Minor } from '../money/minor';
+import { compressRows } from '../network/compressed-rows';
 import type { Network } from '../network/types';
 import type { PlannedLane } from './types';
 
@@ -39,11 +40,9 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
   const laneNet = new Float64Array(laneCount);
   const laneRow = new Int32Array(laneCount);
   const laneRef: (string | undefined)[] = new Array(laneCount);
-  const outStart = new Int32Array(depotCount + 1);
   for (let e = 0; e < laneCount; e++) {
     const r = c.record[e];
-    const from = table.from[r];
-    laneFrom[e] = from;
+    laneFrom[e] = table.from[r];
     laneTo[e] = table.to[r];
     laneFees[e] = table.fees[r];
     laneRebate[e] = table.rebate[r];
@@ -52,19 +51,6 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
     laneNet[e] = net;
     laneRow[e] = table.sourceRow[r];
     laneRef[e] = table.ref[r];
-    outStart[from + 1]++;
-  }
-  for (let d = 0; d < depotCount; d++) outStart[d + 1] += outStart[d];
-  // Stable counting sort by origin, as in network/build.ts: parallel lanes keep file order.
-  const fill = outStart.slice(0, depotCount);
-  const outLane = new Int32Array(laneCount);
-  const outTo = new Int32Array(laneCount);
-  const outNet = new Float64Array(laneCount);
-  for (let e = 0; e < laneCount; e++) {
-    const p = fill[laneFrom[e]]++;
-    outLane[p] = e;
-    outTo[p] = laneTo[e];
-    outNet[p] = laneNet[e];
   }
   return {
     depotCount,
@@ -87,10 +73,7 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
     laneDistanceKm: c.distanceKm,
     laneDriveMinutes: c.driveMinutes,
     laneRef,
-    outStart,
-    outLane,
-    outTo,
-    outNet,
+    ...compressRows(depotCount, laneFrom, laneTo, laneNet),
   };
 }
 
