@@ -1,6 +1,8 @@
 // Shared pieces of `npm run bench`: timing, memory and the side-by-side table. Each suite in
 // test/bench/suites/ exports `suite`; run.ts runs them all (or those named on the command line).
 
+import { seededRandom } from '../support/seeded-random';
+
 export interface BenchFigure {
   /** What was measured, e.g. "random sparse 100k/1M: solve". */
   case: string;
@@ -43,14 +45,5 @@ export function retainedMb<T>(build: () => T): { mb: number; result: T } {
   return { mb: used / (1024 * 1024), result };
 }
 
-/** Seeded pseudo-random numbers (mulberry32), so every bench run sees the same networks. */
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded pseudo-random numbers, so every bench run sees the same networks. */
+export const seeded = seededRandom;

@@ -2,23 +2,13 @@
 // with lanes to nearby depots, positive costs and small rebates (no rebate loop). Invented data,
 // used only to measure; the figures checked for correctness come from the sample and the engine.
 
-/** Deterministic 32-bit generator (mulberry32), so every run times the same network. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { seededRandom } from '../../support/seeded-random';
 
 const money = (cents: number) => (cents / 100).toFixed(2);
 
 /** Depots and lanes CSV texts with `depots` depots and `depots * perDepot` lanes. */
 export function bigNetwork(depots: number, perDepot: number, seed = 20261202): { depotsText: string; lanesText: string } {
-  const next = random(seed);
+  const next = seededRandom(seed);
   const lat: number[] = [];
   const lon: number[] = [];
   const depotLines = ['id,name,lat,lon'];

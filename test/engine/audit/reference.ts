@@ -5,6 +5,7 @@
 import { createRequire } from 'node:module';
 import { numberedIds, networkOf, type LaneTuple } from '../../support/network-builder';
 import type { Network } from '../../../engine/network/types';
+import { seededRandom } from '../../support/seeded-random';
 
 interface JsEdge {
   from(): number;
@@ -39,17 +40,8 @@ export function indexedLanes(network: Network, nets: ArrayLike<number> = network
   return Array.from({ length: network.laneCount }, (_, e) => [network.laneFrom[e], network.laneTo[e], nets[e]] as IndexedLane);
 }
 
-/** Seeded pseudo-random numbers (mulberry32). */
-export function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded pseudo-random numbers (kept under this name for the tests that import it). */
+export const rng = seededRandom;
 
 /**
  * A random network. With `loopFree`, nets are c + p(u) - p(v) with c >= 0 and random potentials p,
