@@ -16,6 +16,7 @@ import { RouteDetail } from '../components/RouteDetail/RouteDetail';
 import { StatusBar } from '../components/StatusBar/StatusBar';
 import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
+import { addedLanes } from '../model/added-lanes';
 import { applyScenarioAmounts } from '../model/scenario-edits';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
@@ -37,6 +38,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
     () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario, keyIndex) : null),
     [network, keys, scenario, keyIndex],
   );
+  const added = useMemo(() => (network ? addedLanes(network.depotIds, scenario) : []), [network, scenario]);
 
   // A newly imported network without the chosen origin starts from its first depot.
   useEffect(() => {
@@ -74,14 +76,14 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         </aside>
         <section className="lw-mapwrap" aria-label="Map">
           <ErrorBoundary what="map">
-            <NetworkMap network={network} solve={solve} route={route} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} />
+            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} />
           </ErrorBoundary>
           <MapLegend />
         </section>
       </main>
       <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
         <ErrorBoundary what="results panel">
-          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} />}
+          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} added={added} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} />}
         </ErrorBoundary>
       </section>
       <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />

@@ -2,6 +2,7 @@
 // contract review and the last import's report.
 
 import { parseScenarioDocument } from '../../engine/scenario/document';
+import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { LaneAmounts, LaneKey } from '../model/scenario-edits';
 import type { ExportKind, NetworkView, SolveView } from '../worker/protocol';
@@ -18,13 +19,14 @@ export interface LowerPanelProps {
   network: NetworkView;
   solve: SolveView;
   amounts: LaneAmounts;
+  added: readonly AddedLane[];
   keys: readonly LaneKey[];
   tab: string;
   onTab(tab: string): void;
   onExport(kind: ExportKind): void;
 }
 
-export function LowerPanel({ bench, network, solve, amounts, keys, tab, onTab, onExport }: LowerPanelProps) {
+export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, onTab, onExport }: LowerPanelProps) {
   const { scenario, setScenario, selected, setSelected, dataset } = bench;
   const onScenario = (next: Scenario) => setScenario(next);
   const loadScenarioFile = async () => {
@@ -50,7 +52,7 @@ export function LowerPanel({ bench, network, solve, amounts, keys, tab, onTab, o
       {tab === 'results' && <ResultsTable network={network} solve={solve} selected={selected} onSelect={setSelected} onExport={() => onExport('routes-csv')} />}
       {tab === 'lanes' && (
         <div className="lw-split">
-          <LaneTable network={network} keys={keys} amounts={amounts} scenario={scenario} onScenario={onScenario} />
+          <LaneTable network={network} keys={keys} amounts={amounts} added={added} scenario={scenario} onScenario={onScenario} />
           <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} />
         </div>
       )}

@@ -7,13 +7,16 @@ import 'leaflet/dist/leaflet.css';
 import { useEffect, useRef, useState } from 'react';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { addBasemap } from './basemap';
-import { depotMarkers, laneLayer, loopLayer, routeLayer, solveMarkers, styleDepots, treeLayer } from './network-layers';
+import type { AddedLane } from '../model/added-lanes';
+import { addedLaneLayer, depotMarkers, laneLayer, loopLayer, routeLayer, solveMarkers, styleDepots, treeLayer } from './network-layers';
 import './map.css';
 
 export interface NetworkMapProps {
   network: NetworkView | null;
   solve: SolveView | null;
   route: RouteView | null;
+  /** Lanes the active scenario adds (drawn dotted and labelled). */
+  added: readonly AddedLane[];
   selected: number | null;
   onSelect(depot: number): void;
   onPlanFrom(depot: number): void;
@@ -54,7 +57,7 @@ function makeRenderers(map: L.Map): Renderers {
   };
 }
 
-export function NetworkMap({ network, solve, route, selected, onSelect, onPlanFrom }: NetworkMapProps) {
+export function NetworkMap({ network, solve, route, added, selected, onSelect, onPlanFrom }: NetworkMapProps) {
   const element = useRef<HTMLDivElement>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
@@ -106,6 +109,7 @@ export function NetworkMap({ network, solve, route, selected, onSelect, onPlanFr
 
   useLayer(map, network && renderers ? () => laneLayer(network, renderers.lanes) : null, [network]);
   useLayer(map, network && solve && renderers ? () => treeLayer(network, solve, renderers.overlay) : null, [network, solve]);
+  useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
   useLayer(map, network && route && renderers ? () => routeLayer(network, route, renderers.overlay) : null, [network, route]);
   useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, renderers.overlay) : null, [network, solve]);
   // Depot circles are made once per network (thousands of them) and only restyled per solve.
@@ -126,15 +130,17 @@ export function NetworkMap({ network, solve, route, selected, onSelect, onPlanFr
   useLayer(map, network && solve ? () => solveMarkers(network, solve, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) }) : null, [network, solve]);
 
   const loopCount = solve?.loops.length ?? 0;
+  const addedDrawn = added.filter((a) => a.from >= 0 && a.to >= 0).length;
   const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
   return (
     <div
       className="lw-map"
       ref={element}
       role="region"
-      aria-label={`Network map: ${network?.depotIds.length ?? 0} depots, ${network?.laneFrom.length ?? 0} lanes${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
+      aria-label={`Network map: ${network?.depotIds.length ?? 0} depots, ${network?.laneFrom.length ?? 0} lanes${addedDrawn ? `, ${addedDrawn} lane(s) the scenario adds drawn dotted and labelled` : ''}${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
       data-loops={loopCount}
       data-unbounded={unbounded}
+      data-added-lanes={addedDrawn}
       data-tree-lanes={solve?.treeLanes.length ?? 0}
     />
   );

@@ -2,6 +2,7 @@
 // layer, so 50,000 lanes stay smooth), the route tree, the selected route, rebate loops, depots.
 
 import L from 'leaflet';
+import { addedLaneName, type AddedLane } from '../model/added-lanes';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { MAX_DIAMONDS, STYLE } from './map-style';
 
@@ -54,6 +55,24 @@ export function loopLayer(network: NetworkView, solve: SolveView, renderer: L.Re
     const label = `Rebate loop ${i + 1}: ${loop.depots.map((d) => network.depotIds[d]).join(' → ')} → ${network.depotIds[loop.depots[0]]}`;
     group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-loop-label' }).setLatLng(centre).setContent(label));
   });
+  return group;
+}
+
+/** Lanes the scenario adds: dotted lines over a casing, each with a permanent "added" label. */
+export function addedLaneLayer(network: NetworkView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer | null {
+  const drawable = added.filter((a) => a.from >= 0 && a.to >= 0);
+  if (drawable.length === 0) return null;
+  const group = L.layerGroup();
+  for (const a of drawable) {
+    const ends: L.LatLngExpression[] = [
+      [network.lat[a.from], network.lon[a.from]],
+      [network.lat[a.to], network.lon[a.to]],
+    ];
+    group.addLayer(L.polyline(ends, { ...STYLE.addedCasing, renderer, interactive: false }));
+    group.addLayer(L.polyline(ends, { ...STYLE.added, renderer, interactive: false }));
+    const middle: L.LatLngExpression = [(network.lat[a.from] + network.lat[a.to]) / 2, (network.lon[a.from] + network.lon[a.to]) / 2];
+    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(escapeHtml(`Added: ${addedLaneName(a.lane)}`)));
+  }
   return group;
 }
 

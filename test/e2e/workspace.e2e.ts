@@ -165,17 +165,12 @@ describe('workspace in the browser', () => {
   });
 
   it('loads a scenario file that adds a lane and plans with it', async () => {
+    const cut = { kind: 'set-amount' as const, lane: { from: 'FRA', to: 'SXB', ref: 'BFH-L-019', occurrence: 1 }, field: 'rebate' as const, amountMinor: 0, note: null };
+    const milanLane = { from: 'RTM', to: 'MIL', ref: 'WHATIF-1', tollMinor: 9000, feesMinor: 1500, fuelMinor: 30000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null };
     const scenario = {
       name: 'Direct Milan run',
       description: 'what-if: a direct lane and no volume refund',
-      changes: [
-        { kind: 'set-amount' as const, lane: { from: 'FRA', to: 'SXB', ref: 'BFH-L-019', occurrence: 1 }, field: 'rebate' as const, amountMinor: 0, note: null },
-        {
-          kind: 'add-lane' as const,
-          note: null,
-          lane: { from: 'RTM', to: 'MIL', ref: 'WHATIF-1', tollMinor: 9000, feesMinor: 1500, fuelMinor: 30000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null },
-        },
-      ],
+      changes: [cut, { kind: 'add-lane' as const, note: null, lane: milanLane }],
     };
     await page.getByRole('tab', { name: /Lanes/ }).click();
     const before = await solveCount(page);
@@ -187,8 +182,43 @@ describe('workspace in the browser', () => {
     expect(await compare.innerText()).toContain('new lane RTM → MIL');
     const expected = expectedPlan(sample('depots.csv'), sample('lanes-rebate-loop.csv'), 'RTM', date, scenario);
     expect(expected.cost.get('MIL')).toBe(40500);
+
+    // The added lane is listed in the lane table, marked as the scenario's, and drawn dotted with a label.
+    const addedRow = page.locator('[data-testid="lane-table"] tr[data-added-lane]');
+    expect(await addedRow.count()).toBe(1);
+    expect(await addedRow.locator('th').innerText()).toBe('RTM → MIL');
+    expect(await addedRow.innerText()).toContain('added by scenario');
+    expect(await addedRow.locator('input[aria-label^="toll of added lane"]').inputValue()).toBe('90.00');
+    const map = page.getByRole('region', { name: /Network map/ });
+    expect(Number(await map.getAttribute('data-added-lanes'))).toBe(1);
+    expect(await page.locator('.lw-added-label').innerText()).toBe('Added: RTM → MIL (WHATIF-1)');
+    await snap(page, 'scenario-added-lane');
     await page.getByRole('tab', { name: 'Results' }).click();
     expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
+
+    // Editing the added lane's toll rewrites its change; the plan follows the engine.
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    let editBefore = await solveCount(page);
+    const toll = page.locator('[data-testid="lane-table"] tr[data-added-lane] input[aria-label^="toll of added lane"]');
+    await toll.fill('100.00');
+    await toll.press('Enter');
+    await waitForPlan(page, editBefore);
+    const edited = { ...scenario, changes: [cut, { kind: 'add-lane' as const, note: null, lane: { ...milanLane, tollMinor: 10000 } }] };
+    const expectedEdited = expectedPlan(sample('depots.csv'), sample('lanes-rebate-loop.csv'), 'RTM', date, edited);
+    expect(expectedEdited.cost.get('MIL')).toBe(41500);
+    expect(await compare.innerText()).toContain('new lane RTM → MIL');
+    await page.getByRole('tab', { name: 'Results' }).click();
+    expectCostsMatch(await shownCosts(page), expectedEdited.cost, expectedEdited.unbounded);
+
+    // Removing it takes it off the table and the map.
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    editBefore = await solveCount(page);
+    await page.getByRole('button', { name: 'Remove added lane RTM → MIL (WHATIF-1)' }).click();
+    await waitForPlan(page, editBefore);
+    expect(await page.locator('[data-testid="lane-table"] tr[data-added-lane]').count()).toBe(0);
+    expect(Number(await map.getAttribute('data-added-lanes'))).toBe(0);
+    await expect.poll(() => page.locator('.lw-added-label').count()).toBe(0); // Leaflet fades a label out
+    expect(await compare.innerText()).not.toContain('new lane RTM → MIL');
   });
 
   it('imports a broken lanes file, lists every rejected row, and continues with the accepted rows', async () => {

@@ -1,10 +1,13 @@
 // The lane table: every lane of the contract with its amounts under the active scenario. Editing an
 // amount or closing a lane adds a change to the scenario (never to the imported file); the plan
-// recomputes at once. Filtered and paged so 50,000 lanes stay responsive.
+// recomputes at once. Lanes the scenario adds are listed first, marked as such, editable and
+// removable. Filtered and paged so 50,000 lanes stay responsive.
 
 import { useMemo, useState } from 'react';
+import { addedAmount, addedLaneName, setAddedLaneAmount, type AddedLane } from '../../model/added-lanes';
 import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type LaneAmounts, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import { formatMoney } from '../../model/format';
+import { withoutChange } from '../../../engine/scenario/edit';
 import type { NetworkView } from '../../worker/protocol';
 import { AmountCell } from './AmountCell';
 
@@ -12,13 +15,15 @@ export interface LaneTableProps {
   network: NetworkView;
   keys: readonly LaneKey[];
   amounts: LaneAmounts;
+  /** Lanes the scenario adds (not in the network). */
+  added: readonly AddedLane[];
   scenario: Scenario;
   onScenario(next: Scenario): void;
 }
 
 const PAGE = 100;
 
-export function LaneTable({ network, keys, amounts, scenario, onScenario }: LaneTableProps) {
+export function LaneTable({ network, keys, amounts, added, scenario, onScenario }: LaneTableProps) {
   const [text, setText] = useState('');
   const [changedOnly, setChangedOnly] = useState(false);
   const [page, setPage] = useState(0);
@@ -35,6 +40,10 @@ export function LaneTable({ network, keys, amounts, scenario, onScenario }: Lane
     }
     return out;
   }, [network, amounts, text, changedOnly]);
+  const addedShown = useMemo(() => {
+    const needle = text.trim().toLowerCase();
+    return added.filter((a) => needle === '' || `${a.lane.from} ${a.lane.to} ${a.lane.ref ?? ''}`.toLowerCase().includes(needle));
+  }, [added, text]);
   const pages = Math.max(1, Math.ceil(lanes.length / PAGE));
   const current = Math.min(page, pages - 1);
   const id = (d: number) => network.depotIds[d];
@@ -47,7 +56,7 @@ export function LaneTable({ network, keys, amounts, scenario, onScenario }: Lane
           <input type="checkbox" checked={changedOnly} onChange={(e) => (setChangedOnly(e.target.checked), setPage(0))} /> Changed in scenario only
         </label>
         <span className="lw-muted" aria-live="polite">
-          {lanes.length} lanes · page {current + 1} of {pages}
+          {lanes.length} lanes{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages}
         </span>
         <button type="button" disabled={current === 0} onClick={() => setPage(current - 1)}>
           Previous page
@@ -71,6 +80,40 @@ export function LaneTable({ network, keys, amounts, scenario, onScenario }: Lane
           </tr>
         </thead>
         <tbody>
+          {addedShown.map((a) => {
+            const name = addedLaneName(a.lane);
+            return (
+              <tr key={`added-${a.changeIndex}`} data-added-lane={a.changeIndex} className="lw-changed-row lw-added-row">
+                <td>
+                  <span className="lw-badge lw-badge-added" title="This lane is not in the lanes file: the scenario adds it">
+                    + added by scenario
+                  </span>
+                </td>
+                <th scope="row">
+                  {a.lane.from} → {a.lane.to}
+                </th>
+                <td>{a.lane.ref ?? '—'}</td>
+                {EDITABLE_FIELDS.map((field) => (
+                  <td key={field} className="lw-num">
+                    <AmountCell
+                      key={`added-${a.changeIndex}-${field}-${addedAmount(a.lane, field)}`}
+                      valueMinor={addedAmount(a.lane, field)}
+                      exponent={network.exponent}
+                      label={`${field} of added lane ${name}`}
+                      changed
+                      onCommit={(value) => onScenario(setAddedLaneAmount(scenario, a.changeIndex, field, value))}
+                    />
+                  </td>
+                ))}
+                <td className="lw-num">{formatMoney(a.netMinor, network.exponent)}</td>
+                <td>
+                  <button type="button" aria-label={`Remove added lane ${name}`} onClick={() => onScenario(withoutChange(scenario, a.changeIndex))}>
+                    Remove
+                  </button>
+                </td>
+              </tr>
+            );
+          })}
           {lanes.slice(current * PAGE, current * PAGE + PAGE).map((e) => {
             const name = `${id(network.laneFrom[e])} → ${id(network.laneTo[e])}`;
             const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];

@@ -30,6 +30,13 @@ export function MapLegend() {
         rebate loop (labelled)
       </li>
       <li>
+        <svg width="28" height="10" aria-hidden="true">
+          <line x1="0" y1="5" x2="28" y2="5" stroke="#fff" strokeWidth="6" />
+          <line x1="2" y1="5" x2="28" y2="5" stroke="#5b2a86" strokeWidth="4" strokeDasharray="0.1 8" strokeLinecap="round" />
+        </svg>
+        lane the scenario adds (dotted, labelled “Added”)
+      </li>
+      <li>
         <span className="lw-legend-diamond" aria-hidden="true">
           ∞
         </span>

@@ -66,7 +66,7 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       <button type="button" onClick={onLoadFile}>
         Load a scenario file…
       </button>
-      {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds count in every cost but are not drawn on the map or listed in the lane table.</p>}
+      {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds are listed first in the lane table and drawn dotted, labelled “Added”, on the map.</p>}
       <h3>What moved from {network.depotIds[solve.origin]}</h3>
       {moved.length === 0 ? (
         <p>No depot’s status or cost changed.</p>

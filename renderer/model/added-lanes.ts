@@ -1,0 +1,55 @@
+// Lanes the active scenario adds ("add-lane" changes). They are not in the imported network, so the
+// map and the lane table read them from the scenario itself; an edit rewrites the change in place.
+
+import type { NewLane } from '../../engine/scenario/types';
+import type { EditableField, Scenario } from './scenario-edits';
+
+/** One lane the scenario adds, as the map and the lane table show it. */
+export interface AddedLane {
+  /** Position of its change in `scenario.changes` (what an edit or removal names). */
+  changeIndex: number;
+  lane: NewLane;
+  /** Depot indices in the network; -1 when the file has no such depot (the change is a problem). */
+  from: number;
+  to: number;
+  netMinor: number;
+}
+
+const FIELD_OF: Record<EditableField, 'tollMinor' | 'fuelMinor' | 'feesMinor' | 'rebateMinor'> = {
+  toll: 'tollMinor',
+  fuel: 'fuelMinor',
+  fees: 'feesMinor',
+  rebate: 'rebateMinor',
+};
+
+/** The scenario's added lanes in change order, located on the network's depots. */
+export function addedLanes(depotIds: readonly string[], scenario: Scenario | null): AddedLane[] {
+  if (!scenario) return [];
+  const index = new Map(depotIds.map((id, d) => [id, d]));
+  const out: AddedLane[] = [];
+  scenario.changes.forEach((change, changeIndex) => {
+    if (change.kind !== 'add-lane') return;
+    const l = change.lane;
+    out.push({ changeIndex, lane: l, from: index.get(l.from) ?? -1, to: index.get(l.to) ?? -1, netMinor: l.tollMinor + l.fuelMinor + l.feesMinor - l.rebateMinor });
+  });
+  return out;
+}
+
+/** One amount of an added lane (minor units). */
+export function addedAmount(lane: NewLane, field: EditableField): number {
+  return lane[FIELD_OF[field]];
+}
+
+/** The scenario with one amount of the added lane at `changeIndex` replaced; the change keeps its place. */
+export function setAddedLaneAmount(scenario: Scenario, changeIndex: number, field: EditableField, amountMinor: number): Scenario {
+  const change = scenario.changes[changeIndex];
+  if (!change || change.kind !== 'add-lane') throw new RangeError(`scenario: change ${changeIndex + 1} does not add a lane`);
+  const changes = scenario.changes.slice();
+  changes[changeIndex] = { ...change, lane: { ...change.lane, [FIELD_OF[field]]: amountMinor } };
+  return { ...scenario, changes };
+}
+
+/** "RTM → MIL (WHATIF-1)": how the map label and the table name an added lane. */
+export function addedLaneName(lane: NewLane): string {
+  return `${lane.from} → ${lane.to}${lane.ref ? ` (${lane.ref})` : ''}`;
+}
