@@ -164,6 +164,6 @@ export function solveMarkers(network: NetworkView, solve: SolveView, handlers: D
     }
   }
   const o = solve.origin;
-  group.addLayer(L.tooltip({ permanent: true, direction: 'right', offset: [10, 0], className: 'lw-origin-label' }).setLatLng([network.lat[o], network.lon[o]]).setContent(`Origin ${network.depotIds[o]}`));
+  group.addLayer(L.tooltip({ permanent: true, direction: 'right', offset: [10, 0], className: 'lw-origin-label' }).setLatLng([network.lat[o], network.lon[o]]).setContent(`Origin ${escapeHtml(network.depotIds[o])}${solve.status[o] === 2 ? ' · ∞ unbounded' : ''}`));
   return group;
 }

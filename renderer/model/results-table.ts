@@ -2,6 +2,7 @@
 // solve, so the table component only renders and the logic is unit-tested without a browser.
 
 import { flagLabels } from './flags';
+import { formatMoney } from './format';
 import type { NetworkView, SolveView } from '../worker/protocol';
 
 export type StatusWord = 'origin' | 'reachable' | 'unreachable' | 'unbounded';
@@ -11,6 +12,8 @@ export interface ResultRow {
   id: string;
   name: string;
   status: StatusWord;
+  /** Cost unbounded (a rebate loop reaches it); true for the origin too when a loop runs back through it. */
+  unbounded: boolean;
   /** Minor units; NaN when there is no finite cost. */
   costMinor: number;
   legs: number;
@@ -47,6 +50,7 @@ export function resultRows(network: NetworkView, solve: SolveView): ResultRow[] 
       id: network.depotIds[d],
       name: network.depotNames[d],
       status: d === solve.origin ? 'origin' : STATUS_WORDS[solve.status[d]],
+      unbounded: solve.status[d] === 2,
       costMinor: solve.cost[d],
       legs: solve.legs[d],
       driveMinutes: solve.driveMinutes[d],
@@ -96,11 +100,30 @@ export function queryRows(rows: readonly ResultRow[], query: TableQuery): Result
   const needle = query.text.trim().toLowerCase();
   const kept = rows.filter(
     (row) =>
-      (query.status === 'all' || row.status === query.status) &&
+      (query.status === 'all' || row.status === query.status || (query.status === 'unbounded' && row.unbounded)) &&
       (!query.flaggedOnly || row.flags !== 0) &&
       (needle === '' || row.id.toLowerCase().includes(needle) || row.name.toLowerCase().includes(needle) || row.flagText.some((f) => f.includes(needle))),
   );
   return kept.sort((a, b) => compare(a, b, query.sortKey, query.descending) || a.depot - b.depot);
+}
+
+/** The status words a row shows, each with its badge kind: an unbounded origin is both. */
+export function statusBadges(row: Pick<ResultRow, 'status' | 'unbounded'>): { text: string; kind: StatusWord }[] {
+  const unbounded = { text: '∞ unbounded', kind: 'unbounded' as const };
+  if (row.status === 'origin') return row.unbounded ? [{ text: 'origin', kind: 'origin' }, unbounded] : [{ text: 'origin', kind: 'origin' }];
+  return row.status === 'unbounded' ? [unbounded] : [{ text: row.status, kind: row.status }];
+}
+
+/** The status cell as text, e.g. "origin · ∞ unbounded". */
+export function statusText(row: Pick<ResultRow, 'status' | 'unbounded'>): string {
+  return statusBadges(row)
+    .map((b) => b.text)
+    .join(' · ');
+}
+
+/** The cost cell: the amount, or words when no finite cost exists. */
+export function costText(row: Pick<ResultRow, 'unbounded' | 'costMinor'>, exponent: number): string {
+  return row.unbounded ? 'no finite cost' : formatMoney(row.costMinor, exponent);
 }
 
 /** Next query after a header click: same key flips direction, a new key sorts ascending. */

@@ -126,6 +126,15 @@ describe('workspace in the browser', () => {
     expect(await page.getByRole('img', { name: /: cost unbounded/ }).count()).toBe(expected.unbounded.size);
     await snap(page, 'rebate-loop-warning');
 
+    // The loop runs back through the origin: its row and its route detail say so in words.
+    expect(expected.unbounded.has('RTM')).toBe(true);
+    const originRow = page.locator('[data-testid="results-table"] tr[data-depot="RTM"]');
+    expect(await originRow.locator('td').nth(1).innerText()).toBe('origin · ∞ unbounded');
+    expect(await originRow.locator('td').nth(2).innerText()).toBe('no finite cost');
+    await originRow.click();
+    await expect.poll(() => page.locator('[data-testid="origin-unbounded"]').count()).toBe(1);
+    expect(await page.locator('[data-testid="origin-unbounded"]').innerText()).toMatch(/origin · ∞ unbounded/);
+
     await page.getByRole('tab', { name: /Contract review/ }).click();
     const review = page.locator('[data-testid="contract-review"]');
     await review.waitFor();

@@ -5,7 +5,7 @@
 import { useMemo, useState } from 'react';
 import { ALL_FLAG_LABELS, flagExplanations } from '../../model/flags';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
-import { DEFAULT_QUERY, queryRows, resultRows, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
+import { costText, DEFAULT_QUERY, queryRows, resultRows, statusBadges, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 
 export interface ResultsTableProps {
@@ -90,16 +90,21 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
               data-depot={row.id}
               data-cost-minor={Number.isFinite(row.costMinor) ? row.costMinor : ''}
               aria-current={row.depot === selected ? 'true' : undefined}
-              className={`lw-status-${row.status}${row.depot === selected ? ' lw-selected' : ''}`}
+              className={`lw-status-${row.status}${row.unbounded && row.status === 'origin' ? ' lw-status-unbounded' : ''}${row.depot === selected ? ' lw-selected' : ''}`}
               onClick={() => (onSelect(row.depot), setActive(i))}
               onKeyDown={(event) => moveFocus(event, row.depot)}
             >
               <th scope="row">{row.id}</th>
               <td>{row.name}</td>
               <td>
-                <span className={`lw-badge lw-badge-${row.status}`}>{row.status === 'unbounded' ? '∞ unbounded' : row.status}</span>
+                {statusBadges(row).map((b, k) => (
+                  <span key={b.kind}>
+                    {k > 0 ? ' · ' : ''}
+                    <span className={`lw-badge lw-badge-${b.kind}`}>{b.text}</span>
+                  </span>
+                ))}
               </td>
-              <td className="lw-num">{row.status === 'unbounded' ? 'no finite cost' : formatMoney(row.costMinor, network.exponent)}</td>
+              <td className="lw-num">{costText(row, network.exponent)}</td>
               <td className="lw-num">{row.legs >= 0 ? row.legs : '—'}</td>
               <td className="lw-num">{formatDriveMinutes(row.driveMinutes)}</td>
               <td title={flagExplanations(row.flags).join('\n')}>{row.flagText.join(', ')}</td>

@@ -27,8 +27,14 @@ export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom 
   return (
     <section className="lw-route" aria-labelledby="lw-route-title">
       <h2 id="lw-route-title">Route to {label}</h2>
-      {depot === solve.origin && <p>This is the origin.</p>}
-      {status === 2 && (
+      {depot === solve.origin && status !== 2 && <p>This is the origin.</p>}
+      {depot === solve.origin && status === 2 && (
+        <p className="lw-warn" data-testid="origin-unbounded">
+          <strong>This is the origin · ∞ unbounded.</strong> A rebate loop runs back through {network.depotIds[depot]}: each lap of it returns here for less than
+          nothing, so no route from here has a finite cost. Fix the loop’s terms (see the warning and the contract review).
+        </p>
+      )}
+      {status === 2 && depot !== solve.origin && (
         <p className="lw-warn">
           <strong>∞ No cheapest route.</strong> This depot is reachable through a rebate loop, so its cost is unbounded. Fix the loop’s terms (see the warning and the contract review).
         </p>

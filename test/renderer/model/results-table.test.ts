@@ -3,7 +3,7 @@
 
 import { describe, expect, it } from 'vitest';
 import { FLAG_LONG_DRIVE, FLAG_UNBOUNDED } from '../../../renderer/model/flags';
-import { DEFAULT_QUERY, queryRows, resultRows, toggleSort } from '../../../renderer/model/results-table';
+import { costText, DEFAULT_QUERY, queryRows, resultRows, statusBadges, statusText, toggleSort } from '../../../renderer/model/results-table';
 import type { NetworkView, SolveView } from '../../../renderer/worker/protocol';
 
 function fixture(): { network: NetworkView; solve: SolveView } {
@@ -51,5 +51,24 @@ describe('results table model', () => {
     expect(queryRows(rows, { ...DEFAULT_QUERY, text: 'driving' }).map((r) => r.id)).toEqual(['AAA']);
     expect(queryRows(rows, { ...DEFAULT_QUERY, status: 'unreachable' }).map((r) => r.id)).toEqual(['CCC']);
     expect(queryRows(rows, { ...DEFAULT_QUERY, flaggedOnly: true }).map((r) => r.id)).toEqual(['AAA', 'BBB']);
+  });
+
+  it('says an unbounded origin is unbounded in words, not by colour alone, and lists it under "unbounded"', () => {
+    const looped = { ...solve, status: Uint8Array.from([2, 2, 2, 0, 2]), cost: Float64Array.from([NaN, NaN, NaN, NaN, NaN]), flags: Uint8Array.from([FLAG_UNBOUNDED, FLAG_UNBOUNDED, FLAG_UNBOUNDED, 0, FLAG_UNBOUNDED]) } as SolveView;
+    const loopRows = resultRows(network, looped);
+    expect(loopRows[0]).toMatchObject({ status: 'origin', unbounded: true });
+    expect(statusText(loopRows[0])).toBe('origin · ∞ unbounded');
+    expect(statusBadges(loopRows[0]).map((b) => b.kind)).toEqual(['origin', 'unbounded']);
+    expect(costText(loopRows[0], 2)).toBe('no finite cost');
+    expect(queryRows(loopRows, { ...DEFAULT_QUERY, status: 'unbounded' }).map((r) => r.id)).toEqual(['ORG', 'AAA', 'BBB', 'DDD']);
+    expect(queryRows(loopRows, { ...DEFAULT_QUERY, status: 'origin' }).map((r) => r.id)).toEqual(['ORG']);
+  });
+
+  it('keeps the plain words for a bounded origin and the other statuses', () => {
+    expect(rows.map(statusText)).toEqual(['origin', 'reachable', '∞ unbounded', 'unreachable', 'reachable']);
+    expect(costText(rows[0], 2)).toBe('0.00');
+    expect(costText(rows[1], 2)).toBe('5.00');
+    expect(costText(rows[2], 2)).toBe('no finite cost');
+    expect(costText(rows[3], 2)).toBe('—');
   });
 });
