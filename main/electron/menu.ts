@@ -58,6 +58,7 @@ export function buildMenuTemplate(deps: MenuDeps): MenuItemConstructorOptions[] 
           item('Routes (CSV)…', { command: 'export-routes' }, 'CmdOrCtrl+E'),
           item('Rebate loops (CSV)…', { command: 'export-loops' }),
           item('Map layers (GeoJSON)…', { command: 'export-geojson' }),
+          item('Scenario file (JSON)…', { command: 'export-scenario' }),
         ],
       },
       ...(mac ? [] : ([{ type: 'separator' }, { label: 'Quit', role: 'quit', accelerator: 'Ctrl+Q' }] as MenuItemConstructorOptions[])),

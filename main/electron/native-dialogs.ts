@@ -23,7 +23,10 @@ const INPUT_DIALOGS: Record<InputFileKind, { title: string; filters: Electron.Fi
 const EXPORT_FILTERS: Record<ExportKind, Electron.FileFilter> = {
   csv: { name: 'CSV (RFC 4180)', extensions: ['csv'] },
   geojson: { name: 'GeoJSON (RFC 7946)', extensions: ['geojson', 'json'] },
+  scenario: { name: 'Lanewright scenario (JSON)', extensions: ['json'] },
 };
+
+const EXPORT_TITLES: Record<ExportKind, string> = { csv: 'Export CSV', geojson: 'Export GeoJSON', scenario: 'Save scenario file' };
 
 const WORKSPACE_FILTER: Electron.FileFilter = { name: 'Lanewright workspace', extensions: ['json'] };
 
@@ -76,7 +79,7 @@ export class ElectronDialogs implements NativeDialogs {
 
   async chooseExportTarget(suggestedName: string, kind: ExportKind): Promise<string | null> {
     const chosen = await this.save({
-      title: kind === 'csv' ? 'Export CSV' : 'Export GeoJSON',
+      title: EXPORT_TITLES[kind],
       defaultPath: path.join(this.defaultFolder(), suggestedName),
       filters: [EXPORT_FILTERS[kind]],
       properties: ['showOverwriteConfirmation', 'createDirectory'],

@@ -10,8 +10,11 @@ export type { WorkspaceDocument } from '../../engine/workspace/document';
 /** Kinds of input file the user can pick; each has its own dialog title and filters. */
 export type InputFileKind = 'depots' | 'lanes' | 'scenario';
 
-/** Kinds of export; they decide the file filter and extension of the save dialog. */
-export type ExportKind = 'csv' | 'geojson';
+/**
+ * Kinds of export; they decide the file filter and extension of the save dialog. 'scenario' is the
+ * versioned scenario document (engine/scenario/document.ts) that `lanewright compare --scenario` reads.
+ */
+export type ExportKind = 'csv' | 'geojson' | 'scenario';
 
 /** A text file read by the host on the renderer's behalf. */
 export interface ReadFile {
@@ -127,6 +130,7 @@ export type MenuCommand =
   | { command: 'export-routes' }
   | { command: 'export-loops' }
   | { command: 'export-geojson' }
+  | { command: 'export-scenario' }
   | { command: 'about' };
 
 /** Names of the menu commands. */

@@ -5,6 +5,8 @@ import type { ChannelName, RequestOf } from './contract';
 import { checkBoolean, checkChoice, checkObject, checkOptionalText, checkText, FieldCheckFailure } from '../../engine/workspace/check';
 import { checkWorkspace } from '../../engine/workspace/parse';
 import { WorkspaceFormatError } from '../../engine/workspace/errors';
+import { ScenarioFormatError } from '../../engine/errors';
+import { parseScenarioDocument } from '../../engine/scenario/document';
 import { IpcPayloadError } from '../electron/errors';
 
 /** Longest path accepted over IPC (Windows long paths). */
@@ -44,7 +46,9 @@ const VALIDATORS: Validators = {
     }
     if (typeof o.text !== 'string') throw new FieldCheckFailure('/text', typeof o.text, 'must be text');
     if (o.text.length > MAX_EXPORT_CHARS) throw new FieldCheckFailure('/text', `${o.text.length} characters`, `longer than ${MAX_EXPORT_CHARS} characters`);
-    return { suggestedName, text: o.text, kind: checkChoice(o.kind, '/kind', ['csv', 'geojson'] as const) };
+    const kind = checkChoice(o.kind, '/kind', ['csv', 'geojson', 'scenario'] as const);
+    if (kind === 'scenario') checkScenarioText(o.text);
+    return { suggestedName, text: o.text, kind };
   },
   'app:set-dirty': (p) => {
     const o = checkObject(p, '', ['dirty']);
@@ -52,6 +56,18 @@ const VALIDATORS: Validators = {
   },
   'app:info': (p) => (checkObject(p, '', []), {}),
 };
+
+// A scenario export must be a file `lanewright compare --scenario` can read back.
+function checkScenarioText(text: string): void {
+  try {
+    parseScenarioDocument(text, 'ipc');
+  } catch (error) {
+    if (error instanceof ScenarioFormatError) {
+      throw new FieldCheckFailure('/text', error.value ?? '(document)', `not a scenario document: ${error.path === '' ? '' : `field "${error.path}" `}${error.reason}`);
+    }
+    throw error;
+  }
+}
 
 function checkDocument(value: unknown) {
   try {

@@ -20,6 +20,7 @@ const MENU_COMMANDS: readonly MenuCommandName[] = [
   'export-routes',
   'export-loops',
   'export-geojson',
+  'export-scenario',
   'about',
 ];
 

@@ -5,7 +5,8 @@ import { parseScenarioDocument } from '../../engine/scenario/document';
 import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { LaneAmounts, LaneKey } from '../model/scenario-edits';
-import type { ExportKind, NetworkView, SolveView } from '../worker/protocol';
+import type { ExportChoice } from '../model/export-file';
+import type { NetworkView, SolveView } from '../worker/protocol';
 import { ContractReview } from '../components/ContractReview/ContractReview';
 import { ImportReportTable } from '../components/ImportPanel/ImportReportTable';
 import { LaneTable } from '../components/LaneTable/LaneTable';
@@ -23,7 +24,7 @@ export interface LowerPanelProps {
   keys: readonly LaneKey[];
   tab: string;
   onTab(tab: string): void;
-  onExport(kind: ExportKind): void;
+  onExport(kind: ExportChoice): void;
 }
 
 export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, onTab, onExport }: LowerPanelProps) {
@@ -53,7 +54,7 @@ export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, o
       {tab === 'lanes' && (
         <div className="lw-split">
           <LaneTable network={network} keys={keys} amounts={amounts} added={added} scenario={scenario} onScenario={onScenario} />
-          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} />
+          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} />
         </div>
       )}
       {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={keys} scenario={scenario} onScenario={onScenario} />}

@@ -3,7 +3,8 @@
 
 import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
-import type { ExportKind } from '../worker/protocol';
+import { serializeScenarioDocument } from '../../engine/scenario/document';
+import { scenarioFileName, type ExportChoice } from '../model/export-file';
 import type { Workbench } from './use-workbench';
 
 export interface CommandHandlers {
@@ -12,20 +13,25 @@ export interface CommandHandlers {
 }
 
 export function useCommands(bench: Workbench, ui: CommandHandlers) {
-  const { host, engine, setMessage, save, openWorkspace } = bench;
+  const { host, engine, setMessage, save, openWorkspace, scenario } = bench;
 
   const exportFile = useCallback(
-    async (what: ExportKind) => {
+    async (what: ExportChoice) => {
       try {
-        const file = await engine.client.request<'exported'>({ kind: 'export', what });
-        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : 'csv');
+        // The scenario file is the scenario as held here (every change, including ones the loaded
+        // files no longer match), in the versioned format `lanewright compare --scenario` reads.
+        const file =
+          what === 'scenario-json'
+            ? { fileName: scenarioFileName(scenario.name), text: serializeScenarioDocument(scenario) }
+            : await engine.client.request<'exported'>({ kind: 'export', what });
+        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : 'csv');
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);
       } catch (error) {
         setMessage(`Export failed: ${(error as Error).message}`);
       }
     },
-    [engine, host, setMessage],
+    [engine, host, setMessage, scenario],
   );
 
   useEffect(
@@ -51,6 +57,8 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
             return void exportFile('loops-csv');
           case 'export-geojson':
             return void exportFile('geojson');
+          case 'export-scenario':
+            return void exportFile('scenario-json');
           case 'about':
             return ui.openAbout();
         }

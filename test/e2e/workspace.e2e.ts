@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { formatMinor, type Minor } from '../../engine/money/minor';
 import { importNetwork } from '../../engine/import/import-network';
-import { serializeScenarioDocument } from '../../engine/scenario/document';
+import { parseScenarioDocument, serializeScenarioDocument } from '../../engine/scenario/document';
 import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { expectedPlan, sample } from './support/expected';
 
@@ -218,6 +218,13 @@ describe('workspace in the browser', () => {
     expect(await compare.innerText()).toContain('new lane RTM → MIL');
     await page.getByRole('tab', { name: 'Results' }).click();
     expectCostsMatch(await shownCosts(page), expectedEdited.cost, expectedEdited.unbounded);
+
+    // Saved as a scenario file from the Export menu: the versioned document compare reads, same changes.
+    const [saved] = await Promise.all([page.waitForEvent('download'), page.getByLabel('Export', { exact: true }).selectOption('scenario-json')]);
+    expect(saved.suggestedFilename()).toBe('direct-milan-run.json');
+    const savedText = readFileSync(await saved.path(), 'utf8');
+    expect(JSON.parse(savedText)).toMatchObject({ format: 'lanewright-scenario', version: 1 });
+    expect(parseScenarioDocument(savedText, 'direct-milan-run.json')).toEqual(edited);
 
     // Removing it takes it off the table and the map.
     await page.getByRole('tab', { name: /Lanes/ }).click();

@@ -13,11 +13,13 @@ export interface ScenarioCompareProps {
   onScenario(next: Scenario): void;
   /** Replaces the scenario with one read from a scenario file (lanewright-scenario JSON). */
   onLoadFile(): void;
+  /** Saves the scenario as a scenario file (for `lanewright compare --scenario`). */
+  onSaveFile(): void;
 }
 
 const STATUS = ['unreachable', 'reachable', 'unbounded'];
 
-export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile }: ScenarioCompareProps) {
+export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile, onSaveFile }: ScenarioCompareProps) {
   const money = (v: number) => formatMoney(v, network.exponent);
   if (scenario.changes.length === 0) {
     return (
@@ -65,6 +67,9 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       </button>{' '}
       <button type="button" onClick={onLoadFile}>
         Load a scenario file…
+      </button>{' '}
+      <button type="button" onClick={onSaveFile}>
+        Save as scenario file…
       </button>
       {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds are listed first in the lane table and drawn dotted, labelled “Added”, on the map.</p>}
       <h3>What moved from {network.depotIds[solve.origin]}</h3>

@@ -1,7 +1,7 @@
 // The header: product name, what is loaded, and the commands (sample scenarios, import, save,
 // exports, about). In the desktop app the same commands are also in the application menu.
 
-import type { ExportKind } from '../../worker/protocol';
+import type { ExportChoice } from '../../model/export-file';
 
 export interface TopBarProps {
   datasetName: string;
@@ -10,7 +10,7 @@ export interface TopBarProps {
   onSample(loop: boolean): void;
   onImport(): void;
   onSave(): void;
-  onExport(kind: ExportKind): void;
+  onExport(kind: ExportChoice): void;
   onAbout(): void;
 }
 
@@ -46,7 +46,7 @@ export function TopBar({ datasetName, desktop, dirty, onSample, onImport, onSave
             aria-label="Export"
             value=""
             onChange={(e) => {
-              if (e.target.value) onExport(e.target.value as ExportKind);
+              if (e.target.value) onExport(e.target.value as ExportChoice);
               e.target.value = '';
             }}
           >
@@ -55,6 +55,7 @@ export function TopBar({ datasetName, desktop, dirty, onSample, onImport, onSave
             <option value="lanes-csv">Lane costs (CSV)</option>
             <option value="loops-csv">Rebate loops (CSV)</option>
             <option value="geojson">Network and routes (GeoJSON)</option>
+            <option value="scenario-json">Scenario file (JSON)</option>
           </select>
         </label>
         <button type="button" onClick={onAbout}>

@@ -23,7 +23,7 @@ describe('application menu', () => {
   it('reaches every menu command of the contract', () => {
     const { items, sent } = menu('linux', [{ path: '/p/a.json', name: 'a.json', openedAt: '2026-03-02T08:00:00Z' }]);
     for (const item of items) if (item.click) (item.click as () => void)();
-    const expected: MenuCommandName[] = ['open-workspace', 'new-workspace', 'import-depots', 'import-lanes', 'save', 'save-as', 'export-lanes', 'export-routes', 'export-loops', 'export-geojson', 'about'];
+    const expected: MenuCommandName[] = ['open-workspace', 'new-workspace', 'import-depots', 'import-lanes', 'save', 'save-as', 'export-lanes', 'export-routes', 'export-loops', 'export-geojson', 'export-scenario', 'about'];
     expect(new Set(sent.map((c) => c.command))).toEqual(new Set(expected));
   });
 

@@ -38,5 +38,7 @@ describe('native dialogs', () => {
     expect(calls[0].options).toMatchObject({ defaultPath: path.join('/home/ana/Documents', 'routes-RTM.csv'), properties: ['showOverwriteConfirmation', 'createDirectory'] });
     expect(await d.chooseWorkspaceTarget(null)).toBe('/out/routes.lwspace.json');
     expect(await d.chooseExportTarget('map.geojson', 'geojson')).toBe('/out/routes.geojson');
+    expect(await d.chooseExportTarget('direct-run.json', 'scenario')).toBe('/out/routes.json');
+    expect(calls[calls.length - 1].options).toMatchObject({ title: 'Save scenario file', filters: [{ extensions: ['json'] }] });
   });
 });

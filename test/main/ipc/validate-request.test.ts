@@ -3,6 +3,7 @@ import { validateRequest, MAX_IPC_PATH } from '../../../main/ipc/validate-reques
 import { isChannelName, CHANNEL_NAMES } from '../../../main/ipc/channels';
 import { IpcPayloadError } from '../../../main/electron/errors';
 import { emptyWorkspace } from '../../../engine/workspace/document';
+import { parseScenarioDocument, serializeScenarioDocument } from '../../../engine/scenario/document';
 
 function refused(channel: Parameters<typeof validateRequest>[0], payload: unknown): IpcPayloadError {
   try {
@@ -44,6 +45,23 @@ describe('validateRequest', () => {
     expect(refused('file:save-export', { suggestedName: 'r.csv', text: 5, kind: 'csv' })).toMatchObject({ field: '/text' });
     expect(refused('file:save-export', { suggestedName: 'r.csv', text: '', kind: 'xlsx' })).toMatchObject({ field: '/kind' });
     expect(refused('workspace:save', { document: { ...emptyWorkspace(), settings: { ...emptyWorkspace().settings, maxLegs: -1 } }, path: null, saveAs: false })).toMatchObject({ field: '/document/settings/maxLegs' });
+  });
+
+  it('accepts a scenario export only when its text is a scenario document compare can read', () => {
+    const scenario = {
+      name: 'Direct run',
+      description: null,
+      changes: [{ kind: 'close-lane' as const, lane: { from: 'A', to: 'B', ref: null, occurrence: 1 }, note: 'road works' }],
+    };
+    const text = serializeScenarioDocument(scenario);
+    const request = validateRequest('file:save-export', { suggestedName: 'direct-run.json', text, kind: 'scenario' });
+    expect(request.kind).toBe('scenario');
+    expect(parseScenarioDocument(request.text)).toEqual(scenario);
+    expect(refused('file:save-export', { suggestedName: 's.json', text: '{"format":"lanewright-scenario"', kind: 'scenario' })).toMatchObject({ field: '/text' });
+    expect(refused('file:save-export', { suggestedName: 's.json', text: JSON.stringify({ ...JSON.parse(text), version: 99 }), kind: 'scenario' })).toMatchObject({ field: '/text', value: '99' });
+    expect(refused('file:save-export', { suggestedName: 's.json', text: 'depot,cost\r\n', kind: 'scenario' })).toMatchObject({ field: '/text' });
+    // The same text as a plain CSV export is not checked as a scenario.
+    expect(validateRequest('file:save-export', { suggestedName: 's.csv', text: 'depot,cost\r\n', kind: 'csv' }).kind).toBe('csv');
   });
 
   it('accepts an empty export (a table with only its header is still a file)', () => {

@@ -68,6 +68,7 @@ describe('preload host API', () => {
     expect(cleanMenuCommand({ command: 'save', thenQuit: 'yes' })).toEqual({ command: 'save', thenQuit: false });
     expect(cleanMenuCommand({ command: 'save', thenQuit: true })).toEqual({ command: 'save', thenQuit: true });
     expect(cleanMenuCommand({ command: 'export-routes', path: '/x' })).toEqual({ command: 'export-routes' });
+    expect(cleanMenuCommand({ command: 'export-scenario' })).toEqual({ command: 'export-scenario' });
     expect(cleanMenuCommand('about')).toBeNull();
     expect(cleanMenuCommand(null)).toBeNull();
   });
