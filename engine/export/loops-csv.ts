@@ -5,10 +5,11 @@ import { formatCsvRows } from '../io/csv-papaparse';
 import type { RebateLoop } from '../loops/rebate-loop';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
+import { LANE_AMOUNT_COLUMNS, laneAmountCells } from './lane-amount-cells';
 
 export function loopsCsvRows(network: Network, loops: readonly RebateLoop[]): (string | number)[][] {
   const money = (v: number) => formatMinor(v as Minor, network.exponent);
-  const rows: (string | number)[][] = [['loop', 'step', 'from', 'to', 'lane_row', 'ref', 'toll', 'fuel', 'fees', 'rebate', 'net', 'net_per_lap', 'currency']];
+  const rows: (string | number)[][] = [['loop', 'step', 'from', 'to', 'lane_row', 'ref', ...LANE_AMOUNT_COLUMNS, 'net_per_lap', 'currency']];
   loops.forEach((loop, k) => {
     loop.lanes.forEach((e, step) => {
       rows.push([
@@ -18,11 +19,7 @@ export function loopsCsvRows(network: Network, loops: readonly RebateLoop[]): (s
         network.depotIds[network.laneTo[e]],
         network.laneRow[e],
         network.laneRef[e] ?? '',
-        money(network.laneToll[e]),
-        money(network.laneFuel[e]),
-        money(network.laneFees[e]),
-        money(network.laneRebate[e]),
-        money(network.laneNet[e]),
+        ...laneAmountCells(network, e),
         money(loop.netPerLap),
         network.currency,
       ]);

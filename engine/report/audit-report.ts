@@ -5,6 +5,7 @@
 import type { NetworkAudit } from '../audit/network-audit';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
+import { LANE_AMOUNT_COLUMNS, laneAmountCells } from '../export/lane-amount-cells';
 
 export interface AuditLoopLane {
   row: number;
@@ -138,7 +139,7 @@ export function auditLaneRows(network: Network, report: AuditReport): Cell[][] {
   report.loops.forEach((loop, i) => loop.lanes.forEach((row) => onLoops.set(row, [...(onLoops.get(row) ?? []), i + 1])));
   const fix = new Map(report.fix_plan.map((f) => [f.row, f]));
   const head = new Map(report.headroom.map((h) => [h.row, h]));
-  const rows: Cell[][] = [['row', 'from', 'to', 'ref', 'toll', 'fuel', 'fees', 'rebate', 'net', 'on_loops', 'new_rebate', 'new_net', 'floor', 'headroom']];
+  const rows: Cell[][] = [['row', 'from', 'to', 'ref', ...LANE_AMOUNT_COLUMNS, 'on_loops', 'new_rebate', 'new_net', 'floor', 'headroom']];
   for (let e = 0; e < network.laneCount; e++) {
     const row = network.laneRow[e];
     const f = fix.get(row);
@@ -148,11 +149,7 @@ export function auditLaneRows(network: Network, report: AuditReport): Cell[][] {
       network.depotIds[network.laneFrom[e]],
       network.depotIds[network.laneTo[e]],
       network.laneRef[e] ?? '',
-      money(network.laneToll[e]),
-      money(network.laneFuel[e]),
-      money(network.laneFees[e]),
-      money(network.laneRebate[e]),
-      money(network.laneNet[e]),
+      ...laneAmountCells(network, e),
       (onLoops.get(row) ?? []).join(' '),
       f ? money(f.new_rebate_minor) : '',
       f ? money(f.new_net_minor) : '',
