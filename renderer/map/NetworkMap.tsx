@@ -35,6 +35,15 @@ function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps:
   }, [map, ...deps]);
 }
 
+/** `lanes`, or the previous array when it holds the same lanes (so effects keyed on it do not rerun). */
+function useSameLanes(lanes: Int32Array | null): Int32Array | null {
+  const last = useRef<Int32Array | null>(null);
+  const prev = last.current;
+  if (lanes && prev && prev.length === lanes.length && prev.every((e, i) => e === lanes[i])) return prev;
+  last.current = lanes;
+  return lanes;
+}
+
 interface Renderers {
   base: L.Renderer;
   lanes: L.Renderer;
@@ -108,7 +117,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   }, [map, network]);
 
   useLayer(map, network && renderers ? () => laneLayer(network, renderers.lanes) : null, [network]);
-  useLayer(map, network && solve && renderers ? () => treeLayer(network, solve, renderers.overlay) : null, [network, solve]);
+  // Most edits leave the route tree as it was: the same lanes keep the drawn layer, so the overlay
+  // canvas (as large as the map and its margin) is not repainted and re-sent to the compositor.
+  const tree = useSameLanes(solve?.treeLanes ?? null);
+  useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, renderers.overlay) : null, [network, tree]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
   useLayer(map, network && route && renderers ? () => routeLayer(network, route, renderers.overlay) : null, [network, route]);
   useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, renderers.overlay) : null, [network, solve]);

@@ -3,7 +3,7 @@
 
 export const STYLE = {
   lane: { color: '#8d9aa0', weight: 1, opacity: 0.55 },
-  tree: { color: '#1d5f86', weight: 3, opacity: 0.85 },
+  tree: { color: '#1d5f86', weight: 3, opacity: 0.85, lineCap: 'butt', lineJoin: 'miter' },
   route: { color: '#111111', weight: 7, opacity: 0.9 },
   routeInner: { color: '#f2b233', weight: 4, opacity: 1 },
   loop: { color: '#a3123a', weight: 6, opacity: 0.95, dashArray: '12 8' },

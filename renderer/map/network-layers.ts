@@ -30,8 +30,8 @@ export function laneLayer(network: NetworkView, renderer: L.Renderer): L.Layer {
 }
 
 /** The cheapest-route tree from the origin. */
-export function treeLayer(network: NetworkView, solve: SolveView, renderer: L.Renderer): L.Layer {
-  return L.polyline(segmentsOf(network, solve.treeLanes), { ...STYLE.tree, renderer, interactive: false });
+export function treeLayer(network: NetworkView, treeLanes: Int32Array, renderer: L.Renderer): L.Layer {
+  return L.polyline(segmentsOf(network, treeLanes), { ...STYLE.tree, renderer, interactive: false });
 }
 
 /** The selected route: a dark casing under a bright line, so it reads on any background. */

@@ -1,8 +1,11 @@
 // Results of the plan, one row per depot: status, cost, legs, drive time, caution flags and, with a
 // scenario, the change against the base. Sortable by any column, filterable, keyboard-navigable
-// (arrow keys move between rows, Enter shows the route), exportable as CSV.
+// (arrow keys, Page Up/Down, Home/End move between rows, Enter shows the route), exportable as CSV.
+// Long tables are windowed: only rows near the view are in the DOM.
 
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { SpacerRow } from '../DataTable/SpacerRow';
+import { useRowWindow } from '../DataTable/use-row-window';
 import { ALL_FLAG_LABELS, flagExplanations } from '../../model/flags';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { costText, DEFAULT_QUERY, queryRows, resultRows, statusBadges, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
@@ -16,7 +19,7 @@ export interface ResultsTableProps {
   onExport(): void;
 }
 
-const PAGE = 200;
+const PAGE_ROWS = 15;
 
 const COLUMNS: { key: SortKey; label: string; numeric?: boolean }[] = [
   { key: 'id', label: 'Depot' },
@@ -30,19 +33,37 @@ const COLUMNS: { key: SortKey; label: string; numeric?: boolean }[] = [
 
 export function ResultsTable({ network, solve, selected, onSelect, onExport }: ResultsTableProps) {
   const [query, setQuery] = useState<TableQuery>(DEFAULT_QUERY);
-  const [shown, setShown] = useState(PAGE);
-  // Roving tab stop: the table is one Tab stop; arrow keys move between rows.
+  // Roving tab stop: the table is one Tab stop; the keys move between rows (by index, so rows
+  // outside the rendered window are reached too).
   const [active, setActive] = useState(0);
+  const focusWanted = useRef<number | null>(null);
   const rows = useMemo(() => resultRows(network, solve), [network, solve]);
   const visible = useMemo(() => queryRows(rows, query), [rows, query]);
+  const rowWindow = useRowWindow(visible.length);
   const columns = solve.base ? [...COLUMNS, { key: 'delta' as SortKey, label: 'Change vs base', numeric: true }] : COLUMNS;
-  const moveFocus = (event: React.KeyboardEvent<HTMLTableRowElement>, depot: number) => {
-    const row = event.currentTarget;
-    const target = event.key === 'ArrowDown' ? row.nextElementSibling : event.key === 'ArrowUp' ? row.previousElementSibling : null;
-    if (target instanceof HTMLElement) {
+  const last = visible.length - 1;
+  const current = Math.max(0, Math.min(active, last));
+  const tabStop = current >= rowWindow.start && current < rowWindow.end ? current : rowWindow.start;
+
+  // Focus follows the keys once the wanted row is rendered (a windowed table renders it after scrolling).
+  useEffect(() => {
+    const wanted = focusWanted.current;
+    if (wanted === null) return;
+    const row = rowWindow.bodyRef.current?.querySelector<HTMLElement>(`tr[aria-rowindex="${wanted + 2}"]`);
+    if (row) {
+      focusWanted.current = null;
+      row.focus();
+    }
+  });
+
+  const moveFocus = (event: React.KeyboardEvent<HTMLTableRowElement>, i: number, depot: number) => {
+    const steps: Record<string, number> = { ArrowDown: 1, ArrowUp: -1, PageDown: PAGE_ROWS, PageUp: -PAGE_ROWS, Home: -Infinity, End: Infinity };
+    if (event.key in steps) {
       event.preventDefault();
-      setActive((i) => i + (event.key === 'ArrowDown' ? 1 : -1));
-      target.focus();
+      const next = Math.max(0, Math.min(last, i + steps[event.key]));
+      setActive(next);
+      focusWanted.current = next;
+      rowWindow.scrollToIndex(next);
     } else if (event.key === 'Enter' || event.key === ' ') {
       event.preventDefault();
       onSelect(depot);
@@ -69,9 +90,9 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
           Export routes CSV
         </button>
       </div>
-      <table className="lw-table" aria-label={`Routes from ${network.depotIds[solve.origin]}`} data-testid="results-table">
+      <table className="lw-table" aria-label={`Routes from ${network.depotIds[solve.origin]}`} aria-rowcount={visible.length + 1} data-testid="results-table">
         <thead>
-          <tr>
+          <tr aria-rowindex={1}>
             {columns.map((c) => (
               <th key={c.key} scope="col" aria-sort={query.sortKey === c.key ? (query.descending ? 'descending' : 'ascending') : 'none'} className={c.numeric ? 'lw-num' : undefined}>
                 <button type="button" className="lw-sort" onClick={() => setQuery(toggleSort(query, c.key))}>
@@ -82,17 +103,22 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
             ))}
           </tr>
         </thead>
-        <tbody>
-          {visible.slice(0, shown).map((row, i) => (
+        <tbody ref={rowWindow.bodyRef}>
+          <SpacerRow heightPx={rowWindow.padTop} columns={columns.length} />
+          {visible.slice(rowWindow.start, rowWindow.end).map((row, k) => {
+            const i = rowWindow.start + k;
+            return (
             <tr
               key={row.depot}
-              tabIndex={i === Math.min(active, visible.length - 1) ? 0 : -1}
+              aria-rowindex={i + 2}
+              tabIndex={i === tabStop ? 0 : -1}
               data-depot={row.id}
               data-cost-minor={Number.isFinite(row.costMinor) ? row.costMinor : ''}
               aria-current={row.depot === selected ? 'true' : undefined}
               className={`lw-status-${row.status}${row.unbounded && row.status === 'origin' ? ' lw-status-unbounded' : ''}${row.depot === selected ? ' lw-selected' : ''}`}
               onClick={() => (onSelect(row.depot), setActive(i))}
-              onKeyDown={(event) => moveFocus(event, row.depot)}
+              onFocus={() => setActive(i)}
+              onKeyDown={(event) => moveFocus(event, i, row.depot)}
             >
               <th scope="row">{row.id}</th>
               <td>{row.name}</td>
@@ -110,14 +136,11 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
               <td title={flagExplanations(row.flags).join('\n')}>{row.flagText.join(', ')}</td>
               {solve.base && <td className="lw-num">{Number.isFinite(row.deltaMinor) ? (row.deltaMinor > 0 ? '+' : '') + formatMoney(row.deltaMinor, network.exponent) : '—'}</td>}
             </tr>
-          ))}
+            );
+          })}
+          <SpacerRow heightPx={rowWindow.padBottom} columns={columns.length} />
         </tbody>
       </table>
-      {visible.length > shown && (
-        <button type="button" onClick={() => setShown(shown + PAGE)}>
-          Show {Math.min(PAGE, visible.length - shown)} more
-        </button>
-      )}
       <p className="lw-muted">Cautions: {ALL_FLAG_LABELS.join(' · ')}. Amounts in {network.currency}.</p>
     </div>
   );

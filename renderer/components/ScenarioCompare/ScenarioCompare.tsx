@@ -1,7 +1,10 @@
 // What the active scenario moved: its changes lane by lane, then every depot whose status or cost
 // differs from the base contract, largest change first. Each change can be undone on its own.
 
+import { useMemo } from 'react';
 import { laneKeyText } from '../../../engine/scenario/lane-key';
+import { SpacerRow } from '../DataTable/SpacerRow';
+import { useRowWindow } from '../DataTable/use-row-window';
 import { formatMoney } from '../../model/format';
 import type { Scenario } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
@@ -19,8 +22,26 @@ export interface ScenarioCompareProps {
 
 const STATUS = ['unreachable', 'reachable', 'unbounded'];
 
+/** Depots whose status or cost differs from the base, largest change first (status changes on top). */
+function movedDepots(network: NetworkView, solve: SolveView): { d: number; text: string; delta: number }[] {
+  const base = solve.base;
+  if (!base) return [];
+  const money = (v: number) => formatMoney(v, network.exponent);
+  const moved: { d: number; text: string; delta: number }[] = [];
+  for (let d = 0; d < network.depotIds.length; d++) {
+    if (base.status[d] !== solve.status[d]) moved.push({ d, text: `${STATUS[base.status[d]]} → ${STATUS[solve.status[d]]}`, delta: Infinity });
+    else if (solve.status[d] === 1 && base.cost[d] !== solve.cost[d]) {
+      const delta = solve.cost[d] - base.cost[d];
+      moved.push({ d, text: `${money(base.cost[d])} → ${money(solve.cost[d])} (${delta > 0 ? '+' : ''}${money(delta)})`, delta: Math.abs(delta) });
+    }
+  }
+  return moved.sort((a, b) => b.delta - a.delta || a.d - b.d);
+}
+
 export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile, onSaveFile }: ScenarioCompareProps) {
   const money = (v: number) => formatMoney(v, network.exponent);
+  const moved = useMemo(() => movedDepots(network, solve), [network, solve]);
+  const rowWindow = useRowWindow(moved.length);
   if (scenario.changes.length === 0) {
     return (
       <div className="lw-compare" data-testid="scenario-compare">
@@ -30,18 +51,6 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
         </button>
       </div>
     );
-  }
-  const base = solve.base;
-  const moved: { d: number; text: string; delta: number }[] = [];
-  if (base) {
-    for (let d = 0; d < network.depotIds.length; d++) {
-      if (base.status[d] !== solve.status[d]) moved.push({ d, text: `${STATUS[base.status[d]]} → ${STATUS[solve.status[d]]}`, delta: Infinity });
-      else if (solve.status[d] === 1 && base.cost[d] !== solve.cost[d]) {
-        const delta = solve.cost[d] - base.cost[d];
-        moved.push({ d, text: `${money(base.cost[d])} → ${money(solve.cost[d])} (${delta > 0 ? '+' : ''}${money(delta)})`, delta: Math.abs(delta) });
-      }
-    }
-    moved.sort((a, b) => b.delta - a.delta || a.d - b.d);
   }
   const describe = (c: Scenario['changes'][number]) => {
     if (c.kind === 'set-amount') return `${laneKeyText(c.lane)}: ${c.field} set to ${money(c.amountMinor)}`;
@@ -76,20 +85,22 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       {moved.length === 0 ? (
         <p>No depot’s status or cost changed.</p>
       ) : (
-        <table className="lw-compact" aria-label="Depots whose cost or status changed">
+        <table className="lw-compact" aria-label={`Depots whose cost or status changed (${moved.length})`} aria-rowcount={moved.length + 1}>
           <thead>
-            <tr>
+            <tr aria-rowindex={1}>
               <th scope="col">Depot</th>
               <th scope="col">Base → scenario</th>
             </tr>
           </thead>
-          <tbody>
-            {moved.map((m) => (
-              <tr key={m.d} data-moved-depot={network.depotIds[m.d]}>
+          <tbody ref={rowWindow.bodyRef}>
+            <SpacerRow heightPx={rowWindow.padTop} columns={2} />
+            {moved.slice(rowWindow.start, rowWindow.end).map((m, k) => (
+              <tr key={m.d} aria-rowindex={rowWindow.start + k + 2} data-moved-depot={network.depotIds[m.d]}>
                 <th scope="row">{network.depotIds[m.d]}</th>
                 <td>{m.text}</td>
               </tr>
             ))}
+            <SpacerRow heightPx={rowWindow.padBottom} columns={2} />
           </tbody>
         </table>
       )}
