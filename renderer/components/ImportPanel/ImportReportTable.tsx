@@ -1,7 +1,16 @@
 // The validation report of an import: counts per file (accepted + rejected = total) and one line
 // per problem with file, row (as a spreadsheet numbers it), column, value and reason.
 
-import type { ImportReport } from '../../worker/protocol';
+import type { ImportIssue, ImportReport } from '../../worker/protocol';
+import { DataTable, type Column } from '../DataTable/DataTable';
+
+const ISSUE_COLUMNS: Column<ImportIssue>[] = [
+  { label: 'File', cell: (i) => i.file },
+  { label: 'Row', numeric: true, cell: (i) => i.row ?? '—' },
+  { label: 'Column', cell: (i) => i.column ?? '—' },
+  { label: 'Value', cell: (i) => <code>{i.value ?? '—'}</code> },
+  { label: 'Reason', cell: (i) => i.reason },
+];
 
 export function ImportReportTable({ report }: { report: ImportReport }) {
   return (
@@ -25,30 +34,7 @@ export function ImportReportTable({ report }: { report: ImportReport }) {
       {report.issues.length === 0 ? (
         <p>Every row was accepted.</p>
       ) : (
-        <table className="lw-table" aria-label="Rejected rows">
-          <thead>
-            <tr>
-              <th scope="col">File</th>
-              <th scope="col">Row</th>
-              <th scope="col">Column</th>
-              <th scope="col">Value</th>
-              <th scope="col">Reason</th>
-            </tr>
-          </thead>
-          <tbody>
-            {report.issues.map((issue, i) => (
-              <tr key={i}>
-                <td>{issue.file}</td>
-                <td className="lw-num">{issue.row ?? '—'}</td>
-                <td>{issue.column ?? '—'}</td>
-                <td>
-                  <code>{issue.value ?? '—'}</code>
-                </td>
-                <td>{issue.reason}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <DataTable className="lw-table" label="Rejected rows" columns={ISSUE_COLUMNS} rows={report.issues} rowKey={(_, i) => i} />
       )}
       {report.warnings.length > 0 && (
         <details>

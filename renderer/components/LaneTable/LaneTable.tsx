@@ -9,6 +9,7 @@ import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type LaneAmounts, type L
 import { formatMoney } from '../../model/format';
 import { withoutChange } from '../../../engine/scenario/edit';
 import type { NetworkView } from '../../worker/protocol';
+import { TableHead } from '../DataTable/DataTable';
 import { AmountCell } from './AmountCell';
 
 export interface LaneTableProps {
@@ -22,6 +23,8 @@ export interface LaneTableProps {
 }
 
 const PAGE = 100;
+const NUM = (label: string) => ({ label, numeric: true });
+const LANE_TABLE_HEADS = ['Row', 'Lane', 'Ref', NUM('Tolls'), NUM('Fuel'), NUM('Fees'), NUM('Rebate'), NUM('Net'), 'Open'];
 
 export function LaneTable({ network, keys, amounts, added, scenario, onScenario }: LaneTableProps) {
   const [text, setText] = useState('');
@@ -66,19 +69,7 @@ export function LaneTable({ network, keys, amounts, added, scenario, onScenario 
         </button>
       </div>
       <table className="lw-table" aria-label={`Lanes under scenario “${scenario.name}”`} data-testid="lane-table">
-        <thead>
-          <tr>
-            <th scope="col">Row</th>
-            <th scope="col">Lane</th>
-            <th scope="col">Ref</th>
-            <th scope="col" className="lw-num">Tolls</th>
-            <th scope="col" className="lw-num">Fuel</th>
-            <th scope="col" className="lw-num">Fees</th>
-            <th scope="col" className="lw-num">Rebate</th>
-            <th scope="col" className="lw-num">Net</th>
-            <th scope="col">Open</th>
-          </tr>
-        </thead>
+        <TableHead labels={LANE_TABLE_HEADS} />
         <tbody>
           {addedShown.map((a) => {
             const name = addedLaneName(a.lane);

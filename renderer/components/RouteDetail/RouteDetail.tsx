@@ -6,6 +6,7 @@ import { flagExplanations } from '../../model/flags';
 import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, RouteView, SolveView } from '../../worker/protocol';
 import { BreakdownChart } from '../BreakdownChart/BreakdownChart';
+import { TableHead } from '../DataTable/DataTable';
 
 export interface RouteDetailProps {
   network: NetworkView;
@@ -52,16 +53,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom 
           ))}
           <table className="lw-compact" data-testid="route-breakdown">
             <caption className="lw-visually-hidden">Cost of each lane on the route</caption>
-            <thead>
-              <tr>
-                <th scope="col">Lane</th>
-                <th scope="col" className="lw-num">Tolls</th>
-                <th scope="col" className="lw-num">Fuel</th>
-                <th scope="col" className="lw-num">Fees</th>
-                <th scope="col" className="lw-num">Rebate</th>
-                <th scope="col" className="lw-num">Net</th>
-              </tr>
-            </thead>
+            <TableHead labels={['Lane', ...['Tolls', 'Fuel', 'Fees', 'Rebate', 'Net'].map((label) => ({ label, numeric: true }))]} />
             <tbody>
               {route.lanes.map((e, i) =>
                 e < 0 ? (
