@@ -1,7 +1,7 @@
 // The window's layout: header, planning side panel, the map, the tabbed lower panel and the status
 // line. State lives in the workbench hook; this file only arranges components.
 
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
 import { laneKeyIndex, laneKeysOf } from '../../engine/scenario/lane-key';
 import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
@@ -16,7 +16,7 @@ import { RouteDetail } from '../components/RouteDetail/RouteDetail';
 import { StatusBar } from '../components/StatusBar/StatusBar';
 import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
-import { addedLanes } from '../model/added-lanes';
+import { addedLanes, sameAddedLanes, type AddedLane } from '../model/added-lanes';
 import { applyScenarioAmounts } from '../model/scenario-edits';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
@@ -38,7 +38,13 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
     () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario, keyIndex) : null),
     [network, keys, scenario, keyIndex],
   );
-  const added = useMemo(() => (network ? addedLanes(network.depotIds, scenario) : []), [network, scenario]);
+  // An edit elsewhere in the scenario keeps the same list, so the map does not redraw layers built on it.
+  const addedRef = useRef<AddedLane[]>([]);
+  const added = useMemo(() => {
+    const next = network ? addedLanes(network.depotIds, scenario) : [];
+    if (!sameAddedLanes(next, addedRef.current)) addedRef.current = next;
+    return addedRef.current;
+  }, [network, scenario]);
 
   // A newly imported network without the chosen origin starts from its first depot.
   useEffect(() => {
@@ -65,12 +71,12 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           {dataset.error ?? plan.error}
         </p>
       )}
-      {network && solve && amounts && <LoopAlert network={network} solve={solve} amounts={amounts} onReview={() => setTab('review')} />}
+      {network && solve && amounts && <LoopAlert network={network} solve={solve} amounts={amounts} added={added} onReview={() => setTab('review')} />}
       <main className="lw-body">
         <aside className="lw-side" aria-label="Plan and route">
           {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
           {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
-            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} onPlanFrom={planFrom} />
+            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} added={added} onPlanFrom={planFrom} />
           )}
           {network && solve && selected === null && <p className="lw-muted">Click a depot on the map or a row in the results for its route and cost breakdown; double-click a depot on the map to plan from it.</p>}
         </aside>

@@ -26,7 +26,9 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
   const [solve, setSolve] = useState<SolveView | null>(null);
   const [solvedFor, setSolvedFor] = useState<NetworkView | null>(null);
   const [roundTripMs, setRoundTrip] = useState<number | null>(null);
-  const [route, setRoute] = useState<RouteView | null>(null);
+  // The route with the solve it was fetched for: after a new solve (or a new network) the old route's
+  // lane numbers may mean other lanes, so it is never shown with another solve.
+  const [routeOf, setRoute] = useState<{ route: RouteView | null; solve: SolveView | null }>({ route: null, solve: null });
   const [error, setError] = useState<string | null>(null);
   const [solving, setSolving] = useState(false);
   const [solveCount, setSolveCount] = useState(0);
@@ -60,18 +62,19 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
 
   useEffect(() => {
     if (!solve || selected === null || solve.status[selected] !== 1) {
-      setRoute(null);
+      setRoute({ route: null, solve });
       return;
     }
     let live = true;
     engine.client
       .request<'route'>({ kind: 'route', target: selected })
-      .then((answer) => live && setRoute(answer.route))
-      .catch(() => live && setRoute(null));
+      .then((answer) => live && setRoute({ route: answer.route, solve }))
+      .catch(() => live && setRoute({ route: null, solve }));
     return () => {
       live = false;
     };
   }, [engine, solve, selected]);
 
+  const route = routeOf.solve === solve ? routeOf.route : null;
   return { solve, solvedFor, roundTripMs, route, error, solving, solveCount };
 }

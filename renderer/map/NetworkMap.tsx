@@ -120,10 +120,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   // Most edits leave the route tree as it was: the same lanes keep the drawn layer, so the overlay
   // canvas (as large as the map and its margin) is not repainted and re-sent to the compositor.
   const tree = useSameLanes(solve?.treeLanes ?? null);
-  useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, renderers.overlay) : null, [network, tree]);
+  useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, added, renderers.overlay) : null, [network, tree, added]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
-  useLayer(map, network && route && renderers ? () => routeLayer(network, route, renderers.overlay) : null, [network, route]);
-  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, renderers.overlay) : null, [network, solve]);
+  useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, renderers.overlay) : null, [network, route, added]);
+  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, added, renderers.overlay) : null, [network, solve, added]);
   // Depot circles are made once per network (thousands of them) and only restyled per solve.
   const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);
   useEffect(() => {

@@ -2,19 +2,22 @@
 // layer, so 50,000 lanes stay smooth), the route tree, the selected route, rebate loops, depots.
 
 import L from 'leaflet';
-import { addedLaneName, type AddedLane } from '../model/added-lanes';
+import { addedLaneName, addedLaneOf, type AddedLane } from '../model/added-lanes';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { MAX_DIAMONDS, STYLE } from './map-style';
 
 type Segments = L.LatLngExpression[][];
 
-function segmentsOf(network: NetworkView, lanes: ArrayLike<number>): Segments {
+function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: readonly AddedLane[] = []): Segments {
   const out: Segments = [];
   for (let i = 0; i < lanes.length; i++) {
     const e = lanes[i];
-    if (e < 0) continue; // a lane a scenario added: not in the drawn network
-    const a = network.laneFrom[e];
-    const b = network.laneTo[e];
+    // A lane the scenario adds is not in the network: its ends come from its change.
+    const extra = e < 0 ? addedLaneOf(added, e) : undefined;
+    const known = e >= 0 && e < network.laneFrom.length;
+    const a = extra ? extra.from : known ? network.laneFrom[e] : -1;
+    const b = extra ? extra.to : known ? network.laneTo[e] : -1;
+    if (a < 0 || b < 0) continue;
     out.push([
       [network.lat[a], network.lon[a]],
       [network.lat[b], network.lon[b]],
@@ -30,13 +33,13 @@ export function laneLayer(network: NetworkView, renderer: L.Renderer): L.Layer {
 }
 
 /** The cheapest-route tree from the origin. */
-export function treeLayer(network: NetworkView, treeLanes: Int32Array, renderer: L.Renderer): L.Layer {
-  return L.polyline(segmentsOf(network, treeLanes), { ...STYLE.tree, renderer, interactive: false });
+export function treeLayer(network: NetworkView, treeLanes: Int32Array, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
+  return L.polyline(segmentsOf(network, treeLanes, added), { ...STYLE.tree, renderer, interactive: false });
 }
 
 /** The selected route: a dark casing under a bright line, so it reads on any background. */
-export function routeLayer(network: NetworkView, route: RouteView, renderer: L.Renderer): L.Layer {
-  const segments = segmentsOf(network, route.lanes);
+export function routeLayer(network: NetworkView, route: RouteView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
+  const segments = segmentsOf(network, route.lanes, added);
   return L.layerGroup([
     L.polyline(segments, { ...STYLE.route, renderer, interactive: false }),
     L.polyline(segments, { ...STYLE.routeInner, renderer, interactive: false }),
@@ -44,10 +47,10 @@ export function routeLayer(network: NetworkView, route: RouteView, renderer: L.R
 }
 
 /** Rebate loops: heavy dashed lines with a permanent text label on each loop. */
-export function loopLayer(network: NetworkView, solve: SolveView, renderer: L.Renderer): L.Layer {
+export function loopLayer(network: NetworkView, solve: SolveView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
   const group = L.layerGroup();
   solve.loops.forEach((loop, i) => {
-    const line = L.polyline(segmentsOf(network, loop.lanes), { ...STYLE.loop, renderer, interactive: false });
+    const line = L.polyline(segmentsOf(network, loop.lanes, added), { ...STYLE.loop, renderer, interactive: false });
     group.addLayer(line);
     const lats = loop.depots.map((d) => network.lat[d]);
     const lons = loop.depots.map((d) => network.lon[d]);

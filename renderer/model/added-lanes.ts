@@ -35,6 +35,11 @@ export function addedLanes(depotIds: readonly string[], scenario: Scenario | nul
   return out;
 }
 
+/** True when both lists name the same changes with the same lanes (so map layers built on them stay). */
+export function sameAddedLanes(a: readonly AddedLane[], b: readonly AddedLane[]): boolean {
+  return a.length === b.length && a.every((x, i) => x.changeIndex === b[i].changeIndex && x.lane === b[i].lane && x.from === b[i].from && x.to === b[i].to);
+}
+
 /** One amount of an added lane (minor units). */
 export function addedAmount(lane: NewLane, field: EditableField): number {
   return lane[FIELD_OF[field]];
@@ -47,6 +52,19 @@ export function setAddedLaneAmount(scenario: Scenario, changeIndex: number, fiel
   const changes = scenario.changes.slice();
   changes[changeIndex] = { ...change, lane: { ...change.lane, [FIELD_OF[field]]: amountMinor } };
   return { ...scenario, changes };
+}
+
+/**
+ * How solve results (route lanes, tree lanes, loop lanes) name a lane the scenario adds: -2 minus the
+ * index of its change. -1 stays "an added lane not traced to its change"; 0 and up are network lanes.
+ */
+export function addedLaneRef(changeIndex: number): number {
+  return -2 - changeIndex;
+}
+
+/** The added lane a result lane names, or undefined for a network lane or an untraced one. */
+export function addedLaneOf(added: readonly AddedLane[], lane: number): AddedLane | undefined {
+  return lane <= -2 ? added.find((a) => a.changeIndex === -2 - lane) : undefined;
 }
 
 /** "RTM → MIL (WHATIF-1)": how the map label and the table name an added lane. */

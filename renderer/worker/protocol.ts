@@ -82,6 +82,9 @@ export interface LoopView {
   netPerLap: number;
 }
 
+// Lanes in results (loop lanes, tree lanes, route lanes) are network lane indices; a lane the
+// scenario adds is -2 minus its change's index (model/added-lanes.ts), -1 when it cannot be traced.
+
 /** Result of one solve, per depot (index = depot index). */
 export interface SolveView {
   settings: PlanSettings;

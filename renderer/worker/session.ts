@@ -13,7 +13,7 @@ import { importTexts, replanImport, reportOf } from './import-texts';
 import { networkView, transferablesOf } from './network-view';
 import type { FromWorker, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
-import { onBaseLanes, pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
+import { laneRefsOf, onBaseLanes, pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -25,8 +25,8 @@ export class WorkerSession {
   private baseKey = '';
   private settings: PlanSettings | null = null;
   private scenario: Scenario | null = null;
-  /** Set when the last solve ran on a network the scenario rebuilt; its lanes map back through baseLaneOf. */
-  private solvedOn: { network: Network; baseLaneOf: Int32Array } | null = null;
+  /** Set when the last solve ran on a network the scenario rebuilt; its lanes map back through laneRefs. */
+  private solvedOn: { network: Network; laneRefs: Int32Array } | null = null;
   private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
@@ -52,7 +52,7 @@ export class WorkerSession {
         const network = this.need();
         const on = this.solvedOn;
         const route = this.solved ? pathOf(on ? on.network : network, this.solved, message.target) : null;
-        this.post({ kind: 'route', id: message.id, route: route && on ? { ...route, lanes: route.lanes.map((e) => on.baseLaneOf[e]) } : route });
+        this.post({ kind: 'route', id: message.id, route: route && on ? { ...route, lanes: route.lanes.map((e) => on.laneRefs[e]) } : route });
         return;
       }
       case 'export': {
@@ -125,9 +125,10 @@ export class WorkerSession {
       // Added lanes and validity changes alter the lane set: the engine applies the scenario and the
       // answer is mapped back onto the base lanes the UI draws.
       const applied = applyScenario(network, scenario!, { date: this.plan.date || null });
+      const laneRefs = laneRefsOf(applied, scenario!, this.keys?.keys ?? laneKeysOf(network));
       this.solved = solveFor(applied.network, settings);
-      this.solvedOn = { network: applied.network, baseLaneOf: applied.baseLaneOf };
-      view = onBaseLanes(solveView(applied.network, settings, this.solved, performance.now() - started, driveLimit), applied.baseLaneOf);
+      this.solvedOn = { network: applied.network, laneRefs };
+      view = onBaseLanes(solveView(applied.network, settings, this.solved, performance.now() - started, driveLimit), laneRefs);
     } else {
       const weights = scenarioWeights(network, scenario, this.keys ?? undefined);
       this.solved = solveFor(network, settings, weights);

@@ -8,6 +8,8 @@ import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } fr
 import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/routes/leg-limited';
 import { routePath } from '../../engine/routes/route-path';
 import { laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
+import type { AppliedScenario } from '../../engine/scenario/apply';
+import { addedLaneRef } from '../model/added-lanes';
 import { applyScenarioAmounts, hasChanges, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
 import type { PlanSettings, RouteView, SolveView } from './protocol';
@@ -83,13 +85,38 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
 }
 
 /**
- * A solve made on a network the scenario rebuilt, with its lanes renumbered as the base network's
- * (what the UI draws). Lanes the scenario added have no base lane (-1) and are left out of the tree.
+ * How the UI names each lane of a network the scenario rebuilt: its base lane index, or for a lane
+ * the scenario added `addedLaneRef(change index)`. applyScenario keys the k-th successful add-lane
+ * change of a from/to/ref group with occurrence (base lanes in that group) + k, which traces it back.
  */
-export function onBaseLanes(view: SolveView, baseLaneOf: Int32Array): SolveView {
+export function laneRefsOf(applied: AppliedScenario, scenario: Scenario, baseKeys: readonly LaneKey[]): Int32Array {
+  const group = (from: string, to: string, ref: string | null) => JSON.stringify([from, to, ref]);
+  const baseCount = new Map<string, number>();
+  for (const k of baseKeys) baseCount.set(group(k.from, k.to, k.ref), k.occurrence);
+  const failed = new Set(applied.problems.map((p) => p.changeIndex));
+  const addsByGroup = new Map<string, number[]>();
+  scenario.changes.forEach((c, i) => {
+    if (c.kind !== 'add-lane' || failed.has(i)) return;
+    const g = group(c.lane.from, c.lane.to, c.lane.ref);
+    addsByGroup.set(g, [...(addsByGroup.get(g) ?? []), i]);
+  });
+  return Int32Array.from(applied.baseLaneOf, (b, e) => {
+    if (b >= 0) return b;
+    const k = applied.laneKeys[e];
+    const g = group(k.from, k.to, k.ref);
+    const change = addsByGroup.get(g)?.[k.occurrence - (baseCount.get(g) ?? 0) - 1];
+    return change === undefined ? -1 : addedLaneRef(change);
+  });
+}
+
+/**
+ * A solve made on a network the scenario rebuilt, with its lanes renamed as the UI knows them
+ * (`laneRefsOf`); an added lane that cannot be traced (-1) is left out of the tree.
+ */
+export function onBaseLanes(view: SolveView, laneRefs: Int32Array): SolveView {
   return {
     ...view,
-    treeLanes: Int32Array.from(view.treeLanes, (e) => baseLaneOf[e]).filter((e) => e >= 0),
-    loops: view.loops.map((loop) => ({ ...loop, lanes: loop.lanes.map((e) => baseLaneOf[e]) })),
+    treeLanes: Int32Array.from(view.treeLanes, (e) => laneRefs[e]).filter((e) => e !== -1),
+    loops: view.loops.map((loop) => ({ ...loop, lanes: loop.lanes.map((e) => laneRefs[e]) })),
   };
 }

@@ -204,6 +204,12 @@ describe('workspace in the browser', () => {
     await snap(page, 'scenario-added-lane');
     await page.getByRole('tab', { name: 'Results' }).click();
     expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
+    // MIL's route runs over the added lane: its breakdown names it with its amounts.
+    await page.locator('[data-testid="results-table"] tr[data-depot="MIL"]').click();
+    const breakdown = page.locator('[data-testid="route-breakdown"]');
+    await expect.poll(() => breakdown.locator('tbody th').first().innerText().catch(() => '')).toBe('RTM → MIL + added');
+    expect(await breakdown.locator('tbody td').allInnerTexts()).toEqual(['90.00', '300.00', '15.00', '0.00', '405.00']);
+    expect(await breakdown.locator('tfoot td').last().innerText()).toBe('405.00');
 
     // Editing the added lane's toll rewrites its change; the plan follows the engine.
     await page.getByRole('tab', { name: /Lanes/ }).click();

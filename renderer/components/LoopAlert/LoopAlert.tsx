@@ -3,6 +3,7 @@
 
 import { FLAG_LIMIT_HIDES_LOOP } from '../../model/flags';
 import { formatMoneyWithCode } from '../../model/format';
+import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
 import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 
@@ -11,10 +12,12 @@ export interface LoopAlertProps {
   solve: SolveView;
   /** Lane amounts under the active scenario. */
   amounts: LaneAmounts;
+  /** Lanes the scenario adds (a loop may run through them). */
+  added: readonly AddedLane[];
   onReview(): void;
 }
 
-export function LoopAlert({ network, solve, amounts, onReview }: LoopAlertProps) {
+export function LoopAlert({ network, solve, amounts, added, onReview }: LoopAlertProps) {
   if (solve.loops.length === 0) return null;
   const unbounded = solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0);
   const limited = solve.settings.maxLegs !== null;
@@ -54,6 +57,21 @@ export function LoopAlert({ network, solve, amounts, onReview }: LoopAlertProps)
             </thead>
             <tbody>
               {loop.lanes.map((e, k) => {
+                const extra = addedLaneOf(added, e);
+                if (extra) {
+                  const l = extra.lane;
+                  return (
+                    <tr key={`added-${k}`}>
+                      <td>
+                        {l.from} → {l.to}
+                      </td>
+                      <td>added by the scenario (change {extra.changeIndex + 1})</td>
+                      <td>{l.ref ?? '—'}</td>
+                      <td className="lw-num">{formatMoneyWithCode(extra.netMinor, network.currency, network.exponent)}</td>
+                      <td className="lw-num">{formatMoneyWithCode(l.rebateMinor, network.currency, network.exponent)}</td>
+                    </tr>
+                  );
+                }
                 if (e < 0)
                   return (
                     <tr key={`added-${k}`}>

@@ -3,6 +3,7 @@
 
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
+import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
 import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, RouteView, SolveView } from '../../worker/protocol';
 import { BreakdownChart } from '../BreakdownChart/BreakdownChart';
@@ -14,15 +15,46 @@ export interface RouteDetailProps {
   amounts: LaneAmounts;
   depot: number;
   route: RouteView | null;
+  /** Lanes the scenario adds (a route may use them). */
+  added: readonly AddedLane[];
   onPlanFrom(depot: number): void;
 }
 
-export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom }: RouteDetailProps) {
+interface Leg {
+  name: string;
+  title: string;
+  mark: string | null;
+  toll: number;
+  fuel: number;
+  fees: number;
+  rebate: number;
+}
+
+// One lane of the route with its amounts under the scenario; a lane the scenario adds reads its
+// amounts from its change. Null for an added lane that could not be traced (cost in the total only).
+function legOf(network: NetworkView, amounts: LaneAmounts, added: readonly AddedLane[], e: number): Leg | null {
+  if (e < 0) {
+    const a = addedLaneOf(added, e);
+    if (!a) return null;
+    const l = a.lane;
+    return { name: `${l.from} → ${l.to}`, title: `Added by the scenario (change ${a.changeIndex + 1})${l.ref ? `, ref ${l.ref}` : ''}`, mark: ' + added', toll: l.tollMinor, fuel: l.fuelMinor, fees: l.feesMinor, rebate: l.rebateMinor };
+  }
+  return {
+    name: `${network.depotIds[network.laneFrom[e]]} → ${network.depotIds[network.laneTo[e]]}`,
+    title: `Lanes file row ${network.laneRow[e]}${network.laneRef[e] ? `, ref ${network.laneRef[e]}` : ''}`,
+    mark: amounts.changed[e] ? ' ✎' : null,
+    toll: amounts.toll[e],
+    fuel: amounts.fuel[e],
+    fees: amounts.fees[e],
+    rebate: amounts.rebate[e],
+  };
+}
+
+export function RouteDetail({ network, solve, amounts, depot, route, added, onPlanFrom }: RouteDetailProps) {
   const status = solve.status[depot];
   const label = depotLabel(network.depotIds[depot], network.depotNames[depot]);
-  // Lanes a scenario added (index -1) are not in the lane table; their amounts are in the total cost only.
-  const known = route ? route.lanes.filter((e) => e >= 0) : [];
-  const sum = (field: 'toll' | 'fuel' | 'fees' | 'rebate') => known.reduce((s, e) => s + amounts[field][e], 0);
+  const legs = route ? route.lanes.map((e) => legOf(network, amounts, added, e)) : [];
+  const sum = (field: 'toll' | 'fuel' | 'fees' | 'rebate') => legs.reduce((s, leg) => s + (leg ? leg[field] : 0), 0);
   const totals = { toll: sum('toll'), fuel: sum('fuel'), fees: sum('fees'), rebate: sum('rebate') };
   const money = (v: number) => formatMoney(v, network.exponent);
   return (
@@ -55,23 +87,23 @@ export function RouteDetail({ network, solve, amounts, depot, route, onPlanFrom 
             <caption className="lw-visually-hidden">Cost of each lane on the route</caption>
             <TableHead labels={['Lane', ...['Tolls', 'Fuel', 'Fees', 'Rebate', 'Net'].map((label) => ({ label, numeric: true }))]} />
             <tbody>
-              {route.lanes.map((e, i) =>
-                e < 0 ? (
-                  <tr key={`added-${i}`}>
+              {legs.map((leg, i) =>
+                leg === null ? (
+                  <tr key={`untraced-${i}`}>
                     <td colSpan={6}>a lane the scenario adds</td>
                   </tr>
                 ) : (
-                <tr key={`${e}-${i}`}>
-                  <th scope="row" title={`Lanes file row ${network.laneRow[e]}${network.laneRef[e] ? `, ref ${network.laneRef[e]}` : ''}`}>
-                    {network.depotIds[network.laneFrom[e]]} → {network.depotIds[network.laneTo[e]]}
-                    {amounts.changed[e] ? <span className="lw-edited" title="Changed in the scenario"> ✎</span> : null}
-                  </th>
-                  <td className="lw-num">{money(amounts.toll[e])}</td>
-                  <td className="lw-num">{money(amounts.fuel[e])}</td>
-                  <td className="lw-num">{money(amounts.fees[e])}</td>
-                  <td className="lw-num">{amounts.rebate[e] ? `-${money(amounts.rebate[e])}` : money(0)}</td>
-                  <td className="lw-num">{money(amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e])}</td>
-                </tr>
+                  <tr key={`${route.lanes[i]}-${i}`}>
+                    <th scope="row" title={leg.title}>
+                      {leg.name}
+                      {leg.mark ? <span className="lw-edited" title={leg.mark === ' ✎' ? 'Changed in the scenario' : 'Added by the scenario'}>{leg.mark}</span> : null}
+                    </th>
+                    <td className="lw-num">{money(leg.toll)}</td>
+                    <td className="lw-num">{money(leg.fuel)}</td>
+                    <td className="lw-num">{money(leg.fees)}</td>
+                    <td className="lw-num">{leg.rebate ? `-${money(leg.rebate)}` : money(0)}</td>
+                    <td className="lw-num">{money(leg.toll + leg.fuel + leg.fees - leg.rebate)}</td>
+                  </tr>
                 ),
               )}
             </tbody>

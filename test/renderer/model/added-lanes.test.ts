@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { applyScenario } from '../../../engine/scenario/apply';
 import type { Minor } from '../../../engine/money/minor';
 import type { Scenario } from '../../../engine/scenario/types';
-import { addedAmount, addedLaneName, addedLanes, setAddedLaneAmount } from '../../../renderer/model/added-lanes';
+import { addedAmount, addedLaneName, addedLaneOf, addedLaneRef, addedLanes, sameAddedLanes, setAddedLaneAmount } from '../../../renderer/model/added-lanes';
 
 const depots = [
   { id: 'A', name: 'Depot A', lat: 50, lon: 4 },
@@ -53,5 +53,22 @@ describe('added lanes', () => {
 
   it('refuses to edit a change that adds no lane', () => {
     expect(() => setAddedLaneAmount(scenario, 0, 'toll', 1)).toThrow(RangeError);
+  });
+
+  it('names added lanes in results by their change, apart from network lanes and untraced ones', () => {
+    const added = addedLanes(['A', 'B', 'C'], scenario);
+    expect(addedLaneRef(1)).toBe(-3);
+    expect(addedLaneOf(added, addedLaneRef(1))?.lane.to).toBe('C');
+    expect(addedLaneOf(added, addedLaneRef(0))).toBeUndefined(); // change 0 sets an amount
+    expect(addedLaneOf(added, -1)).toBeUndefined();
+    expect(addedLaneOf(added, 0)).toBeUndefined();
+  });
+
+  it('sees the same added lanes after an edit elsewhere, and a new list after an edit of one', () => {
+    const before = addedLanes(['A', 'B', 'C'], scenario);
+    const elsewhere = { ...scenario, changes: [{ ...scenario.changes[0] }, ...scenario.changes.slice(1)] };
+    expect(sameAddedLanes(before, addedLanes(['A', 'B', 'C'], elsewhere))).toBe(true);
+    expect(sameAddedLanes(before, addedLanes(['A', 'B', 'C'], setAddedLaneAmount(scenario, 1, 'toll', 7)))).toBe(false);
+    expect(sameAddedLanes(before, addedLanes(['A', 'B', 'C'], { ...scenario, changes: scenario.changes.slice(1) }))).toBe(false);
   });
 });

@@ -11,6 +11,7 @@ import { formatMinor, type Minor } from '../../../engine/money/minor';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { applyScenario } from '../../../engine/scenario/apply';
 import { laneKeysOf } from '../../../engine/scenario/lane-key';
+import { addedLaneRef } from '../../../renderer/model/added-lanes';
 import { emptyScenario, setLaneAmount } from '../../../renderer/model/scenario-edits';
 import type { FromWorker, NetworkView, PlanSettings, SolveView, ToWorker } from '../../../renderer/worker/protocol';
 import { WorkerSession } from '../../../renderer/worker/session';
@@ -141,9 +142,28 @@ describe('scenarios that change the lane set', () => {
     expect(Array.from(result.cost)).toEqual(Array.from(reference.cost));
     const mil = view.depotIds.indexOf('MIL');
     expect(result.cost[mil]).toBe(6000);
-    expect(Array.from(result.treeLanes).every((e) => e >= 0 && e < view.laneFrom.length)).toBe(true);
+    // Tree lanes are drawn lanes, or the added lane named by its change (addedLaneRef(0) = -2).
+    expect(Array.from(result.treeLanes).every((e) => (e >= 0 && e < view.laneFrom.length) || e === addedLaneRef(0))).toBe(true);
+    expect(Array.from(result.treeLanes)).toContain(addedLaneRef(0));
 
     const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil }]);
-    expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([-1]);
+    expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([addedLaneRef(0)]);
+  });
+
+  it('traces each added lane to its own change, past a change that failed and a twin in the same group', () => {
+    const lane = (from: string, to: string, tollMinor: number) => ({ from, to, ref: 'WHATIF-2', tollMinor, feesMinor: 0, fuelMinor: 5000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null });
+    const scenario = {
+      ...emptyScenario(),
+      changes: [
+        { kind: 'add-lane' as const, note: 'unknown depot: a problem, no lane', lane: lane('RTM', 'NOWHERE', 1) },
+        { kind: 'add-lane' as const, note: 'dearer twin', lane: lane('RTM', 'MIL', 9000) },
+        { kind: 'add-lane' as const, note: 'cheaper twin', lane: lane('RTM', 'MIL', 1000) },
+      ],
+    };
+    const first = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }]);
+    const mil = (first[0] as { network: NetworkView }).network.depotIds.indexOf('MIL');
+    expect((first[1] as { result: SolveView }).result.cost[mil]).toBe(6000);
+    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil }]);
+    expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([addedLaneRef(2)]);
   });
 });
