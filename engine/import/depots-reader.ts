@@ -1,68 +1,32 @@
 // Reads depot records (id, name, lat, lon, optional type and notes) as they stream in, checking
 // each row and keeping the accepted ones. Duplicate ids keep the first row and reject the others.
 
-import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
 import { cellText } from './cells';
 import { readNumber } from './decimal-text';
 import { matchDepotHeaders, type DepotField, type HeaderMatch } from './headers';
 import type { ReportCollector } from './report-collector';
-import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
-import type { DepotRecord, FileCounts } from './types';
+import { RecordFileReader } from './record-file-reader';
+import type { DepotRecord } from './types';
 
 const REQUIRED: DepotField[] = ['id', 'lat', 'lon'];
 const LABEL: Record<DepotField, string> = { id: 'id', name: 'name', lat: 'lat', lon: 'lon', type: 'type', notes: 'notes' };
 
-export class DepotsReader implements CsvRecordSink {
+export class DepotsReader extends RecordFileReader {
   readonly depots: DepotRecord[] = [];
   readonly index = new Map<string, number>();
   /** Ids of depot rows that were rejected, with their row, so lanes naming them can say why. */
   readonly rejectedIds = new Map<string, number>();
   private header: HeaderMatch<DepotField> | null = null;
-  private headerCells: string[] = [];
-  private unusable = false;
-  private notText = false;
-  private readonly counts: FileCounts;
-  decimalComma = false;
 
-  constructor(private readonly file: string, private readonly report: ReportCollector) {
-    this.counts = report.file(file, 'depots');
+  constructor(file: string, report: ReportCollector) {
+    super(file, report, 'depots');
   }
 
-  get rows(): number {
-    return this.counts.total;
+  protected noDataRows(): void {
+    this.report.error(this.file, null, null, null, 'no-data-rows', 'the file has a header but no depots');
   }
 
-  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = []): void {
-    const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
-    const notUtf8 = badText.length > 0 ? new Set(badText) : null;
-    for (let i = 0; i < records.length; i++) {
-      const cells = records[i];
-      const row = firstRow + i;
-      if (cells.every((c) => c.trim() === '')) continue;
-      if (this.header === null) {
-        this.readHeader(cells);
-        continue;
-      }
-      this.counts.total++;
-      const flags = { badQuotes: bad?.has(i) ?? false, notUtf8: notUtf8?.has(i) ?? false };
-      if (rejectFlaggedRow(this.report, this.file, this.counts, firstRow + i, cells, this.headerCells, flags)) continue;
-      if (this.unusable || !this.readRow(cells, row)) this.counts.rejected++;
-      else this.counts.accepted++;
-    }
-  }
-
-  issue(issue: CsvStreamIssue): void {
-    if (issue.code === 'not-text') this.notText = true;
-    takeStreamIssue(this.report, this.file, this.counts, issue, this.header !== null, this.headerCells);
-  }
-
-  finish(): void {
-    if (this.header === null && !this.notText) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
-    else if (this.header !== null && this.counts.total === 0) this.report.error(this.file, null, null, null, 'no-data-rows', 'the file has a header but no depots');
-  }
-
-  private readHeader(cells: string[]): void {
-    this.headerCells = cells.map((c) => c.trim());
+  protected readHeader(cells: string[]): void {
     this.header = matchDepotHeaders(cells);
     for (const field of REQUIRED) {
       if (!this.header.columns.has(field)) {
@@ -74,7 +38,7 @@ export class DepotsReader implements CsvRecordSink {
     for (const u of this.header.unknown) this.report.warning(this.file, 1, u.header, null, 'unknown-column', 'unknown column, kept with the depot but not used');
   }
 
-  private readRow(cells: string[], row: number): boolean {
+  protected readRow(cells: string[], row: number): boolean {
     const cols = this.header!.columns;
     const at = (f: DepotField) => cols.get(f)?.index;
     let ok = true;

@@ -2,7 +2,6 @@
 // network currency (converted only with a user-given rate), distance with its unit, drive time,
 // validity, vehicle class (one toll column per class, or a vehicle_class column), reference, notes.
 
-import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
 import { readAmount } from './amount-text';
 import { cellText, readIsoDate } from './cells';
 import { convertMinor, readRate } from './currency-convert';
@@ -12,8 +11,8 @@ import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './
 import { LaneTableBuilder } from './lane-table';
 import { firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
-import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
-import type { FileCounts, IssueCode } from './types';
+import { isBlankRecord, RecordFileReader } from './record-file-reader';
+import type { IssueCode } from './types';
 
 const digitsOf = (code: string) => currencyExponent(code) ?? 2;
 
@@ -22,27 +21,17 @@ export interface LanesReaderOptions {
   exchangeRates?: Record<string, string>;
 }
 
-function isBlank(cells: readonly string[]): boolean {
-  for (let k = 0; k < cells.length; k++) if (cells[k] !== '' && cells[k].trim() !== '') return false;
-  return true;
-}
-
 // V8 keeps a substring pointing into its parent; copying stored strings lets each parsed block go.
 function own(text: string): string {
   return text.length > 12 ? (' ' + text).slice(1) : text;
 }
 
-export class LanesReader implements CsvRecordSink {
+export class LanesReader extends RecordFileReader {
   readonly table = new LaneTableBuilder();
   currency: string | null;
   exponent = 2;
-  decimalComma = false;
   readonly converted = new Map<string, number>();
   private header: HeaderMatch<LaneField> | null = null;
-  private headerCells: string[] = [];
-  private unusable = false;
-  private notText = false;
-  private readonly counts: FileCounts;
   private readonly classIndex = new Map<string, number>();
   private col: Partial<Record<LaneField, number>> = {};
   private name: Partial<Record<LaneField, string>> = {};
@@ -53,61 +42,35 @@ export class LanesReader implements CsvRecordSink {
   private rowCurrency: string | null = null;
 
   constructor(
-    private readonly file: string,
-    private readonly report: ReportCollector,
+    file: string,
+    report: ReportCollector,
     private readonly depotIndex: ReadonlyMap<string, number>,
     private readonly options: LanesReaderOptions,
     private readonly rejectedDepots: ReadonlyMap<string, number> = new Map(),
     private readonly depotsFile = 'the depots file',
   ) {
-    this.counts = report.file(file, 'lanes');
+    super(file, report, 'lanes');
     this.currency = options.currency ? options.currency.toUpperCase() : null;
     if (this.currency) this.exponent = currencyExponent(this.currency) ?? 2;
   }
 
-  get rows(): number {
-    return this.counts.total;
-  }
-
-  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = []): void {
-    const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
-    const notUtf8 = badText.length > 0 ? new Set(badText) : null;
-    let start = 0;
-    if (this.header === null) {
-      while (start < records.length && records[start].every((c) => c.trim() === '')) start++;
-      if (start === records.length) return;
-      this.readHeader(records[start]);
-      start++;
-    }
+  protected override beforeRows(records: string[][], start: number): void {
     if (this.currency === null) this.pickCurrency(records, start);
-    for (let i = start; i < records.length; i++) {
-      const cells = records[i];
-      if (cells.length === 1 && cells[0].trim() === '') continue;
-      if (cells.every((c) => c.trim() === '')) continue;
-      this.counts.total++;
-      const flags = { badQuotes: bad?.has(i) ?? false, notUtf8: notUtf8?.has(i) ?? false };
-      if (rejectFlaggedRow(this.report, this.file, this.counts, firstRow + i, cells, this.headerCells, flags)) continue;
-      if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
-      else this.counts.accepted++;
-    }
   }
 
-  issue(issue: CsvStreamIssue): void {
-    if (issue.code === 'not-text') this.notText = true;
-    takeStreamIssue(this.report, this.file, this.counts, issue, this.header !== null, this.headerCells);
+  protected noDataRows(): void {
+    this.report.warning(this.file, null, null, null, 'no-data-rows', 'the file has a header but no lanes');
   }
 
-  finish(): void {
-    if (this.header === null && !this.notText) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
-    else if (this.header !== null && this.counts.total === 0) this.report.warning(this.file, null, null, null, 'no-data-rows', 'the file has a header but no lanes');
+  override finish(): void {
+    super.finish();
     if (this.currency === null) {
       this.currency = 'EUR';
       this.exponent = 2;
     }
   }
 
-  private readHeader(cells: string[]): void {
-    this.headerCells = cells.map((c) => c.trim());
+  protected readHeader(cells: string[]): void {
     const h = matchLaneHeaders(cells);
     this.header = h;
     for (const [field, column] of h.columns) {
@@ -150,7 +113,7 @@ export class LanesReader implements CsvRecordSink {
     return this.name[field] ?? field;
   }
 
-  private readRow(cells: string[], row: number): boolean {
+  protected readRow(cells: string[], row: number): boolean {
     this.row = row;
     this.rowOk = true;
     const h = this.header!;

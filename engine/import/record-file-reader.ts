@@ -1,0 +1,76 @@
+// What the depots and lanes readers share: finding the header, counting every data row as accepted
+// or rejected (so accepted + rejected = total holds by construction), rejecting rows the CSV stream
+// flagged, and the file-level problems (empty file, not text, header without rows).
+
+import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
+import type { ReportCollector } from './report-collector';
+import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
+import type { FileCounts } from './types';
+
+/** True when every cell is empty or white space (a blank line, or a line of delimiters). */
+export function isBlankRecord(cells: readonly string[]): boolean {
+  for (let k = 0; k < cells.length; k++) if (cells[k] !== '' && cells[k].trim() !== '') return false;
+  return true;
+}
+
+export abstract class RecordFileReader implements CsvRecordSink {
+  /** Set by the importer from the detected delimiter: semicolon files use a decimal comma. */
+  decimalComma = false;
+  protected headerCells: string[] = [];
+  protected headerRead = false;
+  /** A header problem that makes every row unreadable (e.g. a required column is missing). */
+  protected unusable = false;
+  protected readonly counts: FileCounts;
+  private notText = false;
+
+  constructor(protected readonly file: string, protected readonly report: ReportCollector, kind: FileCounts['kind']) {
+    this.counts = report.file(file, kind);
+  }
+
+  get rows(): number {
+    return this.counts.total;
+  }
+
+  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = []): void {
+    const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
+    const notUtf8 = badText.length > 0 ? new Set(badText) : null;
+    let start = 0;
+    if (!this.headerRead) {
+      while (start < records.length && isBlankRecord(records[start])) start++;
+      if (start === records.length) return;
+      this.headerCells = records[start].map((c) => c.trim());
+      this.headerRead = true;
+      this.readHeader(records[start]);
+      start++;
+    }
+    this.beforeRows(records, start);
+    for (let i = start; i < records.length; i++) {
+      const cells = records[i];
+      if (isBlankRecord(cells)) continue;
+      this.counts.total++;
+      const flags = { badQuotes: bad?.has(i) ?? false, notUtf8: notUtf8?.has(i) ?? false };
+      if (rejectFlaggedRow(this.report, this.file, this.counts, firstRow + i, cells, this.headerCells, flags)) continue;
+      if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
+      else this.counts.accepted++;
+    }
+  }
+
+  issue(issue: CsvStreamIssue): void {
+    if (issue.code === 'not-text') this.notText = true;
+    takeStreamIssue(this.report, this.file, this.counts, issue, this.headerRead, this.headerCells);
+  }
+
+  finish(): void {
+    if (!this.headerRead && !this.notText) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
+    else if (this.headerRead && this.counts.total === 0) this.noDataRows();
+  }
+
+  /** Matches the header row and reports its problems; `headerCells` is already set. */
+  protected abstract readHeader(cells: string[]): void;
+  /** Reads one data row (`row` as a spreadsheet numbers it); false when it is rejected. */
+  protected abstract readRow(cells: string[], row: number): boolean;
+  /** Reports a file that has a header but no data rows. */
+  protected abstract noDataRows(): void;
+  /** Called with each block before its data rows are read. */
+  protected beforeRows(_records: string[][], _start: number): void {}
+}
