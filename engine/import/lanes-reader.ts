@@ -9,7 +9,7 @@ import { currencyExponent, lookupCurrency } from './currencies';
 import { readDistanceKm, readDriveTime } from './lane-cells';
 import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './headers';
 import { LaneTableBuilder } from './lane-table';
-import { firstCurrencyNamed } from './network-currency';
+import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { isBlankRecord, RecordFileReader } from './record-file-reader';
 import type { IssueCode } from './types';
@@ -35,6 +35,8 @@ export class LanesReader extends RecordFileReader {
   private readonly classIndex = new Map<string, number>();
   private col: Partial<Record<LaneField, number>> = {};
   private name: Partial<Record<LaneField, string>> = {};
+  /** Every amount column (toll, class tolls, fuel, fees, rebate), in the order a row reads them. */
+  private moneyColumns: number[] = [];
   private rowDigits = 2;
   private driveUnit: string | null = null;
   private rowOk = true;
@@ -91,6 +93,7 @@ export class LanesReader extends RecordFileReader {
       this.table.extra.push({ column: u.header, values: [] });
     }
     for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length) });
+    this.moneyColumns = [this.col.toll, ...h.classTolls.map((c) => c.index), this.col.fuel, this.col.fees, this.col.rebate].filter((c): c is number => c !== undefined);
     if (h.columns.has('vehicle_class')) this.table.vehicleClass = new Int16Array(this.table.from.length);
     const distanceUnit = h.columns.get('distance')?.unit;
     if (distanceUnit && !['km', 'mi', 'miles', 'mile', 'kilometres', 'kilometers'].includes(distanceUnit)) {
@@ -133,6 +136,12 @@ export class LanesReader extends RecordFileReader {
       if ('code' in c) this.setRowCurrency(c.code);
       else this.fail(this.headerOf('currency'), code, 'unknown-currency', c.detail);
     } else if (code !== '') this.rowCurrency = code;
+    else {
+      // A mark on any amount sets the row's currency before the first amount is read: an unmarked
+      // toll read ahead of a marked fuel ("100", "¥100") would otherwise get the network's digits.
+      const marked = currencyMarkIn(cells, this.moneyColumns, this.decimalComma);
+      if (marked !== null) this.setRowCurrency(marked);
+    }
     let toll = this.amount(cells, col.toll, 'toll');
     const classTolls: number[] = [];
     for (let k = 0; k < h.classTolls.length; k++) classTolls.push(this.amountAt(cells, h.classTolls[k].index, h.classTolls[k].header));

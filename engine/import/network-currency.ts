@@ -9,6 +9,20 @@ import type { HeaderMatch, LaneField } from './headers';
 
 const MONEY: LaneField[] = ['toll', 'fuel', 'fees', 'rebate'];
 
+// Anything but digits, separators, signs and parentheses: the cell may carry a currency mark.
+const MAY_HAVE_MARK = /[^\d\s.,'()+\-\u2212]/;
+
+/** The currency the first marked amount among `columns` names ("12,50 €" -> EUR), or null. */
+export function currencyMarkIn(cells: readonly string[], columns: readonly number[], decimalComma: boolean): string | null {
+  for (const index of columns) {
+    const text = cellText(cells, index);
+    if (text === '' || !MAY_HAVE_MARK.test(text)) continue;
+    const r = readAmount(text, 2, decimalComma);
+    if (r.ok && r.currency) return r.currency;
+  }
+  return null;
+}
+
 /** The first supported currency the header or the rows from `start` name, or null. */
 export function firstCurrencyNamed(records: readonly string[][], start: number, header: HeaderMatch<LaneField>, decimalComma: boolean): string | null {
   for (const field of MONEY) {
@@ -16,6 +30,7 @@ export function firstCurrencyNamed(records: readonly string[][], start: number, 
     if (unit && /^[a-z]{3}$/.test(unit) && currencyExponent(unit) !== undefined) return unit.toUpperCase();
   }
   const currencyColumn = header.columns.get('currency')?.index;
+  const money = MONEY.flatMap((field) => header.columns.get(field)?.index ?? []);
   for (let i = start; i < records.length; i++) {
     const code = cellText(records[i], currencyColumn);
     if (code !== '') {
@@ -23,12 +38,8 @@ export function firstCurrencyNamed(records: readonly string[][], start: number, 
       if ('code' in c) return c.code;
       continue;
     }
-    for (const field of MONEY) {
-      const text = cellText(records[i], header.columns.get(field)?.index);
-      if (text === '') continue;
-      const r = readAmount(text, 2, decimalComma);
-      if (r.ok && r.currency) return r.currency;
-    }
+    const marked = currencyMarkIn(records[i], money, decimalComma);
+    if (marked !== null) return marked;
   }
   return null;
 }

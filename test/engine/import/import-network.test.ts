@@ -146,6 +146,15 @@ describe('importNetwork', () => {
     expect(yen.report.errors.map((e) => [e.row, e.code])).toEqual([[3, 'bad-amount']]);
   });
 
+  it('a currency mark on a later amount sets the minor digits of the whole row', () => {
+    // JPY has no minor digits (ISO 4217): the unmarked toll "100" on a yen row is 100 yen (1.00 EUR at
+    // 0.01), not 10000.
+    const r = importNetwork(DEPOTS, 'from,to,toll,fuel\nA,B,100,¥200\nB,C,1.50,¥100\n', { currency: 'EUR', exchangeRates: { JPY: '0.01' } });
+    expect(r.report.errors.map((e) => [e.row, e.column, e.value, e.code])).toEqual([[3, 'toll', '1.50', 'bad-amount']]);
+    balanced(r);
+    expect(importNetwork(DEPOTS, 'from,to,toll,fuel\nA,B,100,¥200\n', { currency: 'EUR', exchangeRates: { JPY: '0.01' } }).lanes.toll[0]).toBe(100);
+  });
+
   it('--skip-invalid builds the network from the accepted rows', () => {
     const r = importNetwork(DEPOTS, 'from,to,toll\nA,B,1\nA,Z,1\n', { skipInvalid: true });
     expect(r.report.errors).toHaveLength(1);
