@@ -23,8 +23,8 @@ export interface Plan {
 }
 
 export function usePlan(engine: Engine, network: NetworkView | null, settings: PlanSettings, scenario: Scenario | null, selected: number | null, generation = 0): Plan {
-  const [solve, setSolve] = useState<SolveView | null>(null);
-  const [solvedFor, setSolvedFor] = useState<NetworkView | null>(null);
+  // The answer with the network it was computed on and its request id (routes are asked for by it).
+  const [shown, setShown] = useState<{ view: SolveView; network: NetworkView; id: number } | null>(null);
   const [roundTripMs, setRoundTrip] = useState<number | null>(null);
   // The route with the solve it was fetched for: after a new solve (or a new network) the old route's
   // lane numbers may mean other lanes, so it is never shown with another solve.
@@ -36,7 +36,10 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
 
   useEffect(() => {
     if (!network || !network.depotIds.includes(settings.origin)) {
-      setSolve(null);
+      // Supersede any solve still in flight, so its answer is not shown over this state.
+      latest.current++;
+      setShown(null);
+      setSolving(false);
       return;
     }
     const ticket = ++latest.current;
@@ -46,8 +49,7 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
       try {
         const answer = await engine.track((onProgress) => engine.client.request<'solved'>({ kind: 'solve', settings, scenario }, onProgress), 'Solving');
         if (ticket !== latest.current) return;
-        setSolve(answer.result);
-        setSolvedFor(network);
+        setShown({ view: answer.result, network, id: answer.id });
         setSolveCount((n) => n + 1);
         setRoundTrip(performance.now() - started);
         setError(null);
@@ -60,21 +62,23 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
     return () => clearTimeout(timer);
   }, [engine, network, settings, scenario, generation]);
 
+  const solve = shown?.view ?? null;
+  const solveId = shown?.id ?? null;
   useEffect(() => {
-    if (!solve || selected === null || solve.status[selected] !== 1) {
+    if (!solve || solveId === null || selected === null || solve.status[selected] !== 1) {
       setRoute({ route: null, solve });
       return;
     }
     let live = true;
     engine.client
-      .request<'route'>({ kind: 'route', target: selected })
+      .request<'route'>({ kind: 'route', target: selected, solveId })
       .then((answer) => live && setRoute({ route: answer.route, solve }))
       .catch(() => live && setRoute({ route: null, solve }));
     return () => {
       live = false;
     };
-  }, [engine, solve, selected]);
+  }, [engine, solve, solveId, selected]);
 
   const route = routeOf.solve === solve ? routeOf.route : null;
-  return { solve, solvedFor, roundTripMs, route, error, solving, solveCount };
+  return { solve, solvedFor: shown?.network ?? null, roundTripMs, route, error, solving, solveCount };
 }

@@ -119,7 +119,8 @@ export type ToWorker =
   | { kind: 'load'; id: number; depots: NamedText; lanes: NamedText; acceptPartial: boolean; plan: PlanChoice }
   | { kind: 'replan'; id: number; plan: PlanChoice }
   | { kind: 'solve'; id: number; settings: PlanSettings; scenario: Scenario | null }
-  | { kind: 'route'; id: number; target: number }
+  /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
+  | { kind: 'route'; id: number; target: number; solveId: number }
   | { kind: 'export'; id: number; what: ExportKind }
   | { kind: 'review'; id: number; scenario: Scenario | null };
 

@@ -22,6 +22,8 @@ export class WorkerSession {
   private network: Network | null = null;
   private plan: PlanChoice = { date: '', vehicleClass: '' };
   private solved: Solved | null = null;
+  /** Id of the solve request `solved` answered. */
+  private solvedId: number | null = null;
   private baseKey = '';
   private settings: PlanSettings | null = null;
   private scenario: Scenario | null = null;
@@ -51,7 +53,10 @@ export class WorkerSession {
       case 'route': {
         const network = this.need();
         const on = this.solvedOn;
-        const route = this.solved ? pathOf(on ? on.network : network, this.solved, message.target) : null;
+        // A newer solve may have run since the UI asked (one the UI then dropped as superseded): its
+        // tree could give another path, which the UI would draw beside the old solve's costs.
+        const current = this.solved && this.solvedId === message.solveId;
+        const route = current ? pathOf(on ? on.network : network, this.solved!, message.target) : null;
         this.post({ kind: 'route', id: message.id, route: route && on ? { ...route, lanes: route.lanes.map((e) => on.laneRefs[e]) } : route });
         return;
       }
@@ -82,6 +87,7 @@ export class WorkerSession {
     const keys = laneKeysOf(result.network!);
     this.keys = { keys, index: laneKeyIndex(keys) };
     this.solved = null;
+    this.solvedId = null;
     this.base = null;
     this.baseKey = '';
     const view = networkView(result.network!, result.vehicleClasses, plan, result.plan.settings.drivingLimit.dailyDrivingMinutes);
@@ -120,6 +126,7 @@ export class WorkerSession {
     const started = performance.now();
     this.settings = settings;
     this.scenario = scenario;
+    this.solvedId = id;
     let view: SolveView;
     if (needsRebuild(scenario)) {
       // Added lanes and validity changes alter the lane set: the engine applies the scenario and the

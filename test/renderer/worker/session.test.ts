@@ -133,7 +133,7 @@ describe('scenarios that change the lane set', () => {
         },
       ],
     };
-    const out = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: 0 }]);
+    const out = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: 0, solveId: 2 }]);
     const view = (out[0] as { network: NetworkView }).network;
     const result = (out[1] as { result: SolveView }).result;
     const imported = importNetwork(text('depots.csv'), text('lanes.csv'), { plan: { date: DATE }, skipInvalid: true });
@@ -146,7 +146,7 @@ describe('scenarios that change the lane set', () => {
     expect(Array.from(result.treeLanes).every((e) => (e >= 0 && e < view.laneFrom.length) || e === addedLaneRef(0))).toBe(true);
     expect(Array.from(result.treeLanes)).toContain(addedLaneRef(0));
 
-    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil }]);
+    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil, solveId: 2 }]);
     expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([addedLaneRef(0)]);
   });
 
@@ -163,7 +163,26 @@ describe('scenarios that change the lane set', () => {
     const first = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }]);
     const mil = (first[0] as { network: NetworkView }).network.depotIds.indexOf('MIL');
     expect((first[1] as { result: SolveView }).result.cost[mil]).toBe(6000);
-    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil }]);
+    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil, solveId: 2 }]);
     expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([addedLaneRef(2)]);
+  });
+  it('answers a route only for the solve the UI shows, not for a newer one it dropped', () => {
+    const lane = { from: 'RTM', to: 'MIL', ref: 'WHATIF-3', tollMinor: 1000, feesMinor: 0, fuelMinor: 5000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null };
+    const scenario = { ...emptyScenario(), changes: [{ kind: 'add-lane' as const, note: null, lane }] };
+    const [loaded] = drive([load('lanes.csv')]);
+    const mil = (loaded as { network: NetworkView }).network.depotIds.indexOf('MIL');
+    // Solve 2 (with the added lane) is on screen; solve 3 (without it) ran before the route request.
+    const out = drive([
+      load('lanes.csv'),
+      { kind: 'solve', id: 2, settings, scenario },
+      { kind: 'solve', id: 3, settings, scenario: null },
+      { kind: 'route', id: 4, target: mil, solveId: 2 },
+      { kind: 'route', id: 5, target: mil, solveId: 3 },
+    ]);
+    const routes = out.filter((m): m is Extract<FromWorker, { kind: 'route' }> => m.kind === 'route');
+    expect(routes.map((m) => m.id)).toEqual([4, 5]);
+    expect(routes[0].route).toBeNull();
+    expect(routes[1].route?.lanes.length).toBeGreaterThan(0);
+    expect(routes[1].route?.lanes).not.toContain(addedLaneRef(0));
   });
 });
