@@ -119,21 +119,25 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
       const c = long[i];
       if (chosen !== -1 && c !== -1 && c !== chosen) {
         const key = groupKey(i);
-        excluded++;
-        if (!withClass.has(key) && !withDefault.has(key) && !missingReported.has(key)) {
-          missingReported.add(key);
-          if (Number.isNaN(defaultToll)) {
+        // The first row of a lane with no row for the chosen class stands in for it at the default
+        // toll, as a blank class toll does in the wide layout; without a default toll it is an error.
+        const firstWithout = !withClass.has(key) && !withDefault.has(key) && !missingReported.has(key);
+        if (firstWithout) missingReported.add(key);
+        if (!firstWithout || Number.isNaN(defaultToll)) {
+          excluded++;
+          if (firstWithout) {
             errors.push(item(t.sourceRow[i], 'vehicle_class', t.classNames[c], 'no-toll-for-class', `this lane has no row for vehicle class "${className}" and no default toll is set`));
           }
+          continue;
         }
-        continue;
-      }
-      if (c === -1 && chosen !== -1 && withClass.has(groupKey(i))) {
+        toll = defaultToll;
+      } else if (c === -1 && chosen !== -1 && withClass.has(groupKey(i))) {
         excluded++; // the class's own row overrides the all-classes row
         continue;
+      } else {
+        toll = t.toll[i];
+        if (Number.isNaN(toll)) toll = classes.length > 0 ? defaultToll : 0;
       }
-      toll = t.toll[i];
-      if (Number.isNaN(toll)) toll = classes.length > 0 ? defaultToll : 0;
     } else if (wide && chosen !== -1) {
       toll = t.classTolls[chosen].toll[i];
       if (Number.isNaN(toll)) toll = t.toll[i];

@@ -79,10 +79,9 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
 
 /** The planned lanes as objects (LaneInput plus validity, class and estimate flags). */
 export function plannedLanes(depots: readonly DepotRecord[], table: LaneTable, c: PlannedColumns, plannedClass: string | null): PlannedLane[] {
-  const classOf = (r: number): string | null => {
-    if (table.vehicleClass) return table.vehicleClass[r] === -1 ? null : table.classNames[table.vehicleClass[r]];
-    return plannedClass;
-  };
+  // Every class row planned is for the planned class: its own, or a lane's stand-in row of another
+  // class at the default toll.
+  const classOf = (r: number): string | null => (table.vehicleClass && table.vehicleClass[r] === -1 ? null : plannedClass);
   const lanes: PlannedLane[] = new Array(c.record.length);
   for (let e = 0; e < c.record.length; e++) {
     const r = c.record[e];

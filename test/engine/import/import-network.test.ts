@@ -217,6 +217,15 @@ describe('planning by date and vehicle class', () => {
       [4, 400],
       [5, 100],
     ]);
+    // With a default toll, C->A is planned at it for 2axle (as a blank class toll is in the wide layout).
+    const withDefault = importNetwork(DEPOTS, long, { plan: { vehicleClass: '2axle', settings: { defaultToll: '3.00' } } });
+    expect(withDefault.report.errors).toEqual([]);
+    expect(withDefault.plan.lanes.map((l) => [l.sourceRow, l.toll, l.vehicleClass])).toEqual([
+      [2, 200, '2axle'],
+      [4, 400, null],
+      [5, 300, '2axle'],
+    ]);
+    expect(withDefault.plan.excluded).toBe(1);
   });
 
   it('fills a blank fuel from distance x consumption x price, and a blank distance from the great circle x detour', () => {
