@@ -30,12 +30,12 @@ export class DepotsReader extends RecordFileReader {
     this.header = matchDepotHeaders(cells);
     for (const field of REQUIRED) {
       if (!this.header.columns.has(field)) {
-        this.report.error(this.file, 1, LABEL[field], null, 'missing-column', `required column "${LABEL[field]}" is missing; no depot can be read`);
+        this.report.error(this.file, this.headerRow, LABEL[field], null, 'missing-column', `required column "${LABEL[field]}" is missing; no depot can be read`);
         this.unusable = true;
       }
     }
-    for (const d of this.header.duplicates) this.report.error(this.file, 1, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
-    for (const u of this.header.unknown) this.report.warning(this.file, 1, u.header, null, 'unknown-column', 'unknown column, kept with the depot but not used');
+    for (const d of this.header.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
+    for (const u of this.header.unknown) this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, kept with the depot but not used');
   }
 
   protected readRow(cells: string[], row: number): boolean {

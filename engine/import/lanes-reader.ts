@@ -83,13 +83,13 @@ export class LanesReader extends RecordFileReader {
     this.driveUnit = driveUnit === 'hours' || driveUnit === 'hour' ? 'h' : driveUnit;
     for (const field of ['from', 'to'] as const) {
       if (!h.columns.has(field)) {
-        this.report.error(this.file, 1, field, null, 'missing-column', `required column "${field}" is missing; no lane can be read`);
+        this.report.error(this.file, this.headerRow, field, null, 'missing-column', `required column "${field}" is missing; no lane can be read`);
         this.unusable = true;
       }
     }
-    for (const d of h.duplicates) this.report.error(this.file, 1, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
+    for (const d of h.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
     for (const u of h.unknown) {
-      this.report.warning(this.file, 1, u.header, null, 'unknown-column', 'unknown column, kept with the lane but not used');
+      this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, kept with the lane but not used');
       this.table.extra.push({ column: u.header, values: [] });
     }
     for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length) });
@@ -97,7 +97,7 @@ export class LanesReader extends RecordFileReader {
     if (h.columns.has('vehicle_class')) this.table.vehicleClass = new Int16Array(this.table.from.length);
     const distanceUnit = h.columns.get('distance')?.unit;
     if (distanceUnit && !['km', 'mi', 'miles', 'mile', 'kilometres', 'kilometers'].includes(distanceUnit)) {
-      this.report.error(this.file, 1, h.columns.get('distance')!.header, distanceUnit, 'bad-unit', 'distance unit must be km or mi');
+      this.report.error(this.file, this.headerRow, h.columns.get('distance')!.header, distanceUnit, 'bad-unit', 'distance unit must be km or mi');
       this.unusable = true;
     }
   }

@@ -18,6 +18,8 @@ export abstract class RecordFileReader implements CsvRecordSink {
   decimalComma = false;
   protected headerCells: string[] = [];
   protected headerRead = false;
+  /** The header's row as a spreadsheet shows it: 1 unless blank lines come first. */
+  protected headerRow = 1;
   /** A header problem that makes every row unreadable (e.g. a required column is missing). */
   protected unusable = false;
   protected readonly counts: FileCounts;
@@ -40,6 +42,7 @@ export abstract class RecordFileReader implements CsvRecordSink {
       if (start === records.length) return;
       this.headerCells = records[start].map((c) => c.trim());
       this.headerRead = true;
+      this.headerRow = firstRow + start;
       this.readHeader(records[start]);
       start++;
     }

@@ -241,6 +241,12 @@ describe('planning by date and vehicle class', () => {
 });
 
 describe('importer extras', () => {
+  it('names the header row as a spreadsheet shows it when blank lines come before it', () => {
+    const r = importNetwork('\n\nid,name,lat,lon,lat\nA,a,50,8,1\nB,b,51,9,1\n', 'from,to\nA,B\n');
+    expect(r.report.errors.map((e) => [e.row, e.column, e.code])).toEqual([[3, 'lat', 'duplicate-column']]);
+    expect(r.report.files[0]).toMatchObject({ total: 2, accepted: 2, rejected: 0 });
+  });
+
   it('rejects rows holding bytes that were not UTF-8 (U+FFFD from the decoder)', () => {
     const r = importNetwork('id,name,lat,lon\nA,K\ufffdln,50,6\nB,b,51,5\n', 'from,to\nB,B\n');
     expect(r.report.errors[0]).toMatchObject({ code: 'not-text', row: 2, column: 'name' });
