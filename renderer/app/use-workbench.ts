@@ -38,6 +38,8 @@ export function useWorkbench(host: LanewrightHost) {
         setSettings(next);
         setScenario(emptyScenario());
         setSelected(null);
+        // A new workspace: Save must ask where, not overwrite the workspace opened before.
+        setSavedPath(null);
         cleanKey.current = 'pending';
         setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');
       }

@@ -22,8 +22,8 @@ export interface Session {
   close(): Promise<void>;
 }
 
-/** Serves dist/renderer and opens it in a fresh headless Chromium profile. */
-export async function openApp(viewport = { width: 1440, height: 920 }): Promise<Session> {
+/** Serves dist/renderer and opens it in a fresh headless Chromium profile; `initScript` runs in the page before the app. */
+export async function openApp(viewport = { width: 1440, height: 920 }, initScript?: string): Promise<Session> {
   if (!existsSync('dist/renderer/index.html')) throw new Error('dist/renderer is missing: run "npm run build:renderer" (npm run test:e2e does)');
   if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: apt-get install -y chromium`);
   mkdirSync(SCREENSHOTS, { recursive: true });
@@ -33,6 +33,7 @@ export async function openApp(viewport = { width: 1440, height: 920 }): Promise<
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
   });
   const context = await browser.newContext({ viewport, acceptDownloads: true });
+  if (initScript) await context.addInitScript(initScript);
   const page = await context.newPage();
   const requests: string[] = [];
   const errors: string[] = [];
