@@ -9,7 +9,6 @@ import { RecordFileReader } from './record-file-reader';
 import type { DepotRecord } from './types';
 
 const REQUIRED: DepotField[] = ['id', 'lat', 'lon'];
-const LABEL: Record<DepotField, string> = { id: 'id', name: 'name', lat: 'lat', lon: 'lon', type: 'type', notes: 'notes' };
 
 export class DepotsReader extends RecordFileReader {
   readonly depots: DepotRecord[] = [];
@@ -30,7 +29,7 @@ export class DepotsReader extends RecordFileReader {
     this.header = matchDepotHeaders(cells);
     for (const field of REQUIRED) {
       if (!this.header.columns.has(field)) {
-        this.report.error(this.file, this.headerRow, LABEL[field], null, 'missing-column', `required column "${LABEL[field]}" is missing; no depot can be read`);
+        this.report.error(this.file, this.headerRow, field, null, 'missing-column', `required column "${field}" is missing; no depot can be read`);
         this.unusable = true;
       }
     }
@@ -49,8 +48,9 @@ export class DepotsReader extends RecordFileReader {
     if (cells.length > this.headerCells.length) {
       fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
     }
+    const idColumn = cols.get('id')!.header;
     const id = cellText(cells, at('id'));
-    if (id === '') fail('id', '', 'missing-value', 'depot id is empty');
+    if (id === '') fail(idColumn, '', 'missing-value', 'depot id is empty');
     const coordinate = (field: 'lat' | 'lon', limit: number): number => {
       const column = cols.get(field)!.header;
       const text = cellText(cells, at(field));
@@ -72,7 +72,7 @@ export class DepotsReader extends RecordFileReader {
     const lat = coordinate('lat', 90);
     const lon = coordinate('lon', 180);
     if (id !== '' && this.index.has(id)) {
-      fail(cols.get('id')!.header, id, 'duplicate-depot', `duplicate depot id; first defined at row ${this.depots[this.index.get(id)!].sourceRow}`);
+      fail(idColumn, id, 'duplicate-depot', `duplicate depot id; first defined at row ${this.depots[this.index.get(id)!].sourceRow}`);
     }
     if (!ok) {
       if (id !== '' && !this.index.has(id) && !this.rejectedIds.has(id)) this.rejectedIds.set(id, row);

@@ -63,6 +63,9 @@ describe('importNetwork', () => {
     ]);
     balanced(r);
     expect(r.network).toBeNull();
+    // The column is named as the file names it.
+    const named = importNetwork('Depot code,lat,lon\n,1,1\nA,1,1\n', 'from,to\n');
+    expect(named.report.errors.map((e) => [e.row, e.column, e.code])).toEqual([[2, 'Depot code', 'missing-value']]);
   });
 
   it('reports every lane error kind and never loses a row', () => {
