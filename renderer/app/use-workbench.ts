@@ -140,11 +140,17 @@ export function useWorkbench(host: LanewrightHost) {
   const openWorkspace = useCallback(
     async (path: string | null) => {
       const opened = await host.openWorkspace(path);
-      if (!opened.ok) setMessage(`Could not open the workspace: ${opened.failure.message}`);
-      else if (opened.value && (await openDocument(opened.value.document))) {
-        setSavedPath(opened.value.path);
-        setDirty(false);
-        setMessage(`Opened ${opened.value.path}.`);
+      if (!opened.ok) return setMessage(`Could not open the workspace: ${opened.failure.message}`);
+      if (!opened.value) return;
+      try {
+        if (await openDocument(opened.value.document)) {
+          setSavedPath(opened.value.path);
+          setDirty(false);
+          setMessage(`Opened ${opened.value.path}.`);
+        }
+      } catch (error) {
+        // A file the workspace names could not be read: the workspace on screen stays as it was.
+        setMessage(`Could not open the workspace: ${(error as Error).message}`);
       }
     },
     [host, openDocument],

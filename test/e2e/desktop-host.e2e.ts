@@ -1,6 +1,6 @@
 // The renderer under a scripted desktop host (the `window.lanewright` the preload would define),
-// for what only the desktop has: a workspace path that Save writes to without a dialog, which a
-// new workspace must not inherit. The host records every save it is asked for.
+// for what only the desktop has: a workspace path that Save writes to without a dialog, and
+// workspaces naming files on disk that may have gone. The host records every save it is asked for.
 
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -74,6 +74,14 @@ describe('renderer under the desktop host', () => {
     await menu(page, { command: 'save', thenQuit: false });
     await expect.poll(() => saves(page)).toHaveLength(1);
     expect((await saves(page))[0].path).toBeNull();
+  });
+
+  it('says so when a workspace names a file that cannot be read, and keeps the one on screen', async () => {
+    const dataset = page.locator('.lw-dataset');
+    expect(await dataset.innerText()).toMatch(/sample:depots\.csv/);
+    await menu(page, { command: 'open-workspace', path: GONE });
+    await expect.poll(() => statusMessage(page)).toMatch(/Could not open the workspace: .*depots\.csv: no such file/);
+    expect(await dataset.innerText()).toMatch(/sample:depots\.csv/);
   });
 
   it('made no request outside localhost and logged no errors', () => {
