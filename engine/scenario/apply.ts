@@ -6,7 +6,7 @@
 import { buildNetwork } from '../network/build';
 import type { DepotInput, LaneInput, Network } from '../network/types';
 import type { Minor } from '../money/minor';
-import { laneKeyId, laneKeyIndex, laneKeysOf, laneKeyText, type LaneKey } from './lane-key';
+import { laneGroupText, laneKeyId, laneKeyIndex, laneKeysOf, laneKeyText, type LaneKey } from './lane-key';
 import type { Scenario, ScenarioChange } from './types';
 
 /** A lane as scenarios see it: the engine's LaneInput with an optional validity period (ISO dates, inclusive). */
@@ -74,7 +74,7 @@ export function applyScenario(base: ScenarioBase, scenario: Scenario, options: A
   const keys = laneKeysOf(work);
   const index = laneKeyIndex(keys);
   const groupCount = new Map<string, number>();
-  for (const k of keys) groupCount.set(JSON.stringify([k.from, k.to, k.ref]), k.occurrence);
+  for (const k of keys) groupCount.set(laneGroupText(k.from, k.to, k.ref), k.occurrence);
   const closed = new Uint8Array(work.length + scenario.changes.length);
   const origin: number[] = work.map((_, e) => e);
   const problems: ScenarioProblem[] = [];
@@ -107,7 +107,7 @@ export function applyScenario(base: ScenarioBase, scenario: Scenario, options: A
         problem('amount-overflow', key, `change ${changeIndex + 1}: the added lane's net cost leaves the exact range`);
         return;
       }
-      const group = JSON.stringify([l.from, l.to, l.ref]);
+      const group = laneGroupText(l.from, l.to, l.ref);
       key.occurrence = (groupCount.get(group) ?? 0) + 1;
       groupCount.set(group, key.occurrence);
       index.set(laneKeyId(key), work.length);

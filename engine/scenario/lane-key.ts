@@ -16,8 +16,8 @@ export interface LaneKey {
 
 type LaneLike = Pick<LaneInput, 'from' | 'to' | 'ref'>;
 
-/** The group a lane's occurrence is counted in. */
-function groupText(from: string, to: string, ref: string | null | undefined): string {
+/** The group a lane's occurrence is counted in (same from, to and ref). */
+export function laneGroupText(from: string, to: string, ref: string | null | undefined): string {
   return JSON.stringify([from, to, ref ?? null]);
 }
 
@@ -37,7 +37,7 @@ export function laneKeysOf(source: readonly LaneLike[] | Network): LaneKey[] {
       ref = source[e].ref ?? null;
     }
     if (ref === '') ref = null;
-    const group = groupText(from, to, ref);
+    const group = laneGroupText(from, to, ref);
     const occurrence = (seen.get(group) ?? 0) + 1;
     seen.set(group, occurrence);
     keys.push({ from, to, ref, occurrence });
