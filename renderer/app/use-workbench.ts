@@ -85,13 +85,19 @@ export function useWorkbench(host: LanewrightHost) {
     })();
   }, [host, openDocument, openSample]);
 
-  // A new day or vehicle class re-plans the import (lanes valid that day, that class's tolls).
+  // A new day or vehicle class re-plans the import (lanes valid that day, that class's tolls). When
+  // the re-plan is cancelled or refused the network stays on its plan, so the controls go back to it:
+  // otherwise they would name a day or class the results on screen were not planned for.
   const { network } = dataset;
   const { replan } = dataset;
   useEffect(() => {
     if (!network) return;
     const wanted = planOf(settings);
-    if (wanted.date !== network.plan.date || wanted.vehicleClass !== network.plan.vehicleClass) void replan(wanted);
+    if (wanted.date === network.plan.date && wanted.vehicleClass === network.plan.vehicleClass) return;
+    void replan(wanted).then((ok) => {
+      if (ok) return;
+      setSettings((now) => (now.dispatchDate === wanted.date && now.vehicleClass === wanted.vehicleClass ? { ...now, dispatchDate: network.plan.date, vehicleClass: network.plan.vehicleClass } : now));
+    });
   }, [network, settings, replan]);
 
   const document = useMemo(() => documentOf(dataset.files, settings, scenario), [dataset.files, settings, scenario]);
