@@ -44,3 +44,12 @@ export function required(args: ParsedArgs, name: string): string {
   if (value === undefined || value === '') throw new UsageError(`missing required option --${name}`);
   return value;
 }
+
+/** The value of a whole-number option (at least `min`), undefined when absent, or a UsageError naming it. */
+export function wholeNumberOption(args: ParsedArgs, name: string, min: number): number | undefined {
+  const text = args.values.get(name);
+  if (text === undefined) return undefined;
+  const value = Number(text);
+  if (!/^\d+$/.test(text) || !Number.isSafeInteger(value) || value < min) throw new UsageError(`--${name} must be a whole number >= ${min}, got "${text}"`);
+  return value;
+}

@@ -4,6 +4,7 @@
 import { LanewrightError } from '../../engine/errors';
 import { parseArgs, UsageError } from './args';
 import { writeTextFileAtomic } from './files';
+import { LOAD_NETWORK_USAGE } from './load-network';
 import { routesFlags, runRoutes } from './commands/routes';
 import { checkFlags, runCheck } from './commands/check';
 import { exportFlags, runExport } from './commands/export';
@@ -14,6 +15,7 @@ import { compareFlags, runCompare } from './commands/compare';
 export interface CommandOutput {
   write(text: string): void;
   warn(line: string): void;
+  /** Prints figures as one JSON line; times are rounded to 0.01 ms here, once for every command. */
   timing(figures: Record<string, number>): void;
 }
 
@@ -25,9 +27,8 @@ const USAGE = `usage:
   lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
                    [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
   lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
-  Planning options (routes, check, export, audit, compare): [--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid]
-    [--drive-limit eu|us|HOURS] [--detour-factor F] [--fuel-consumption L_PER_100KM] [--fuel-price PRICE]
-    [--average-speed KMH] [--default-toll AMOUNT] [--currency CODE] [--rates CODE=RATE,...]
+  Planning options (routes, check, export, audit, compare):
+    ${LOAD_NETWORK_USAGE}
 
 Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
 local regulations apply; defer to local codes and licensed practice.`;
@@ -56,7 +57,7 @@ export async function main(argv: readonly string[]): Promise<number> {
     const output: CommandOutput = {
       write: (text) => (outPath ? chunks.push(text) : process.stdout.write(text)),
       warn: (line) => process.stderr.write(line + '\n'),
-      timing: (figures) => process.stderr.write(JSON.stringify(figures) + '\n'),
+      timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
     const status = command.run(args, output);
     if (outPath) writeTextFileAtomic(outPath, chunks.join(''));

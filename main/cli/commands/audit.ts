@@ -5,7 +5,7 @@
 import { auditNetwork } from '../../../engine/audit/network-audit';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/report/audit-report';
 import { formatCsvRows } from '../../../engine/io/csv-papaparse';
-import { UsageError, type ParsedArgs } from '../args';
+import { wholeNumberOption, type ParsedArgs } from '../args';
 import { writeTextFileAtomic } from '../files';
 import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';
@@ -13,7 +13,7 @@ import type { CommandOutput } from '../run';
 export const auditFlags = ['json', 'progress', 'timings', ...LOAD_NETWORK_FLAGS];
 
 export function runAudit(args: ParsedArgs, out: CommandOutput): number {
-  const loopCap = wholeNumber(args, 'loop-cap', 1);
+  const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
 
@@ -38,7 +38,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const report = auditReport(network, audit);
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
   if (loopsCsv) writeTextFileAtomic(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
-  if (args.flags.has('timings')) out.timing({ read_ms: round(readMs), audit_ms: round(solveMs), depots: network.depotCount, lanes: network.laneCount });
+  if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 
   if (report.loops.length > 0) {
     out.warn(
@@ -54,16 +54,4 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
     }
   }
   return 0;
-}
-
-function wholeNumber(args: ParsedArgs, name: string, min: number): number | undefined {
-  const text = args.values.get(name);
-  if (text === undefined) return undefined;
-  const value = Number(text);
-  if (!/^\d+$/.test(text) || !Number.isSafeInteger(value) || value < min) throw new UsageError(`--${name} must be a whole number >= ${min}, got "${text}"`);
-  return value;
-}
-
-function round(ms: number): number {
-  return Math.round(ms * 100) / 100;
 }

@@ -6,7 +6,7 @@ import { compareScenario } from '../../../engine/scenario/compare';
 import { parseScenarioDocument } from '../../../engine/scenario/document';
 import { compareReport, compareReportRows } from '../../../engine/report/compare-report';
 import { formatCsvRows } from '../../../engine/io/csv-papaparse';
-import { required, UsageError, type ParsedArgs } from '../args';
+import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
 import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';
@@ -16,14 +16,13 @@ export const compareFlags = ['json', ...LOAD_NETWORK_FLAGS];
 export function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const scenarioPath = required(args, 'scenario');
-  const capText = args.values.get('loop-cap');
-  if (capText !== undefined && (!/^\d+$/.test(capText) || Number(capText) < 1)) throw new UsageError(`--loop-cap must be a whole number >= 1, got "${capText}"`);
+  const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const scenario = parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
   const network = loadNetwork(args);
 
   const comparison = compareScenario(network, scenario, originId, {
     date: args.values.get('date') ?? null,
-    loopCap: capText === undefined ? undefined : Number(capText),
+    loopCap,
   });
   const report = compareReport(comparison);
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));

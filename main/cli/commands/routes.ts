@@ -6,7 +6,7 @@ import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
 import { routesReport } from '../../../engine/report/routes-report';
 import { routesCsv } from '../../../engine/export/routes-csv';
-import { required, UsageError, type ParsedArgs } from '../args';
+import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
 import type { CommandOutput } from '../run';
 
@@ -14,12 +14,7 @@ export const routesFlags = ['json', 'timings', ...LOAD_NETWORK_FLAGS];
 
 export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
-  const maxLegsText = args.values.get('max-legs');
-  let maxLegs: number | undefined;
-  if (maxLegsText !== undefined) {
-    maxLegs = Number(maxLegsText);
-    if (!/^\d+$/.test(maxLegsText) || !Number.isSafeInteger(maxLegs)) throw new UsageError(`--max-legs must be a whole number >= 0, got "${maxLegsText}"`);
-  }
+  const maxLegs = wholeNumberOption(args, 'max-legs', 0);
 
   const readStart = performance.now();
   const imported = loadImport(args);
@@ -34,7 +29,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : routesCsv(report));
   if (args.flags.has('timings')) {
-    out.timing({ read_ms: round(readMs), solve_ms: round(solveMs), depots: network.depotCount, lanes: network.laneCount });
+    out.timing({ read_ms: readMs, solve_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
   }
   if (report.over_drive_limit > 0) {
     const limit = imported.plan.settings.drivingLimit;
@@ -44,8 +39,4 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
     out.warn(`WARNING: ${report.loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
   }
   return 0;
-}
-
-function round(ms: number): number {
-  return Math.round(ms * 100) / 100;
 }
