@@ -3,6 +3,7 @@
 // matched by LaneKey, so a lane the scenario only re-priced still counts as the same lane.
 
 import { findDistinctLoops } from '../audit/distinct-loops';
+import { subMinor, type Minor } from '../money/minor';
 import { depotIndexOf } from '../network/build';
 import type { Network } from '../network/types';
 import { cheapestRoutes, statusName, STATUS_REACHABLE, STATUS_UNBOUNDED, type DepotStatus, type RouteTree } from '../routes/cheapest-routes';
@@ -86,7 +87,7 @@ export function compareScenario(base: ScenarioBase, scenario: Scenario, originId
       scenarioStatus: statusName(after.status[d]),
       baseCost,
       scenarioCost,
-      change: baseCost !== null && scenarioCost !== null ? scenarioCost - baseCost : null,
+      change: baseCost !== null && scenarioCost !== null ? subMinor(scenarioCost as Minor, baseCost as Minor, `cost change at depot "${baseNetwork.depotIds[d]}"`) : null,
       routeChanged: before.status[d] !== after.status[d] || (baseRoute !== null && !sameRoute(baseRoute, scenarioRoute)),
       baseRoute,
       scenarioRoute,

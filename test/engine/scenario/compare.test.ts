@@ -4,6 +4,7 @@ import { compareReport, compareReportRows } from '../../../engine/report/compare
 import type { Scenario } from '../../../engine/scenario/types';
 import type { ScenarioLane } from '../../../engine/scenario/apply';
 import type { Minor } from '../../../engine/money/minor';
+import { MoneyOverflowError } from '../../../engine/errors';
 import { referenceHasNegativeLoop, rng } from '../audit/reference';
 import { createRequire } from 'node:module';
 
@@ -45,6 +46,13 @@ describe('comparing a scenario with the base', () => {
     expect(disappear.loops_disappeared.map((l) => l.lanes)).toEqual([['B>C||1', 'C>B||1']]);
     expect(disappear.loops_appeared).toEqual([]);
     expect(disappear.depots.find((d) => d.id === 'C')!.scenario_cost_minor).toBe(25);
+  });
+
+  it('refuses a cost change outside the exact range instead of rounding it', () => {
+    const max = Number.MAX_SAFE_INTEGER;
+    const wide = { depots, lanes: [lane('O', 'A', 0, max, 2)] };
+    // -MAX before, +MAX after: the change, 2 x MAX, has no exact float.
+    expect(() => compareScenario(wide, { name: 'swing', description: null, changes: [setRebate('O', 'A', 0), setToll('O', 'A', max)] }, 'O')).toThrow(MoneyOverflowError);
   });
 
   it('carries problems through to the report', () => {
