@@ -15,6 +15,10 @@ export const CAUTIONS: readonly string[] = [
   'Defer to local codes, the carrier\'s own procedures and licensed professional practice before dispatching.',
 ];
 
+/** Short form shown wherever one route and its cost are shown; the about box has the full list. */
+export const ROUTE_CAUTION =
+  'Cost estimate only. Vehicle restrictions (height, weight, axle load, hazardous goods), driver hours and local regulations apply: check them before dispatching.';
+
 /** Heading of the notice shown the first time the app opens. */
 export const FIRST_RUN_TITLE = 'Before you plan';
 

@@ -77,6 +77,11 @@ describe('workspace in the browser', () => {
     const total = await breakdown.locator('tfoot td').last().innerText();
     expect(total.replace(/,/g, '')).toBe(formatMinor(expected.cost.get('RTM')! as Minor));
     await expect.poll(() => page.locator('svg.lw-chart').count()).toBe(1);
+    // A route with its cost always carries the cautions (estimate; restrictions, hours, regulations).
+    const caution = await page.locator('[data-testid="route-caution"]').innerText();
+    expect(caution).toMatch(/estimate/i);
+    expect(caution).toMatch(/hazardous goods/i);
+    expect(caution).toMatch(/driver hours/i);
     await snap(page, 'route-breakdown');
   });
 

@@ -1,6 +1,7 @@
 // The selected depot's route: each lane with its tolls, fuel, fees, rebate and net (under the
 // active scenario), the totals, a breakdown chart, and a button to plan from this depot instead.
 
+import { ROUTE_CAUTION } from '../../../engine/text/cautions';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
@@ -77,6 +78,9 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
         <>
           <p>
             <strong>{formatMoneyWithCode(solve.cost[depot], network.currency, network.exponent)}</strong> over {route.lanes.length} leg{route.lanes.length === 1 ? '' : 's'}, drive time {formatDriveMinutes(solve.driveMinutes[depot])}.
+          </p>
+          <p className="lw-muted" data-testid="route-caution">
+            {ROUTE_CAUTION}
           </p>
           {flagExplanations(solve.flags[depot]).map((text) => (
             <p key={text} className="lw-warn">
