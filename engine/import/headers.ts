@@ -7,8 +7,8 @@ export type LaneField =
   | 'from' | 'to' | 'ref' | 'distance' | 'distance_unit' | 'drive' | 'toll' | 'vehicle_class'
   | 'fuel' | 'fees' | 'rebate' | 'currency' | 'valid_from' | 'valid_to' | 'notes' | 'derived';
 
-/** Key a header or a vehicle class is matched by: lower case, spaces/hyphens/underscores as one "_". */
-export function headerKey(text: string): string {
+// Key a header is matched by: lower case, spaces/hyphens/underscores as one "_".
+function headerKey(text: string): string {
   return text.trim().toLowerCase().replace(/[\s_\-]+/g, '_').replace(/^_+|_+$/g, '');
 }
 

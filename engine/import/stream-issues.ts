@@ -5,7 +5,7 @@ import type { CsvStreamIssue } from '../io/csv-record-stream';
 import type { ReportCollector } from './report-collector';
 import type { FileCounts } from './types';
 
-export function streamIssueToReport(report: ReportCollector, file: string, issue: CsvStreamIssue, header: readonly string[]): void {
+function streamIssueToReport(report: ReportCollector, file: string, issue: CsvStreamIssue, header: readonly string[]): void {
   if (issue.code === 'not-text') {
     report.error(file, null, null, null, 'not-text', 'not a text file (it holds NUL bytes: binary, or UTF-16); save it as UTF-8 CSV');
     return;

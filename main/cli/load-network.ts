@@ -28,8 +28,8 @@ function positive(args: ParsedArgs, name: string): number | undefined {
   return Number(text);
 }
 
-/** The importer options the command line asks for. */
-export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
+// The importer options the command line asks for.
+function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
   const settings: Partial<PlanningSettings> = {};
   settings.detourFactor = positive(args, 'detour-factor');
   settings.fuelLitresPer100Km = positive(args, 'fuel-consumption');
