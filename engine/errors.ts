@@ -44,6 +44,13 @@ export class UnboundedPathError extends LanewrightError {
   }
 }
 
+/** Where a problem in an input file is, as one prints it: `file, row 3, column "toll", value "x"` (parts that are null left out). */
+export function fileLocationText(file: string, row: number | null, column: string | null, value: string | null): string {
+  return [file, row !== null ? `row ${row}` : null, column !== null ? `column "${column}"` : null, value !== null ? `value "${value}"` : null]
+    .filter((part) => part !== null)
+    .join(', ');
+}
+
 /** A problem in an input file, located as a spreadsheet shows it (header = row 1). */
 export class InputFileError extends LanewrightError {
   constructor(
@@ -53,11 +60,7 @@ export class InputFileError extends LanewrightError {
     readonly value: string | null,
     readonly reason: string,
   ) {
-    super(
-      [file, row !== null ? `row ${row}` : null, column !== null ? `column "${column}"` : null, value !== null ? `value "${value}"` : null]
-        .filter((part) => part !== null)
-        .join(', ') + `: ${reason}`,
-    );
+    super(`${fileLocationText(file, row, column, value)}: ${reason}`);
   }
 }
 

@@ -1,6 +1,7 @@
 // Collects the problems of one import and counts rows per file, so the report can always state
 // total, accepted and rejected exactly, even when the stored items are capped for huge files.
 
+import { fileLocationText } from '../errors';
 import type { FileCounts, IssueCode, ValidationItem, ValidationReport } from './types';
 
 export class ReportCollector {
@@ -48,10 +49,7 @@ export class ReportCollector {
 
 /** One line per item, as the command line prints it. */
 export function formatItem(item: ValidationItem, severity: 'error' | 'warning'): string {
-  const where = [item.file, item.row !== null ? `row ${item.row}` : null, item.column !== null ? `column "${item.column}"` : null, item.value !== null ? `value "${item.value}"` : null]
-    .filter((part) => part !== null)
-    .join(', ');
-  return `${severity}: ${where}: ${item.message}`;
+  return `${severity}: ${fileLocationText(item.file, item.row, item.column, item.value)}: ${item.message}`;
 }
 
 /** Every line of a report: errors first, then warnings, then the counts. */
