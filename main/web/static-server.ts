@@ -39,9 +39,12 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
         response.writeHead(403).end('outside the served folder');
         return;
       }
-      const info = await stat(file).catch(() => null);
-      if (info?.isDirectory()) file = join(file, 'index.html');
-      else if (!info) {
+      let info = await stat(file).catch(() => null);
+      if (info?.isDirectory()) {
+        file = join(file, 'index.html');
+        info = await stat(file).catch(() => null);
+      }
+      if (!info?.isFile()) {
         response.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
         return;
       }
@@ -51,7 +54,11 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
         'x-content-type-options': 'nosniff',
         'content-security-policy': CONTENT_SECURITY_POLICY,
       });
-      createReadStream(file).pipe(response);
+      // A read error after the header went out (file removed meanwhile) ends this response only;
+      // unhandled, it would stop the whole server.
+      createReadStream(file)
+        .on('error', () => response.destroy())
+        .pipe(response);
     } catch {
       response.writeHead(400).end('bad request');
     }

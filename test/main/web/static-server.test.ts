@@ -58,4 +58,10 @@ describe('static server', () => {
     }
     expect((await get('/missing.js')).status).toBe(404);
   });
+
+  it('answers 404 for a folder without index.html and keeps serving', async () => {
+    expect((await get('/assets/')).status).toBe(404);
+    expect((await get('/assets')).status).toBe(404);
+    expect((await get('/assets/app.js')).status).toBe(200);
+  });
 });
