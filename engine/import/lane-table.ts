@@ -26,11 +26,12 @@ export class LaneTableBuilder {
   validFrom = new Int32Array(this.capacity);
   validTo = new Int32Array(this.capacity);
   vehicleClass: Int16Array | null = null;
-  classTolls: { name: string; key: string; toll: Float64Array }[] = [];
+  classTolls: { name: string; key: string; toll: Float64Array; header?: string }[] = [];
   classNames: string[] = [];
   ref: (string | undefined)[] = [];
   notes: (string | undefined)[] = [];
   extra: { column: string; values: (string | undefined)[] }[] = [];
+  columnHeaders: NonNullable<LaneTable['columnHeaders']> = {};
 
   /** Makes room for one more row and returns its index; the caller fills every column. */
   add(): number {
@@ -63,7 +64,7 @@ export class LaneTableBuilder {
       to: this.to.slice(0, n),
       sourceRow: this.sourceRow.slice(0, n),
       toll: this.toll.slice(0, n),
-      classTolls: this.classTolls.map((c) => ({ name: c.name, key: c.key, toll: c.toll.slice(0, n) })),
+      classTolls: this.classTolls.map((c) => ({ name: c.name, key: c.key, toll: c.toll.slice(0, n), header: c.header })),
       vehicleClass: this.vehicleClass ? this.vehicleClass.slice(0, n) : null,
       classNames: this.classNames.slice(),
       fuel: this.fuel.slice(0, n),
@@ -76,6 +77,7 @@ export class LaneTableBuilder {
       ref: this.ref,
       notes: this.notes,
       extra: this.extra,
+      columnHeaders: this.columnHeaders,
     };
   }
 }

@@ -92,7 +92,8 @@ export class LanesReader extends RecordFileReader {
       this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, kept with the lane but not used');
       this.table.extra.push({ column: u.header, values: [] });
     }
-    for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length) });
+    for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length), header: c.header });
+    for (const field of ['toll', 'fuel', 'rebate', 'vehicle_class'] as const) if (this.name[field] !== undefined) this.table.columnHeaders[field] = this.name[field];
     this.moneyColumns = [this.col.toll, ...h.classTolls.map((c) => c.index), this.col.fuel, this.col.fees, this.col.rebate].filter((c): c is number => c !== undefined);
     if (h.columns.has('vehicle_class')) this.table.vehicleClass = new Int16Array(this.table.from.length);
     const distanceUnit = h.columns.get('distance')?.unit;

@@ -90,6 +90,8 @@ export interface ClassTolls {
   /** Matching key: lower case without spaces, hyphens or underscores. */
   key: string;
   toll: Float64Array;
+  /** The column's header as the file writes it ("Toll 5-Axle"), for messages. */
+  header?: string;
 }
 
 /**
@@ -123,6 +125,8 @@ export interface LaneTable {
   notes: (string | undefined)[];
   /** Columns the importer does not know, kept with their values. */
   extra: { column: string; values: (string | undefined)[] }[];
+  /** Headers of the columns planning may report on, as the file writes them ("Fuel Cost"). */
+  columnHeaders?: Partial<Record<'toll' | 'fuel' | 'rebate' | 'vehicle_class', string>>;
 }
 
 /** One lane row as an object, for a lane table on screen. */

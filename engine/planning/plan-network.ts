@@ -50,6 +50,8 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   const warnings: ValidationItem[] = [];
   const notes: string[] = [];
   const item = (row: number, column: string, value: string | null, code: IssueCode, message: string): ValidationItem => ({ file: lanesFile, row, column, value, message, code });
+  // Items name a column as the file writes it; a column the file lacks goes by its field name.
+  const header = (field: 'toll' | 'fuel' | 'rebate' | 'vehicle_class') => t.columnHeaders?.[field] ?? field;
 
   const date = request.date === undefined ? 0 : readIsoDate(request.date.trim());
   if (date === null) throw new PlanRequestError('date', request.date!, 'not an ISO 8601 calendar date (YYYY-MM-DD)');
@@ -126,7 +128,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
         if (!firstWithout || Number.isNaN(defaultToll)) {
           excluded++;
           if (firstWithout) {
-            errors.push(item(t.sourceRow[i], 'vehicle_class', t.classNames[c], 'no-toll-for-class', `this lane has no row for vehicle class "${className}" and no default toll is set`));
+            errors.push(item(t.sourceRow[i], header('vehicle_class'), t.classNames[c], 'no-toll-for-class', `this lane has no row for vehicle class "${className}" and no default toll is set`));
           }
           continue;
         }
@@ -147,7 +149,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
       if (Number.isNaN(toll)) toll = wide ? defaultToll : 0;
     }
     if (Number.isNaN(toll)) {
-      errors.push(item(t.sourceRow[i], wide && chosen !== -1 ? `toll_${className}` : 'toll', '', 'no-toll-for-class', `no toll for vehicle class "${className ?? '(default)'}" and no default toll is set`));
+      errors.push(item(t.sourceRow[i], wide && chosen !== -1 ? (t.classTolls[chosen].header ?? `toll_${className}`) : header('toll'), '', 'no-toll-for-class', `no toll for vehicle class "${className ?? '(default)'}" and no default toll is set`));
       rejected++;
       continue;
     }
@@ -168,7 +170,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     const fuelEstimated = Number.isNaN(fuel);
     if (fuelEstimated) {
       if (Number.isNaN(priceMilli)) {
-        errors.push(item(t.sourceRow[i], 'fuel', '', 'no-fuel-price', `fuel is blank and there is no fuel price in ${currency} to estimate it; give a fuel price`));
+        errors.push(item(t.sourceRow[i], header('fuel'), '', 'no-fuel-price', `fuel is blank and there is no fuel price in ${currency} to estimate it; give a fuel price`));
         rejected++;
         continue;
       }
@@ -181,7 +183,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     else if (net < 0) {
       const f = (v: number) => formatMinor(v as Minor, exponent);
       warnings.push(
-        item(t.sourceRow[i], 'rebate', f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
+        item(t.sourceRow[i], header('rebate'), f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
       );
     }
     record[n] = i;

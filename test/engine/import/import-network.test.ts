@@ -199,6 +199,12 @@ describe('planning by date and vehicle class', () => {
     expect(() => importNetwork(DEPOTS, wide, { plan: { vehicleClass: '7axle' } })).toThrow(PlanRequestError);
   });
 
+  it("names the file's own column in planning problems", () => {
+    const r = importNetwork(DEPOTS, 'from,to,Toll 5-Axle,fuel,Rebates\nA,B,,0,0\nB,C,1.00,0,5.00\n', { plan: { vehicleClass: '5axle' } });
+    expect(r.report.errors.map((e) => [e.row, e.column, e.code])).toEqual([[2, 'Toll 5-Axle', 'no-toll-for-class']]);
+    expect(r.report.warnings.map((w) => [w.row, w.column, w.code])).toEqual([[3, 'Rebates', 'net-negative-lane']]);
+  });
+
   it('--date keeps only the lanes valid that day (inclusive bounds)', () => {
     const r = importNetwork(DEPOTS, wide, { plan: { vehicleClass: '5axle', date: '2026-06-30' } });
     expect(r.plan.lanes.map((l) => l.sourceRow)).toEqual([2, 3]);
