@@ -54,29 +54,3 @@ export function resolveAppAsset(url: string, rootDir: string, api: typeof path =
   if (inside === '' || inside.startsWith('..') || api.isAbsolute(inside)) return null;
   return resolved;
 }
-
-const CONTENT_TYPES: Record<string, string> = {
-  '.html': 'text/html; charset=utf-8',
-  '.js': 'text/javascript; charset=utf-8',
-  '.mjs': 'text/javascript; charset=utf-8',
-  '.css': 'text/css; charset=utf-8',
-  '.json': 'application/json; charset=utf-8',
-  '.geojson': 'application/geo+json; charset=utf-8',
-  '.csv': 'text/csv; charset=utf-8',
-  '.svg': 'image/svg+xml',
-  '.png': 'image/png',
-  '.jpg': 'image/jpeg',
-  '.jpeg': 'image/jpeg',
-  '.webp': 'image/webp',
-  '.ico': 'image/x-icon',
-  '.woff2': 'font/woff2',
-  '.woff': 'font/woff',
-  '.wasm': 'application/wasm',
-  '.map': 'application/json; charset=utf-8',
-  '.txt': 'text/plain; charset=utf-8',
-};
-
-/** Content-Type header for a file name (module scripts need a JavaScript type to run). */
-export function contentTypeFor(file: string): string {
-  return CONTENT_TYPES[path.extname(file).toLowerCase()] ?? 'application/octet-stream';
-}

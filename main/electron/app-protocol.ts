@@ -4,7 +4,8 @@
 import { readFile } from 'node:fs/promises';
 import type { CustomScheme } from 'electron';
 import { CONTENT_SECURITY_POLICY } from '../ipc/content-security-policy';
-import { APP_SCHEME, contentTypeFor, resolveAppAsset } from './app-page';
+import { contentTypeFor } from '../ipc/content-types';
+import { APP_SCHEME, resolveAppAsset } from './app-page';
 
 /**
  * Registration of the app scheme; must be passed to protocol.registerSchemesAsPrivileged before the

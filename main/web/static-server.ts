@@ -4,21 +4,9 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { createServer, type Server } from 'node:http';
-import { extname, join, normalize, resolve, sep } from 'node:path';
+import { join, normalize, resolve, sep } from 'node:path';
 import { CONTENT_SECURITY_POLICY } from '../ipc/content-security-policy';
-
-const TYPES: Record<string, string> = {
-  '.html': 'text/html; charset=utf-8',
-  '.js': 'text/javascript; charset=utf-8',
-  '.mjs': 'text/javascript; charset=utf-8',
-  '.css': 'text/css; charset=utf-8',
-  '.json': 'application/json; charset=utf-8',
-  '.map': 'application/json; charset=utf-8',
-  '.svg': 'image/svg+xml',
-  '.png': 'image/png',
-  '.ico': 'image/x-icon',
-  '.csv': 'text/csv; charset=utf-8',
-};
+import { contentTypeFor } from '../ipc/content-types';
 
 export interface RunningServer {
   server: Server;
@@ -49,7 +37,7 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
         return;
       }
       response.writeHead(200, {
-        'content-type': TYPES[extname(file)] ?? 'application/octet-stream',
+        'content-type': contentTypeFor(file),
         'cache-control': 'no-cache',
         'x-content-type-options': 'nosniff',
         'content-security-policy': CONTENT_SECURITY_POLICY,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import path from 'node:path';
-import { APP_PAGE_URL, contentTypeFor, isAppPageUrl, resolveAppAsset } from '../../../main/electron/app-page';
+import { APP_PAGE_URL, isAppPageUrl, resolveAppAsset } from '../../../main/electron/app-page';
+import { contentTypeFor } from '../../../main/ipc/content-types';
 import { APP_SCHEME_PRIVILEGES, createAppProtocolHandler } from '../../../main/electron/app-protocol';
 import { CONTENT_SECURITY_POLICY } from '../../../main/ipc/content-security-policy';
 
