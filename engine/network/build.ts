@@ -19,20 +19,8 @@ export interface BuildOptions {
 export function buildNetwork(depots: readonly DepotInput[], lanes: readonly LaneInput[], options: BuildOptions = {}): Network {
   const depotCount = depots.length;
   const laneCount = lanes.length;
-  const depotIndex = new Map<string, number>();
-  const depotIds: string[] = new Array(depotCount);
-  const depotNames: string[] = new Array(depotCount);
-  const lat = new Float64Array(depotCount);
-  const lon = new Float64Array(depotCount);
-  for (let i = 0; i < depotCount; i++) {
-    const d = depots[i];
-    if (depotIndex.has(d.id)) throw new NetworkBuildError(`duplicate depot id "${d.id}"`);
-    depotIndex.set(d.id, i);
-    depotIds[i] = d.id;
-    depotNames[i] = d.name;
-    lat[i] = d.lat;
-    lon[i] = d.lon;
-  }
+  const depotPart = depotColumns(depots);
+  const { depotIndex } = depotPart;
 
   const laneFrom = new Int32Array(laneCount);
   const laneTo = new Int32Array(laneCount);
@@ -73,11 +61,7 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
     laneCount,
     currency: options.currency ?? 'EUR',
     exponent: options.exponent ?? 2,
-    depotIds,
-    depotNames,
-    lat,
-    lon,
-    depotIndex,
+    ...depotPart,
     laneFrom,
     laneTo,
     laneToll,
@@ -91,6 +75,26 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
     laneRef,
     ...compressRows(depotCount, laneFrom, laneTo, laneNet),
   };
+}
+
+/** The depot part of a Network (ids, names, coordinates, id index), shared by both network builders. */
+export function depotColumns(depots: readonly DepotInput[]): Pick<Network, 'depotIds' | 'depotNames' | 'lat' | 'lon' | 'depotIndex'> {
+  const depotCount = depots.length;
+  const depotIndex = new Map<string, number>();
+  const depotIds: string[] = new Array(depotCount);
+  const depotNames: string[] = new Array(depotCount);
+  const lat = new Float64Array(depotCount);
+  const lon = new Float64Array(depotCount);
+  for (let i = 0; i < depotCount; i++) {
+    const d = depots[i];
+    if (depotIndex.has(d.id)) throw new NetworkBuildError(`duplicate depot id "${d.id}"`);
+    depotIndex.set(d.id, i);
+    depotIds[i] = d.id;
+    depotNames[i] = d.name;
+    lat[i] = d.lat;
+    lon[i] = d.lon;
+  }
+  return { depotIds, depotNames, lat, lon, depotIndex };
 }
 
 /** Index of a depot id, or UnknownDepotError. */

@@ -6,6 +6,7 @@ import { MoneyOverflowError } from '../errors';
 import { isoDateText } from '../import/cells';
 import type { DepotRecord, LaneTable } from '../import/types';
 import type { Minor } from '../money/minor';
+import { depotColumns } from '../network/build';
 import { compressRows } from '../network/compressed-rows';
 import type { Network } from '../network/types';
 import type { PlannedLane } from './types';
@@ -25,14 +26,6 @@ export interface PlannedColumns {
 export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneTable, c: PlannedColumns, currency: string, exponent: number): Network {
   const depotCount = depots.length;
   const laneCount = c.record.length;
-  const depotIndex = new Map<string, number>();
-  const lat = new Float64Array(depotCount);
-  const lon = new Float64Array(depotCount);
-  depots.forEach((d, i) => {
-    depotIndex.set(d.id, i);
-    lat[i] = d.lat;
-    lon[i] = d.lon;
-  });
   const laneFrom = new Int32Array(laneCount);
   const laneTo = new Int32Array(laneCount);
   const laneFees = new Float64Array(laneCount);
@@ -57,11 +50,7 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
     laneCount,
     currency,
     exponent,
-    depotIds: depots.map((d) => d.id),
-    depotNames: depots.map((d) => d.name),
-    lat,
-    lon,
-    depotIndex,
+    ...depotColumns(depots),
     laneFrom,
     laneTo,
     laneToll: c.toll,
