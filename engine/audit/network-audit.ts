@@ -38,12 +38,14 @@ export interface NetworkAudit {
   headroomAfterFixPlan: boolean;
   /** Per lane: 1 when marked negotiable. */
   negotiable: Uint8Array;
+  /** Names given as negotiable that match no lane's reference or key (a typo, or a lane no longer in the file). */
+  negotiableUnmatched?: string[];
 }
 
 /** Runs the whole audit. */
 export function auditNetwork(network: Network, options: AuditOptions = {}): NetworkAudit {
   const report = options.onProgress;
-  const negotiable = markNegotiable(network, options.negotiable);
+  const { marks: negotiable, unmatched } = markNegotiable(network, options.negotiable);
 
   const distinct = findDistinctLoops(network, {
     cap: options.loopCap,
@@ -68,18 +70,24 @@ export function auditNetwork(network: Network, options: AuditOptions = {}): Netw
   }
   const headroom =
     fixPlan && !fixPlan.verified ? null : laneFloors(network, { weights, onProgress: (done, total) => report?.({ phase: 'headroom', done, total }) });
-  return { loops, loopCapReached: distinct.capReached, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable };
+  return { loops, loopCapReached: distinct.capReached, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable, negotiableUnmatched: unmatched };
 }
 
-function markNegotiable(network: Network, names: Iterable<string> | undefined): Uint8Array {
+function markNegotiable(network: Network, names: Iterable<string> | undefined): { marks: Uint8Array; unmatched: string[] } {
   const marks = new Uint8Array(network.laneCount);
-  if (!names) return marks;
+  if (!names) return { marks, unmatched: [] };
   const wanted = new Set([...names].map((s) => s.trim()).filter((s) => s !== ''));
-  if (wanted.size === 0) return marks;
+  if (wanted.size === 0) return { marks, unmatched: [] };
+  const matched = new Set<string>();
   const keys = laneKeysOf(network);
   for (let e = 0; e < network.laneCount; e++) {
     const ref = network.laneRef[e];
-    if ((ref !== undefined && wanted.has(ref)) || wanted.has(laneKeyText(keys[e]))) marks[e] = 1;
+    const keyText = laneKeyText(keys[e]);
+    for (const name of [ref, keyText]) {
+      if (name === undefined || !wanted.has(name)) continue;
+      marks[e] = 1;
+      matched.add(name);
+    }
   }
-  return marks;
+  return { marks, unmatched: [...wanted].filter((name) => !matched.has(name)) };
 }

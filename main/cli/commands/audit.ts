@@ -35,6 +35,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   });
   const solveMs = performance.now() - solveStart;
 
+  for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
   if (loopsCsv) writeTextFileAtomic(loopsCsv, formatCsvRows(auditLoopRows(network, report)));

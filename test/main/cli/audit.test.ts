@@ -65,6 +65,10 @@ describe('lanewright audit', () => {
     expect(plain.fix_plan.map((f: { ref: string; new_rebate_minor: number }) => [f.ref, f.new_rebate_minor])).toEqual([['K-1', 1000]]);
     const chosen = JSON.parse((await runCli([...args, '--negotiable', 'K-2'])).stdout);
     expect(chosen.fix_plan.map((f: { ref: string; new_rebate_minor: number; negotiable: boolean }) => [f.ref, f.new_rebate_minor, f.negotiable])).toEqual([['K-2', 800, true]]);
+    // A name that matches no lane is said on stderr, not passed over in silence.
+    const typo = await runCli([...args, '--negotiable', 'K-2,K-9']);
+    expect(typo.stderr).toMatch(/--negotiable: .*"K-9"/);
+    expect(typo.stderr).not.toMatch(/"K-2"/);
   });
 
   it('reports progress on stderr with --progress', async () => {
