@@ -22,11 +22,13 @@ export const ROUTE_CAUTION =
 /** Heading of the notice shown the first time the app opens. */
 export const FIRST_RUN_TITLE = 'Before you plan';
 
-/** Body of the first-run notice: a short lead-in followed by every caution. */
-export const FIRST_RUN_NOTICE =
+/** Lead-in of the first-run notice, before the list of cautions. */
+export const FIRST_RUN_LEAD =
   'Lanewright compares lane costs, tolls, fuel, fees and rebates to find the cheapest routes between depots ' +
-  'and to flag rebate terms that cannot be right. Please keep in mind:\n\n' +
-  CAUTIONS.map((line) => `- ${line}`).join('\n');
+  'and to flag rebate terms that cannot be right. Please keep in mind:';
+
+/** Body of the first-run notice as plain text: the lead-in followed by every caution. */
+export const FIRST_RUN_NOTICE = `${FIRST_RUN_LEAD}\n\n` + CAUTIONS.map((line) => `- ${line}`).join('\n');
 
 /** Label of the button that closes the first-run notice. */
 export const FIRST_RUN_ACKNOWLEDGE = 'I understand';

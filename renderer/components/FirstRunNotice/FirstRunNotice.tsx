@@ -2,7 +2,7 @@
 // first plan is used, with every caution. The about box repeats them any time.
 
 import { useState } from 'react';
-import { CAUTIONS, FIRST_RUN_ACKNOWLEDGE, FIRST_RUN_NOTICE, FIRST_RUN_TITLE, SAMPLE_DATA_NOTICE } from '../../../engine/text/cautions';
+import { CAUTIONS, FIRST_RUN_ACKNOWLEDGE, FIRST_RUN_LEAD, FIRST_RUN_TITLE, SAMPLE_DATA_NOTICE } from '../../../engine/text/cautions';
 import { Dialog } from '../Dialog/Dialog';
 
 export const FIRST_RUN_KEY = 'lanewright.firstRunAcknowledged';
@@ -28,7 +28,7 @@ export function FirstRunNotice() {
   };
   return (
     <Dialog title={FIRST_RUN_TITLE} onClose={acknowledge} requireButton>
-      <p>{FIRST_RUN_NOTICE.split('\n\n')[0]}</p>
+      <p>{FIRST_RUN_LEAD}</p>
       <ul className="lw-cautions">
         {CAUTIONS.map((line) => (
           <li key={line}>{line}</li>
