@@ -58,6 +58,8 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   };
   const solve = plan.solve && network && plan.solvedFor === network ? plan.solve : null;
   const route = solve ? plan.route : null;
+  // The import dialog shows the progress bar itself (inside the modal, in its keyboard cycle).
+  const importShown = importOpen || dataset.pending !== null;
   const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
   return (
     <div className="lw-app" data-ready={solve && !plan.solving ? 'yes' : 'no'} data-solves={plan.solveCount}>
@@ -65,7 +67,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         Skip to results
       </a>
       <TopBar datasetName={datasetName} desktop={host.kind === 'desktop'} dirty={bench.dirty} onSample={(loop) => void bench.openSample(loop)} onImport={ui.openImport} onSave={() => void bench.save(false)} onExport={(k) => void exportFile(k)} onAbout={ui.openAbout} />
-      <ProgressBar progress={bench.progress} onCancel={bench.engine.cancel} />
+      {!importShown && <ProgressBar progress={bench.progress} onCancel={bench.engine.cancel} />}
       {(dataset.error || plan.error) && (
         <p className="lw-error" role="alert">
           {dataset.error ?? plan.error}
@@ -95,7 +97,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
       <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />
       <FirstRunNotice />
       {aboutOpen && <AboutDialog version={version} runtime={host.kind === 'desktop' ? 'desktop app' : 'browser'} onClose={() => setAboutOpen(false)} />}
-      {(importOpen || dataset.pending) && (
+      {importShown && (
         <ImportDialog
           host={host}
           current={dataset.files}
@@ -104,6 +106,8 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           onContinue={dataset.continueWithAccepted}
           onFix={dataset.dismissPending}
           onClose={() => setImportOpen(false)}
+          progress={bench.progress}
+          onCancelWork={bench.engine.cancel}
         />
       )}
     </div>

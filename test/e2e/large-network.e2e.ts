@@ -48,11 +48,15 @@ describe('5,000 depots and 50,000 lanes', () => {
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'huge-lanes.csv', huge.lanesText);
     await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('huge-lanes.csv');
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
-    const progress = page.getByRole('group', { name: 'Work in progress' });
+    // The progress sits inside the modal dialog, so the keyboard reaches its Cancel: Tab from Import.
+    const progress = dialog.getByRole('group', { name: 'Work in progress' });
     await progress.waitFor();
     expect(await progress.locator('progress').count()).toBe(1);
     const solvesBeforeCancel = await solveCount(page);
-    await progress.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.getByRole('button', { name: 'Import', exact: true }).focus();
+    await page.keyboard.press('Tab');
+    expect(await page.evaluate(() => (document.activeElement?.closest('.lw-progress') ? document.activeElement.textContent : null))).toBe('Cancel');
+    await page.keyboard.press('Enter');
     await waitForPlan(page, solvesBeforeCancel); // the fresh worker solves the sample again
     expect(await page.locator('.lw-status').innerText()).toContain(statusBefore.split(' · ').slice(0, 2).join(' · '));
     await page.getByRole('button', { name: 'Cancel' }).first().click(); // close the import dialog

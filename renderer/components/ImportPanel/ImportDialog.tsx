@@ -1,12 +1,15 @@
 // The import flow: pick a depots file and a lanes file (either may be kept from the current data),
 // import, and when rows are rejected see the report and choose: fix the file (nothing changes) or
-// continue with the accepted rows.
+// continue with the accepted rows. The import's progress and Cancel sit inside the dialog, so they
+// are in its keyboard cycle and not hidden from screen readers by the modal.
 
 import { useState } from 'react';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import type { DatasetFiles, PendingImport } from '../../app/use-dataset';
+import type { Progress } from '../../app/use-engine';
 import type { NamedText } from '../../worker/protocol';
 import { Dialog } from '../Dialog/Dialog';
+import { ProgressBar } from '../ProgressBar/ProgressBar';
 import { ImportReportTable } from './ImportReportTable';
 
 export interface ImportDialogProps {
@@ -17,9 +20,12 @@ export interface ImportDialogProps {
   onContinue(): Promise<boolean>;
   onFix(): void;
   onClose(): void;
+  /** Work running while the dialog is open (the import), and how to stop it. */
+  progress: Progress | null;
+  onCancelWork(): void;
 }
 
-export function ImportDialog({ host, current, pending, onImport, onContinue, onFix, onClose }: ImportDialogProps) {
+export function ImportDialog({ host, current, pending, onImport, onContinue, onFix, onClose, progress, onCancelWork }: ImportDialogProps) {
   const [depots, setDepots] = useState<NamedText | null>(current?.depots ?? null);
   const [lanes, setLanes] = useState<NamedText | null>(current?.lanes ?? null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -52,6 +58,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
           )}
         </div>
         {pending.report.fatal && <p className="lw-warn">Nothing usable could be read; fix the file and import again.</p>}
+        <ProgressBar progress={progress} onCancel={onCancelWork} />
       </Dialog>
     );
   }
@@ -79,6 +86,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
           Import
         </button>
       </div>
+      <ProgressBar progress={progress} onCancel={onCancelWork} />
     </Dialog>
   );
 }

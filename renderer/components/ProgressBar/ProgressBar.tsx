@@ -1,5 +1,6 @@
 // Progress of long imports and solves, with a cancel button (it stops the worker outright). It floats
-// above everything, dialogs included, so work started from a dialog can still be cancelled.
+// above everything; the import dialog renders it inside itself, so its Cancel stays in the modal's
+// keyboard cycle and in what screen readers are shown of the page.
 
 import type { Progress } from '../../app/use-engine';
 
