@@ -154,7 +154,7 @@ export class LanesReader extends RecordFileReader {
       const rateText = this.options.exchangeRates?.[rowCurrency];
       const rate = rateText === undefined ? null : readRate(rateText);
       if (rate === null) {
-        this.fail(col.currency !== undefined ? this.headerOf('currency') : 'currency', rowCurrency, 'mixed-currency', `currency ${rowCurrency} differs from the network's ${this.currency}; one currency per network unless an exchange rate is given`);
+        this.fail(this.headerOf('currency'), rowCurrency, 'mixed-currency', `currency ${rowCurrency} differs from the network's ${this.currency}; one currency per network unless an exchange rate is given`);
       } else {
         const fromExp = currencyExponent(rowCurrency) ?? 2;
         const conv = (v: number) => (Number.isNaN(v) ? v : convertMinor(v, fromExp, this.exponent, rate));

@@ -78,7 +78,7 @@ export function sumMinor(values: Iterable<number>, context = 'sum'): Minor {
   return total;
 }
 
-/** True when |value| is within the exact range; used by solvers on their hot path. */
+/** True when |value| is within the exact range (the solvers inline the same test on their hot path). */
 export function isExact(value: number): boolean {
   return value <= MAX && value >= -MAX;
 }

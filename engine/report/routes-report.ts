@@ -82,7 +82,7 @@ export function routesReport(network: Network, solved: RouteTree | LegLimitedRou
       name: network.depotNames[d],
       status: statusName(solved.status[d]),
       cost_minor: reachable ? solved.cost[d] : null,
-      cost: reachable ? formatMinor(solved.cost[d] as Minor, network.exponent) : null,
+      cost: reachable ? money(solved.cost[d]) : null,
       legs: reachable ? solved.legs[d] : null,
       path: path ? path.depots.map((x) => network.depotIds[x]) : [],
       lanes: path ? path.lanes.map((e) => network.laneRow[e]) : [],

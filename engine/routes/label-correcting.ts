@@ -106,7 +106,7 @@ export function labelCorrect(network: Network, options: LabelCorrectingOptions):
       linkAfter(n, s);
       enqueue(s);
     }
-  } else if (state[root] === IN_TREE) {
+  } else {
     enqueue(root);
   }
 
