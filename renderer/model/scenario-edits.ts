@@ -58,6 +58,11 @@ export interface BaseAmounts {
   rebate: Float64Array;
 }
 
+/** Net cost of lane `e` in minor units: tolls + fuel + fees - rebate. */
+export function laneNetMinor(amounts: BaseAmounts, e: number): number {
+  return amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+}
+
 /** Applies the scenario's amount and closure changes to the base amounts, lanes found by key. */
 export function applyScenarioAmounts(base: BaseAmounts, keys: readonly LaneKey[], scenario: Scenario | null, keyIndex?: ReadonlyMap<string, number>): LaneAmounts {
   const n = base.toll.length;

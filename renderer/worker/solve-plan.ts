@@ -10,7 +10,7 @@ import { routePath } from '../../engine/routes/route-path';
 import { laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
 import type { AppliedScenario } from '../../engine/scenario/apply';
 import { addedLaneRef } from '../model/added-lanes';
-import { applyScenarioAmounts, hasChanges, type Scenario } from '../model/scenario-edits';
+import { applyScenarioAmounts, hasChanges, laneNetMinor, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
 import type { PlanSettings, RouteView, SolveView } from './protocol';
 
@@ -24,7 +24,7 @@ export function scenarioWeights(network: Network, scenario: Scenario | null, key
   const weights = new Float64Array(network.laneCount);
   for (let p = 0; p < network.laneCount; p++) {
     const e = network.outLane[p];
-    const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+    const net = laneNetMinor(amounts, e);
     if (!Number.isSafeInteger(net)) throw new RangeError(`scenario: net cost of the lane from row ${network.laneRow[e]} is out of the exact range`);
     weights[p] = amounts.closed[e] ? Infinity : net;
   }

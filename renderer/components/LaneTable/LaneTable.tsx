@@ -5,7 +5,7 @@
 
 import { useMemo, useState } from 'react';
 import { addedAmount, addedLaneName, setAddedLaneAmount, type AddedLane } from '../../model/added-lanes';
-import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type LaneAmounts, type LaneKey, type Scenario } from '../../model/scenario-edits';
+import { EDITABLE_FIELDS, laneNetMinor, setLaneAmount, setLaneClosed, type LaneAmounts, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import { formatMoney } from '../../model/format';
 import { withoutChange } from '../../../engine/scenario/edit';
 import type { NetworkView } from '../../worker/protocol';
@@ -107,7 +107,7 @@ export function LaneTable({ network, keys, amounts, added, scenario, onScenario 
           })}
           {lanes.slice(current * PAGE, current * PAGE + PAGE).map((e) => {
             const name = `${id(network.laneFrom[e])} → ${id(network.laneTo[e])}`;
-            const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+            const net = laneNetMinor(amounts, e);
             return (
               <tr key={e} data-lane-row={network.laneRow[e]} className={amounts.changed[e] ? 'lw-changed-row' : undefined}>
                 <td>{network.laneRow[e]}</td>
