@@ -42,7 +42,7 @@ export function parseCsvText(text: string): CsvTable {
  * Records end at LF (CRLF and LF may even be mixed in one file; the CR is dropped) or, for files
  * that use CR alone, at CR. A block that ends with a line break yields no empty record for it.
  */
-export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r'): { rows: string[][]; unclosedQuote: boolean; badQuoteRows: number[] } {
+export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r'): { rows: string[][]; badQuoteRows: number[] } {
   const lineBreak = newline === '\r' ? '\r' : '\n';
   const result = Papa.parse<string[]>(block, { delimiter, newline: lineBreak, skipEmptyLines: false });
   const rows = result.data;
@@ -58,7 +58,8 @@ export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | 
   }
   // A quote inside a field that is not itself quoted, or a closing quote followed by text.
   const badQuoteRows = result.errors.filter((e) => e.code === 'InvalidQuotes' && typeof e.row === 'number').map((e) => e.row as number);
-  return { rows, unclosedQuote: result.errors.some((e) => e.code === 'MissingQuotes'), badQuoteRows };
+  // An unclosed quote never reaches here: the stream only cuts blocks outside quotes and handles it.
+  return { rows, badQuoteRows };
 }
 
 // A text cell a spreadsheet would run as a formula; plain numbers such as -12.50 or +3 are exempt,
