@@ -58,7 +58,7 @@ export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | 
   }
   // A quote inside a field that is not itself quoted, or a closing quote followed by text.
   const badQuoteRows = result.errors.filter((e) => e.code === 'InvalidQuotes' && typeof e.row === 'number').map((e) => e.row as number);
-  // An unclosed quote never reaches here: the stream only cuts blocks outside quotes and handles it.
+  // Unclosed quotes are the record stream's to find: it tracks quote parity across chunks.
   return { rows, badQuoteRows };
 }
 
