@@ -4,8 +4,11 @@
 import { FLAG_LIMIT_HIDES_LOOP } from '../../model/flags';
 import { formatMoneyWithCode } from '../../model/format';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
-import type { LaneAmounts } from '../../model/scenario-edits';
+import { laneNetMinor, type LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
+import { TableHead } from '../DataTable/DataTable';
+
+const LOOP_LANE_HEADS = ['Lane', 'File row', 'Contract ref', { label: 'Net', numeric: true }, { label: 'Rebate', numeric: true }];
 
 export interface LoopAlertProps {
   network: NetworkView;
@@ -46,15 +49,7 @@ export function LoopAlert({ network, solve, amounts, added, onReview }: LoopAler
           </summary>
           <table className="lw-compact">
             <caption className="lw-visually-hidden">Lanes of loop {i + 1}</caption>
-            <thead>
-              <tr>
-                <th scope="col">Lane</th>
-                <th scope="col">File row</th>
-                <th scope="col">Contract ref</th>
-                <th scope="col">Net</th>
-                <th scope="col">Rebate</th>
-              </tr>
-            </thead>
+            <TableHead labels={LOOP_LANE_HEADS} />
             <tbody>
               {loop.lanes.map((e, k) => {
                 const extra = addedLaneOf(added, e);
@@ -78,7 +73,7 @@ export function LoopAlert({ network, solve, amounts, added, onReview }: LoopAler
                       <td colSpan={5}>a lane the scenario adds (see the scenario’s changes)</td>
                     </tr>
                   );
-                const net = amounts.toll[e] + amounts.fuel[e] + amounts.fees[e] - amounts.rebate[e];
+                const net = laneNetMinor(amounts, e);
                 return (
                   <tr key={e}>
                     <td>
