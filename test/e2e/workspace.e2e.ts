@@ -171,6 +171,8 @@ describe('workspace in the browser', () => {
     expect(await page.getByRole('alert').filter({ hasText: 'Rebate loop' }).count()).toBe(0);
     const compare = page.locator('[data-testid="scenario-compare"]');
     expect(await compare.innerText()).toContain('rebate set to 0.00');
+    // Each Undo names the change it undoes, so a screen reader tells them apart.
+    expect(await compare.getByRole('button', { name: /^Undo change 1: .*rebate set to 0\.00$/ }).count()).toBe(1);
     expect(await compare.locator('[data-moved-depot]').count()).toBeGreaterThan(0);
     expect(await compare.innerText()).toMatch(/unbounded → reachable/);
     await snap(page, 'scenario-edit');

@@ -2,6 +2,7 @@
 // differs from the base contract, largest change first. Each change can be undone on its own.
 
 import { useMemo } from 'react';
+import { withoutChange } from '../../../engine/scenario/edit';
 import { laneKeyText } from '../../../engine/scenario/lane-key';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
@@ -65,7 +66,7 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
         {scenario.changes.map((c, i) => (
           <li key={i}>
             {describe(c)}{' '}
-            <button type="button" onClick={() => onScenario({ ...scenario, changes: scenario.changes.filter((_, j) => j !== i) })}>
+            <button type="button" aria-label={`Undo change ${i + 1}: ${describe(c)}`} onClick={() => onScenario(withoutChange(scenario, i))}>
               Undo
             </button>
           </li>
