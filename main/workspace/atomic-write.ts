@@ -13,6 +13,10 @@ export interface AtomicWriteHooks {
   beforeRename?(tempPath: string): Promise<void> | void;
 }
 
+// Temporary files of saves still running in this process: another save of the same file must not
+// take them for leftovers of a crash (two quick Save commands run side by side).
+const inFlight = new Set<string>();
+
 /** Name of the temporary file for `target`: hidden, same folder, unique per attempt. */
 export function temporaryPathFor(target: string): string {
   return join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
@@ -32,6 +36,7 @@ export async function writeFileAtomic(target: string, text: string, hooks: Atomi
     // New file: default permissions.
   }
   let created = false;
+  inFlight.add(temp);
   try {
     const handle = await open(temp, 'wx', mode);
     created = true;
@@ -48,6 +53,8 @@ export async function writeFileAtomic(target: string, text: string, hooks: Atomi
   } catch (error) {
     if (created) await unlink(temp).catch(() => undefined);
     throw fileAccessError(target, 'write', error);
+  } finally {
+    inFlight.delete(temp);
   }
   await syncFolder(dirname(target));
   await removeLeftovers(target);
@@ -60,7 +67,7 @@ async function removeLeftovers(target: string): Promise<void> {
   const pattern = /^\d+\.[0-9a-f]{8}\.tmp$/;
   try {
     for (const name of await readdir(dirname(target))) {
-      if (name.startsWith(prefix) && pattern.test(name.slice(prefix.length))) {
+      if (name.startsWith(prefix) && pattern.test(name.slice(prefix.length)) && !inFlight.has(join(dirname(target), name))) {
         await unlink(join(dirname(target), name)).catch(() => undefined);
       }
     }

@@ -46,6 +46,22 @@ describe('writeFileAtomic', () => {
     expect((await readdir(dir)).sort()).toEqual(['.other.json.4242.0a1b2c3d.tmp', '.plan.json.notes', 'plan.json']);
   });
 
+  it('lets two saves of the same file run side by side: neither takes the other for a leftover', async () => {
+    const target = join(dir, 'plan.json');
+    let releaseSecond!: () => void;
+    const secondWaits = new Promise<void>((resolve) => (releaseSecond = resolve));
+    // The second save has written its temporary file when the first one finishes and tidies up.
+    let reached!: () => void;
+    const atHook = new Promise<void>((resolve) => (reached = resolve));
+    const second = writeFileAtomic(target, 'second', { afterTempWritten: () => (reached(), secondWaits) });
+    await atHook;
+    await writeFileAtomic(target, 'first');
+    releaseSecond();
+    await second;
+    expect(await readFile(target, 'utf8')).toBe('second');
+    expect(await readdir(dir)).toEqual(['plan.json']);
+  });
+
   it('reports a missing folder as FileAccessError with ENOENT', async () => {
     const target = join(dir, 'no-such-folder', 'plan.json');
     await expect(writeFileAtomic(target, 'x')).rejects.toMatchObject({ name: 'FileAccessError', code: 'ENOENT', path: target });
