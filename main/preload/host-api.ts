@@ -9,7 +9,7 @@ import { MENU_COMMAND_CHANNEL } from '../ipc/contract';
 /** The parts of ipcRenderer the host uses. */
 export type HostIpc = Pick<IpcRenderer, 'invoke' | 'on' | 'removeListener'>;
 
-const MENU_COMMANDS: readonly MenuCommandName[] = [
+const MENU_COMMANDS = [
   'open-workspace',
   'new-workspace',
   'import-depots',
@@ -22,7 +22,13 @@ const MENU_COMMANDS: readonly MenuCommandName[] = [
   'export-geojson',
   'export-scenario',
   'about',
-];
+] as const satisfies readonly MenuCommandName[];
+
+// A command the contract gains but this list lacks would be dropped here without a word: this line
+// stops compiling instead.
+type Unlisted = Exclude<MenuCommandName, (typeof MENU_COMMANDS)[number]>;
+const everyCommandListed: Unlisted extends never ? true : Unlisted = true;
+void everyCommandListed;
 
 /** The command as the page should see it, or null when it is not a known command. */
 export function cleanMenuCommand(value: unknown): MenuCommand | null {
