@@ -156,10 +156,18 @@ describe('workspace in the browser', () => {
     const laneName = (await page.locator(`tr[data-lane-row="${row}"] th`).innerText()).split(' → ');
     const refText = await page.locator(`tr[data-lane-row="${row}"] td`).nth(1).innerText();
     const ref = refText === '—' ? null : refText;
+    // A bad amount stays in the cell, marked invalid, with the reason as the input's description.
+    await cell.fill('12,5,0');
+    await cell.press('Enter');
+    expect(await cell.getAttribute('aria-invalid')).toBe('true');
+    const described = await cell.getAttribute('aria-describedby');
+    expect(described).toBeTruthy();
+    expect((await page.locator(`[id="${described}"]`).textContent())?.length).toBeGreaterThan(5);
     const before = await solveCount(page);
     await cell.fill('0.00');
     await cell.press('Enter');
     await waitForPlan(page, before);
+    expect(await cell.getAttribute('aria-describedby')).toBeNull();
 
     const scenario = {
       name: 'What-if 1',

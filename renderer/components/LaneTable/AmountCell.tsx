@@ -1,7 +1,8 @@
 // One editable amount in the lane table. The text is checked with the engine's exact money parser
-// when the cell is committed (Enter or leaving it); a bad value stays in the cell, marked invalid.
+// when the cell is committed (Enter or leaving it); a bad value stays in the cell, marked invalid,
+// and its reason is the input's description (announced once, since a tooltip reaches no screen reader).
 
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { LanewrightError } from '../../../engine/errors';
 import { parseMinor } from '../../../engine/money/minor';
 import { formatMinor, type Minor } from '../../../engine/money/minor';
@@ -18,6 +19,7 @@ export function AmountCell({ valueMinor, exponent, label, changed, onCommit }: A
   const shown = formatMinor(valueMinor as Minor, exponent);
   const [draft, setDraft] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const problemId = `${useId()}-problem`;
   const commit = () => {
     if (draft === null) return;
     try {
@@ -31,22 +33,30 @@ export function AmountCell({ valueMinor, exponent, label, changed, onCommit }: A
     }
   };
   return (
-    <input
-      className={`lw-amount${changed ? ' lw-changed' : ''}`}
-      inputMode="decimal"
-      aria-label={label}
-      aria-invalid={problem !== null}
-      title={problem ?? (changed ? 'Changed in the scenario' : undefined)}
-      value={draft ?? shown}
-      onChange={(e) => setDraft(e.target.value)}
-      onBlur={commit}
-      onKeyDown={(e) => {
-        if (e.key === 'Enter') commit();
-        if (e.key === 'Escape') {
-          setDraft(null);
-          setProblem(null);
-        }
-      }}
-    />
+    <>
+      <input
+        className={`lw-amount${changed ? ' lw-changed' : ''}`}
+        inputMode="decimal"
+        aria-label={label}
+        aria-invalid={problem !== null}
+        aria-describedby={problem !== null ? problemId : undefined}
+        title={problem ?? (changed ? 'Changed in the scenario' : undefined)}
+        value={draft ?? shown}
+        onChange={(e) => setDraft(e.target.value)}
+        onBlur={commit}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter') commit();
+          if (e.key === 'Escape') {
+            setDraft(null);
+            setProblem(null);
+          }
+        }}
+      />
+      {problem !== null && (
+        <span id={problemId} className="lw-visually-hidden" role="alert">
+          {problem}
+        </span>
+      )}
+    </>
   );
 }
