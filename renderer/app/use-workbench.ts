@@ -3,6 +3,7 @@
 
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
+import { workspaceFingerprint } from '../../engine/workspace/dirty';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
 import type { PlanChoice, PlanSettings } from '../worker/protocol';
@@ -104,7 +105,7 @@ export function useWorkbench(host: LanewrightHost) {
 
   // What was last opened or saved, so "unsaved" means the document really differs from it. An open
   // sets 'pending': the first document after it (files and settings together) is the clean one.
-  const docKey = useMemo(() => JSON.stringify({ ...document, savedAt: null }), [document]);
+  const docKey = useMemo(() => workspaceFingerprint(document), [document]);
   const docKeyRef = useRef(docKey);
   docKeyRef.current = docKey;
 
