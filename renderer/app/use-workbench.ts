@@ -65,24 +65,28 @@ export function useWorkbench(host: LanewrightHost) {
   );
 
   // First show: the last workspace when there is one, otherwise the sample so a plan is on screen.
+  // Why the last workspace did not open is said after the sample's own message.
   useEffect(() => {
     if (restored.current) return;
     restored.current = true;
     void (async () => {
+      let problem: string | null = null;
       try {
         const recent = host.kind === 'web' ? null : await host.recentWorkspaces();
         const path = recent && recent.ok && recent.value.length > 0 ? recent.value[0].path : null;
         if (host.kind === 'web' || path) {
           const opened = await host.openWorkspace(path);
-          if (opened.ok && opened.value && (await openDocument(opened.value.document))) {
+          if (!opened.ok) problem = opened.failure.message;
+          else if (opened.value && (await openDocument(opened.value.document))) {
             setSavedPath(opened.value.path);
             return;
           }
         }
       } catch (error) {
-        setMessage(`Could not reopen the last workspace: ${(error as Error).message}. Showing the sample instead.`);
+        problem = (error as Error).message;
       }
       await openSample(false);
+      if (problem !== null) setMessage(`Could not reopen the last workspace: ${problem}. Showing the sample instead.`);
     })();
   }, [host, openDocument, openSample]);
 

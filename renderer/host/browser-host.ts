@@ -3,6 +3,7 @@
 // kept in the browser's own storage (there are no paths to grant, so "path" is a file name).
 
 import type { AppInfo, ExportKind, HostResult, InputFileKind, LanewrightHost, MenuCommand, ReadFile, WorkspaceDocument } from '../../main/ipc/contract';
+import { checkWorkspace } from '../../engine/workspace/parse';
 import { loadFileText, storeFileText, WORKSPACE_KEY, WORKSPACE_SAVED_AT_KEY } from './browser-store';
 
 const WORKSPACE_NAME = 'browser workspace';
@@ -53,19 +54,23 @@ function download(name: string, text: string, mime: string): void {
 /** Creates the browser host. `version` is shown in the about box. */
 export function createBrowserHost(version: string): LanewrightHost {
   const listeners = new Set<(command: MenuCommand) => void>();
-  const readStored = (): WorkspaceDocument | null => {
+  // The kept workspace is checked like one from a file (an older build or a hand edit may have left
+  // anything there): a refused one is reported and never reaches the workbench.
+  const readStored = (): HostResult<WorkspaceDocument | null> => {
     const text = localStorage.getItem(WORKSPACE_KEY);
-    if (!text) return null;
+    if (!text) return ok(null);
     try {
-      return JSON.parse(text) as WorkspaceDocument;
-    } catch {
-      return null;
+      return ok(checkWorkspace(JSON.parse(text), 'browser storage'));
+    } catch (error) {
+      return failed('WorkspaceFormatError', `the workspace kept in this browser cannot be used: ${(error as Error).message}`);
     }
   };
   return {
     kind: 'web',
     async openWorkspace() {
-      const document = readStored();
+      const stored = readStored();
+      if (!stored.ok) return stored;
+      const document = stored.value;
       return ok(document ? { path: WORKSPACE_NAME, document, migratedFrom: document.version } : null);
     },
     async saveWorkspace(document) {
@@ -79,7 +84,7 @@ export function createBrowserHost(version: string): LanewrightHost {
     },
     async recentWorkspaces() {
       const openedAt = localStorage.getItem(WORKSPACE_SAVED_AT_KEY);
-      return ok(readStored() && openedAt ? [{ path: WORKSPACE_NAME, name: WORKSPACE_NAME, openedAt }] : []);
+      return ok(localStorage.getItem(WORKSPACE_KEY) && openedAt ? [{ path: WORKSPACE_NAME, name: WORKSPACE_NAME, openedAt }] : []);
     },
     async pickFile(kind: InputFileKind) {
       const file = await chooseFile(kind === 'scenario' ? '.json,application/json' : '.csv,.txt,text/csv');
