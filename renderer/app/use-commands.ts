@@ -13,7 +13,7 @@ export interface CommandHandlers {
 }
 
 export function useCommands(bench: Workbench, ui: CommandHandlers) {
-  const { host, engine, setMessage, save, openWorkspace, scenario } = bench;
+  const { host, engine, setMessage, save, openWorkspace, openSample, scenario } = bench;
 
   const exportFile = useCallback(
     async (what: ExportChoice) => {
@@ -34,6 +34,7 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
     [engine, host, setMessage, scenario],
   );
 
+  // Subscribed again only when a handler changes (the workbench object itself is new every render).
   useEffect(
     () =>
       host.onMenuCommand((command: MenuCommand) => {
@@ -41,7 +42,7 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
           case 'open-workspace':
             return void openWorkspace(command.path);
           case 'new-workspace':
-            return void bench.openSample(false);
+            return void openSample(false);
           case 'import-depots':
           case 'import-lanes':
             return ui.openImport();
@@ -63,7 +64,7 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
             return ui.openAbout();
         }
       }),
-    [host, bench, ui, save, openWorkspace, exportFile],
+    [host, openSample, ui, save, openWorkspace, exportFile],
   );
 
   return { exportFile };

@@ -19,6 +19,8 @@ function planOf(settings: PlanSettings): PlanChoice {
 export function useWorkbench(host: LanewrightHost) {
   const { engine, progress, generation } = useEngine();
   const dataset = useDataset(engine);
+  // The dataset object is new every render; its functions are stable, so callbacks depend on them.
+  const { load, replan } = dataset;
   const [settings, setSettings] = useState<PlanSettings>(() => defaultSettings(SAMPLE_ORIGIN));
   const [scenario, setScenario] = useState<Scenario>(() => emptyScenario());
   const [selected, setSelected] = useState<number | null>(null);
@@ -34,7 +36,7 @@ export function useWorkbench(host: LanewrightHost) {
   const openSample = useCallback(
     async (loop: boolean) => {
       const next = { ...settingsRef.current, origin: SAMPLE_ORIGIN, dispatchDate: SAMPLE_DATE };
-      const ok = await dataset.load(sampleFiles(loop), planOf(next));
+      const ok = await load(sampleFiles(loop), planOf(next));
       if (ok) {
         setSettings(next);
         setScenario(emptyScenario());
@@ -45,14 +47,14 @@ export function useWorkbench(host: LanewrightHost) {
         setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');
       }
     },
-    [dataset],
+    [load],
   );
 
   const openDocument = useCallback(
     async (doc: Parameters<typeof stateOf>[0]) => {
       const state = stateOf(doc);
       const files = await filesOf(host, doc);
-      if (files && (await dataset.load(files, planOf(state.settings)))) {
+      if (files && (await load(files, planOf(state.settings)))) {
         setSettings(state.settings);
         setScenario(state.scenario);
         setSelected(null);
@@ -61,7 +63,7 @@ export function useWorkbench(host: LanewrightHost) {
       }
       return false;
     },
-    [host, dataset],
+    [host, load],
   );
 
   // First show: the last workspace when there is one, otherwise the sample so a plan is on screen.
@@ -94,7 +96,6 @@ export function useWorkbench(host: LanewrightHost) {
   // the re-plan is cancelled or refused the network stays on its plan, so the controls go back to it:
   // otherwise they would name a day or class the results on screen were not planned for.
   const { network } = dataset;
-  const { replan } = dataset;
   useEffect(() => {
     if (!network) return;
     const wanted = planOf(settings);
@@ -169,7 +170,7 @@ export function useWorkbench(host: LanewrightHost) {
 
   const importFiles = useCallback(
     async (files: DatasetFiles) => {
-      const ok = await dataset.load(files, planOf(settingsRef.current));
+      const ok = await load(files, planOf(settingsRef.current));
       if (ok) {
         setSelected(null);
         setScenario(emptyScenario());
@@ -177,7 +178,7 @@ export function useWorkbench(host: LanewrightHost) {
       }
       return ok;
     },
-    [dataset],
+    [load],
   );
 
   return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles };
