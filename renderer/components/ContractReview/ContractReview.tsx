@@ -3,7 +3,7 @@
 // and by how much) that can be tried as a scenario, and rebate headroom per lane.
 
 import { useEffect, useState } from 'react';
-import type { Engine } from '../../app/use-engine';
+import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import { formatMoney, formatMoneyWithCode } from '../../model/format';
 import { fixPlanScenario, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
@@ -21,18 +21,32 @@ export interface ContractReviewProps {
 export function ContractReview({ engine, network, keys, scenario, onScenario }: ContractReviewProps) {
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  // A cancelled review is not a problem of the contract: it says so and can be run again.
+  const [stopped, setStopped] = useState(false);
+  const [attempt, setAttempt] = useState(0);
   useEffect(() => {
     let live = true;
     setReview(null);
     setProblem(null);
+    setStopped(false);
     engine
       .track((onProgress) => engine.client.request<'reviewed'>({ kind: 'review', scenario }, onProgress), 'Reviewing the contract')
       .then((answer) => live && setReview(answer.review as ContractReviewView))
-      .catch((error: Error) => live && setProblem(error.message));
+      .catch((error: Error) => live && (error instanceof WorkCancelledError ? setStopped(true) : setProblem(error.message)));
     return () => {
       live = false;
     };
-  }, [engine, network, scenario]);
+  }, [engine, network, scenario, attempt]);
+  if (stopped) {
+    return (
+      <p>
+        The contract review was stopped.{' '}
+        <button type="button" onClick={() => setAttempt((n) => n + 1)}>
+          Review again
+        </button>
+      </p>
+    );
+  }
   if (problem) return <p className="lw-warn">{problem}</p>;
   if (!review) return <p aria-busy="true">Reviewing the contract…</p>;
   const money = (v: number) => formatMoney(v, network.exponent);
