@@ -95,8 +95,10 @@ export function readDecimalText(text: string, style: DecimalStyle): DecimalText 
 
 /** A plain (non-money) number from decimal text, or the failure. */
 export function readNumber(text: string, style: DecimalStyle): { ok: true; value: number } | Extract<DecimalText, { ok: false }> {
-  // Fast path for the plain form most files use.
-  if (/^-?\d+(\.\d+)?$/.test(text)) return { ok: true, value: Number(text) };
+  // Fast path for the plain form most files use. Not for "1.234" in a decimal-comma file where
+  // grouping is allowed: that may mean 1234, and readDecimalText refuses it as ambiguous.
+  const plain = style.decimalComma && style.allowGrouping ? /^-?\d+$/ : /^-?\d+(\.\d+)?$/;
+  if (plain.test(text)) return { ok: true, value: Number(text) };
   const parsed = readDecimalText(text, style);
   if (!parsed.ok) return parsed;
   const value = Number(`${parsed.negative ? '-' : ''}${parsed.whole || '0'}.${parsed.fraction || '0'}`);

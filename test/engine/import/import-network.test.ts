@@ -199,6 +199,14 @@ describe('planning by date and vehicle class', () => {
     expect(() => importNetwork(DEPOTS, wide, { plan: { vehicleClass: '7axle' } })).toThrow(PlanRequestError);
   });
 
+  it('reads a distance in a decimal-comma file as it reads an amount: "1.234" is ambiguous, "94.3" is not', () => {
+    const semicolonDepots = 'id;name;lat;lon\nA;a;50,1;8\nB;b;51;9\n';
+    const r = importNetwork(semicolonDepots, 'from;to;toll;distance_km\nA;B;1;1.234\nB;A;1;94.3\n');
+    expect(r.report.errors.map((e) => [e.row, e.column, e.value, e.code])).toEqual([[2, 'distance_km', '1.234', 'ambiguous-number']]);
+    expect(r.lanes.distanceKm[0]).toBe(94.3);
+    balanced(r);
+  });
+
   it("names the file's own column in planning problems", () => {
     const r = importNetwork(DEPOTS, 'from,to,Toll 5-Axle,fuel,Rebates\nA,B,,0,0\nB,C,1.00,0,5.00\n', { plan: { vehicleClass: '5axle' } });
     expect(r.report.errors.map((e) => [e.row, e.column, e.code])).toEqual([[2, 'Toll 5-Axle', 'no-toll-for-class']]);
