@@ -3,6 +3,7 @@
 // refused rather than half understood. Writing always produces the current version.
 
 import { ScenarioFormatError } from '../errors';
+import { readIsoDate } from '../import/cells';
 import type { LaneKey } from './lane-key';
 import { SCENARIO_AMOUNT_FIELDS, SCENARIO_CHANGE_KINDS, type NewLane, type Scenario, type ScenarioAmountField, type ScenarioChange } from './types';
 
@@ -76,7 +77,7 @@ function readScenario(doc: Record<string, unknown>, source: string): Scenario {
   };
   const date = (v: unknown, path: string): string | null => {
     if (v === undefined || v === null) return null;
-    if (typeof v !== 'string' || !isCalendarDate(v)) return fail(path, v, 'must be an ISO 8601 date YYYY-MM-DD or null');
+    if (typeof v !== 'string' || readIsoDate(v) === null) return fail(path, v, 'must be an ISO 8601 date YYYY-MM-DD or null');
     return v;
   };
   const measure = (v: unknown, path: string): number | null => {
@@ -140,17 +141,6 @@ function readScenario(doc: Record<string, unknown>, source: string): Scenario {
     }
   });
   return { name, description, changes };
-}
-
-/** True for a real calendar date written YYYY-MM-DD (ISO 8601 extended format). */
-function isCalendarDate(text: string): boolean {
-  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
-  if (!match) return false;
-  const [year, month, day] = [Number(match[1]), Number(match[2]), Number(match[3])];
-  if (month < 1 || month > 12 || day < 1) return false;
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
-  return day <= days;
 }
 
 function isObject(v: unknown): v is Record<string, unknown> {

@@ -1,6 +1,8 @@
 // Small field checkers for hand-validated JSON: each names the JSON pointer of what it refuses, so a
 // broken workspace or IPC payload is reported as "field /settings/maxLegs value -1: reason".
 
+import { readIsoDate } from '../import/cells';
+
 /** Raised by the checkers; callers wrap it in their own named error with the file or channel. */
 export class FieldCheckFailure extends Error {
   constructor(
@@ -93,16 +95,9 @@ const DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
 
 /** An ISO 8601 calendar date (YYYY-MM-DD) that exists (no 2026-02-30). */
 export function checkIsoDate(value: unknown, field: string): string {
-  const match = typeof value === 'string' ? DATE.exec(value) : null;
-  if (!match) fail(field, value, 'must be an ISO 8601 date, YYYY-MM-DD');
-  const [, y, m, d] = match;
-  const year = Number(y);
-  const month = Number(m);
-  const day = Number(d);
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
-  if (month < 1 || month > 12 || day < 1 || day > days[month - 1]) fail(field, value, 'is not a calendar date');
-  return value as string;
+  if (typeof value !== 'string' || !DATE.test(value)) fail(field, value, 'must be an ISO 8601 date, YYYY-MM-DD');
+  if (readIsoDate(value) === null) fail(field, value, 'is not a calendar date');
+  return value;
 }
 
 const TIMESTAMP = /^(\d{4}-\d{2}-\d{2})T([01]\d|2[0-3]):[0-5]\d:[0-5]\d(\.\d{1,9})?(Z|[+-]([01]\d|2[0-3]):[0-5]\d)$/;
