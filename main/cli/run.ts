@@ -3,7 +3,7 @@
 
 import { LanewrightError } from '../../engine/errors';
 import { parseArgs, UsageError } from './args';
-import { writeTextFileAtomic } from './files';
+import { writeFileAtomic } from '../workspace/atomic-write';
 import { LOAD_NETWORK_USAGE } from './load-network';
 import { routesFlags, runRoutes } from './commands/routes';
 import { checkFlags, runCheck } from './commands/check';
@@ -14,6 +14,11 @@ import { compareFlags, runCompare } from './commands/compare';
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
   write(text: string): void;
+  /**
+   * Queues a whole output file; every file is written atomically once the command has succeeded,
+   * and `done` (when given) is printed as "wrote <done>" only after its file is on disk.
+   */
+  writeFile(path: string, text: string, done?: string): void;
   warn(line: string): void;
   /** Prints figures as one JSON line; times are rounded to 0.01 ms here, once for every command. */
   timing(figures: Record<string, number>): void;
@@ -54,13 +59,21 @@ export async function main(argv: readonly string[]): Promise<number> {
     const args = parseArgs(argv, new Set(command.flags));
     const outPath = args.values.get('out');
     const chunks: string[] = [];
+    const files: [path: string, text: string, done?: string][] = [];
     const output: CommandOutput = {
       write: (text) => (outPath ? chunks.push(text) : process.stdout.write(text)),
+      writeFile: (path, text, done) => files.push([path, text, done]),
       warn: (line) => process.stderr.write(line + '\n'),
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
     const status = command.run(args, output);
-    if (outPath) writeTextFileAtomic(outPath, chunks.join(''));
+    // The same atomic write as workspace saves (temporary file, fsync, rename, clean-up on failure):
+    // a failed or interrupted run never leaves half a report where a spreadsheet will read it.
+    if (outPath) files.unshift([outPath, chunks.join('')]);
+    for (const [path, text, done] of files) {
+      await writeFileAtomic(path, text);
+      if (done) process.stdout.write(`wrote ${done}\n`);
+    }
     return status;
   } catch (error) {
     if (error instanceof LanewrightError) {

@@ -6,7 +6,6 @@ import { auditNetwork } from '../../../engine/audit/network-audit';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/report/audit-report';
 import { formatCsvRows } from '../../../engine/io/csv-papaparse';
 import { wholeNumberOption, type ParsedArgs } from '../args';
-import { writeTextFileAtomic } from '../files';
 import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';
 
@@ -38,7 +37,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
-  if (loopsCsv) writeTextFileAtomic(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
+  if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 
   if (report.loops.length > 0) {

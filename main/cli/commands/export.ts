@@ -11,7 +11,6 @@ import { depotIndexOf } from '../../../engine/network/build';
 import { routesReport, type RoutesReport } from '../../../engine/report/routes-report';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { UsageError, type ParsedArgs } from '../args';
-import { writeTextFileAtomic } from '../files';
 import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
 import type { CommandOutput } from '../run';
 
@@ -36,24 +35,10 @@ export function runExport(args: ParsedArgs, out: CommandOutput): number {
     report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
   }
   const loops = findDistinctLoops(network).loops;
-  const written: string[] = [];
-  if (lanesOut) {
-    writeTextFileAtomic(lanesOut, lanesCsv(imported, loops));
-    written.push(`lanes: ${lanesOut} (${network.laneCount} lane(s))`);
-  }
-  if (routesOut && report) {
-    writeTextFileAtomic(routesOut, routesCsv(report));
-    written.push(`routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
-  }
-  if (loopsOut) {
-    writeTextFileAtomic(loopsOut, loopsCsv(network, loops));
-    written.push(`loops: ${loopsOut} (${loops.length} loop(s))`);
-  }
-  if (geojsonOut) {
-    writeTextFileAtomic(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })));
-    written.push(`GeoJSON: ${geojsonOut}`);
-  }
-  out.write(written.map((w) => `wrote ${w}`).join('\n') + '\n');
+  if (lanesOut) out.writeFile(lanesOut, lanesCsv(imported, loops), `lanes: ${lanesOut} (${network.laneCount} lane(s))`);
+  if (routesOut && report) out.writeFile(routesOut, routesCsv(report), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  if (loopsOut) out.writeFile(loopsOut, loopsCsv(network, loops), `loops: ${loopsOut} (${loops.length} loop(s))`);
+  if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
   return 0;
 }

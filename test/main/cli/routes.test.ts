@@ -3,7 +3,7 @@
 // the columns and fields the command must carry, so added columns do not break them.
 
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync, existsSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -101,6 +101,15 @@ describe('lanewright routes', () => {
     expect(result.stdout).toBe('');
     expect(existsSync(out)).toBe(true);
     expect(csvObjects(readFileSync(out, 'utf8')).map((r) => [r.id, r.cost])).toEqual([['A', '0.00'], ['B', '10.00'], ['C', '17.50'], ['D', '']]);
+  });
+
+  it('--out that cannot be written is one line naming the file, and leaves no temporary file', () => {
+    const folder = mkdtempSync(join(work, 'out-'));
+    const blocked = join(folder, 'routes.csv');
+    mkdirSync(blocked); // a folder where the file should go: the final rename fails
+    const result = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--out', blocked);
+    expectOneLineError(result, blocked);
+    expect(readdirSync(folder)).toEqual(['routes.csv']);
   });
 
   it('--timings prints one JSON line on stderr with read_ms and solve_ms', () => {
