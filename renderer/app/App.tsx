@@ -7,6 +7,7 @@ import { laneKeyIndex, laneKeysOf } from '../../engine/scenario/lane-key';
 import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
 import { AboutDialog } from '../components/AboutDialog/AboutDialog';
 import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';
+import { DiscardPrompt } from '../components/DiscardPrompt/DiscardPrompt';
 import { ImportDialog } from '../components/ImportPanel/ImportDialog';
 import { LoopAlert } from '../components/LoopAlert/LoopAlert';
 import { MapLegend } from '../components/MapLegend/MapLegend';
@@ -29,7 +30,9 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const [importOpen, setImportOpen] = useState(false);
   const [aboutOpen, setAboutOpen] = useState(false);
   const [tab, setTab] = useState('results');
-  const ui = useMemo(() => ({ openImport: () => setImportOpen(true), openAbout: () => setAboutOpen(true) }), []);
+  // Importing replaces the scenario, so unsaved changes are asked about before the import dialog opens.
+  const { replaceWith } = bench;
+  const ui = useMemo(() => ({ openImport: () => void replaceWith('Importing CSV files', () => setImportOpen(true)), openAbout: () => setAboutOpen(true) }), [replaceWith]);
   const { exportFile } = useCommands(bench, ui);
 
   const keys = useMemo(() => (network ? laneKeysOf(Array.from(network.laneFrom, (a, e) => ({ from: network.depotIds[a], to: network.depotIds[network.laneTo[e]], ref: network.laneRef[e] }))) : []), [network]);
@@ -66,7 +69,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
       <a className="lw-skip" href="#lw-lower">
         Skip to results
       </a>
-      <TopBar datasetName={datasetName} desktop={host.kind === 'desktop'} dirty={bench.dirty} onSample={(loop) => void bench.openSample(loop)} onImport={ui.openImport} onSave={() => void bench.save(false)} onExport={(k) => void exportFile(k)} onAbout={ui.openAbout} />
+      <TopBar datasetName={datasetName} desktop={host.kind === 'desktop'} dirty={bench.dirty} importing={dataset.importing} onSample={(loop) => void bench.openSample(loop)} onImport={ui.openImport} onSave={() => void bench.save(false)} onExport={(k) => void exportFile(k)} onAbout={ui.openAbout} />
       {!importShown && <ProgressBar progress={bench.progress} onCancel={bench.engine.cancel} />}
       {(dataset.error || plan.error) && (
         <p className="lw-error" role="alert">
@@ -108,8 +111,10 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           onClose={() => setImportOpen(false)}
           progress={bench.progress}
           onCancelWork={bench.engine.cancel}
+          importing={dataset.importing}
         />
       )}
+      {bench.discardPrompt && <DiscardPrompt action={bench.discardPrompt.action} onAnswer={bench.answerDiscard} />}
     </div>
   );
 }

@@ -2,7 +2,7 @@
 // the report offers (fix the file, or continue with the accepted rows). A refused import never
 // replaces the network already on screen.
 
-import { useCallback, useState } from 'react';
+import { useCallback, useRef, useState } from 'react';
 import type { ImportReport, NamedText, NetworkView, PlanChoice } from '../worker/protocol';
 import { WorkCancelledError, type Engine } from './use-engine';
 
@@ -25,6 +25,8 @@ export interface Dataset {
   report: ImportReport | null;
   pending: PendingImport | null;
   error: string | null;
+  /** True while an import (a file pair or a sample) runs in the engine. */
+  importing: boolean;
   /** Imports files planned for `plan`; with issues the import waits in `pending` unless `acceptPartial`. Resolves true when loaded. */
   load(files: DatasetFiles, plan: PlanChoice, acceptPartial?: boolean): Promise<boolean>;
   /** Plans the loaded import for another day or vehicle class. */
@@ -39,10 +41,15 @@ export function useDataset(engine: Engine): Dataset {
   const [report, setReport] = useState<ImportReport | null>(null);
   const [pending, setPending] = useState<PendingImport | null>(null);
   const [error, setError] = useState<string | null>(null);
+  // A count, not a flag: a cancel replaces the worker while the cancelled load is still settling.
+  const running = useRef(0);
+  const [importing, setImporting] = useState(false);
 
   const load = useCallback(
     async (next: DatasetFiles, plan: PlanChoice, acceptPartial = false): Promise<boolean> => {
       setError(null);
+      running.current++;
+      setImporting(true);
       try {
         const request = { kind: 'load' as const, depots: next.depots, lanes: next.lanes, acceptPartial, plan };
         const answer = await engine.track((onProgress) => engine.client.request<'loaded'>(request, onProgress), 'Importing');
@@ -59,6 +66,9 @@ export function useDataset(engine: Engine): Dataset {
       } catch (caught) {
         if (!(caught instanceof WorkCancelledError)) setError((caught as Error).message);
         return false;
+      } finally {
+        running.current--;
+        if (running.current === 0) setImporting(false);
       }
     },
     [engine],
@@ -89,5 +99,5 @@ export function useDataset(engine: Engine): Dataset {
   );
   const dismissPending = useCallback(() => setPending(null), []);
 
-  return { files, network, report, pending, error, load, replan, continueWithAccepted, dismissPending };
+  return { files, network, report, pending, error, importing, load, replan, continueWithAccepted, dismissPending };
 }

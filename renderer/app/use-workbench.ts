@@ -8,6 +8,7 @@ import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
 import type { PlanChoice, PlanSettings } from '../worker/protocol';
 import { useDataset, type DatasetFiles } from './use-dataset';
+import { useDiscardGuard } from './use-discard-guard';
 import { useEngine } from './use-engine';
 import { usePlan } from './use-plan';
 import { defaultSettings, documentOf, filesOf, stateOf } from './workspace-doc';
@@ -33,7 +34,7 @@ export function useWorkbench(host: LanewrightHost) {
   settingsRef.current = settings;
   const plan = usePlan(engine, dataset.network, settings, scenario, selected, generation);
 
-  const openSample = useCallback(
+  const loadSample = useCallback(
     async (loop: boolean) => {
       const next = { ...settingsRef.current, origin: SAMPLE_ORIGIN, dispatchDate: SAMPLE_DATE };
       const ok = await load(sampleFiles(loop), planOf(next));
@@ -87,10 +88,10 @@ export function useWorkbench(host: LanewrightHost) {
       } catch (error) {
         problem = (error as Error).message;
       }
-      await openSample(false);
+      await loadSample(false);
       if (problem !== null) setMessage(`Could not reopen the last workspace: ${problem}. Showing the sample instead.`);
     })();
-  }, [host, openDocument, openSample]);
+  }, [host, openDocument, loadSample]);
 
   // A new day or vehicle class re-plans the import (lanes valid that day, that class's tolls). When
   // the re-plan is cancelled or refused the network stays on its plan, so the controls go back to it:
@@ -149,23 +150,46 @@ export function useWorkbench(host: LanewrightHost) {
     [host, document, savedPath],
   );
 
+  // Every action that replaces the workspace goes through `replaceWith`: none starts while an
+  // import runs (a second one would race the first), and unsaved changes are asked about first.
+  const { discardPrompt, confirmDiscard, answerDiscard } = useDiscardGuard(dirty, () => save(false));
+  const importingRef = useRef(dataset.importing);
+  importingRef.current = dataset.importing;
+  const replaceWith = useCallback(
+    async (action: string, run: () => void | Promise<void>): Promise<void> => {
+      if (importingRef.current) return setMessage(`${action} must wait: an import is running (cancel it or let it finish).`);
+      if (await confirmDiscard(action)) await run();
+    },
+    [confirmDiscard],
+  );
+
+  const openSample = useCallback(
+    (loop: boolean) => replaceWith(loop ? 'Opening the sample with a rebate loop' : 'Opening the sample plan', () => loadSample(loop)),
+    [replaceWith, loadSample],
+  );
+
   const openWorkspace = useCallback(
     async (path: string | null) => {
+      // An import in the engine would race the one this starts; asked before the file dialog opens.
+      if (importingRef.current) return setMessage('Opening a workspace must wait: an import is running (cancel it or let it finish).');
       const opened = await host.openWorkspace(path);
       if (!opened.ok) return setMessage(`Could not open the workspace: ${opened.failure.message}`);
       if (!opened.value) return;
-      try {
-        if (await openDocument(opened.value.document)) {
-          setSavedPath(opened.value.path);
-          setDirty(false);
-          setMessage(`Opened ${opened.value.path}.`);
+      const chosen = opened.value;
+      await replaceWith(`Opening ${chosen.path}`, async () => {
+        try {
+          if (await openDocument(chosen.document)) {
+            setSavedPath(chosen.path);
+            setDirty(false);
+            setMessage(`Opened ${chosen.path}.`);
+          }
+        } catch (error) {
+          // A file the workspace names could not be read: the workspace on screen stays as it was.
+          setMessage(`Could not open the workspace: ${(error as Error).message}`);
         }
-      } catch (error) {
-        // A file the workspace names could not be read: the workspace on screen stays as it was.
-        setMessage(`Could not open the workspace: ${(error as Error).message}`);
-      }
+      });
     },
-    [host, openDocument],
+    [host, openDocument, replaceWith],
   );
 
   const importFiles = useCallback(
@@ -181,7 +205,7 @@ export function useWorkbench(host: LanewrightHost) {
     [load],
   );
 
-  return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles };
+  return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
 }
 
 export type Workbench = ReturnType<typeof useWorkbench>;

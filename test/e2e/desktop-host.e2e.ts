@@ -23,7 +23,7 @@ function fakeDesktopHost(docs: Record<string, unknown>): string {
     const docs = ${JSON.stringify(docs)};
     const ok = (value) => ({ ok: true, value });
     const fail = (error, message, path) => ({ ok: false, failure: { error, message, path, field: null } });
-    const state = { saves: [], listener: null };
+    const state = { saves: [], listener: null, failNextSave: false };
     window.__fakeHost = state;
     window.lanewright = {
       kind: 'desktop',
@@ -32,7 +32,11 @@ function fakeDesktopHost(docs: Record<string, unknown>): string {
         return ok({ path, document: docs[path], migratedFrom: 1 });
       },
       async saveWorkspace(document, path, saveAs) {
-        state.saves.push({ path, saveAs });
+        state.saves.push({ path, saveAs, lanes: document.files.lanes });
+        if (state.failNextSave) {
+          state.failNextSave = false;
+          return fail('FileAccessError', '/work/dispatch/chosen.lwspace.json: disk full', '/work/dispatch/chosen.lwspace.json');
+        }
         return ok({ path: path && !saveAs ? path : '/work/dispatch/chosen.lwspace.json' });
       },
       async recentWorkspaces() { return ok([{ path: ${JSON.stringify(OLD)}, name: 'old', openedAt: '2026-08-01T08:00:00Z' }]); },
@@ -50,7 +54,18 @@ let session: Session;
 let page: Page;
 
 const menu = (p: Page, command: object) => p.evaluate((c) => (window as unknown as { __fakeHost: { listener: (c: object) => void } }).__fakeHost.listener(c), command);
-const saves = (p: Page) => p.evaluate(() => (window as unknown as { __fakeHost: { saves: { path: string | null; saveAs: boolean }[] } }).__fakeHost.saves);
+const saves = (p: Page) => p.evaluate(() => (window as unknown as { __fakeHost: { saves: { path: string | null; saveAs: boolean; lanes: string }[] } }).__fakeHost.saves);
+const failNextSave = (p: Page) => p.evaluate(() => void ((window as unknown as { __fakeHost: { failNextSave: boolean } }).__fakeHost.failNextSave = true));
+const dataset = (p: Page) => p.locator('.lw-dataset').innerText();
+const prompt = (p: Page) => p.getByRole('dialog', { name: 'Unsaved changes' });
+
+// An edit the workspace keeps (the leg limit is saved with it), so the window has unsaved changes.
+async function makeEdit(p: Page, maxLegs: string): Promise<void> {
+  const before = await solveCount(p);
+  await p.getByLabel('Maximum legs').fill(maxLegs);
+  await waitForPlan(p, before);
+  await expect.poll(() => dataset(p)).toMatch(/unsaved/);
+}
 const statusMessage = (p: Page) => p.locator('.lw-status .lw-message').innerText();
 
 beforeAll(async () => {
@@ -82,6 +97,75 @@ describe('renderer under the desktop host', () => {
     await menu(page, { command: 'open-workspace', path: GONE });
     await expect.poll(() => statusMessage(page)).toMatch(/Could not open the workspace: .*depots\.csv: no such file/);
     expect(await dataset.innerText()).toMatch(/sample:depots\.csv/);
+  });
+
+  it('asks before a sample replaces unsaved changes; Escape and Cancel keep them, Cancel has the focus', async () => {
+    await page.getByRole('button', { name: 'I understand' }).click(); // the first-run cautions
+    expect(await dataset(page)).not.toMatch(/unsaved/);
+    await makeEdit(page, '2');
+    const solves = await solveCount(page);
+    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await prompt(page).waitFor();
+    expect(await prompt(page).getAttribute('aria-describedby')).toBeTruthy();
+    const description = await page.locator(`#${await prompt(page).getAttribute('aria-describedby')}`).innerText();
+    expect(description).toMatch(/sample with a rebate loop.*replaces the workspace/i);
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe('Cancel');
+    await page.keyboard.press('Escape');
+    await expect.poll(() => prompt(page).count()).toBe(0);
+    expect(await dataset(page)).toMatch(/sample:lanes\.csv • unsaved/);
+
+    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await prompt(page).getByRole('button', { name: 'Cancel' }).click();
+    await expect.poll(() => prompt(page).count()).toBe(0);
+    expect(await dataset(page)).toMatch(/sample:lanes\.csv • unsaved/);
+    expect(await page.getByLabel('Maximum legs').inputValue()).toBe('2');
+    expect(await solveCount(page)).toBe(solves);
+    expect(await saves(page)).toHaveLength(1);
+  });
+
+  it('Discard replaces the workspace without saving', async () => {
+    const before = await solveCount(page);
+    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await prompt(page).getByRole('button', { name: 'Discard' }).click();
+    await expect.poll(() => dataset(page)).toMatch(/sample:lanes-rebate-loop\.csv$/);
+    await waitForPlan(page, before);
+    expect(await saves(page)).toHaveLength(1);
+  });
+
+  it('Save saves through the host first, then replaces; a failed save keeps the workspace', async () => {
+    await makeEdit(page, '');
+    await failNextSave(page);
+    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await prompt(page).getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => statusMessage(page)).toMatch(/Not saved: .*disk full/);
+    expect(await dataset(page)).toMatch(/sample:lanes-rebate-loop\.csv • unsaved/);
+    expect(await saves(page)).toHaveLength(2);
+
+    const before = await solveCount(page);
+    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await prompt(page).getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => dataset(page)).toMatch(/sample:lanes\.csv$/);
+    await waitForPlan(page, before);
+    // Saved where the dialog said (a sample has no path of its own), with the edited workspace's files.
+    expect((await saves(page))[2]).toEqual({ path: null, saveAs: false, lanes: 'sample:lanes-rebate-loop.csv' });
+  });
+
+  it('asks before New workspace and Import from the menu too', async () => {
+    await makeEdit(page, '3');
+    await menu(page, { command: 'new-workspace' });
+    await prompt(page).getByRole('button', { name: 'Cancel' }).click();
+    await menu(page, { command: 'import-lanes' });
+    await prompt(page).waitFor();
+    expect(await page.getByRole('dialog', { name: 'Import depots and lanes' }).count()).toBe(0);
+    await prompt(page).getByRole('button', { name: 'Discard' }).click();
+    await page.getByRole('dialog', { name: 'Import depots and lanes' }).waitFor();
+    await page.getByRole('dialog', { name: 'Import depots and lanes' }).getByRole('button', { name: 'Cancel' }).click();
+    // Closing the import dialog replaced nothing: the edit is still there and still unsaved.
+    expect(await dataset(page)).toMatch(/unsaved/);
+    await menu(page, { command: 'open-workspace', path: OLD });
+    await prompt(page).getByRole('button', { name: 'Discard' }).click();
+    await expect.poll(() => statusMessage(page)).toMatch(new RegExp(`Opened ${OLD}`));
+    expect(await dataset(page)).not.toMatch(/unsaved/);
   });
 
   it('made no request outside localhost and logged no errors', () => {

@@ -52,6 +52,11 @@ describe('5,000 depots and 50,000 lanes', () => {
     const progress = dialog.getByRole('group', { name: 'Work in progress' });
     await progress.waitFor();
     expect(await progress.locator('progress').count()).toBe(1);
+    // While it runs, Import and the other workspace-replacing commands wait, and say why.
+    const importButton = dialog.getByRole('button', { name: 'Import', exact: true });
+    expect(await importButton.getAttribute('aria-disabled')).toBe('true');
+    expect(await importButton.getAttribute('title')).toMatch(/import is running/);
+    for (const name of ['Sample plan', 'Sample with rebate loop', 'Import CSV…']) expect(await page.getByRole('button', { name, includeHidden: true }).getAttribute('aria-disabled'), name).toBe('true');
     const solvesBeforeCancel = await solveCount(page);
     await dialog.getByRole('button', { name: 'Import', exact: true }).focus();
     await page.keyboard.press('Tab');

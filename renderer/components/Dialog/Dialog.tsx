@@ -1,5 +1,6 @@
 // A modal dialog: labelled, focus moved inside on open and returned on close, Escape closes,
-// Tab cycles within. Used by the about box, the first-run notice and the import panel.
+// Tab cycles within. Used by the about box, the first-run notice, the import panel and the
+// unsaved-changes prompt.
 
 import { useEffect, useRef, type ReactNode } from 'react';
 
@@ -11,9 +12,11 @@ export interface DialogProps {
   className?: string;
   /** Set for notices that must be acknowledged with their button (Escape does nothing). */
   requireButton?: boolean;
+  /** Id of the element that describes the dialog (its question), for aria-describedby. */
+  describedBy?: string;
 }
 
-export function Dialog({ title, onClose, children, className, requireButton }: DialogProps) {
+export function Dialog({ title, onClose, children, className, requireButton, describedBy }: DialogProps) {
   const box = useRef<HTMLDivElement>(null);
   useEffect(() => {
     const before = document.activeElement as HTMLElement | null;
@@ -42,7 +45,7 @@ export function Dialog({ title, onClose, children, className, requireButton }: D
   const titleId = `dlg-${title.replace(/\W+/g, '-').toLowerCase()}`;
   return (
     <div className="lw-backdrop">
-      <div className={`lw-dialog ${className ?? ''}`} role="dialog" aria-modal="true" aria-labelledby={titleId} ref={box} tabIndex={-1} onKeyDown={onKeyDown}>
+      <div className={`lw-dialog ${className ?? ''}`} role="dialog" aria-modal="true" aria-labelledby={titleId} aria-describedby={describedBy} ref={box} tabIndex={-1} onKeyDown={onKeyDown}>
         <h2 id={titleId}>{title}</h2>
         {children}
       </div>

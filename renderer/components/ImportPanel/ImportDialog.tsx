@@ -12,6 +12,8 @@ import { Dialog } from '../Dialog/Dialog';
 import { ProgressBar } from '../ProgressBar/ProgressBar';
 import { ImportReportTable } from './ImportReportTable';
 
+const BUSY_REASON = 'An import is running; wait for it or cancel it.';
+
 export interface ImportDialogProps {
   host: LanewrightHost;
   current: DatasetFiles | null;
@@ -23,9 +25,11 @@ export interface ImportDialogProps {
   /** Work running while the dialog is open (the import), and how to stop it. */
   progress: Progress | null;
   onCancelWork(): void;
+  /** True while an import runs: Import and Continue wait for it (a second press would start another). */
+  importing: boolean;
 }
 
-export function ImportDialog({ host, current, pending, onImport, onContinue, onFix, onClose, progress, onCancelWork }: ImportDialogProps) {
+export function ImportDialog({ host, current, pending, onImport, onContinue, onFix, onClose, progress, onCancelWork, importing }: ImportDialogProps) {
   const [depots, setDepots] = useState<NamedText | null>(current?.depots ?? null);
   const [lanes, setLanes] = useState<NamedText | null>(current?.lanes ?? null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -35,7 +39,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
     else if (result.value) (kind === 'depots' ? setDepots : setLanes)({ name: result.value.name, path: result.value.path, text: result.value.text });
   };
   const run = async () => {
-    if (!depots || !lanes) return;
+    if (!depots || !lanes || importing) return;
     if (await onImport({ depots, lanes })) onClose();
   };
   if (pending) {
@@ -52,7 +56,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
             Fix the file first
           </button>
           {!pending.report.fatal && (
-            <button type="button" className="lw-primary" onClick={async () => (await onContinue()) && onClose()}>
+            <button type="button" className="lw-primary" aria-disabled={importing} title={importing ? BUSY_REASON : undefined} onClick={async () => !importing && (await onContinue()) && onClose()}>
               Continue with the accepted rows ({acceptedText})
             </button>
           )}
@@ -82,10 +86,15 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
         <button type="button" onClick={onClose}>
           Cancel
         </button>
-        <button type="button" className="lw-primary" disabled={!depots || !lanes} onClick={run}>
+        <button type="button" className="lw-primary" disabled={!depots || !lanes} aria-disabled={importing} aria-describedby={importing ? 'lw-import-busy' : undefined} title={importing ? BUSY_REASON : undefined} onClick={run}>
           Import
         </button>
       </div>
+      {importing && (
+        <p id="lw-import-busy" className="lw-muted">
+          {BUSY_REASON}
+        </p>
+      )}
       <ProgressBar progress={progress} onCancel={onCancelWork} />
     </Dialog>
   );

@@ -3,10 +3,14 @@
 
 import type { ExportChoice } from '../../model/export-file';
 
+const BUSY_REASON = 'Waits for the import that is running (cancel it or let it finish)';
+
 export interface TopBarProps {
   datasetName: string;
   desktop: boolean;
   dirty: boolean;
+  /** True while an import runs: the commands that replace the workspace wait, and say why. */
+  importing: boolean;
   onSample(loop: boolean): void;
   onImport(): void;
   onSave(): void;
@@ -14,7 +18,9 @@ export interface TopBarProps {
   onAbout(): void;
 }
 
-export function TopBar({ datasetName, desktop, dirty, onSample, onImport, onSave, onExport, onAbout }: TopBarProps) {
+export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImport, onSave, onExport, onAbout }: TopBarProps) {
+  // aria-disabled rather than disabled: the buttons stay focusable and keep their reason in reach.
+  const busy = importing ? { 'aria-disabled': true, title: BUSY_REASON, 'aria-describedby': 'lw-busy-reason' } : {};
   return (
     <header className="lw-topbar">
       <div className="lw-brand">
@@ -28,15 +34,20 @@ export function TopBar({ datasetName, desktop, dirty, onSample, onImport, onSave
         </span>
       </div>
       <nav className="lw-commands" aria-label="Commands">
-        <button type="button" onClick={() => onSample(false)}>
+        <button type="button" {...busy} onClick={() => !importing && onSample(false)}>
           Sample plan
         </button>
-        <button type="button" onClick={() => onSample(true)}>
+        <button type="button" {...busy} onClick={() => !importing && onSample(true)}>
           Sample with rebate loop
         </button>
-        <button type="button" onClick={onImport}>
+        <button type="button" {...busy} onClick={() => !importing && onImport()}>
           Import CSV…
         </button>
+        {importing && (
+          <span id="lw-busy-reason" className="lw-busy-reason">
+            Import running: samples and Import wait
+          </span>
+        )}
         <button type="button" onClick={onSave}>
           {desktop ? 'Save workspace' : 'Keep workspace in browser'}
         </button>
