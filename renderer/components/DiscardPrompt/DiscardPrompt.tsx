@@ -12,7 +12,7 @@ export interface DiscardPromptProps {
   onAnswer(answer: DiscardAnswer): void;
 }
 
-export const DISCARD_TITLE = 'Unsaved changes';
+const DISCARD_TITLE = 'Unsaved changes';
 
 export function DiscardPrompt({ action, onAnswer }: DiscardPromptProps) {
   const cancel = useRef<HTMLButtonElement>(null);
