@@ -2,10 +2,13 @@
 // between spaces, hyphens and underscores are ignored; common synonyms are accepted; a unit may
 // sit in brackets ("Distance (mi)"). Unknown columns are kept and reported, never an error.
 
+import { LANE_LIMIT_HEADER_NAMES, type LaneLimitField } from './lane-limits';
+
 export type DepotField = 'id' | 'name' | 'lat' | 'lon' | 'type' | 'notes';
 export type LaneField =
   | 'from' | 'to' | 'ref' | 'distance' | 'distance_unit' | 'drive' | 'toll' | 'vehicle_class'
-  | 'fuel' | 'fees' | 'rebate' | 'currency' | 'valid_from' | 'valid_to' | 'notes' | 'derived';
+  | 'fuel' | 'fees' | 'rebate' | 'currency' | 'valid_from' | 'valid_to' | 'notes' | 'derived'
+  | LaneLimitField;
 
 // Key a header is matched by: lower case, spaces/hyphens/underscores as one "_".
 function headerKey(text: string): string {
@@ -50,6 +53,8 @@ const LANE_NAMES: Record<string, string> = {
   // Columns the lanes export adds; they are worked out again from the others, never read.
   net: 'derived', net_negative: 'derived', on_rebate_loop: 'derived', distance_source: 'derived', fuel_source: 'derived',
   drive_source: 'derived',
+  // Vehicle limits (max_height_m, tunnel_category, ...): declared in lane-limits.ts.
+  ...LANE_LIMIT_HEADER_NAMES,
 };
 
 export interface MatchedColumn<F extends string> {
@@ -74,7 +79,7 @@ function split(header: string): { key: string; unit: string | null } {
   return { key: headerKey(header), unit: null };
 }
 
-function match<F extends string>(headers: readonly string[], names: Record<string, string>, classes: boolean): HeaderMatch<F> {
+export function match<F extends string>(headers: readonly string[], names: Record<string, string>, classes: boolean): HeaderMatch<F> {
   const result: HeaderMatch<F> = { columns: new Map(), classTolls: [], unknown: [], duplicates: [] };
   const seenClass = new Map<string, string>();
   headers.forEach((raw, index) => {

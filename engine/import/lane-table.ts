@@ -3,6 +3,7 @@
 
 import { formatMinor, type Minor } from '../money/minor';
 import { isoDateText } from './cells';
+import type { LaneLimitsBuilder } from './lane-limits';
 import type { DepotRecord, LaneRecord, LaneTable } from './types';
 
 function grow<T extends Float64Array | Int32Array | Int16Array>(array: T, size: number): T {
@@ -32,6 +33,8 @@ export class LaneTableBuilder {
   notes: (string | undefined)[] = [];
   extra: { column: string; values: (string | undefined)[] }[] = [];
   columnHeaders: NonNullable<LaneTable['columnHeaders']> = {};
+  /** Set by the lanes reader when the header has limit columns. */
+  limits: LaneLimitsBuilder | null = null;
 
   /** Makes room for one more row and returns its index; the caller fills every column. */
   add(): number {
@@ -78,6 +81,7 @@ export class LaneTableBuilder {
       notes: this.notes,
       extra: this.extra,
       columnHeaders: this.columnHeaders,
+      limits: this.limits ? this.limits.build() : null,
     };
   }
 }

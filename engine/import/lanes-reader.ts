@@ -8,6 +8,7 @@ import { convertMinor, readRate } from './currency-convert';
 import { currencyExponent, lookupCurrency } from './currencies';
 import { readDistanceKm, readDriveTime } from './lane-cells';
 import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './headers';
+import { LaneLimitsBuilder } from './lane-limits';
 import { LaneTableBuilder } from './lane-table';
 import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
@@ -96,6 +97,10 @@ export class LanesReader extends RecordFileReader {
     for (const field of ['toll', 'fuel', 'rebate', 'vehicle_class'] as const) if (this.name[field] !== undefined) this.table.columnHeaders[field] = this.name[field];
     this.moneyColumns = [this.col.toll, ...h.classTolls.map((c) => c.index), this.col.fuel, this.col.fees, this.col.rebate].filter((c): c is number => c !== undefined);
     if (h.columns.has('vehicle_class')) this.table.vehicleClass = new Int16Array(this.table.from.length);
+    this.table.limits = LaneLimitsBuilder.forHeader(h.columns, (header, unit, message) => {
+      this.report.error(this.file, this.headerRow, header, unit, 'bad-unit', message);
+      this.unusable = true;
+    });
     const distanceUnit = h.columns.get('distance')?.unit;
     if (distanceUnit && !['km', 'mi', 'miles', 'mile', 'kilometres', 'kilometers'].includes(distanceUnit)) {
       this.report.error(this.file, this.headerRow, h.columns.get('distance')!.header, distanceUnit, 'bad-unit', 'distance unit must be km or mi');
@@ -174,9 +179,11 @@ export class LanesReader extends RecordFileReader {
     if (validFrom > 0 && validTo > 0 && validFrom > validTo) {
       this.fail(this.headerOf('valid_to'), cellText(cells, col.valid_to), 'bad-period', `validity ends before it starts (${cellText(cells, col.valid_from)})`);
     }
+    if (this.table.limits && !this.table.limits.read(cells, this.decimalComma, (c, v, code, m) => this.fail(c, v, code, m))) this.rowOk = false;
     if (!this.rowOk) return false;
 
     const t = this.table;
+    t.limits?.keep();
     const i = t.add();
     t.from[i] = from;
     t.to[i] = to;

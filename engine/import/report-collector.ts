@@ -13,7 +13,7 @@ export class ReportCollector {
 
   constructor(private readonly maxItems: number) {}
 
-  file(file: string, kind: 'depots' | 'lanes'): FileCounts {
+  file(file: string, kind: FileCounts['kind']): FileCounts {
     const counts: FileCounts = { file, kind, total: 0, accepted: 0, rejected: 0 };
     this.files.push(counts);
     return counts;

@@ -4,6 +4,7 @@
 
 import type { Network } from '../network/types';
 import type { PlannedNetwork, PlanRequest } from '../planning/types';
+import type { LaneLimits } from './lane-limits';
 
 /** What kind of problem an item reports; stable, so front ends can group and tests can check. */
 export type IssueCode =
@@ -32,6 +33,17 @@ export type IssueCode =
   | 'mixed-currency'
   | 'no-toll-for-class'
   | 'no-fuel-price'
+  | 'not-positive'
+  | 'bad-tunnel-category'
+  | 'bad-tunnel-code'
+  | 'bad-yes-no'
+  | 'bad-carriage'
+  | 'unknown-vehicle'
+  | 'unknown-vehicle-class'
+  | 'class-mismatch'
+  | 'same-depot'
+  | 'duplicate-load'
+  | 'duplicate-vehicle'
   // errors or warnings
   | 'no-data-rows' // an error for depots (nothing to plan), a warning for lanes
   // warnings
@@ -52,7 +64,7 @@ export interface ValidationItem {
 
 export interface FileCounts {
   file: string;
-  kind: 'depots' | 'lanes';
+  kind: 'depots' | 'lanes' | 'loads' | 'vehicles';
   total: number;
   accepted: number;
   rejected: number;
@@ -125,6 +137,8 @@ export interface LaneTable {
   notes: (string | undefined)[];
   /** Columns the importer does not know, kept with their values. */
   extra: { column: string; values: (string | undefined)[] }[];
+  /** Vehicle limit columns (lane-limits.ts), per row; absent or null when the file has none. */
+  limits?: LaneLimits | null;
   /** Headers of the columns planning may report on, as the file writes them ("Fuel Cost"). */
   columnHeaders?: Partial<Record<'toll' | 'fuel' | 'rebate' | 'vehicle_class', string>>;
 }

@@ -19,6 +19,12 @@ export const CAUTIONS: readonly string[] = [
 export const ROUTE_CAUTION =
   'Cost estimate only. Vehicle restrictions (height, weight, axle load, hazardous goods), driver hours and local regulations apply: check them before dispatching.';
 
+/** Shown with every dispatch plan (CLI output, Loads panel, each page of the printed dispatch sheet). */
+export const DISPATCH_CAUTION =
+  'Cost estimates only. Vehicle limits are checked only against the lane limits in your files (height, width, length, ' +
+  'weight, axle load, ADR tunnel category, dangerous-goods bans); road signs, permits, local restrictions, driver hours ' +
+  'and regulations apply: check every route before dispatching and defer to local codes and licensed practice.';
+
 /** Heading of the notice shown the first time the app opens. */
 export const FIRST_RUN_TITLE = 'Before you plan';
 

@@ -29,7 +29,7 @@ function positive(args: ParsedArgs, name: string): number | undefined {
 }
 
 // The importer options the command line asks for.
-function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
+export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
   const settings: Partial<PlanningSettings> = {};
   settings.detourFactor = positive(args, 'detour-factor');
   settings.fuelLitresPer100Km = positive(args, 'fuel-consumption');

@@ -10,6 +10,7 @@ import { checkFlags, runCheck } from './commands/check';
 import { exportFlags, runExport } from './commands/export';
 import { auditFlags, runAudit } from './commands/audit';
 import { compareFlags, runCompare } from './commands/compare';
+import { dispatchFlags, runDispatch } from './commands/dispatch';
 
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
@@ -32,7 +33,8 @@ const USAGE = `usage:
   lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
                    [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
   lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
-  Planning options (routes, check, export, audit, compare):
+  lanewright dispatch --depots FILE --lanes FILE --loads FILE [--vehicles FILE] [--alternatives K] [--json] [--out FILE] [--timings]
+  Planning options (routes, check, export, audit, compare, dispatch):
     ${LOAD_NETWORK_USAGE}
 
 Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
@@ -44,6 +46,7 @@ const COMMANDS: Record<string, { flags: string[]; run: (args: ReturnType<typeof 
   export: { flags: exportFlags, run: runExport },
   audit: { flags: auditFlags, run: runAudit },
   compare: { flags: compareFlags, run: runCompare },
+  dispatch: { flags: dispatchFlags, run: runDispatch },
 };
 
 /** Runs the command line; returns the exit status. */

@@ -23,7 +23,7 @@ export interface ImportIssue {
 
 export interface ImportReport {
   /** Per file: accepted + rejected = total data rows. */
-  files: { file: string; kind: 'depots' | 'lanes'; total: number; accepted: number; rejected: number }[];
+  files: { file: string; kind: 'depots' | 'lanes' | 'loads' | 'vehicles'; total: number; accepted: number; rejected: number }[];
   /** Errors: each rejects a row (or the file). */
   issues: ImportIssue[];
   warnings: ImportIssue[];

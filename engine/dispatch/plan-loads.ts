@@ -1,0 +1,257 @@
+// The day's loads, each on its own vehicle: loads are grouped by (origin, date, toll class, fuel
+// consumption, restriction profile) so one restricted solve serves a group, and one solve without
+// limits per (origin, date, class) tells what the limits cost and whether a load is blocked.
+// Statuses: planned, no-route, blocked (naming the limits), unbounded (naming the loop).
+
+import type { ImportResult } from '../import/types';
+import type { LoadRecord } from '../import/loads-reader';
+import type { VehicleRecord } from '../import/vehicles-reader';
+import type { RebateLoop } from '../loops/rebate-loop';
+import type { Network } from '../network/types';
+import { routeBreakdown, type RouteBreakdown } from '../planning/route-breakdown';
+import type { PlanningSettings } from '../planning/types';
+import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../routes/cheapest-routes';
+import { routePath } from '../routes/route-path';
+import { priceDay, pricingKeyText, type PricedDay, type PricingKey } from './day-pricing';
+import { fewestClosedPath, fewestClosedTree, type FewestClosedTree } from './fewest-closed';
+import { closedLanes, closureReasons, profileKey, restrictedWeights, restrictionProfile, type RestrictionProfile } from './vehicle-limits';
+import { departingLanes, prepareYen, yenAlternatives, type YenContext } from './yen-alternatives';
+
+export type LoadStatus = 'planned' | 'no-route' | 'blocked' | 'unbounded';
+
+export interface AlternativeRoute {
+  costMinor: number;
+  /** Cost minus the best route's (>= 0). */
+  differenceMinor: number;
+  path: string[];
+  /** Lane rows (lanes file) in travel order. */
+  lanes: number[];
+  /** Lane rows this route uses that the best does not. */
+  departs: number[];
+}
+
+export interface LoadPlan {
+  load: LoadRecord;
+  /** The toll class the load was priced for (the plan's default when the load names none). */
+  vehicleClass: string | null;
+  status: LoadStatus;
+  costMinor: number | null;
+  breakdown: RouteBreakdown | null;
+  path: string[];
+  /** Lane rows in travel order. */
+  lanes: number[];
+  /** Planned cost minus the cheapest cost with no limits; null unless both are known. */
+  limitsExtraMinor: number | null;
+  /** Lanes of the route without limits that this vehicle may not use, with the limit each breaks. */
+  avoided: string[];
+  /** For a blocked load: the limits on the route that needs the fewest closed lanes. */
+  blockedBy: string[];
+  /** For an unbounded load: a rebate loop that reaches it. */
+  loop: { depots: string[]; lanes: number[]; netPerLapMinor: number } | null;
+  alternatives: AlternativeRoute[];
+  /** Why the alternatives stop (null when none were asked for or the load is not planned). */
+  alternativesStoppedBy: 'k' | 'exhausted' | 'budget' | null;
+  notes: string[];
+}
+
+export interface DispatchOptions {
+  /** The plan's date (ISO 8601); loads without a date are planned for it. */
+  date: string;
+  vehicles: ReadonlyMap<string, VehicleRecord>;
+  /** Planning options of the user (the same as the import's). */
+  settings?: Partial<PlanningSettings>;
+  skipInvalid?: boolean;
+  /** Next-cheapest loopless routes per planned load (0 = none). */
+  alternatives?: number;
+  /** Spur searches allowed per load for alternatives. */
+  maxSearches?: number;
+  /** Called after each group with loads done so far. */
+  onProgress?: (done: number, total: number) => void;
+}
+
+export interface DispatchPlan {
+  date: string;
+  currency: string;
+  exponent: number;
+  driveLimitMinutes: number | null;
+  loads: LoadPlan[];
+  /** Problems of planning a day/class (lane rows left out with --skip-invalid), as report lines. */
+  warnings: string[];
+  notes: string[];
+  stats: { groups: number; restrictedSolves: number; plainSolves: number; pricedDays: number };
+}
+
+interface GroupWork {
+  origin: string;
+  key: PricingKey;
+  profile: RestrictionProfile;
+  loads: number[];
+}
+
+/** Plans every load. Loads keep their file order in the result. */
+export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], options: DispatchOptions): DispatchPlan {
+  const settings = options.settings ?? {};
+  const k = options.alternatives ?? 0;
+  const limits = imported.lanes.limits ?? null;
+  const days = new Map<string, PricedDay>();
+  const plain = new Map<string, RouteTree>();
+  const masks = new Map<string, Uint8Array | null>();
+  const warnings: string[] = [];
+  const notes: string[] = [];
+  const stats = { groups: 0, restrictedSolves: 0, plainSolves: 0, pricedDays: 0 };
+
+  const groups = new Map<string, GroupWork>();
+  loads.forEach((load, i) => {
+    const vehicle = load.vehicle === null ? null : (options.vehicles.get(load.vehicle) ?? null);
+    const key: PricingKey = { date: load.date, vehicleClass: load.vehicleClass, fuelLitresPer100Km: vehicle?.fuelLitresPer100Km ?? null };
+    const profile = restrictionProfile(load, vehicle);
+    const g = `${load.from}\u0000${pricingKeyText(key)}\u0000${profileKey(profile)}`;
+    let group = groups.get(g);
+    if (!group) groups.set(g, (group = { origin: load.from, key, profile, loads: [] }));
+    group.loads.push(i);
+  });
+
+  const dayOf = (key: PricingKey): PricedDay => {
+    const text = pricingKeyText(key);
+    let day = days.get(text);
+    if (!day) {
+      day = priceDay(imported, key, settings, options.skipInvalid ?? false);
+      days.set(text, day);
+      stats.pricedDays++;
+      for (const p of day.problems) warnings.push(`${key.date}, class ${day.vehicleClass ?? '(default)'}: ${p.file}, row ${p.row}, column "${p.column}": ${p.message} (lane left out)`);
+      for (const n of day.notes) if (!notes.includes(n)) notes.push(n);
+    }
+    return day;
+  };
+
+  const results: LoadPlan[] = new Array(loads.length);
+  let done = 0;
+  for (const group of groups.values()) {
+    stats.groups++;
+    const day = dayOf(group.key);
+    const { network } = day;
+    const dayKey = pricingKeyText(group.key);
+    const maskKey = `${dayKey}\u0000${profileKey(group.profile)}`;
+    let closed = masks.get(maskKey);
+    if (closed === undefined) masks.set(maskKey, (closed = closedLanes(network, day.laneRecord, limits, group.profile)));
+    const origin = network.depotIndex.get(group.origin)!;
+    const plainKey = `${dayKey}\u0000${group.origin}`;
+    let free = plain.get(plainKey);
+    if (!free) {
+      free = cheapestRoutes(network, origin);
+      plain.set(plainKey, free);
+      stats.plainSolves++;
+    }
+    const weights = closed ? restrictedWeights(network, closed) : undefined;
+    const tree = closed ? cheapestRoutes(network, origin, weights) : free;
+    if (closed) stats.restrictedSolves++;
+    let blockedTree: FewestClosedTree | null = null;
+    let yen: YenContext | null = null;
+    let loopReach: Uint8Array[] | null = null;
+    const reasonsOf = (lanes: readonly number[]) => lanes.flatMap((e) => closureReasons(limits, day.laneRecord[e], network.laneRow[e], group.profile));
+
+    for (const i of group.loads) {
+      const load = loads[i];
+      const target = network.depotIndex.get(load.to)!;
+      const plan = emptyPlan(load, day.vehicleClass);
+      if (group.profile.sizes === null && limits && limits.measures.length > 0) plan.notes.push('no vehicle named: the lanes\' size and weight limits were not checked');
+      if (group.profile.assumedStricter) plan.notes.push('carriage (tank / bulk) or explosive mass unknown: the stricter row of ADR 8.6.4 was applied');
+      const status = tree.status[target];
+      if (status === STATUS_REACHABLE) {
+        const path = routePath(network, tree, target)!;
+        plan.status = 'planned';
+        plan.costMinor = tree.cost[target];
+        plan.breakdown = routeBreakdown(network, path.lanes, imported.plan.settings.drivingLimit.dailyDrivingMinutes);
+        plan.path = path.depots.map((d) => network.depotIds[d]);
+        plan.lanes = path.lanes.map((e) => network.laneRow[e]);
+        if (!closed) plan.limitsExtraMinor = 0;
+        else if (free.status[target] === STATUS_REACHABLE) {
+          plan.limitsExtraMinor = tree.cost[target] - free.cost[target];
+          plan.avoided = reasonsOf(routePath(network, free, target)!.lanes);
+        } else if (free.status[target] === STATUS_UNBOUNDED) plan.notes.push('without the vehicle\'s limits a rebate loop reaches this depot, so what the limits cost is not a number');
+        if (k > 0) {
+          yen ??= prepareYen(network, tree, weights);
+          const found = yenAlternatives(yen, target, { lanes: path.lanes, costMinor: tree.cost[target] }, k, options.maxSearches);
+          plan.alternativesStoppedBy = found.stoppedBy;
+          plan.alternatives = found.alternatives.map((a) => ({
+            costMinor: a.costMinor,
+            differenceMinor: a.costMinor - tree.cost[target],
+            path: [load.from, ...a.lanes.map((e) => network.depotIds[network.laneTo[e]])],
+            lanes: a.lanes.map((e) => network.laneRow[e]),
+            departs: departingLanes(path.lanes, a.lanes).map((e) => network.laneRow[e]),
+          }));
+        }
+      } else if (status === STATUS_UNBOUNDED) {
+        plan.status = 'unbounded';
+        loopReach ??= loopReachSets(network, tree, weights);
+        const at = loopReach.findIndex((seen) => seen[target] === 1);
+        const loop = at === -1 ? null : tree.loops[at];
+        if (!loop) plan.notes.push('a rebate loop reaches this depot; the solve did not name which');
+        if (loop) plan.loop = { depots: loop.depots.map((d) => network.depotIds[d]), lanes: loop.lanes.map((e) => network.laneRow[e]), netPerLapMinor: loop.netPerLap };
+      } else if (closed) {
+        blockedTree ??= fewestClosedTree(network, origin, closed);
+        const lanes = fewestClosedPath(network, blockedTree, target);
+        if (lanes) {
+          plan.status = 'blocked';
+          plan.blockedBy = reasonsOf(lanes.filter((e) => closed[e] === 1));
+        }
+      }
+      results[i] = plan;
+    }
+    done += group.loads.length;
+    options.onProgress?.(done, loads.length);
+  }
+
+  const network0 = days.values().next().value?.network ?? imported.network;
+  return {
+    date: options.date,
+    currency: network0?.currency ?? imported.currency,
+    exponent: network0?.exponent ?? imported.exponent,
+    driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes,
+    loads: results,
+    warnings,
+    notes,
+    stats,
+  };
+}
+
+function emptyPlan(load: LoadRecord, vehicleClass: string | null): LoadPlan {
+  return {
+    load,
+    vehicleClass,
+    status: 'no-route',
+    costMinor: null,
+    breakdown: null,
+    path: [],
+    lanes: [],
+    limitsExtraMinor: null,
+    avoided: [],
+    blockedBy: [],
+    loop: null,
+    alternatives: [],
+    alternativesStoppedBy: null,
+    notes: [],
+  };
+}
+
+// Per loop of the solve, the depots reachable from it over open lanes: an unbounded load is named
+// the first loop whose set holds it (the solve reports one loop per unbounded part).
+function loopReachSets(network: Network, tree: RouteTree, weights?: Float64Array): Uint8Array[] {
+  const w = weights ?? network.outNet;
+  return tree.loops.map((loop: RebateLoop) => {
+    const seen = new Uint8Array(network.depotCount);
+    const stack = loop.depots.slice();
+    for (const d of stack) seen[d] = 1;
+    while (stack.length > 0) {
+      const u = stack.pop()!;
+      for (let p = network.outStart[u], end = network.outStart[u + 1]; p < end; p++) {
+        const v = network.outTo[p];
+        if (!seen[v] && w[p] !== Infinity) {
+          seen[v] = 1;
+          stack.push(v);
+        }
+      }
+    }
+    return seen;
+  });
+}
