@@ -13,6 +13,7 @@ import type { PlanningSettings } from '../planning/types';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../routes/cheapest-routes';
 import { routePath } from '../routes/route-path';
 import { priceDay, pricingKeyText, type PricedDay, type PricingKey } from './day-pricing';
+import { canRepair, repairTree } from './restricted-repair';
 import { fewestClosedPath, fewestClosedTree, type FewestClosedTree } from './fewest-closed';
 import { closedLanes, closureReasons, profileKey, restrictedWeights, restrictionProfile, type RestrictionProfile } from './vehicle-limits';
 import { departingLanes, prepareYen, yenAlternatives, type YenContext } from './yen-alternatives';
@@ -96,14 +97,21 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
   const days = new Map<string, PricedDay>();
   const plain = new Map<string, RouteTree>();
   const masks = new Map<string, Uint8Array | null>();
+  const maskWeights = new Map<string, Float64Array>();
+  const repairable = new Map<RouteTree, boolean>();
   const warnings: string[] = [];
   const notes: string[] = [];
   const stats = { groups: 0, restrictedSolves: 0, plainSolves: 0, pricedDays: 0 };
 
+  // A vehicle's consumption only prices lanes whose fuel is blank (estimated); without such lanes it
+  // must not split groups.
+  let fuelEstimated = false;
+  for (let r = 0; r < imported.lanes.count && !fuelEstimated; r++) if (Number.isNaN(imported.lanes.fuel[r])) fuelEstimated = true;
+
   const groups = new Map<string, GroupWork>();
   loads.forEach((load, i) => {
     const vehicle = load.vehicle === null ? null : (options.vehicles.get(load.vehicle) ?? null);
-    const key: PricingKey = { date: load.date, vehicleClass: load.vehicleClass, fuelLitresPer100Km: vehicle?.fuelLitresPer100Km ?? null };
+    const key: PricingKey = { date: load.date, vehicleClass: load.vehicleClass, fuelLitresPer100Km: fuelEstimated ? (vehicle?.fuelLitresPer100Km ?? null) : null };
     const profile = restrictionProfile(load, vehicle);
     const g = `${load.from}\u0000${pricingKeyText(key)}\u0000${profileKey(profile)}`;
     let group = groups.get(g);
@@ -142,9 +150,20 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
       plain.set(plainKey, free);
       stats.plainSolves++;
     }
-    const weights = closed ? restrictedWeights(network, closed) : undefined;
-    const tree = closed ? cheapestRoutes(network, origin, weights) : free;
-    if (closed) stats.restrictedSolves++;
+    // Solver weights with the closed lanes shut, made once per mask and only when a solve needs them.
+    const weightsOf = (): Float64Array | undefined => {
+      if (!closed) return undefined;
+      let w = maskWeights.get(maskKey);
+      if (!w) maskWeights.set(maskKey, (w = restrictedWeights(network, closed)));
+      return w;
+    };
+    let tree = free;
+    if (closed) {
+      let ok = repairable.get(free);
+      if (ok === undefined) repairable.set(free, (ok = canRepair(free)));
+      tree = ok ? repairTree(network, free, closed) : cheapestRoutes(network, origin, weightsOf());
+      stats.restrictedSolves++;
+    }
     let blockedTree: FewestClosedTree | null = null;
     let yen: YenContext | null = null;
     let loopReach: Uint8Array[] | null = null;
@@ -170,7 +189,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
           plan.avoided = reasonsOf(routePath(network, free, target)!.lanes);
         } else if (free.status[target] === STATUS_UNBOUNDED) plan.notes.push('without the vehicle\'s limits a rebate loop reaches this depot, so what the limits cost is not a number');
         if (k > 0) {
-          yen ??= prepareYen(network, tree, weights);
+          yen ??= prepareYen(network, tree, weightsOf());
           const found = yenAlternatives(yen, target, { lanes: path.lanes, costMinor: tree.cost[target] }, k, options.maxSearches);
           plan.alternativesStoppedBy = found.stoppedBy;
           plan.alternatives = found.alternatives.map((a) => ({
@@ -183,7 +202,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
         }
       } else if (status === STATUS_UNBOUNDED) {
         plan.status = 'unbounded';
-        loopReach ??= loopReachSets(network, tree, weights);
+        loopReach ??= loopReachSets(network, tree, weightsOf());
         const at = loopReach.findIndex((seen) => seen[target] === 1);
         const loop = at === -1 ? null : tree.loops[at];
         if (!loop) plan.notes.push('a rebate loop reaches this depot; the solve did not name which');

@@ -51,12 +51,34 @@ type Fail = (column: string, value: string, code: IssueCode, message: string) =>
 const YES = new Set(['yes', 'y', 'true', '1', 'x']);
 const NO = new Set(['no', 'n', 'false', '0', '']);
 
+// A growable typed column: doubles when full, trimmed by `build`.
+class Column<T extends Float64Array | Uint8Array> {
+  values: T;
+  count = 0;
+  constructor(private readonly make: (n: number) => T) {
+    this.values = make(1024);
+  }
+  push(v: number): void {
+    if (this.count === this.values.length) {
+      const next = this.make(this.values.length * 2);
+      next.set(this.values);
+      this.values = next;
+    }
+    this.values[this.count++] = v;
+  }
+  done(): T {
+    return this.values.slice(0, this.count) as T;
+  }
+}
+const floats = (n: number) => new Float64Array(n);
+const bytes = (n: number) => new Uint8Array(n);
+
 /** Reads the limit cells of each row; kept apart from the lanes reader so its rewrite stays easy. */
 export class LaneLimitsBuilder {
-  private readonly measures: { column: LaneLimitColumn; header: string; index: number; values: number[] }[] = [];
-  private tunnel: { header: string; index: number; values: number[] } | null = null;
-  private noDg: { header: string; index: number; values: number[] } | null = null;
-  private rowMeasures: number[] = [];
+  private readonly measures: { column: LaneLimitColumn; header: string; index: number; values: Column<Float64Array> }[] = [];
+  private tunnel: { header: string; index: number; values: Column<Uint8Array> } | null = null;
+  private noDg: { header: string; index: number; values: Column<Uint8Array> } | null = null;
+  private rowMeasures = new Float64Array(LANE_LIMIT_COLUMNS.length);
   private rowTunnel = 0;
   private rowNoDg = 0;
 
@@ -67,9 +89,9 @@ export class LaneLimitsBuilder {
       const col = columns.get(def.field);
       if (!col) continue;
       if (def.unit && col.unit !== null && col.unit !== def.unit) headerProblem(col.header, col.unit, `${def.name} must be in ${def.unit === 'm' ? 'metres (m)' : 'tonnes (t)'}`);
-      if (def.kind === 'measure') b.measures.push({ column: def, header: col.header, index: col.index, values: [] });
-      else if (def.kind === 'tunnel-category') b.tunnel = { header: col.header, index: col.index, values: [] };
-      else b.noDg = { header: col.header, index: col.index, values: [] };
+      if (def.kind === 'measure') b.measures.push({ column: def, header: col.header, index: col.index, values: new Column(floats) });
+      else if (def.kind === 'tunnel-category') b.tunnel = { header: col.header, index: col.index, values: new Column(bytes) };
+      else b.noDg = { header: col.header, index: col.index, values: new Column(bytes) };
     }
     return b.measures.length > 0 || b.tunnel || b.noDg ? b : null;
   }
@@ -77,8 +99,8 @@ export class LaneLimitsBuilder {
   /** Checks one row's limit cells; false when one is refused (reported through `fail`). */
   read(cells: readonly string[], decimalComma: boolean, fail: Fail): boolean {
     let ok = true;
-    this.rowMeasures = [];
-    for (const m of this.measures) {
+    for (let k = 0; k < this.measures.length; k++) {
+      const m = this.measures[k];
       const text = cellText(cells, m.index);
       let value = NaN;
       if (text !== '') {
@@ -91,7 +113,7 @@ export class LaneLimitsBuilder {
           ok = false;
         } else value = r.value;
       }
-      this.rowMeasures.push(value);
+      this.rowMeasures[k] = value;
     }
     this.rowTunnel = 0;
     if (this.tunnel) {
@@ -129,9 +151,9 @@ export class LaneLimitsBuilder {
     if (this.tunnel) headers.tunnel_category = this.tunnel.header;
     if (this.noDg) headers.no_dangerous_goods = this.noDg.header;
     return {
-      measures: this.measures.map((m) => ({ column: m.column, header: m.header, values: Float64Array.from(m.values) })),
-      tunnelCategory: this.tunnel ? Uint8Array.from(this.tunnel.values) : null,
-      noDangerousGoods: this.noDg ? Uint8Array.from(this.noDg.values) : null,
+      measures: this.measures.map((m) => ({ column: m.column, header: m.header, values: m.values.done() })),
+      tunnelCategory: this.tunnel ? this.tunnel.values.done() : null,
+      noDangerousGoods: this.noDg ? this.noDg.values.done() : null,
       headers,
     };
   }
