@@ -18,6 +18,8 @@ const INPUT_DIALOGS: Record<InputFileKind, { title: string; filters: Electron.Fi
   depots: { title: 'Import depots', filters: [{ name: 'Depots (CSV)', extensions: ['csv', 'txt'] }] },
   lanes: { title: 'Import lanes', filters: [{ name: 'Lanes (CSV)', extensions: ['csv', 'txt'] }] },
   scenario: { title: 'Import scenario', filters: [{ name: 'Scenario (JSON)', extensions: ['json'] }] },
+  loads: { title: 'Import loads', filters: [{ name: 'Loads (CSV)', extensions: ['csv', 'txt'] }] },
+  vehicles: { title: 'Import vehicles', filters: [{ name: 'Vehicles (CSV)', extensions: ['csv', 'txt'] }] },
 };
 
 const EXPORT_FILTERS: Record<ExportKind, Electron.FileFilter> = {

@@ -8,7 +8,7 @@ import type { WorkspaceDocument } from '../../engine/workspace/document';
 export type { WorkspaceDocument } from '../../engine/workspace/document';
 
 /** Kinds of input file the user can pick; each has its own dialog title and filters. */
-export type InputFileKind = 'depots' | 'lanes' | 'scenario';
+export type InputFileKind = 'depots' | 'lanes' | 'scenario' | 'loads' | 'vehicles';
 
 /**
  * Kinds of export; they decide the file filter and extension of the save dialog. 'scenario' is the

@@ -32,7 +32,7 @@ const VALIDATORS: Validators = {
   'workspace:recent': (p) => (checkObject(p, '', []), {}),
   'file:pick-and-read': (p) => {
     const o = checkObject(p, '', ['kind']);
-    return { kind: checkChoice(o.kind, '/kind', ['depots', 'lanes', 'scenario'] as const) };
+    return { kind: checkChoice(o.kind, '/kind', ['depots', 'lanes', 'scenario', 'loads', 'vehicles'] as const) };
   },
   'file:read': (p) => {
     const o = checkObject(p, '', ['path']);

@@ -19,6 +19,7 @@ import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
 import { addedLanes, sameAddedLanes, type AddedLane } from '../model/added-lanes';
 import { applyScenarioAmounts } from '../model/scenario-edits';
+import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
 import { useWorkbench } from './use-workbench';
@@ -30,6 +31,8 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const [importOpen, setImportOpen] = useState(false);
   const [aboutOpen, setAboutOpen] = useState(false);
   const [tab, setTab] = useState('results');
+  // The Loads panel's selected load (and its alternatives), drawn on the map while that tab is open.
+  const [loadRoutes, setLoadRoutes] = useState<LoadRouteDrawing[] | null>(null);
   // Importing replaces the scenario, so unsaved changes are asked about before the import dialog opens.
   const { replaceWith } = bench;
   const ui = useMemo(() => ({ openImport: () => void replaceWith('Importing CSV files', () => setImportOpen(true)), openAbout: () => setAboutOpen(true) }), [replaceWith]);
@@ -87,14 +90,14 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         </aside>
         <section className="lw-mapwrap" aria-label="Map">
           <ErrorBoundary what="map">
-            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} />
+            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} loadRoutes={tab === 'loads' ? loadRoutes : null} />
           </ErrorBoundary>
           <MapLegend />
         </section>
       </main>
       <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
         <ErrorBoundary what="results panel">
-          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} added={added} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} />}
+          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} added={added} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} onDrawLoad={setLoadRoutes} />}
         </ErrorBoundary>
       </section>
       <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />

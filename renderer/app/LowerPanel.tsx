@@ -10,6 +10,8 @@ import type { NetworkView, SolveView } from '../worker/protocol';
 import { ContractReview } from '../components/ContractReview/ContractReview';
 import { ImportReportTable } from '../components/ImportPanel/ImportReportTable';
 import { LaneTable } from '../components/LaneTable/LaneTable';
+import { LoadsPanel } from '../components/LoadsPanel/LoadsPanel';
+import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { ResultsTable } from '../components/ResultsTable/ResultsTable';
 import { ScenarioCompare } from '../components/ScenarioCompare/ScenarioCompare';
 import { Tabs } from '../components/Tabs/Tabs';
@@ -25,9 +27,11 @@ export interface LowerPanelProps {
   tab: string;
   onTab(tab: string): void;
   onExport(kind: ExportChoice): void;
+  /** Routes of the load selected in the Loads panel, for the map. */
+  onDrawLoad(routes: LoadRouteDrawing[] | null): void;
 }
 
-export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, onTab, onExport }: LowerPanelProps) {
+export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, onTab, onExport, onDrawLoad }: LowerPanelProps) {
   const { scenario, setScenario, selected, setSelected, dataset } = bench;
   const onScenario = (next: Scenario) => setScenario(next);
   const loadScenarioFile = async () => {
@@ -47,6 +51,7 @@ export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, o
     { id: 'lanes', label: 'Lanes & scenario', badge: scenario.changes.length ? `(${scenario.changes.length} changed)` : undefined },
     { id: 'review', label: 'Contract review', badge: solve.loops.length ? '(loop!)' : undefined },
     { id: 'import', label: 'Import report', badge: issues ? `(${issues} rejected)` : undefined },
+    { id: 'loads', label: 'Loads' },
   ];
   return (
     <Tabs tabs={tabs} active={tab} onChange={onTab} label="Results and contract">
@@ -59,6 +64,10 @@ export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, o
       )}
       {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={keys} scenario={scenario} onScenario={onScenario} />}
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
+      {/* Kept mounted while other tabs show, so the loads and their plan stay. */}
+      <div hidden={tab !== 'loads'}>
+        <LoadsPanel engine={bench.engine} host={bench.host} network={network} date={solve.settings.dispatchDate} onDraw={onDrawLoad} onMessage={bench.setMessage} />
+      </div>
     </Tabs>
   );
 }

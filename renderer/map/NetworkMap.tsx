@@ -9,6 +9,7 @@ import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { addBasemap } from './basemap';
 import type { AddedLane } from '../model/added-lanes';
 import { addedLaneLayer, depotMarkers, laneLayer, loopLayer, routeLayer, solveMarkers, styleDepots, treeLayer } from './network-layers';
+import { loadRouteLayer, type LoadRouteDrawing } from './load-route-layer';
 import './map.css';
 
 export interface NetworkMapProps {
@@ -20,6 +21,8 @@ export interface NetworkMapProps {
   selected: number | null;
   onSelect(depot: number): void;
   onPlanFrom(depot: number): void;
+  /** A load's route and alternatives from the Loads panel. */
+  loadRoutes?: readonly LoadRouteDrawing[] | null;
 }
 
 /** One layer slot of the map, rebuilt when `deps` change (`build` is a new closure every render). */
@@ -66,7 +69,7 @@ function makeRenderers(map: L.Map): Renderers {
   };
 }
 
-export function NetworkMap({ network, solve, route, added, selected, onSelect, onPlanFrom }: NetworkMapProps) {
+export function NetworkMap({ network, solve, route, added, selected, onSelect, onPlanFrom, loadRoutes }: NetworkMapProps) {
   const element = useRef<HTMLDivElement>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
@@ -123,6 +126,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, added, renderers.overlay) : null, [network, tree, added]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
   useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, renderers.overlay) : null, [network, route, added]);
+  useLayer(map, network && loadRoutes && renderers ? () => loadRouteLayer(network, loadRoutes, renderers.overlay) : null, [network, loadRoutes]);
   useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, added, renderers.overlay) : null, [network, solve, added]);
   // Depot circles are made once per network (thousands of them) and only restyled per solve.
   const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);

@@ -2,6 +2,7 @@
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
 import type { Scenario } from '../model/scenario-edits';
+import type { DispatchRequest, DispatchView } from './dispatch-loads';
 
 /** A CSV file as text, with the name shown in reports. */
 export interface NamedText {
@@ -122,7 +123,8 @@ export type ToWorker =
   /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
   | { kind: 'route'; id: number; target: number; solveId: number }
   | { kind: 'export'; id: number; what: ExportKind }
-  | { kind: 'review'; id: number; scenario: Scenario | null };
+  | { kind: 'review'; id: number; scenario: Scenario | null }
+  | { kind: 'dispatch'; id: number; request: DispatchRequest };
 
 export interface WorkerErrorView {
   name: string;
@@ -136,4 +138,5 @@ export type FromWorker =
   | { kind: 'route'; id: number; route: RouteView | null }
   | { kind: 'exported'; id: number; fileName: string; mime: string; text: string }
   | { kind: 'reviewed'; id: number; review: unknown }
+  | { kind: 'dispatched'; id: number; result: DispatchView }
   | { kind: 'error'; id: number; error: WorkerErrorView };

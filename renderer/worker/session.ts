@@ -13,6 +13,7 @@ import { importTexts, replanImport, reportOf } from './import-texts';
 import { networkView, transferablesOf } from './network-view';
 import type { FromWorker, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
+import { dispatchLoads } from './dispatch-loads';
 import { laneRefsOf, onBaseLanes, pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
@@ -65,6 +66,12 @@ export class WorkerSession {
         const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null };
         const file = exportText(ctx, message.what);
         this.post({ kind: 'exported', id: message.id, ...file });
+        return;
+      }
+      case 'dispatch': {
+        if (!this.imported || !this.network) throw new LanewrightError('workspace: no network is loaded yet');
+        this.post({ kind: 'progress', id: message.id, phase: 'Planning the loads', fraction: 0.1 });
+        this.post({ kind: 'dispatched', id: message.id, result: dispatchLoads(this.imported, message.request) });
         return;
       }
       case 'review': {
