@@ -51,3 +51,5 @@ export * from './workspace/migrate';
 export * from './workspace/parse';
 export * from './workspace/dirty';
 export * from './text/cautions';
+export { formatCsvRows } from './io/csv-papaparse';
+export * from './workspace/check';
