@@ -58,3 +58,5 @@ export * from './import/import-loads';
 export * from './import/lane-limits';
 export * from './report/dispatch-report';
 export * from './export/dispatch-csv';
+export { formatCsvRows } from './io/csv-papaparse';
+export * from './workspace/check';

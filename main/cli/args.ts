@@ -1,6 +1,6 @@
 // Minimal flag parser for the command line: `--name value`, `--flag`, and the command word.
 
-import { LanewrightError } from '../../engine/errors';
+import { LanewrightError } from '../../engine/index';
 
 export class UsageError extends LanewrightError {}
 

@@ -2,7 +2,7 @@
 // InputFileErrors; output files go through CommandOutput.writeFile (atomic, see run.ts).
 
 import { readFileSync } from 'node:fs';
-import { InputFileError } from '../../engine/errors';
+import { InputFileError } from '../../engine/index';
 
 /** Reads a UTF-8 text file or throws InputFileError naming it. */
 export function readTextFile(path: string): string {

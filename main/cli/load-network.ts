@@ -2,13 +2,13 @@
 // through here, so --date, --vehicle-class, --skip-invalid and the planning options work the same
 // for all of them. Files stream in 1 MB chunks into the engine's importer.
 
-import { startImport } from '../../engine/import/import-network';
-import { InvalidInputError } from '../../engine/import/import-errors';
-import { formatItem } from '../../engine/import/report-collector';
-import type { ImportOptions, ImportResult } from '../../engine/import/types';
-import type { Network } from '../../engine/network/types';
-import { drivingLimitOf } from '../../engine/planning/settings';
-import type { PlanningSettings } from '../../engine/planning/types';
+import { startImport } from '../../engine/index';
+import { InvalidInputError } from '../../engine/index';
+import { formatItem } from '../../engine/index';
+import type { ImportOptions, ImportResult } from '../../engine/index';
+import type { Network } from '../../engine/index';
+import { drivingLimitOf } from '../../engine/index';
+import type { PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
 import { readTextChunks } from './read-chunks';
 

@@ -2,7 +2,7 @@
 // memory as one string. Synchronous on purpose: commands run synchronously and read one file at a time.
 
 import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
-import { InputFileError } from '../../engine/errors';
+import { InputFileError } from '../../engine/index';
 
 const CHUNK_BYTES = 1 << 20;
 

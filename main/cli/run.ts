@@ -1,7 +1,7 @@
 // Command dispatch for `lanewright`. Known errors print as one line on stderr with a non-zero exit
 // status; only a genuine bug shows a stack trace.
 
-import { LanewrightError } from '../../engine/errors';
+import { LanewrightError } from '../../engine/index';
 import { parseArgs, UsageError } from './args';
 import { writeFileAtomic } from '../workspace/atomic-write';
 import { LOAD_NETWORK_USAGE } from './load-network';

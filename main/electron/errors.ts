@@ -1,7 +1,7 @@
 // Named errors of the desktop host's IPC layer. They travel back to the renderer as HostFailure
 // data (class name, message, path, field), so the renderer can say exactly what was refused.
 
-import { LanewrightError } from '../../engine/errors';
+import { LanewrightError } from '../../engine/index';
 
 /** An IPC call from a frame that is not the app's own page (a subframe, a navigated or foreign page). */
 export class IpcSenderError extends LanewrightError {

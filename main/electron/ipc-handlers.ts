@@ -6,7 +6,7 @@ import type { IpcMain, IpcMainInvokeEvent } from 'electron';
 import { CHANNEL_NAMES } from '../ipc/channels';
 import type { ChannelName, HostFailure, WireResponse } from '../ipc/contract';
 import { validateRequest } from '../ipc/validate-request';
-import { LanewrightError } from '../../engine/errors';
+import { LanewrightError } from '../../engine/index';
 import { isAppPageUrl } from './app-page';
 import { IpcPayloadError, IpcSenderError } from './errors';
 import type { createHostService } from './host-service';

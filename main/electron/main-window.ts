@@ -2,7 +2,7 @@
 // the unsaved-changes guard on close, and a clear message if the page process dies.
 
 import type { BrowserWindow, BrowserWindowConstructorOptions } from 'electron';
-import { PRODUCT_NAME } from '../../engine/text/cautions';
+import { PRODUCT_NAME } from '../../engine/index';
 import { APP_PAGE_URL } from './app-page';
 import type { QuitGuard } from './quit-guard';
 import { secureWebPreferences } from './security';

@@ -3,7 +3,7 @@
 
 import path from 'node:path';
 import { app, BrowserWindow, dialog, ipcMain, Menu, protocol, session } from 'electron';
-import { CAUTIONS, PRODUCT_NAME } from '../../engine/text/cautions';
+import { CAUTIONS, PRODUCT_NAME } from '../../engine/index';
 import { MENU_COMMAND_CHANNEL, type MenuCommand, type RecentWorkspace } from '../ipc/contract';
 import { RecentStore } from '../workspace/recent-list';
 import { APP_SCHEME } from './app-page';

@@ -4,7 +4,7 @@
 import path from 'node:path';
 import type { BrowserWindow, Dialog } from 'electron';
 import type { ExportKind, InputFileKind } from '../ipc/contract';
-import { WORKSPACE_EXTENSION } from '../../engine/workspace/document';
+import { WORKSPACE_EXTENSION } from '../../engine/index';
 
 /** What the host asks of the user; every method answers a path, or null when cancelled. */
 export interface NativeDialogs {

@@ -3,9 +3,9 @@
 // exposes (and the browser host adapter imitates). The renderer imports it with `import type` only;
 // the two constants at the end are for main and the preload.
 
-import type { WorkspaceDocument } from '../../engine/workspace/document';
+import type { WorkspaceDocument } from '../../engine/index';
 
-export type { WorkspaceDocument } from '../../engine/workspace/document';
+export type { WorkspaceDocument } from '../../engine/index';
 
 /** Kinds of input file the user can pick; each has its own dialog title and filters. */
 export type InputFileKind = 'depots' | 'lanes' | 'scenario' | 'loads' | 'vehicles';

@@ -2,11 +2,11 @@
 // types, sane sizes. Anything else is refused with IpcPayloadError naming the channel and field.
 
 import type { ChannelName, RequestOf } from './contract';
-import { checkBoolean, checkChoice, checkObject, checkOptionalText, checkText, FieldCheckFailure } from '../../engine/workspace/check';
-import { checkWorkspace } from '../../engine/workspace/parse';
-import { WorkspaceFormatError } from '../../engine/workspace/errors';
-import { ScenarioFormatError } from '../../engine/errors';
-import { parseScenarioDocument } from '../../engine/scenario/document';
+import { checkBoolean, checkChoice, checkObject, checkOptionalText, checkText, FieldCheckFailure } from '../../engine/index';
+import { checkWorkspace } from '../../engine/index';
+import { WorkspaceFormatError } from '../../engine/index';
+import { ScenarioFormatError } from '../../engine/index';
+import { parseScenarioDocument } from '../../engine/index';
 import { IpcPayloadError } from '../electron/errors';
 
 /** Longest path accepted over IPC (Windows long paths). */

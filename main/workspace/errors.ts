@@ -1,7 +1,7 @@
 // Named errors for file access done by the desktop host on the renderer's behalf. Each names the
 // file, what was being done and why it failed, so the renderer can show one clear line.
 
-import { LanewrightError } from '../../engine/errors';
+import { LanewrightError } from '../../engine/index';
 
 /** What the host was doing with the file. */
 export type FileOperation = 'read' | 'write' | 'list';

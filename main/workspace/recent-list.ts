@@ -4,7 +4,7 @@
 import { access } from 'node:fs/promises';
 import path from 'node:path';
 import type { RecentWorkspace } from '../ipc/contract';
-import { checkArray, checkIsoTimestamp, checkObject, checkText } from '../../engine/workspace/check';
+import { checkArray, checkIsoTimestamp, checkObject, checkText } from '../../engine/index';
 import { writeFileAtomic } from './atomic-write';
 import { readTextFile } from './workspace-file';
 

@@ -3,7 +3,7 @@
 // absolute otherwise. Relative paths are written with "/" so a workspace moves between Windows and Unix.
 
 import path from 'node:path';
-import type { WorkspaceDocument, WorkspaceFiles } from '../../engine/workspace/document';
+import type { WorkspaceDocument, WorkspaceFiles } from '../../engine/index';
 
 type PathApi = Pick<typeof path, 'dirname' | 'relative' | 'resolve' | 'isAbsolute' | 'sep'>;
 

@@ -2,8 +2,8 @@
 // relative input paths, a fresh save timestamp and an atomic replace on write.
 
 import { readFile, stat } from 'node:fs/promises';
-import type { WorkspaceDocument } from '../../engine/workspace/document';
-import { parseWorkspace, serializeWorkspace } from '../../engine/workspace/parse';
+import type { WorkspaceDocument } from '../../engine/index';
+import { parseWorkspace, serializeWorkspace } from '../../engine/index';
 import { writeFileAtomic, type AtomicWriteHooks } from './atomic-write';
 import { FileAccessError, fileAccessError } from './errors';
 import { withResolvedPaths, withStoredPaths } from './stored-paths';

@@ -3,7 +3,7 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { laneKeyIndex, laneKeysOf } from '../../engine/scenario/lane-key';
+import { laneKeyIndex, laneKeysOf } from '../../engine/index';
 import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
 import { AboutDialog } from '../components/AboutDialog/AboutDialog';
 import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';

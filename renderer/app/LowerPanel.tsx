@@ -1,7 +1,7 @@
 // The tabbed lower panel: results table, editable lanes with the scenario comparison, the
 // contract review and the last import's report.
 
-import { parseScenarioDocument } from '../../engine/scenario/document';
+import { parseScenarioDocument } from '../../engine/index';
 import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { LaneAmounts, LaneKey } from '../model/scenario-edits';

@@ -3,7 +3,7 @@
 
 import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
-import { serializeScenarioDocument } from '../../engine/scenario/document';
+import { serializeScenarioDocument } from '../../engine/index';
 import { scenarioFileName, type ExportChoice } from '../model/export-file';
 import type { Workbench } from './use-workbench';
 

@@ -3,7 +3,7 @@
 
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { workspaceFingerprint } from '../../engine/workspace/dirty';
+import { workspaceFingerprint } from '../../engine/index';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
 import type { PlanChoice, PlanSettings } from '../worker/protocol';

@@ -2,7 +2,7 @@
 // finds the input files a document names (bundled sample files never go to the host).
 
 import type { LanewrightHost, WorkspaceDocument } from '../../main/ipc/contract';
-import { emptyWorkspace } from '../../engine/workspace/document';
+import { emptyWorkspace } from '../../engine/index';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { sampleText } from '../sample/sample';
 import type { PlanSettings } from '../worker/protocol';

@@ -3,7 +3,7 @@
 // kept in the browser's own storage (there are no paths to grant, so "path" is a file name).
 
 import type { AppInfo, ExportKind, HostResult, InputFileKind, LanewrightHost, MenuCommand, ReadFile, WorkspaceDocument } from '../../main/ipc/contract';
-import { checkWorkspace } from '../../engine/workspace/parse';
+import { checkWorkspace } from '../../engine/index';
 import { loadFileText, storeFileText, WORKSPACE_KEY, WORKSPACE_SAVED_AT_KEY } from './browser-store';
 
 const WORKSPACE_NAME = 'browser workspace';

@@ -1,7 +1,7 @@
 // Lanes the active scenario adds ("add-lane" changes). They are not in the imported network, so the
 // map and the lane table read them from the scenario itself; an edit rewrites the change in place.
 
-import type { NewLane } from '../../engine/scenario/types';
+import type { NewLane } from '../../engine/index';
 import type { EditableField, Scenario } from './scenario-edits';
 
 /** One lane the scenario adds, as the map and the lane table show it. */

@@ -1,7 +1,7 @@
 // How amounts, times and depots read on screen. Money goes through the engine's exact formatter;
 // grouping is added to the digits, never through floating point.
 
-import { formatMinor, type Minor } from '../../engine/money/minor';
+import { formatMinor, type Minor } from '../../engine/index';
 
 /** "1,234.50" from 123450 minor units; "−" sign kept as a plain hyphen-minus for copy-paste. */
 export function formatMoney(valueMinor: number, exponent = 2): string {

@@ -1,7 +1,7 @@
 // Rows of the Loads panel and how they sort and filter, and the printed dispatch sheet's pages (one
 // per date): pure functions over the dispatch report, unit-tested without a browser.
 
-import type { DispatchLoadRow, DispatchReport } from '../../engine/report/dispatch-report';
+import type { DispatchLoadRow, DispatchReport } from '../../engine/index';
 
 export type LoadSortKey = 'load' | 'from' | 'to' | 'date' | 'vehicle' | 'status' | 'cost' | 'limits' | 'drive';
 export type LoadStatusWord = DispatchLoadRow['status'];

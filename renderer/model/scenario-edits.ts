@@ -2,12 +2,12 @@
 // DEVELOPERS.md) over the imported contract. The lane table, the worker and the workspace all go
 // through this module, so the engine's scenario functions can take over here without touching components.
 
-import { withChange, withoutChange } from '../../engine/scenario/edit';
-import { laneKeyId, laneKeyIndex, type LaneKey } from '../../engine/scenario/lane-key';
-import type { Scenario, ScenarioChange } from '../../engine/workspace/scenario-shape';
+import { withChange, withoutChange } from '../../engine/index';
+import { laneKeyId, laneKeyIndex, type LaneKey } from '../../engine/index';
+import type { Scenario, ScenarioChange } from '../../engine/index';
 
-export type { Scenario, ScenarioChange } from '../../engine/workspace/scenario-shape';
-export type { LaneKey } from '../../engine/scenario/lane-key';
+export type { Scenario, ScenarioChange } from '../../engine/index';
+export type { LaneKey } from '../../engine/index';
 
 /** The lane amounts a dispatcher may change in a scenario. */
 export type EditableField = 'toll' | 'fuel' | 'fees' | 'rebate';

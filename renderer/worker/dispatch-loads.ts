@@ -1,11 +1,7 @@
 // The worker's side of the Loads panel: reads the loads (and vehicles) texts against the imported
 // network, plans every load and returns the dispatch report, the files' report and the sheet as CSV.
 
-import { planLoads } from '../../engine/dispatch/plan-loads';
-import { dispatchCsv } from '../../engine/export/dispatch-csv';
-import { importLoads, importVehicles } from '../../engine/import/import-loads';
-import type { ImportResult, ValidationItem, ValidationReport } from '../../engine/import/types';
-import { dispatchReport, type DispatchReport } from '../../engine/report/dispatch-report';
+import { planLoads, dispatchCsv, importLoads, importVehicles, dispatchReport, type ImportResult, type ValidationItem, type ValidationReport, type DispatchReport } from '../../engine/index';
 import type { ImportIssue, ImportReport, NamedText } from './protocol';
 
 export interface DispatchRequest {

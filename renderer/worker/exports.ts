@@ -2,17 +2,17 @@
 // command line writes). With an active scenario they describe the changed contract: the scenario
 // is applied by the engine and the routes are solved again on the result.
 
-import { findDistinctLoops } from '../../engine/audit/distinct-loops';
-import { geoJsonText } from '../../engine/export/geojson-text';
-import { networkGeoJson } from '../../engine/export/geojson';
-import { lanesCsv } from '../../engine/export/lanes-csv';
-import { loopsCsv } from '../../engine/export/loops-csv';
-import { routesCsv } from '../../engine/export/routes-csv';
-import type { ImportResult } from '../../engine/import/types';
-import type { Network } from '../../engine/network/types';
-import type { PlannedLane, PlannedNetwork } from '../../engine/planning/types';
-import { routesReport } from '../../engine/report/routes-report';
-import { applyScenario } from '../../engine/scenario/apply';
+import { findDistinctLoops } from '../../engine/index';
+import { geoJsonText } from '../../engine/index';
+import { networkGeoJson } from '../../engine/index';
+import { lanesCsv } from '../../engine/index';
+import { loopsCsv } from '../../engine/index';
+import { routesCsv } from '../../engine/index';
+import type { ImportResult } from '../../engine/index';
+import type { Network } from '../../engine/index';
+import type { PlannedLane, PlannedNetwork } from '../../engine/index';
+import { routesReport } from '../../engine/index';
+import { applyScenario } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import type { ExportKind, PlanSettings } from './protocol';
 import { solveFor } from './solve-plan';

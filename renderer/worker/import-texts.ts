@@ -1,8 +1,8 @@
 // Turns the two CSV texts into an import result and the UI's report, and re-plans an import for
 // another day or vehicle class. The one place the worker reaches the engine's importer.
 
-import { importNetwork, planNetwork } from '../../engine/import/import-network';
-import type { ImportResult, ValidationItem } from '../../engine/import/types';
+import { importNetwork, planNetwork } from '../../engine/index';
+import type { ImportResult, ValidationItem } from '../../engine/index';
 import type { ImportIssue, ImportReport, NamedText, PlanChoice } from './protocol';
 
 function issue(item: ValidationItem): ImportIssue {

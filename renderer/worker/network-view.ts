@@ -1,7 +1,7 @@
 // Copies what the UI needs out of the compiled network. The copies travel to the UI thread as
 // transferables, so the worker keeps its own arrays intact.
 
-import type { Network } from '../../engine/network/types';
+import type { Network } from '../../engine/index';
 import type { NetworkView, PlanChoice } from './protocol';
 
 /** The UI's view of a planned network; `vehicleClasses` lists the classes the lanes file prices. */

@@ -2,10 +2,10 @@
 // not only those reachable from the origin; the fix plan; rebate headroom per lane) of the network
 // under the active scenario.
 
-import { auditNetwork } from '../../engine/audit/network-audit';
-import type { Network } from '../../engine/network/types';
-import { auditReport, type AuditReport } from '../../engine/report/audit-report';
-import { applyScenario } from '../../engine/scenario/apply';
+import { auditNetwork } from '../../engine/index';
+import type { Network } from '../../engine/index';
+import { auditReport, type AuditReport } from '../../engine/index';
+import { applyScenario } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 
 export type ContractReviewView = AuditReport & { scenarioProblems: string[] };

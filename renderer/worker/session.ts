@@ -2,11 +2,11 @@
 // directly: the import result (re-planned when the day or vehicle class changes), the last solve
 // (for routes and exports) and the base solve of the active scenario (for the comparison).
 
-import { LanewrightError } from '../../engine/errors';
-import type { ImportResult } from '../../engine/import/types';
-import type { Network } from '../../engine/network/types';
-import { laneKeyIndex, laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
-import { applyScenario } from '../../engine/scenario/apply';
+import { LanewrightError } from '../../engine/index';
+import type { ImportResult } from '../../engine/index';
+import type { Network } from '../../engine/index';
+import { laneKeyIndex, laneKeysOf, type LaneKey } from '../../engine/index';
+import { applyScenario } from '../../engine/index';
 import { hasChanges, needsRebuild, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { importTexts, replanImport, reportOf } from './import-texts';

@@ -2,13 +2,13 @@
 // network is never rebuilt for a what-if), then the engine solves from the origin with or without
 // a leg limit, and each depot gets its drive time and caution flags.
 
-import { depotIndexOf } from '../../engine/network/build';
-import type { Network } from '../../engine/network/types';
-import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../../engine/routes/cheapest-routes';
-import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/routes/leg-limited';
-import { routePath } from '../../engine/routes/route-path';
-import { laneKeysOf, type LaneKey } from '../../engine/scenario/lane-key';
-import type { AppliedScenario } from '../../engine/scenario/apply';
+import { depotIndexOf } from '../../engine/index';
+import type { Network } from '../../engine/index';
+import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../../engine/index';
+import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/index';
+import { routePath } from '../../engine/index';
+import { laneKeysOf, type LaneKey } from '../../engine/index';
+import type { AppliedScenario } from '../../engine/index';
 import { addedLaneRef } from '../model/added-lanes';
 import { applyScenarioAmounts, hasChanges, laneNetMinor, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';

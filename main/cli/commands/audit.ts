@@ -2,9 +2,9 @@
 // distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one row per
 // lane) or JSON; --loops-csv also writes one row per lane of each loop.
 
-import { auditNetwork } from '../../../engine/audit/network-audit';
-import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/report/audit-report';
-import { formatCsvRows } from '../../../engine/io/csv-papaparse';
+import { auditNetwork } from '../../../engine/index';
+import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
+import { formatCsvRows } from '../../../engine/index';
 import { wholeNumberOption, type ParsedArgs } from '../args';
 import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';

@@ -1,7 +1,7 @@
 // `lanewright check`: reads the depots and lanes files and prints the validation report, as lines or
 // JSON. Exit status 0 when there are no errors, 1 when there are; warnings alone do not fail.
 
-import { formatReport } from '../../../engine/import/report-collector';
+import { formatReport } from '../../../engine/index';
 import type { ParsedArgs } from '../args';
 import { LOAD_NETWORK_FLAGS, readImport } from '../load-network';
 import type { CommandOutput } from '../run';

@@ -2,10 +2,10 @@
 // before and after, the routes that changed and the rebate loops that appear or disappear.
 // Changes that no longer fit the lanes file are printed as warnings; the scenario file is never rewritten.
 
-import { compareScenario } from '../../../engine/scenario/compare';
-import { parseScenarioDocument } from '../../../engine/scenario/document';
-import { compareReport, compareReportRows } from '../../../engine/report/compare-report';
-import { formatCsvRows } from '../../../engine/io/csv-papaparse';
+import { compareScenario } from '../../../engine/index';
+import { parseScenarioDocument } from '../../../engine/index';
+import { compareReport, compareReportRows } from '../../../engine/index';
+import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
 import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';

@@ -2,13 +2,7 @@
 // vehicles' limits: status, cost, what the limits cost, what blocks a load, alternatives and totals,
 // as CSV (one row per load, default) or JSON. Input problems stop it unless --skip-invalid.
 
-import { planLoads } from '../../../engine/dispatch/plan-loads';
-import { dispatchCsv } from '../../../engine/export/dispatch-csv';
-import { InvalidInputError } from '../../../engine/import/import-errors';
-import { importLoads, importVehicles, type VehiclesImport } from '../../../engine/import/import-loads';
-import { formatItem } from '../../../engine/import/report-collector';
-import type { ValidationReport } from '../../../engine/import/types';
-import { dispatchReport } from '../../../engine/report/dispatch-report';
+import { planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { importOptionsFromArgs, LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
 import { readTextChunks } from '../read-chunks';

@@ -1,15 +1,15 @@
 // `lanewright export`: writes the lanes CSV, the routes CSV from an origin, the loops CSV and a
 // GeoJSON of depots, routes and loops; options choose which. Every file is written atomically.
 
-import { findDistinctLoops } from '../../../engine/audit/distinct-loops';
-import { geoJsonText } from '../../../engine/export/geojson-text';
-import { lanesCsv } from '../../../engine/export/lanes-csv';
-import { loopsCsv } from '../../../engine/export/loops-csv';
-import { routesCsv } from '../../../engine/export/routes-csv';
-import { networkGeoJson } from '../../../engine/export/geojson';
-import { depotIndexOf } from '../../../engine/network/build';
-import { routesReport, type RoutesReport } from '../../../engine/report/routes-report';
-import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
+import { findDistinctLoops } from '../../../engine/index';
+import { geoJsonText } from '../../../engine/index';
+import { lanesCsv } from '../../../engine/index';
+import { loopsCsv } from '../../../engine/index';
+import { routesCsv } from '../../../engine/index';
+import { networkGeoJson } from '../../../engine/index';
+import { depotIndexOf } from '../../../engine/index';
+import { routesReport, type RoutesReport } from '../../../engine/index';
+import { cheapestRoutes } from '../../../engine/index';
 import { UsageError, type ParsedArgs } from '../args';
 import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
 import type { CommandOutput } from '../run';

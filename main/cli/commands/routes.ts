@@ -1,11 +1,11 @@
 // `lanewright routes`: cheapest routes from one depot with each route's breakdown, as CSV (default)
 // or JSON; --out writes the routes CSV to a file. Input problems stop it unless --skip-invalid.
 
-import { depotIndexOf } from '../../../engine/network/build';
-import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
-import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
-import { routesReport } from '../../../engine/report/routes-report';
-import { routesCsv } from '../../../engine/export/routes-csv';
+import { depotIndexOf } from '../../../engine/index';
+import { cheapestRoutes } from '../../../engine/index';
+import { legLimitedRoutes } from '../../../engine/index';
+import { routesReport } from '../../../engine/index';
+import { routesCsv } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
 import type { CommandOutput } from '../run';

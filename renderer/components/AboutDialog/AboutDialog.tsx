@@ -1,6 +1,6 @@
 // The about box: product, version, runtime and the cautions every dispatcher should keep in mind.
 
-import { CAUTIONS, PRODUCT_NAME, PRODUCT_TAGLINE, SAMPLE_DATA_NOTICE } from '../../../engine/text/cautions';
+import { CAUTIONS, PRODUCT_NAME, PRODUCT_TAGLINE, SAMPLE_DATA_NOTICE } from '../../../engine/index';
 import { Dialog } from '../Dialog/Dialog';
 
 export interface AboutDialogProps {

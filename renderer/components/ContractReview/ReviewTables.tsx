@@ -2,7 +2,7 @@
 // dearer each would have to be to stop the loop paying), the fix plan, and rebate headroom per lane.
 
 import { useMemo, useState } from 'react';
-import type { AuditLoopRow, FixPlanRow, HeadroomRow } from '../../../engine/report/audit-report';
+import type { AuditLoopRow, FixPlanRow, HeadroomRow } from '../../../engine/index';
 import { formatMoney } from '../../model/format';
 import { DataTable, laneColumns, type Column } from '../DataTable/DataTable';
 

@@ -2,7 +2,7 @@
 // first plan is used, with every caution. The about box repeats them any time.
 
 import { useState } from 'react';
-import { CAUTIONS, FIRST_RUN_ACKNOWLEDGE, FIRST_RUN_LEAD, FIRST_RUN_TITLE, SAMPLE_DATA_NOTICE } from '../../../engine/text/cautions';
+import { CAUTIONS, FIRST_RUN_ACKNOWLEDGE, FIRST_RUN_LEAD, FIRST_RUN_TITLE, SAMPLE_DATA_NOTICE } from '../../../engine/index';
 import { Dialog } from '../Dialog/Dialog';
 
 export const FIRST_RUN_KEY = 'lanewright.firstRunAcknowledged';

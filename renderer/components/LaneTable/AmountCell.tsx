@@ -3,9 +3,9 @@
 // and its reason is the input's description (announced once, since a tooltip reaches no screen reader).
 
 import { useId, useState } from 'react';
-import { LanewrightError } from '../../../engine/errors';
-import { parseMinor } from '../../../engine/money/minor';
-import { formatMinor, type Minor } from '../../../engine/money/minor';
+import { LanewrightError } from '../../../engine/index';
+import { parseMinor } from '../../../engine/index';
+import { formatMinor, type Minor } from '../../../engine/index';
 
 export interface AmountCellProps {
   valueMinor: number;

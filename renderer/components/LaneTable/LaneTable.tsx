@@ -7,7 +7,7 @@ import { useMemo, useState } from 'react';
 import { addedAmount, addedLaneName, setAddedLaneAmount, type AddedLane } from '../../model/added-lanes';
 import { EDITABLE_FIELDS, laneNetMinor, setLaneAmount, setLaneClosed, type LaneAmounts, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import { formatMoney } from '../../model/format';
-import { withoutChange } from '../../../engine/scenario/edit';
+import { withoutChange } from '../../../engine/index';
 import type { NetworkView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
 import { AmountCell } from './AmountCell';

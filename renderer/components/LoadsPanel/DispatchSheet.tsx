@@ -2,7 +2,7 @@
 // loads in a table whose footer holds the caution, so Chromium repeats it at the foot of every
 // printed page of that date. Shown only when printing (styles in loads.css).
 
-import type { DispatchReport } from '../../../engine/report/dispatch-report';
+import type { DispatchReport } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { loadCautions, sheetPages } from '../../model/loads-table';
 

@@ -13,7 +13,7 @@ import type { DispatchView } from '../../worker/dispatch-loads';
 import type { NamedText, NetworkView } from '../../worker/protocol';
 import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
-import { PRODUCT_NAME } from '../../../engine/text/cautions';
+import { PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
 import './loads.css';
 

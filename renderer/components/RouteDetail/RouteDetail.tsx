@@ -1,7 +1,7 @@
 // The selected depot's route: each lane with its tolls, fuel, fees, rebate and net (under the
 // active scenario), the totals, a breakdown chart, and a button to plan from this depot instead.
 
-import { ROUTE_CAUTION } from '../../../engine/text/cautions';
+import { ROUTE_CAUTION } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';

@@ -2,8 +2,8 @@
 // differs from the base contract, largest change first. Each change can be undone on its own.
 
 import { useMemo } from 'react';
-import { withoutChange } from '../../../engine/scenario/edit';
-import { laneKeyText } from '../../../engine/scenario/lane-key';
+import { withoutChange } from '../../../engine/index';
+import { laneKeyText } from '../../../engine/index';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { formatMoney } from '../../model/format';
