@@ -4,10 +4,10 @@
 // closed on the way there). Any other loop lacks at least one lane of the found one, so it stays
 // findable in some branch; the branching stops at a cap and says whether more loops exist.
 
-import { componentHasCycle, strongComponents } from '../loops/strong-components';
+import { componentHasCycle, strongComponents } from '../network/strong-components';
 import { findNegativeLoop } from '../loops/find-negative-loop';
-import { findNegativeLoops } from '../loops/find-negative-loops';
-import { loopKey, type RebateLoop } from '../loops/rebate-loop';
+import { findNegativeLoops } from '../routes/find-negative-loops';
+import { loopKey, type RebateLoop } from '../routes/rebate-loop';
 import type { Network } from '../network/types';
 import { labelCorrect, UNBOUNDED } from '../routes/label-correcting';
 

@@ -5,7 +5,7 @@
 
 import { sumMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
-import { toRebateLoop, type RebateLoop } from '../loops/rebate-loop';
+import { toRebateLoop, type RebateLoop } from '../routes/rebate-loop';
 import { labelCorrect } from '../routes/label-correcting';
 
 export interface FixPlanOptions {

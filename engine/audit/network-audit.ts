@@ -3,13 +3,13 @@
 // plan, and rebate headroom for every lane (on the fixed network when there were loops).
 
 import type { Network } from '../network/types';
-import { laneKeysOf, laneKeyText } from '../scenario/lane-key';
+import { laneKeysOf, laneKeyText } from '../import/lane-key';
 import { findDistinctLoops } from './distinct-loops';
 import { buildFixPlan, type FixPlan } from './fix-plan';
 import { laneFloors, type LaneFloors } from './headroom';
 import { reachableFrom } from './loop-reach';
 import { neutralisers, type LaneNeutraliser } from './neutralise';
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from '../routes/rebate-loop';
 
 export type AuditPhase = 'loops' | 'fix-plan' | 'headroom';
 

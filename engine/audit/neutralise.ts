@@ -4,7 +4,7 @@
 
 import type { Minor } from '../money/minor';
 import type { Network } from '../network/types';
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from '../routes/rebate-loop';
 
 export interface LaneNeutraliser {
   /** Lane index. */

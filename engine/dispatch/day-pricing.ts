@@ -3,8 +3,9 @@
 // function so the pricing path can be switched without touching the planner.
 
 import { LanewrightError } from '../errors';
-import { planNetwork } from '../import/import-network';
-import type { ImportResult, ValidationItem } from '../import/types';
+import { planNetwork } from '../planning/import-network';
+import type { ValidationItem } from '../import/types';
+import type { ImportResult } from '../planning/import-types';
 import type { Network } from '../network/types';
 import type { PlanningSettings } from '../planning/types';
 

@@ -3,10 +3,10 @@
 // limits per (origin, date, class) tells what the limits cost and whether a load is blocked.
 // Statuses: planned, no-route, blocked (naming the limits), unbounded (naming the loop).
 
-import type { ImportResult } from '../import/types';
+import type { ImportResult } from '../planning/import-types';
 import type { LoadRecord } from '../import/loads-reader';
 import type { VehicleRecord } from '../import/vehicles-reader';
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from '../routes/rebate-loop';
 import type { Network } from '../network/types';
 import { routeBreakdown, type RouteBreakdown } from '../planning/route-breakdown';
 import type { PlanningSettings } from '../planning/types';

@@ -6,7 +6,7 @@ import type { LaneLimits } from '../import/lane-limits';
 import type { LoadRecord } from '../import/loads-reader';
 import type { VehicleRecord } from '../import/vehicles-reader';
 import type { Network } from '../network/types';
-import { categoryBits, categoryOfBit, forbiddenCategories, TUNNEL_CATEGORIES, type TunnelCode, type TunnelCategory } from './adr-tunnels';
+import { categoryBits, categoryOfBit, forbiddenCategories, TUNNEL_CATEGORIES, type TunnelCode, type TunnelCategory } from '../import/adr-tunnels';
 
 /** What a lane is checked against for one load. */
 export interface RestrictionProfile {

@@ -1,7 +1,7 @@
 // GeoJSON (RFC 7946) for GIS tools: depots as points, cheapest routes from an origin and rebate loops
 // as line strings, positions in [longitude, latitude] order (RFC 7946 section 3.1.1), WGS 84.
 
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from '../routes/rebate-loop';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 import type { RoutesReport } from '../report/routes-report';

@@ -3,7 +3,7 @@
 // ignore, like net and the flags), so the file re-imports to the same network.
 
 import { formatCsvRows } from '../io/csv-papaparse';
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from '../routes/rebate-loop';
 import { formatMinor, type Minor } from '../money/minor';
 import type { LaneTable } from '../import/types';
 import type { PlannedNetwork } from '../planning/types';

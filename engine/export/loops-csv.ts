@@ -2,10 +2,10 @@
 // reference and amounts and the loop's net per lap, for the contract analyst's review.
 
 import { formatCsvRows } from '../io/csv-papaparse';
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from '../routes/rebate-loop';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
-import { LANE_AMOUNT_COLUMNS, laneAmountCells } from './lane-amount-cells';
+import { LANE_AMOUNT_COLUMNS, laneAmountCells } from '../report/lane-amount-cells';
 
 export function loopsCsvRows(network: Network, loops: readonly RebateLoop[]): (string | number)[][] {
   const money = (v: number) => formatMinor(v as Minor, network.exponent);

@@ -2,7 +2,7 @@
 // no dangerous goods), declared once: headers.ts takes its header names from here, the lanes reader
 // calls `LaneLimitsBuilder.read` per row, and dispatch reads the finished `LaneLimits` columns.
 
-import { readTunnelCategory, TUNNEL_CATEGORIES } from '../dispatch/adr-tunnels';
+import { readTunnelCategory, TUNNEL_CATEGORIES } from './adr-tunnels';
 import { cellText } from './cells';
 import { readNumber } from './decimal-text';
 import type { IssueCode } from './types';

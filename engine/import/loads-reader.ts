@@ -2,7 +2,7 @@
 // plan's date), vehicle (from the vehicles file) or toll class, ADR tunnel restriction code, notes.
 // Unknown depots or vehicles, a load from a depot to itself and bad dates are row errors.
 
-import { readTunnelCode, type TunnelCode } from '../dispatch/adr-tunnels';
+import { readTunnelCode, type TunnelCode } from './adr-tunnels';
 import { cellText, isoDateText, readIsoDate } from './cells';
 import { matchLoadHeaders, type LoadField } from './dispatch-headers';
 import { classKey, type HeaderMatch } from './headers';

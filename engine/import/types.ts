@@ -2,8 +2,6 @@
 // the columnar lane table. Kept apart from the reading code so the desktop app can import the types
 // alone (see DEVELOPERS.md, "Import, planning and exports").
 
-import type { Network } from '../network/types';
-import type { PlannedNetwork, PlanRequest } from '../planning/types';
 import type { LaneLimits } from './lane-limits';
 
 /** What kind of problem an item reports; stable, so front ends can group and tests can check. */
@@ -171,41 +169,6 @@ export interface ProgressEvent {
   rows: number;
   /** Share of the file read (0..1) when the size is known. */
   fraction: number | null;
-}
-
-export interface ImportOptions {
-  /** Names shown in the report; default "depots.csv" and "lanes.csv". */
-  depotsFile?: string;
-  lanesFile?: string;
-  plan?: PlanRequest;
-  /** ISO 4217 code of the network; default: the first currency the lanes file names, else EUR. */
-  currency?: string;
-  /** Code -> decimal rate: 1 unit of that currency is `rate` units of the network currency. */
-  exchangeRates?: Record<string, string>;
-  /** Build the network from the accepted rows even when the report has errors. */
-  skipInvalid?: boolean;
-  onProgress?: (progress: ProgressEvent) => void;
-  /** Checked between chunks; when set, the import stops with ImportCancelledError. */
-  signal?: { readonly aborted: boolean };
-  /** Cap on stored errors and on stored warnings each; default 1000. */
-  maxItems?: number;
-}
-
-export interface ImportResult {
-  /** Null when the report has errors and skipInvalid is not set. */
-  network: Network | null;
-  report: ValidationReport;
-  depots: DepotRecord[];
-  lanes: LaneTable;
-  currency: string;
-  exponent: number;
-  /** Vehicle classes the lanes file names, in file order. */
-  vehicleClasses: string[];
-  plan: PlannedNetwork;
-  /** The report of reading the files alone, before planning; `report` adds the plan's problems. */
-  importReport: ValidationReport;
-  /** Things worth knowing that are not problems (currency conversions, the class planned for). */
-  notes: string[];
 }
 
 /** Text in one piece or in chunks, in order. */

@@ -2,7 +2,7 @@
 // optionally the ADR tunnel restriction code, carriage (tank / bulk / packages) and consumption.
 // Every dimension must be a positive number: a limit can only be checked against a known size.
 
-import { readTunnelCode, type TunnelCode } from '../dispatch/adr-tunnels';
+import { readTunnelCode, type TunnelCode } from './adr-tunnels';
 import { cellText } from './cells';
 import { readNumber } from './decimal-text';
 import { matchVehicleHeaders, type VehicleField } from './dispatch-headers';

@@ -3,7 +3,7 @@
 
 import type { Network } from '../network/types';
 import { labelCorrect } from '../routes/label-correcting';
-import { toRebateLoop, type RebateLoop } from './rebate-loop';
+import { toRebateLoop, type RebateLoop } from '../routes/rebate-loop';
 
 /** One negative loop among `members` (using only lanes between members), or null when none exists. */
 export function findNegativeLoop(network: Network, members: readonly number[], weights?: Float64Array): RebateLoop | null {

@@ -5,7 +5,7 @@
 import type { NetworkAudit } from '../audit/network-audit';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
-import { LANE_AMOUNT_COLUMNS, laneAmountCells } from '../export/lane-amount-cells';
+import { LANE_AMOUNT_COLUMNS, laneAmountCells } from './lane-amount-cells';
 
 export interface AuditLoopLane {
   row: number;

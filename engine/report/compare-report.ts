@@ -3,7 +3,7 @@
 // the scenario added has row null.
 
 import { formatMinor, type Minor } from '../money/minor';
-import { laneKeyText, type LaneKey } from '../scenario/lane-key';
+import { laneKeyText, type LaneKey } from '../import/lane-key';
 import type { ComparedLoop, ScenarioComparison } from '../scenario/compare';
 import type { DepotStatus } from '../routes/cheapest-routes';
 

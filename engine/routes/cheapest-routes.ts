@@ -3,9 +3,9 @@
 // every rebate loop that makes costs unbounded for this origin (one per strongly connected part
 // of the unbounded region that holds a loop, not only the first loop the solve ran into).
 
-import { componentHasCycle, strongComponents } from '../loops/strong-components';
-import { findNegativeLoops } from '../loops/find-negative-loops';
-import { loopKey, toRebateLoop, type RebateLoop } from '../loops/rebate-loop';
+import { componentHasCycle, strongComponents } from '../network/strong-components';
+import { findNegativeLoops } from './find-negative-loops';
+import { loopKey, toRebateLoop, type RebateLoop } from './rebate-loop';
 import type { Network } from '../network/types';
 import { IN_TREE, UNBOUNDED, labelCorrect } from './label-correcting';
 

@@ -4,7 +4,7 @@
 // Rebate loops are still reported, from the unlimited solve, because the contract needs fixing anyway.
 
 import { MoneyOverflowError } from '../errors';
-import type { RebateLoop } from '../loops/rebate-loop';
+import type { RebateLoop } from './rebate-loop';
 import type { Network } from '../network/types';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNREACHABLE } from './cheapest-routes';
 import type { RoutePath } from './route-path';

@@ -6,7 +6,7 @@
 import { buildNetwork } from '../network/build';
 import type { DepotInput, LaneInput, Network } from '../network/types';
 import type { Minor } from '../money/minor';
-import { laneGroupText, laneKeyId, laneKeyIndex, laneKeysOf, laneKeyText, type LaneKey } from './lane-key';
+import { laneGroupText, laneKeyId, laneKeyIndex, laneKeysOf, laneKeyText, type LaneKey } from '../import/lane-key';
 import type { Scenario, ScenarioChange } from './types';
 
 /** A lane as scenarios see it: the engine's LaneInput with an optional validity period (ISO dates, inclusive). */

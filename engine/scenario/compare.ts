@@ -9,7 +9,7 @@ import type { Network } from '../network/types';
 import { cheapestRoutes, statusName, STATUS_REACHABLE, STATUS_UNBOUNDED, type DepotStatus, type RouteTree } from '../routes/cheapest-routes';
 import { routePath } from '../routes/route-path';
 import { applyScenario, type AppliedScenario, type ApplyOptions, type ScenarioBase, type ScenarioProblem } from './apply';
-import { laneKeyId, type LaneKey } from './lane-key';
+import { laneKeyId, type LaneKey } from '../import/lane-key';
 import type { Scenario } from './types';
 
 export interface DepotComparison {

@@ -4,7 +4,7 @@
 
 import { ScenarioFormatError } from '../errors';
 import { readIsoDate } from '../import/cells';
-import type { LaneKey } from './lane-key';
+import type { LaneKey } from '../import/lane-key';
 import { SCENARIO_AMOUNT_FIELDS, SCENARIO_CHANGE_KINDS, type NewLane, type Scenario, type ScenarioAmountField, type ScenarioChange } from './types';
 
 export const SCENARIO_FORMAT = 'lanewright-scenario';

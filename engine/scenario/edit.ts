@@ -1,7 +1,7 @@
 // Small pure edits of a scenario for front ends: one lane-table edit becomes one call, and a second
 // edit of the same lane field replaces the first instead of piling up.
 
-import { laneKeyId } from './lane-key';
+import { laneKeyId } from '../import/lane-key';
 import type { Scenario, ScenarioChange } from './types';
 
 /** The slot a change occupies: a later change in the same slot replaces the earlier one. */

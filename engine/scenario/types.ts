@@ -2,9 +2,9 @@
 // by a LaneKey so that the scenario still applies after the lanes file is edited and re-imported.
 // Plain JSON-safe data: the desktop app stores it inside its workspace document as is.
 
-import type { LaneKey } from './lane-key';
+import type { LaneKey } from '../import/lane-key';
 
-export type { LaneKey } from './lane-key';
+export type { LaneKey } from '../import/lane-key';
 
 /** A lane amount a scenario may set; `toll` is the toll of the vehicle class the network is planned for. */
 export type ScenarioAmountField = 'toll' | 'fuel' | 'fees' | 'rebate';

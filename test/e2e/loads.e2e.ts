@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { planLoads } from '../../engine/dispatch/plan-loads';
 import { importLoads, importVehicles } from '../../engine/import/import-loads';
-import { importNetwork } from '../../engine/import/import-network';
+import { importNetwork } from '../../engine/planning/import-network';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { DISPATCH_CAUTION } from '../../engine/text/cautions';
 import { chooseFile, offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';

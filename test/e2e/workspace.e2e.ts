@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { formatMinor, type Minor } from '../../engine/money/minor';
-import { importNetwork } from '../../engine/import/import-network';
+import { importNetwork } from '../../engine/planning/import-network';
 import { parseScenarioDocument, serializeScenarioDocument } from '../../engine/scenario/document';
 import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { expectedPlan, sample } from './support/expected';

@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { priceDay, pricingKeyText, type PricedDay } from '../../../engine/dispatch/day-pricing';
 import { closedLanes, restrictedWeights, restrictionProfile } from '../../../engine/dispatch/vehicle-limits';
 import { importLoads, importVehicles } from '../../../engine/import/import-loads';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { main } from '../../../main/cli/run';
 import { seeded, type BenchSuite } from '../harness';

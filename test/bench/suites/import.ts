@@ -6,7 +6,7 @@
 import { mkdtempSync, rmSync, writeFileSync, readFileSync, openSync, writeSync, closeSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { startImport } from '../../../engine/import/import-network';
+import { startImport } from '../../../engine/planning/import-network';
 import { parseCsvText } from '../../../engine/io/csv-papaparse';
 import { readTextChunks } from '../../../main/cli/read-chunks';
 import { seeded, type BenchSuite } from '../harness';

@@ -2,7 +2,7 @@
 // same files and settings (never hard-coded), so the browser is checked against the engine.
 
 import { readFileSync } from 'node:fs';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED } from '../../../engine/routes/cheapest-routes';
 import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
 import { applyScenario } from '../../../engine/scenario/apply';

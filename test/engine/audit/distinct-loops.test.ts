@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { findDistinctLoops } from '../../../engine/audit/distinct-loops';
-import { strongComponents } from '../../../engine/loops/strong-components';
-import { loopKey } from '../../../engine/loops/rebate-loop';
+import { strongComponents } from '../../../engine/network/strong-components';
+import { loopKey } from '../../../engine/routes/rebate-loop';
 import { networkOf } from '../../support/network-builder';
 import { indexedLanes, randomNetwork, referenceHasNegativeLoop } from './reference';
 import type { Network } from '../../../engine/network/types';

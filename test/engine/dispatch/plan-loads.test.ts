@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { planLoads } from '../../../engine/dispatch/plan-loads';
 import { importLoads, importVehicles } from '../../../engine/import/import-loads';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 import { seededRandom } from '../../support/seeded-random';
 import { jsBellmanFord } from '../routes/reference-graphs';
 

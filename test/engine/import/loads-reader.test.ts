@@ -3,7 +3,7 @@
 
 import { describe, expect, it } from 'vitest';
 import { importLoads, importVehicles } from '../../../engine/import/import-loads';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 
 const depots = new Map([['RTM', 0], ['ANR', 1], ['LIL', 2]]);
 const V_HEADER = 'vehicle,vehicle_class,height_m,width_m,length_m,weight_t,axle_load_t,tunnel_code,carriage,fuel_l_per_100km';

@@ -3,7 +3,7 @@
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 
 const DEPOTS = 'id,name,lat,lon\nA,a,50,4\nB,b,51,5\n';
 const piece = fc.constantFrom('A', 'B', 'Z', ',', ';', '\t', '"', '\n', '\r\n', ' ', '-', '1', '2.5', '1,5', '€', 'EUR', 'USD', '2026-01-01', 'x', '\u0000', '\ufffd', '\ufeff');

@@ -6,9 +6,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { UnboundedPathError } from '../../../engine/errors';
 import { findNegativeLoop } from '../../../engine/loops/find-negative-loop';
-import { findNegativeLoops } from '../../../engine/loops/find-negative-loops';
-import { loopKey, type RebateLoop } from '../../../engine/loops/rebate-loop';
-import { strongComponents } from '../../../engine/loops/strong-components';
+import { findNegativeLoops } from '../../../engine/routes/find-negative-loops';
+import { loopKey, type RebateLoop } from '../../../engine/routes/rebate-loop';
+import { strongComponents } from '../../../engine/network/strong-components';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, STATUS_UNREACHABLE } from '../../../engine/routes/cheapest-routes';
 import { routePath } from '../../../engine/routes/route-path';
 import {

@@ -2,7 +2,7 @@
 // distance and drive time, and the driving-limit flag with its caution.
 
 import { describe, expect, it } from 'vitest';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 import { routesReport } from '../../../engine/report/routes-report';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 

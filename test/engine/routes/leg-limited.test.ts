@@ -6,7 +6,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNREACHABLE } from '../../../engine/routes/cheapest-routes';
 import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
-import { loopKey } from '../../../engine/loops/rebate-loop';
+import { loopKey } from '../../../engine/routes/rebate-loop';
 import { networkOf } from '../../support/network-builder';
 import { anyNetwork, loopFreeNetwork, toNetwork, type Spec } from './reference-graphs';
 

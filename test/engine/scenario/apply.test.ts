@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { applyScenario, type ScenarioLane } from '../../../engine/scenario/apply';
-import { laneKeysOf, laneKeyText, parseLaneKeyText } from '../../../engine/scenario/lane-key';
+import { laneKeysOf, laneKeyText, parseLaneKeyText } from '../../../engine/import/lane-key';
 import { parseScenarioDocument, serializeScenarioDocument } from '../../../engine/scenario/document';
 import type { Scenario } from '../../../engine/scenario/types';
 import { buildNetwork } from '../../../engine/network/build';
-import { importNetwork } from '../../../engine/import/import-network';
+import { importNetwork } from '../../../engine/planning/import-network';
 import type { Minor } from '../../../engine/money/minor';
 
 const depots = ['A', 'B', 'C', 'D'].map((id) => ({ id, name: id, lat: 0, lon: 0 }));

@@ -2,7 +2,7 @@
 // replaces it, an edit back to the contract's value removes it), amounts found by lane key.
 
 import { describe, expect, it } from 'vitest';
-import { laneKeysOf } from '../../../engine/scenario/lane-key';
+import { laneKeysOf } from '../../../engine/import/lane-key';
 import { applyScenarioAmounts, emptyScenario, fixPlanScenario, setLaneAmount, setLaneClosed } from '../../../renderer/model/scenario-edits';
 
 const lanes = [

@@ -4,7 +4,7 @@
 // between groups are closed, so each group is searched on its own inside one pass.
 
 import type { Network } from '../network/types';
-import { labelCorrect } from '../routes/label-correcting';
+import { labelCorrect } from './label-correcting';
 import { toRebateLoop, type RebateLoop } from './rebate-loop';
 
 /**

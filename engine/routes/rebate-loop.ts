@@ -3,7 +3,7 @@
 
 import { sumMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
-import type { LoopFound } from '../routes/label-correcting';
+import type { LoopFound } from './label-correcting';
 
 export interface RebateLoop {
   /** Depot indices in travel order; the last lane returns to the first depot. */

@@ -4,7 +4,7 @@
 import fc from 'fast-check';
 import graphlib from 'graphlib';
 import { describe, expect, it } from 'vitest';
-import { componentHasCycle, strongComponents } from '../../../engine/loops/strong-components';
+import { componentHasCycle, strongComponents } from '../../../engine/network/strong-components';
 import { networkOf, numberedIds } from '../../support/network-builder';
 import { anyNetwork, toNetwork, type Spec } from '../routes/reference-graphs';
 

@@ -12,7 +12,7 @@ import {
   TUNNEL_CATEGORIES,
   type TunnelCategory,
   type TunnelCode,
-} from '../../../engine/dispatch/adr-tunnels';
+} from '../../../engine/import/adr-tunnels';
 
 // ADR 2023, 8.6.4, from memory: tunnel restriction code of the whole load -> restriction.
 const PUBLISHED: [string, string][] = [

@@ -3,16 +3,17 @@
 // duplicate lanes, plans for the requested day and class, and builds the network when allowed.
 
 import { CsvRecordStream } from '../io/csv-record-stream';
-import { planLanes } from '../planning/plan-network';
-import type { PlanRequest } from '../planning/types';
-import { DepotsReader } from './depots-reader';
-import { findDuplicateLanes } from './duplicate-lanes';
-import { CURRENCY_EXPONENTS, currencyExponent } from './currencies';
-import { readRate } from './currency-convert';
-import { ImportCancelledError, PlanRequestError } from './import-errors';
-import { LanesReader } from './lanes-reader';
-import { ReportCollector } from './report-collector';
-import type { ImportOptions, ImportResult, TextSource, ValidationReport } from './types';
+import { planLanes } from './plan-network';
+import type { PlanRequest } from './types';
+import { DepotsReader } from '../import/depots-reader';
+import { findDuplicateLanes } from '../import/duplicate-lanes';
+import { CURRENCY_EXPONENTS, currencyExponent } from '../import/currencies';
+import { readRate } from '../import/currency-convert';
+import { ImportCancelledError, PlanRequestError } from '../import/import-errors';
+import { LanesReader } from '../import/lanes-reader';
+import { ReportCollector } from '../import/report-collector';
+import type { TextSource, ValidationReport } from '../import/types';
+import type { ImportOptions, ImportResult } from './import-types';
 
 /** A streaming import: depots first, then lanes, then `result()`. */
 export interface ImportSession {

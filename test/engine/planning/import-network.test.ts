@@ -3,9 +3,10 @@
 // value, and accepted + rejected = total always holds.
 
 import { describe, expect, it } from 'vitest';
-import { importNetwork, planNetwork, startImport } from '../../../engine/import/import-network';
+import { importNetwork, planNetwork, startImport } from '../../../engine/planning/import-network';
 import { ImportCancelledError, PlanRequestError } from '../../../engine/import/import-errors';
-import type { ImportResult, IssueCode } from '../../../engine/import/types';
+import type { IssueCode } from '../../../engine/import/types';
+import type { ImportResult } from '../../../engine/planning/import-types';
 
 const DEPOTS = 'id,name,lat,lon\nA,Alpha yard,51.9490,4.1420\nB,"Bravo, north",51.2810,4.3300\nC,Charlie hub,50.6290,3.0570\n';
 const LANES = 'from,to,toll,fuel,fees,rebate,distance_km,drive_minutes\nA,B,1234.50,58.40,12.00,0.00,94.3,83\nB,C,0.00,64.10,10.00,8.00,143.6,120\nC,A,2.00,10.00,0.00,0.00,200,150\n';
@@ -271,7 +272,7 @@ describe('importer extras', () => {
   });
 
   it('importNetworkAsync reads async chunk sources like the synchronous form', async () => {
-    const { importNetworkAsync } = await import('../../../engine/import/import-network');
+    const { importNetworkAsync } = await import('../../../engine/planning/import-network');
     async function* chunks(text: string) {
       for (let i = 0; i < text.length; i += 7) yield text.slice(i, i + 7);
     }
@@ -292,7 +293,7 @@ describe('importer extras', () => {
 
 describe('importNetworkAsync cancelling', () => {
   it('awaits pause between chunks, so a cancel that arrives meanwhile stops the import', async () => {
-    const { importNetworkAsync } = await import('../../../engine/import/import-network');
+    const { importNetworkAsync } = await import('../../../engine/planning/import-network');
     const signal = { aborted: false };
     let pauses = 0;
     const big = 'from,to,toll\n' + 'A,B,1.00\n'.repeat(300_000);

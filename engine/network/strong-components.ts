@@ -1,7 +1,7 @@
 // Strongly connected components (Tarjan 1972, iterative so a 100,000-depot chain cannot overflow
 // the call stack). A loop of lanes always lies inside one component, so loop searches run per component.
 
-import type { Network } from '../network/types';
+import type { Network } from './types';
 
 export interface Components {
   /** Component number per depot, or -1 for depots left out by `allowed`. */
