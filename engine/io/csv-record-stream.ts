@@ -2,6 +2,7 @@
 // the last line break that lies outside quotes (quote parity is tracked across chunks), so papaparse
 // only ever sees whole records and a million-lane file never sits in memory as one string.
 
+import { splitCsvBlock } from './csv-block';
 import { parseCsvBlock } from './csv-papaparse';
 
 /** A problem with the file as a whole or with its quoting, before any column is looked at. */
@@ -142,7 +143,7 @@ export class CsvRecordStream {
       }
     }
     this.detectLayout(block);
-    const { rows, badQuoteRows } = parseCsvBlock(block, this.delimiter, this.newline);
+    const { rows, badQuoteRows } = splitCsvBlock(block, this.delimiter, this.newline);
     if (rows.length === 0) return;
     const first = this.nextRow;
     this.nextRow += rows.length;
