@@ -17,10 +17,16 @@ export interface CsvBlockRows {
  * that use CR alone, at CR. A block that ends with a line break yields no empty record for it;
  * a blank line yields [""].
  */
-export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r'): CsvBlockRows {
+/**
+ * Offered each plain line (no quote) in order, with the records collected since the last offer; it
+ * must deliver `before` itself. True = the line was read without being cut into cells.
+ */
+export type PlainLineTaker = (block: string, start: number, end: number, before: CsvBlockRows) => boolean;
+
+export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r', take?: PlainLineTaker): CsvBlockRows {
   const lineBreak = newline === '\r' ? '\r' : '\n';
-  const rows: string[][] = [];
-  const badQuoteRows: number[] = [];
+  let rows: string[][] = [];
+  let badQuoteRows: number[] = [];
   const length = block.length;
   let start = 0;
   // The next quote at or after `start`, found once per quote (not once per line), so the scan stays linear.
@@ -39,6 +45,15 @@ export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | 
     }
     let lineEnd = end;
     if (lineBreak === '\n' && lineEnd > start && block.charCodeAt(lineEnd - 1) === 13) lineEnd--;
+    if (take !== undefined) {
+      const taken = take(block, start, lineEnd, { rows, badQuoteRows });
+      rows = [];
+      badQuoteRows = [];
+      if (taken) {
+        start = end + 1;
+        continue;
+      }
+    }
     rows.push(block.slice(start, lineEnd).split(delimiter));
     start = end + 1;
   }

@@ -64,6 +64,7 @@ export function startImport(options: ImportOptions = {}): ImportSession {
           reader.decimalComma = stream.delimiter === ';';
           reader.records(rows, first, bad, text);
         },
+        plainLine: (text, start, end, row, delimiter) => reader.plainLine(text, start, end, row, delimiter),
         issue: (issue) => reader.issue(issue),
       });
       laneStream = stream;
