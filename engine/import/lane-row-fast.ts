@@ -112,8 +112,8 @@ export class PlainLaneRows {
     t.driveMinutes[i] = driveMinutes;
     t.validFrom[i] = validFrom;
     t.validTo[i] = validTo;
-    t.ref.push(this.kept(text, col.ref));
-    t.notes.push(this.kept(text, col.notes));
+    if (col.ref !== undefined) t.ref.push(this.kept(text, col.ref));
+    if (col.notes !== undefined) t.notes.push(this.kept(text, col.notes));
     for (let k = 0; k < this.unknownColumns.length; k++) t.extra[k].values.push(this.kept(text, this.unknownColumns[k]));
     return true;
   }

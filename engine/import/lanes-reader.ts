@@ -199,10 +199,15 @@ export class LanesReader extends RecordFileReader {
     t.validFrom[i] = validFrom;
     t.validTo[i] = validTo;
     if (t.vehicleClass) t.vehicleClass[i] = this.vehicleClass(cells);
-    const ref = cellText(cells, col.ref);
-    t.ref.push(ref === '' ? undefined : own(ref));
-    const notes = cellText(cells, col.notes);
-    t.notes.push(notes === '' ? undefined : own(notes));
+    // Absent optional columns get no per-row entries (a lookup past the end reads undefined).
+    if (col.ref !== undefined) {
+      const ref = cellText(cells, col.ref);
+      t.ref.push(ref === '' ? undefined : own(ref));
+    }
+    if (col.notes !== undefined) {
+      const notes = cellText(cells, col.notes);
+      t.notes.push(notes === '' ? undefined : own(notes));
+    }
     for (let k = 0; k < h.unknown.length; k++) {
       const value = cellText(cells, h.unknown[k].index);
       t.extra[k].values.push(value === '' ? undefined : own(value));
