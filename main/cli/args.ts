@@ -15,6 +15,8 @@ export interface ParsedArgs {
   command: string | undefined;
   values: Map<string, string>;
   flags: Set<string>;
+  /** When the command line was read: "today" for every part of one run, even across midnight. */
+  now: Date;
 }
 
 type NodeOptions = NonNullable<ParseArgsConfig['options']>;
@@ -57,7 +59,7 @@ export function parseCommandLine(
   const byName = new Map(options.map((o) => [o.name, o]));
   const { tokens } = parseWithNode({ args: [...argv], options: config, strict: false, allowPositionals: true, tokens: true });
   if (tokens.some((t) => t.kind === 'option' && t.name === HELP_OPTION.name)) {
-    return { command, values: new Map(), flags: new Set([HELP_OPTION.name]) };
+    return { command, values: new Map(), flags: new Set([HELP_OPTION.name]), now: new Date() };
   }
 
   // Index of an option followed by a negative number -> the two words joined as `--name=-1.50`.
@@ -104,7 +106,7 @@ export function parseCommandLine(
   for (const o of options) {
     if (o.required && !values.has(o.name)) throw new UsageError(`missing required option ${valueText(o)} (lanewright ${command} --help)`);
   }
-  return { command, values, flags };
+  return { command, values, flags, now: new Date() };
 }
 
 /** The value of a required option, or a UsageError naming it. */

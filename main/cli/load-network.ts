@@ -12,6 +12,23 @@ import type { PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
 import { readTextChunks } from './read-chunks';
 
+/** Today's calendar date in the local time zone, as ISO 8601 (YYYY-MM-DD). */
+export function todayIso(now: Date = new Date()): string {
+  return `${now.getFullYear()}-${String(now.getMonth() + 1).padStart(2, '0')}-${String(now.getDate()).padStart(2, '0')}`;
+}
+
+/**
+ * The day every command plans for: --date, or today in the local time zone. Without a date the
+ * planner would mix lanes of every validity window (an expired rebate beside its standard-rate twin),
+ * so there is always one, and `note` says so when the user did not choose it.
+ */
+export function planDateOf(args: ParsedArgs): { date: string; note: string | null } {
+  const given = args.values.get('date');
+  if (given !== undefined) return { date: given, note: null };
+  const date = todayIso(args.now);
+  return { date, note: `note: planning for ${date} (today); --date to choose` };
+}
+
 function positive(args: ParsedArgs, name: string): number | undefined {
   const text = args.values.get(name);
   if (text === undefined) return undefined;
@@ -51,7 +68,7 @@ export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
       exchangeRates[m[1].toUpperCase()] = m[2];
     }
   }
-  const date = args.values.get('date');
+  const { date } = planDateOf(args);
   const vehicleClass = args.values.get('vehicle-class');
   return {
     depotsFile: args.values.get('depots'),
@@ -84,6 +101,8 @@ export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
  */
 export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult & { network: Network } {
   const result = readImport(args, extra);
+  const { note } = planDateOf(args);
+  if (note !== null) process.stderr.write(note + '\n');
   if (result.network === null) throw new InvalidInputError(result.report);
   const lines = [
     ...result.report.errors.map((e) => formatItem(e, 'error')),

@@ -6,7 +6,7 @@ import { auditNetwork } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { wholeNumberOption, type ParsedArgs } from '../args';
-import { loadNetwork } from '../load-network';
+import { loadNetwork, planDateOf } from '../load-network';
 import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
@@ -57,7 +57,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(auditLaneRows(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 

@@ -3,7 +3,7 @@
 
 import { formatReport } from '../../../engine/index';
 import type { ParsedArgs } from '../args';
-import { readImport } from '../load-network';
+import { planDateOf, readImport } from '../load-network';
 import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
@@ -23,9 +23,12 @@ function runCheck(args: ParsedArgs, out: CommandOutput): number {
   // Building the network is not needed to report on the files.
   const result = readImport(args, { skipInvalid: false });
   const { report } = result;
+  const { date, note } = planDateOf(args);
+  if (note !== null) out.warn(note);
   if (args.flags.has('json')) {
     out.write(
       JSON.stringify({
+        date,
         total: report.total,
         accepted: report.accepted,
         rejected: report.rejected,

@@ -8,7 +8,7 @@ import { compareReport, compareReportRows } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
-import { loadNetwork } from '../load-network';
+import { loadNetwork, planDateOf } from '../load-network';
 import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
@@ -40,11 +40,11 @@ function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const network = loadNetwork(args);
 
   const comparison = compareScenario(network, scenario, originId, {
-    date: args.values.get('date') ?? null,
+    date: planDateOf(args).date,
     loopCap,
   });
   const report = compareReport(comparison);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));
 
   for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
   for (const loop of report.loops_appeared) {

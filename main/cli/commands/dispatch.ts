@@ -4,7 +4,7 @@
 
 import { planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
-import { importOptionsFromArgs, loadImport } from '../load-network';
+import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
 import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { readTextChunks } from '../read-chunks';
 import type { CommandOutput } from '../run';
@@ -33,11 +33,6 @@ export const dispatchCommand: CommandSpec = {
 /** Most alternatives per load the command computes (each costs up to a few hundred Dijkstra runs). */
 const MAX_ALTERNATIVES = 20;
 
-function todayIso(): string {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
-}
-
 function chunksOf(path: string): Iterable<string> {
   return { [Symbol.iterator]: function* () { for (const c of readTextChunks(path)) yield c.text; } };
 }
@@ -59,8 +54,8 @@ function runDispatch(args: ParsedArgs, out: CommandOutput): number {
 
   const start = performance.now();
   const imported = loadImport(args);
-  const date = args.values.get('date') ?? todayIso();
-  if (!args.values.has('date')) out.warn(`note: no --date given: loads without a date are planned for today, ${date}`);
+  // loadImport has printed the note when the date is today's; loads without a date go on this day.
+  const { date } = planDateOf(args);
 
   let vehicles: VehiclesImport | null = null;
   if (vehiclesPath !== undefined) {

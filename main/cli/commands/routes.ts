@@ -7,7 +7,7 @@ import { legLimitedRoutes } from '../../../engine/index';
 import { routesReport } from '../../../engine/index';
 import { routesCsv } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { loadImport } from '../load-network';
+import { loadImport, planDateOf } from '../load-network';
 import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
@@ -46,7 +46,7 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const solveMs = performance.now() - solveStart;
 
   const report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : routesCsv(report));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : routesCsv(report));
   if (args.flags.has('timings')) {
     out.timing({ read_ms: readMs, solve_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
   }
