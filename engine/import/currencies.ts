@@ -1,8 +1,11 @@
 // ISO 4217 currencies the importer accepts, with their minor-unit digits, and the symbols that name
 // one of them without doubt. "kr" is shared by SEK, DKK and NOK, so it is refused as ambiguous.
+// Null-prototype tables: a currency cell "toString" is an unknown currency, not a function.
+
+import { lookupTable } from '../text/lookup-table';
 
 /** Minor digits per ISO 4217 (the "minor unit" column of the list). */
-export const CURRENCY_EXPONENTS: Readonly<Record<string, number>> = {
+export const CURRENCY_EXPONENTS: Readonly<Record<string, number>> = lookupTable({
   EUR: 2,
   USD: 2,
   GBP: 2,
@@ -19,9 +22,9 @@ export const CURRENCY_EXPONENTS: Readonly<Record<string, number>> = {
   AUD: 2,
   JPY: 0,
   ISK: 0,
-};
+});
 
-const SYMBOLS: Readonly<Record<string, string>> = {
+const SYMBOLS: Readonly<Record<string, string>> = lookupTable({
   '€': 'EUR',
   $: 'USD',
   US$: 'USD',
@@ -34,13 +37,13 @@ const SYMBOLS: Readonly<Record<string, string>> = {
   'Fr.': 'CHF',
   'SFr.': 'CHF',
   lei: 'RON',
-};
+});
 
-const AMBIGUOUS: Readonly<Record<string, string>> = {
+const AMBIGUOUS: Readonly<Record<string, string>> = lookupTable({
   kr: 'SEK, DKK, NOK or ISK',
   'kr.': 'SEK, DKK, NOK or ISK',
   ',-': 'several currencies',
-};
+});
 
 export type CurrencyLookup = { code: string } | { error: 'unknown' | 'ambiguous'; detail: string };
 
