@@ -3,6 +3,7 @@
 // Null-prototype tables: a currency cell "toString" is an unknown currency, not a function.
 
 import { lookupTable } from '../text/lookup-table';
+import { shownText } from '../text/shown-text';
 
 /** Minor digits per ISO 4217 (the "minor unit" column of the list). */
 export const CURRENCY_EXPONENTS: Readonly<Record<string, number>> = lookupTable({
@@ -52,12 +53,12 @@ export function lookupCurrency(token: string): CurrencyLookup {
   const t = token.trim();
   const upper = t.toUpperCase();
   if (/^[A-Z]{3}$/.test(upper)) {
-    return upper in CURRENCY_EXPONENTS ? { code: upper } : { error: 'unknown', detail: `"${t}" is not a supported ISO 4217 code (supported: ${Object.keys(CURRENCY_EXPONENTS).join(', ')})` };
+    return upper in CURRENCY_EXPONENTS ? { code: upper } : { error: 'unknown', detail: `"${shownText(t)}" is not a supported ISO 4217 code (supported: ${Object.keys(CURRENCY_EXPONENTS).join(', ')})` };
   }
   if (t in SYMBOLS) return { code: SYMBOLS[t] };
   const lower = t.toLowerCase();
-  if (lower in AMBIGUOUS) return { error: 'ambiguous', detail: `"${t}" is used by ${AMBIGUOUS[lower]}; write the ISO 4217 code instead` };
-  return { error: 'unknown', detail: `"${t}" is not a currency this importer knows; write the ISO 4217 code` };
+  if (lower in AMBIGUOUS) return { error: 'ambiguous', detail: `"${shownText(t)}" is used by ${AMBIGUOUS[lower]}; write the ISO 4217 code instead` };
+  return { error: 'unknown', detail: `"${shownText(t)}" is not a currency this importer knows; write the ISO 4217 code` };
 }
 
 /** Minor digits of a supported code, or undefined. */

@@ -11,6 +11,7 @@ import { drivingLimitOf } from '../../engine/index';
 import type { PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
 import { readTextChunks } from './read-chunks';
+import { printError } from './terminal-text';
 
 /** Today's calendar date in the local time zone, as ISO 8601 (YYYY-MM-DD). */
 export function todayIso(now: Date = new Date()): string {
@@ -102,7 +103,7 @@ export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
 export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult & { network: Network } {
   const result = readImport(args, extra);
   const { note } = planDateOf(args);
-  if (note !== null) process.stderr.write(note + '\n');
+  if (note !== null) printError(note);
   if (result.network === null) throw new InvalidInputError(result.report);
   const lines = [
     ...result.report.errors.map((e) => formatItem(e, 'error')),
@@ -114,7 +115,7 @@ export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
     for (const f of result.report.files) lines.push(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
     lines.push(`note: --skip-invalid: planning with the ${result.report.accepted} accepted row(s); ${result.report.rejected} rejected`);
   }
-  for (const line of lines) process.stderr.write(line + '\n');
+  for (const line of lines) printError(line);
   return result as ImportResult & { network: Network };
 }
 

@@ -8,6 +8,7 @@ import { writeFileAtomic } from '../workspace/atomic-write';
 import type { CommandSpec } from './options';
 import { commandHelp, overview } from './usage';
 import { closestName } from './closest-name';
+import { forStdout, printError } from './terminal-text';
 import { routesCommand } from './commands/routes';
 import { checkCommand } from './commands/check';
 import { exportCommand } from './commands/export';
@@ -78,9 +79,9 @@ export async function main(argv: readonly string[]): Promise<number> {
     const chunks: string[] = [];
     const files: [path: string, text: string, done?: string][] = [];
     const output: CommandOutput = {
-      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(text)),
+      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(forStdout(text))),
       writeFile: (path, text, done) => files.push([path, text, done]),
-      warn: (line) => process.stderr.write(line + '\n'),
+      warn: printError,
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
     const status = command.run(args, output);
@@ -89,12 +90,12 @@ export async function main(argv: readonly string[]): Promise<number> {
     if (outPath) files.unshift([outPath, chunks.join('')]);
     for (const [path, text, done] of files) {
       await writeFileAtomic(path, text);
-      if (done) process.stdout.write(`wrote ${done}\n`);
+      if (done) process.stdout.write(forStdout(`wrote ${done}\n`));
     }
     return status;
   } catch (error) {
     if (error instanceof LanewrightError) {
-      process.stderr.write(`lanewright: ${error.message}\n`);
+      printError(`lanewright: ${error.message}`);
       return error instanceof UsageError ? 2 : 1;
     }
     throw error;
