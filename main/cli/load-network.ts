@@ -33,7 +33,7 @@ export function planDateOf(args: ParsedArgs): { date: string; note: string | nul
 function positive(args: ParsedArgs, name: string): number | undefined {
   const text = args.values.get(name);
   if (text === undefined) return undefined;
-  if (!/^\d+(\.\d+)?$/.test(text) || Number(text) <= 0) throw new UsageError(`--${name} must be a positive number, got "${text}"`);
+  if (!/^\d+(\.\d+)?$/.test(text) || !(Number(text) > 0) || !Number.isFinite(Number(text))) throw new UsageError(`--${name} must be a positive number, got "${text}"`);
   return Number(text);
 }
 
