@@ -16,7 +16,7 @@ const ENGINE_ORDER = [
   // text below errors: error messages show file values through text/shown-text.ts.
   ['text'],
   ['errors'],
-  ['money', 'io', 'geo'],
+  ['money', 'io', 'geo', 'json'],
   ['network'],
   ['import'],
   ['planning'],
