@@ -10,7 +10,7 @@ import { isoDateNumber } from '../text/iso-date';
 import { ownText } from './cells';
 import type { DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
-import { isMilesUnit, KM_PER_MILE } from './lane-cells';
+import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-cells';
 import type { LaneTableBuilder } from './lane-table';
 
 /** Columns the fast path reads itself; a file with any other matched column uses the general path. */
@@ -161,7 +161,7 @@ export class PlainLaneRows {
     return value * POW10[scale];
   }
 
-  // km of a plain decimal distance below 100,000 (miles converted as the general reader does).
+  // km of a plain decimal distance within the plausible bound (miles converted as the general reader does).
   private distance(text: string, column: number | undefined): number {
     if (column === undefined) return NaN;
     const s = this.starts[column];
@@ -181,11 +181,13 @@ export class PlainLaneRows {
     }
     if (whole === 0 || whole > 5 || fraction === 0 || fraction > 6) return SLOW;
     // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
-    const km = fraction > 0 ? value / POW10[fraction] : value;
-    return this.miles ? km * KM_PER_MILE : km;
+    const read = fraction > 0 ? value / POW10[fraction] : value;
+    const km = this.miles ? read * KM_PER_MILE : read;
+    // Past the plausible bound the general reader refuses it with its reason.
+    return km > MAX_LANE_KM ? SLOW : km;
   }
 
-  // Whole minutes (at most six digits); hours per the header go the general way.
+  // Whole minutes within the plausible bound; hours per the header go the general way.
   private drive(text: string, column: number | undefined): number {
     if (column === undefined) return NaN;
     const s = this.starts[column];
@@ -198,7 +200,7 @@ export class PlainLaneRows {
       if (c < 0 || c > 9) return SLOW;
       value = value * 10 + c;
     }
-    return value;
+    return value > MAX_LANE_MINUTES ? SLOW : value;
   }
 
   // yyyymmdd of an ISO 8601 date, 0 for an empty cell.

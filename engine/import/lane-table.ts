@@ -2,6 +2,7 @@
 // lane rows cost about a hundred bytes each instead of an object per row.
 
 import { formatMinor, type Minor } from '../money/minor';
+import { textKeyedRecord } from '../text/lookup-table';
 import { isoDateText } from './cells';
 import type { LaneLimitsBuilder } from './lane-limits';
 import type { DepotRecord, LaneRecord, LaneTable } from './types';
@@ -106,9 +107,9 @@ export class LaneTableBuilder {
 export function laneRecordAt(table: LaneTable, depots: readonly DepotRecord[], exponent: number, i: number): LaneRecord {
   const money = (v: number) => (Number.isNaN(v) ? null : formatMinor(v as Minor, exponent));
   const num = (v: number) => (Number.isNaN(v) ? null : v);
-  const classTolls: Record<string, string | null> = {};
+  const classTolls = textKeyedRecord<string | null>();
   for (const c of table.classTolls) classTolls[c.name] = money(c.toll[i]);
-  const extra: Record<string, string> = {};
+  const extra = textKeyedRecord<string>();
   for (const e of table.extra) if (e.values[i] !== undefined) extra[e.column] = e.values[i]!;
   const cls = table.vehicleClass ? table.vehicleClass[i] : -1;
   return {
