@@ -90,9 +90,8 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         </aside>
         <section className="lw-mapwrap" aria-label="Map">
           <ErrorBoundary what="map">
-            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} loadRoutes={tab === 'loads' ? loadRoutes : null} />
+            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} loadRoutes={tab === 'loads' ? loadRoutes : null} legend={<MapLegend />} />
           </ErrorBoundary>
-          <MapLegend />
         </section>
       </main>
       <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
