@@ -19,7 +19,7 @@ import { StatusBar } from '../components/StatusBar/StatusBar';
 import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
 import { addedLanes, sameAddedLanes, type AddedLane } from '../model/added-lanes';
-import { applyScenarioAmounts } from '../model/scenario-edits';
+import { applyScenarioAmounts, hasChanges } from '../model/scenario-edits';
 import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
@@ -92,7 +92,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
         <aside className="lw-side" id="lw-side" aria-label="Plan and route">
           {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
           {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
-            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} added={added} onPlanFrom={planFrom} />
+            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} added={added} onPlanFrom={planFrom} scenarioName={hasChanges(scenario) ? scenario.name : null} host={host} onMessage={bench.setMessage} />
           )}
           {network && solve && selected === null && <p className="lw-muted">Click a depot on the map or a row in the results for its route and cost breakdown; double-click a depot on the map to plan from it.</p>}
         </aside>
