@@ -45,6 +45,8 @@ export * from './planning/estimate-rules';
 export * from './report/route-sheet';
 export * from './export/route-sheet-csv';
 export * from './export/file-name';
+export * from './export/csv-dialect';
+export * from './export/export-settings';
 export * from './export/lanes-csv';
 export * from './export/loops-csv';
 export * from './export/routes-csv';

@@ -65,10 +65,16 @@ export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | 
 // A text cell a spreadsheet would run as a formula; plain numbers such as -12.50 or +3 are exempt,
 // because the exporters write amounts as text to keep their exact decimals.
 const FORMULA_LIKE = /^(?![-+]?(?:\d+(?:\.\d*)?|\.\d+)$)[=+\-@\t\r]/;
+// The same with a decimal comma: "-12,50" is a number in a decimal-comma file, not a formula.
+const FORMULA_LIKE_DECIMAL_COMMA = /^(?![-+]?(?:\d+(?:,\d*)?|,\d+)$)[=+\-@\t\r]/;
 
 export interface CsvWriteOptions {
   /** Prefix formula-like text cells with an apostrophe (OWASP CSV-injection advice). Default true. */
   escapeFormulae?: boolean;
+  /** Field separator; default comma (RFC 4180). */
+  delimiter?: ',' | ';';
+  /** Numbers in the rows are written with a decimal comma (so "-12,50" is not taken for a formula). */
+  decimalComma?: boolean;
 }
 
 /** Writes rows as RFC 4180 CSV (CRLF line ends, quotes only where needed). */
@@ -77,7 +83,8 @@ export function formatCsvRows(rows: readonly (readonly (string | number | null)[
     Papa.unparse(rows as unknown[][], {
       newline: '\r\n',
       quotes: false,
-      escapeFormulae: options.escapeFormulae === false ? false : FORMULA_LIKE,
+      delimiter: options.delimiter ?? ',',
+      escapeFormulae: options.escapeFormulae === false ? false : options.decimalComma ? FORMULA_LIKE_DECIMAL_COMMA : FORMULA_LIKE,
     }) + '\r\n'
   );
 }
