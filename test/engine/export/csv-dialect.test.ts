@@ -3,7 +3,8 @@
 // numbers-as-text columns such as refs are left alone; formula-like text stays neutralised; the
 // locale decides the default (decimal marks from the CLDR data in Intl, e.g. de-DE "1,5", en-GB "1.5").
 
-import Papa from 'papaparse'; // eslint-disable-line no-restricted-imports -- the test reads the file with papaparse itself, as an outside reader
+// The file is read with papaparse itself, as an outside reader (tests may import it directly).
+import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { findDistinctLoops } from '../../../engine/audit/distinct-loops';
 import { applyCsvDialect, DECIMAL_COMMA_DIALECT, dialectForLocale, formatCsvDialect, parseCsvDialect, RFC4180_DIALECT } from '../../../engine/export/csv-dialect';
