@@ -1,6 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
+import type { EstimateRules } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 
@@ -107,11 +108,25 @@ export interface SolveView {
   solveMs: number;
 }
 
+/** A lane's validity window, notes, clause and which of its values the plan estimated. */
+export interface LaneDetailView {
+  validFrom: string | null;
+  validTo: string | null;
+  distanceEstimated: boolean;
+  fuelEstimated: boolean;
+  driveEstimated: boolean;
+  notes: string | null;
+  clause: string | null;
+}
+
 /** One depot's route with its lanes in travel order. */
 export interface RouteView {
   target: number;
   depots: number[];
   lanes: number[];
+  /** Per lane (null for a lane a scenario adds); with the rules that made estimated values. */
+  details?: (LaneDetailView | null)[];
+  estimateRules?: EstimateRules;
 }
 
 export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';

@@ -14,6 +14,7 @@ import { networkView, transferablesOf } from './network-view';
 import type { FromWorker, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
+import { withLaneDetails } from './lane-details';
 import { laneRefsOf, onBaseLanes, pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
@@ -58,7 +59,8 @@ export class WorkerSession {
         // tree could give another path, which the UI would draw beside the old solve's costs.
         const current = this.solved && this.solvedId === message.solveId;
         const route = current ? pathOf(on ? on.network : network, this.solved!, message.target) : null;
-        this.post({ kind: 'route', id: message.id, route: route && on ? { ...route, lanes: route.lanes.map((e) => on.laneRefs[e]) } : route });
+        const onBase = route && on ? { ...route, lanes: route.lanes.map((e) => on.laneRefs[e]) } : route;
+        this.post({ kind: 'route', id: message.id, route: withLaneDetails(this.imported, onBase) });
         return;
       }
       case 'export': {
