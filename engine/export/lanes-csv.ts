@@ -5,6 +5,7 @@
 import { formatCsvRows } from '../io/csv-papaparse';
 import type { RebateLoop } from '../routes/rebate-loop';
 import { formatMinor, type Minor } from '../money/minor';
+import { netCost } from '../money/net-cost';
 import type { LaneTable } from '../import/types';
 import type { PlannedNetwork } from '../planning/types';
 
@@ -27,7 +28,7 @@ export function lanesCsvRows(input: LanesExportInput, loops: readonly RebateLoop
     'valid_from', 'valid_to', 'distance_source', 'fuel_source', 'net_negative', 'on_rebate_loop', 'notes'];
   const rows: (string | number)[][] = [header];
   plan.lanes.forEach((lane, i) => {
-    const net = lane.toll + lane.fuel + lane.fees - lane.rebate;
+    const net = netCost(lane.toll, lane.fuel, lane.fees, lane.rebate, () => `net cost of the lane from row ${lane.sourceRow}`);
     const record = plan.laneRecord[i];
     rows.push([
       lane.from,

@@ -8,6 +8,7 @@ import { isoDateText, readIsoDate } from '../import/cells';
 import { PlanRequestError } from '../import/import-errors';
 import type { DepotRecord, IssueCode, LaneTable, ValidationItem } from '../import/types';
 import { formatMinor, parseMinor, type Minor } from '../money/minor';
+import { netCostOrNull } from '../money/net-cost';
 import { buildPlannedNetwork, plannedLanes, type PlannedColumns } from './planned-columns';
 import { planningSettings } from './settings';
 import type { PlannedLane, PlannedNetwork, PlanRequest } from './types';
@@ -21,6 +22,11 @@ export interface PlanInput {
   currency: string;
   exponent: number;
   lanesFile: string;
+  /**
+   * Rows planned like any other (they still decide which row of a lane applies) but left out of the
+   * network: the rows a what-if scenario closes. Absent = none.
+   */
+  leaveOut?: Uint8Array;
 }
 
 export interface PlanOutcome {
@@ -31,6 +37,8 @@ export interface PlanOutcome {
   rejected: number;
   /** Warnings counted but not made into items (past a cap). */
   dropped: number;
+  /** The planned lanes in columns (lane e of the network is entry e). */
+  columns: PlannedColumns;
 }
 
 function money(text: string | null, digits: number, option: string): number {
@@ -110,6 +118,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   let excluded = 0;
   let rejected = 0;
   let dropped = 0;
+  let closedRows = 0;
   const missingReported = new Set<string>();
   for (let i = 0; i < t.count; i++) {
     if (!validOn(i)) {
@@ -178,13 +187,18 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     }
     const fees = t.fees[i];
     const rebate = t.rebate[i];
-    const net = toll + fuel + fees - rebate;
+    // Out of the exact range is refused when the network is built; here only the sign matters.
+    const net = netCostOrNull(toll, fuel, fees, rebate) ?? 0;
     if (net < 0 && warnings.length >= MAX_PLAN_ITEMS) dropped++;
     else if (net < 0) {
       const f = (v: number) => formatMinor(v as Minor, exponent);
       warnings.push(
-        item(t.sourceRow[i], header('rebate'), f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
+        item(t.sourceRow[i], header('rebate'), f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(net + rebate)}): net ${f(net)} per trip; a contract item to look at`),
       );
+    }
+    if (input.leaveOut && input.leaveOut[i]) {
+      closedRows++;
+      continue;
     }
     record[n] = i;
     tolls[n] = toll;
@@ -194,6 +208,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     estimated[n] = (distanceEstimated ? 1 : 0) | (fuelEstimated ? 2 : 0) | (driveEstimated ? 4 : 0);
     n++;
   }
+  if (closedRows > 0) notes.push(`${closedRows} lane row(s) closed by the scenario.`);
   if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
 
   const columns: PlannedColumns = {
@@ -225,5 +240,6 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     warnings,
     rejected,
     dropped,
+    columns,
   };
 }

@@ -1,7 +1,7 @@
 // The selected depot's route: each lane with its tolls, fuel, fees, rebate and net (under the
 // active scenario), the totals, a breakdown chart, and a button to plan from this depot instead.
 
-import { ROUTE_CAUTION } from '../../../engine/index';
+import { netCost, ROUTE_CAUTION } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
@@ -106,7 +106,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
                     <td className="lw-num">{money(leg.fuel)}</td>
                     <td className="lw-num">{money(leg.fees)}</td>
                     <td className="lw-num">{leg.rebate ? `-${money(leg.rebate)}` : money(0)}</td>
-                    <td className="lw-num">{money(leg.toll + leg.fuel + leg.fees - leg.rebate)}</td>
+                    <td className="lw-num">{money(netCost(leg.toll, leg.fuel, leg.fees, leg.rebate))}</td>
                   </tr>
                 ),
               )}

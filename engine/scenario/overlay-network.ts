@@ -1,0 +1,72 @@
+// The overlay's network for one date and vehicle class: the planner (engine/planning) picks rows
+// and tolls from the overlaid lane table exactly as it does for the import, so a what-if network is
+// planned by the same rules as the base. When the scenario leaves the planned rows as they are, the
+// base network is kept and only its weights change; otherwise the network is rebuilt.
+
+import type { LaneKey } from '../import/lane-key';
+import type { DepotRecord, ValidationItem } from '../import/types';
+import { netCost } from '../money/net-cost';
+import type { Network } from '../network/types';
+import { planLanes } from '../planning/plan-network';
+import type { PlannedNetwork, PlanRequest } from '../planning/types';
+import type { LaneOverlay } from './overlay';
+
+/** What planning needs besides the overlay: the import's depots, currency and lanes file name. */
+export interface OverlayPlanBase {
+  depots: readonly DepotRecord[];
+  currency: string;
+  exponent: number;
+  /** Name used in plan problems; default lanes.csv. */
+  lanesFile?: string;
+}
+
+export interface OverlayNetwork {
+  network: Network;
+  /** `plan.laneRecord[e]` is the overlay table row of lane e. */
+  plan: PlannedNetwork;
+  /** Key of each network lane (the key of its row, counted over the file). */
+  keys: LaneKey[];
+  /** Base lane table row each lane stands for, -1 for a lane the scenario added. */
+  baseRow: Int32Array;
+  /** Index of the add-lane change of each lane, -1 for a lane of the file. */
+  addedBy: Int32Array;
+  /** Problems of planning this date and class (e.g. a lane without a toll for the class); those rows are left out. */
+  planProblems: ValidationItem[];
+}
+
+function planOverlay(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, leaveOut: Uint8Array | undefined, build: boolean) {
+  return planLanes({ depots: base.depots, lanes: overlay.table, currency: base.currency, exponent: base.exponent, lanesFile: base.lanesFile ?? 'lanes.csv', leaveOut }, request, () => build);
+}
+
+/** The network of `request`'s date and class under the overlay; closed rows are left out. */
+export function overlayNetwork(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest): OverlayNetwork {
+  const outcome = planOverlay(overlay, base, request, overlay.closed, true);
+  const rows = outcome.plan.laneRecord;
+  return {
+    network: outcome.plan.network!,
+    plan: outcome.plan,
+    keys: Array.from(rows, (r) => overlay.keys[r]),
+    baseRow: Int32Array.from(rows, (r) => overlay.sourceOf[r]),
+    addedBy: Int32Array.from(rows, (r) => overlay.changeOf[r]),
+    planProblems: outcome.errors,
+  };
+}
+
+/**
+ * Net cost per CSR position of `network` (the base plan of the same date and class, whose lane e is
+ * table row `laneRecord[e]`) under the overlay, +Infinity for a closed lane. Null when the overlay
+ * plans other rows for this date and class: then the network is rebuilt with overlayNetwork.
+ */
+export function overlayWeights(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, network: Network, laneRecord: Int32Array): Float64Array | null {
+  const { columns } = planOverlay(overlay, base, request, undefined, false);
+  if (columns.record.length !== laneRecord.length) return null;
+  for (let e = 0; e < laneRecord.length; e++) if (columns.record[e] !== laneRecord[e]) return null;
+  const t = overlay.table;
+  const weights = new Float64Array(network.laneCount);
+  for (let p = 0; p < network.laneCount; p++) {
+    const e = network.outLane[p];
+    const r = laneRecord[e];
+    weights[p] = overlay.closed[r] ? Infinity : netCost(columns.toll[e], columns.fuel[e], t.fees[r], t.rebate[r], () => `net cost of the lane from row ${t.sourceRow[r]}`);
+  }
+  return weights;
+}
