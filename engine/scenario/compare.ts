@@ -10,9 +10,8 @@ import { cheapestRoutes, statusName, STATUS_REACHABLE, STATUS_UNBOUNDED, type De
 import { routePath } from '../routes/route-path';
 import { applyScenario, type AppliedScenario, type ApplyOptions, type ScenarioBase, type ScenarioProblem } from './apply';
 import { laneKeyId, type LaneKey } from '../import/lane-key';
-import type { PlanningSettings, PlanRequest } from '../planning/types';
-import { buildOverlay, type OverlayBase } from './overlay';
-import { overlayNetwork, type OverlayPlanBase } from './overlay-network';
+import { buildOverlay } from './overlay';
+import { overlayNetwork, planRequestOf, type PlannedImport } from './overlay-network';
 import type { Scenario } from './types';
 
 export interface DepotComparison {
@@ -67,18 +66,6 @@ export function compareScenario(base: ScenarioBase, scenario: Scenario, originId
   // The base goes through the same date filter, so only the scenario's changes differ.
   const unchanged = applyScenario(base, { name: 'base', description: null, changes: [] }, options);
   return compareSides(unchanged, applied, scenario.name, applied.problems, originId, options.loopCap);
-}
-
-/** An import's lane table with the date, class and settings it was planned for. */
-export interface PlannedImport extends OverlayPlanBase {
-  lanes: OverlayBase['lanes'];
-  plan: { date: string | null; vehicleClass: string | null; settings: PlanningSettings };
-}
-
-/** The plan request that re-plans `imported` for the same date, class and settings. */
-export function planRequestOf(imported: PlannedImport): PlanRequest {
-  const { date, vehicleClass, settings } = imported.plan;
-  return { date: date ?? undefined, vehicleClass: vehicleClass ?? undefined, settings };
 }
 
 /**

@@ -4,12 +4,13 @@
 // base network is kept and only its weights change; otherwise the network is rebuilt.
 
 import type { LaneKey } from '../import/lane-key';
-import type { DepotRecord, ValidationItem } from '../import/types';
+import type { DepotRecord, LaneTable, ValidationItem } from '../import/types';
 import { netCost } from '../money/net-cost';
 import type { Network } from '../network/types';
 import { planLanes } from '../planning/plan-network';
-import type { PlannedNetwork, PlanRequest } from '../planning/types';
-import type { LaneOverlay } from './overlay';
+import type { PlannedNetwork, PlanningSettings, PlanRequest } from '../planning/types';
+import { buildOverlay, type LaneOverlay } from './overlay';
+import type { Scenario } from './types';
 
 /** What planning needs besides the overlay: the import's depots, currency and lanes file name. */
 export interface OverlayPlanBase {
@@ -69,4 +70,34 @@ export function overlayWeights(overlay: LaneOverlay, base: OverlayPlanBase, requ
     weights[p] = overlay.closed[r] ? Infinity : netCost(columns.toll[e], columns.fuel[e], t.fees[r], t.rebate[r], () => `net cost of the lane from row ${t.sourceRow[r]}`);
   }
   return weights;
+}
+
+/** An import's lane table with the date, class and settings it was planned for (an ImportResult is one). */
+export interface PlannedImport extends OverlayPlanBase {
+  lanes: LaneTable;
+  plan: { date: string | null; vehicleClass: string | null; settings: PlanningSettings };
+}
+
+/** The plan request that re-plans `imported` for the same date, class and settings. */
+export function planRequestOf(imported: PlannedImport): PlanRequest {
+  const { date, vehicleClass, settings } = imported.plan;
+  return { date: date ?? undefined, vehicleClass: vehicleClass ?? undefined, settings };
+}
+
+/** An import as the scenario makes it: what exports, the review and `export --scenario` work on. */
+export interface ScenarioImport extends OverlayNetwork {
+  overlay: LaneOverlay;
+  depots: readonly DepotRecord[];
+  /** The overlay's lane table; `leaveOut` marks its closed rows. */
+  lanes: LaneTable;
+  leaveOut: Uint8Array;
+  currency: string;
+  exponent: number;
+}
+
+/** Lays `scenario` over `imported` and plans it for the import's own date, class and settings. */
+export function scenarioImport(imported: PlannedImport, scenario: Scenario | null): ScenarioImport {
+  const overlay = buildOverlay(imported, scenario);
+  const planned = overlayNetwork(overlay, imported, planRequestOf(imported));
+  return { ...planned, overlay, depots: imported.depots, lanes: overlay.table, leaveOut: overlay.closed, currency: imported.currency, exponent: imported.exponent };
 }

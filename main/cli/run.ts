@@ -29,10 +29,10 @@ const USAGE = `usage:
   lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--max-legs K] [--json] [--out FILE] [--timings]
   lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
   lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
-                    [--loops-out FILE] [--geojson-out FILE]
+                    [--loops-out FILE] [--geojson-out FILE] [--scenario FILE]
   lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
                    [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
-  lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
+  lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--vehicle-class C] [--loop-cap N] [--json] [--out FILE]
   lanewright dispatch --depots FILE --lanes FILE --loads FILE [--vehicles FILE] [--alternatives K] [--json] [--out FILE] [--timings]
   Planning options (routes, check, export, audit, compare, dispatch):
     ${LOAD_NETWORK_USAGE}

@@ -76,7 +76,8 @@ export class WorkerSession {
       }
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.need(), message.scenario, this.plan.date || null, progress) });
+        if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
+        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress) });
         return;
       }
     }
