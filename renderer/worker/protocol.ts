@@ -3,6 +3,9 @@
 
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
+import type { ContractReviewView } from './review';
+
+export type { ContractReviewView } from './review';
 
 /** A CSV file as text, with the name shown in reports. */
 export interface NamedText {
@@ -116,27 +119,61 @@ export interface RouteView {
 
 export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
 
-export type ToWorker =
-  | { kind: 'load'; id: number; depots: NamedText; lanes: NamedText; acceptPartial: boolean; plan: PlanChoice }
-  | { kind: 'replan'; id: number; plan: PlanChoice }
-  | { kind: 'solve'; id: number; settings: PlanSettings; scenario: Scenario | null }
-  /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
-  | { kind: 'route'; id: number; target: number; solveId: number }
-  | { kind: 'export'; id: number; what: ExportKind }
-  | { kind: 'review'; id: number; scenario: Scenario | null }
-  | { kind: 'dispatch'; id: number; request: DispatchRequest };
-
 export interface WorkerErrorView {
   name: string;
   message: string;
 }
 
+/** The import: the pair of files, whether rejected rows may be left out, and the day and class to plan. */
+export interface LoadRequest {
+  depots: NamedText;
+  lanes: NamedText;
+  acceptPartial: boolean;
+  plan: PlanChoice;
+}
+
+/** The answer to an import or a re-plan: the network (null when it is held back or refused) and the report. */
+export interface LoadedAnswer {
+  network: NetworkView | null;
+  report: ImportReport;
+}
+
+/**
+ * Every request the worker answers, by kind: what the UI sends and the one answer it gets, like
+ * the IPC contract's `Channels`. A caller names the request; the answer's type follows from it.
+ */
+export interface WorkerRequests {
+  load: { request: LoadRequest; answer: LoadedAnswer };
+  replan: { request: { plan: PlanChoice }; answer: LoadedAnswer };
+  solve: { request: { settings: PlanSettings; scenario: Scenario | null }; answer: { result: SolveView } };
+  /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
+  route: { request: { target: number; solveId: number }; answer: { route: RouteView | null } };
+  export: { request: { what: ExportKind }; answer: { fileName: string; mime: string; text: string } };
+  review: { request: { scenario: Scenario | null }; answer: { review: ContractReviewView } };
+  dispatch: { request: { request: DispatchRequest }; answer: { result: DispatchView } };
+}
+
+export type RequestKind = keyof WorkerRequests;
+
+/** The message kind of each request's answer; the client refuses an answer of another kind. */
+export const ANSWER_KIND = {
+  load: 'loaded',
+  replan: 'loaded',
+  solve: 'solved',
+  route: 'route',
+  export: 'exported',
+  review: 'reviewed',
+  dispatch: 'dispatched',
+} as const satisfies Record<RequestKind, string>;
+
+export type RequestOf<K extends RequestKind> = WorkerRequests[K]['request'];
+
+/** The answer message to a request of kind K. */
+export type Answer<K extends RequestKind> = { kind: (typeof ANSWER_KIND)[K]; id: number } & WorkerRequests[K]['answer'];
+
+export type ToWorker = { [K in RequestKind]: { kind: K; id: number } & RequestOf<K> }[RequestKind];
+
 export type FromWorker =
   | { kind: 'progress'; id: number; phase: string; fraction: number }
-  | { kind: 'loaded'; id: number; network: NetworkView | null; report: ImportReport }
-  | { kind: 'solved'; id: number; result: SolveView }
-  | { kind: 'route'; id: number; route: RouteView | null }
-  | { kind: 'exported'; id: number; fileName: string; mime: string; text: string }
-  | { kind: 'reviewed'; id: number; review: unknown }
-  | { kind: 'dispatched'; id: number; result: DispatchView }
+  | { [K in RequestKind]: Answer<K> }[RequestKind]
   | { kind: 'error'; id: number; error: WorkerErrorView };

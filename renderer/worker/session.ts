@@ -80,6 +80,11 @@ export class WorkerSession {
         this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress) });
         return;
       }
+      default: {
+        // Every request kind of WorkerRequests is handled above: a new kind fails to compile here.
+        const unhandled: never = message;
+        throw new LanewrightError(`worker: unknown request ${JSON.stringify(unhandled)}`);
+      }
     }
   }
 
