@@ -53,23 +53,82 @@ export function overlayNetwork(overlay: LaneOverlay, base: OverlayPlanBase, requ
   };
 }
 
+/** The amounts of a base plan's lanes under the overlay, for one date and class (one entry per base lane). */
+export interface PlanAmounts {
+  toll: Float64Array;
+  fuel: Float64Array;
+  fees: Float64Array;
+  rebate: Float64Array;
+  /** 1 for a lane the scenario closes, or whose row the scenario no longer plans for this date and class. */
+  closed: Uint8Array;
+  /** 1 for a lane some applied change touches. */
+  changed: Uint8Array;
+  /** 1 for a lane whose row the scenario no longer plans for this date and class (e.g. its validity moved). */
+  notPlanned: Uint8Array;
+  /**
+   * Net cost per CSR position of the base network, +Infinity where closed; null when the overlay
+   * plans other rows for this date and class (added lanes, validity, class copies): then the
+   * network is rebuilt with overlayNetwork.
+   */
+  weights: Float64Array | null;
+}
+
 /**
- * Net cost per CSR position of `network` (the base plan of the same date and class, whose lane e is
- * table row `laneRecord[e]`) under the overlay, +Infinity for a closed lane. Null when the overlay
- * plans other rows for this date and class: then the network is rebuilt with overlayNetwork.
+ * The base plan's lanes (`network`, whose lane e is table row `laneRecord[e]`) under the overlay,
+ * planned for `request` by the planner's own rules.
  */
-export function overlayWeights(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, network: Network, laneRecord: Int32Array): Float64Array | null {
+export function overlayPlanAmounts(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, network: Network, laneRecord: Int32Array): PlanAmounts {
   const { columns } = planOverlay(overlay, base, request, undefined, false);
-  if (columns.record.length !== laneRecord.length) return null;
-  for (let e = 0; e < laneRecord.length; e++) if (columns.record[e] !== laneRecord[e]) return null;
   const t = overlay.table;
-  const weights = new Float64Array(network.laneCount);
-  for (let p = 0; p < network.laneCount; p++) {
-    const e = network.outLane[p];
-    const r = laneRecord[e];
-    weights[p] = overlay.closed[r] ? Infinity : netCost(columns.toll[e], columns.fuel[e], t.fees[r], t.rebate[r], () => `net cost of the lane from row ${t.sourceRow[r]}`);
+  const n = laneRecord.length;
+  let sameRows = columns.record.length === n;
+  for (let e = 0; sameRows && e < n; e++) if (columns.record[e] !== laneRecord[e]) sameRows = false;
+  // Planned entry of each base row (a class copy stands for the row it copies).
+  const plannedOf = new Int32Array(overlay.baseCount).fill(-1);
+  columns.record.forEach((r, i) => {
+    const b = overlay.sourceOf[r];
+    if (b >= 0) plannedOf[b] = i;
+  });
+  const out: PlanAmounts = {
+    toll: network.laneToll.slice(),
+    fuel: network.laneFuel.slice(),
+    fees: network.laneFees.slice(),
+    rebate: network.laneRebate.slice(),
+    closed: new Uint8Array(n),
+    changed: new Uint8Array(n),
+    notPlanned: new Uint8Array(n),
+    weights: null,
+  };
+  for (let e = 0; e < n; e++) {
+    const i = plannedOf[laneRecord[e]];
+    if (i === -1) {
+      out.closed[e] = 1;
+      out.notPlanned[e] = 1;
+      out.changed[e] = 1;
+      continue;
+    }
+    const r = columns.record[i];
+    out.toll[e] = columns.toll[i];
+    out.fuel[e] = columns.fuel[i];
+    out.fees[e] = t.fees[r];
+    out.rebate[e] = t.rebate[r];
+    out.closed[e] = overlay.closed[r];
+    out.changed[e] = overlay.changed[r] || r !== laneRecord[e] ? 1 : 0;
   }
-  return weights;
+  if (sameRows) {
+    const weights = new Float64Array(n);
+    for (let p = 0; p < n; p++) {
+      const e = network.outLane[p];
+      weights[p] = out.closed[e] ? Infinity : netCost(out.toll[e], out.fuel[e], out.fees[e], out.rebate[e], () => `net cost of the lane from row ${network.laneRow[e]}`);
+    }
+    out.weights = weights;
+  }
+  return out;
+}
+
+/** overlayPlanAmounts' weights alone: null when the network must be rebuilt. */
+export function overlayWeights(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, network: Network, laneRecord: Int32Array): Float64Array | null {
+  return overlayPlanAmounts(overlay, base, request, network, laneRecord).weights;
 }
 
 /** An import's lane table with the date, class and settings it was planned for (an ImportResult is one). */

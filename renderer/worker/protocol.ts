@@ -1,6 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
+import type { ChangeView, LaneKey } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
@@ -64,11 +65,50 @@ export interface NetworkView {
   laneRef: (string | undefined)[];
   laneDistanceKm: Float64Array;
   laneDriveMinutes: Float64Array;
+  /** Key of each lane (its row's key, occurrences counted over the whole file), for scenario changes. */
+  laneKeys: LaneKey[];
+  /** Every row of the lanes file (every date and class), for the lane table's "every row" view. */
+  rows: LaneRowsView;
   /** Vehicle classes the lanes file prices (empty when tolls do not depend on the class). */
   vehicleClasses: string[];
+  /** The class whose tolls the plan uses (the file's first class when none was chosen); null = the toll column. */
+  plannedClass: string | null;
   /** The plan this view was built for, and its daily driving limit (minutes) for the long-drive caution. */
   plan: PlanChoice;
   driveLimitMinutes: number;
+}
+
+/** Every accepted row of the lanes file, in file order. */
+export interface LaneRowsView {
+  from: Int32Array;
+  to: Int32Array;
+  sourceRow: Int32Array;
+  ref: (string | undefined)[];
+  validFrom: (string | null)[];
+  validTo: (string | null)[];
+  /** Long layout: the row's class (null = every class); always null in the wide layout. */
+  vehicleClass: (string | null)[];
+  keys: LaneKey[];
+  /** The network lane the plan made of the row, -1 when the plan leaves it out (another date or class). */
+  lane: Int32Array;
+}
+
+/**
+ * The engine overlay's figures for a solve (engine/scenario/overlay.ts), so the UI computes none:
+ * per network lane the amounts under the scenario for the planned class, per lanes-file row the
+ * same for the "every row" view, and each change as text with whether it applied.
+ */
+export interface OverlayView {
+  toll: Float64Array;
+  fuel: Float64Array;
+  fees: Float64Array;
+  rebate: Float64Array;
+  closed: Uint8Array;
+  changed: Uint8Array;
+  /** 1 for a lane whose row the scenario no longer plans for this date and class. */
+  notPlanned: Uint8Array;
+  rows: { toll: Float64Array; fuel: Float64Array; fees: Float64Array; rebate: Float64Array; closed: Uint8Array; changed: Uint8Array };
+  changes: ChangeView[];
 }
 
 export interface PlanSettings {
@@ -107,6 +147,8 @@ export interface SolveView {
   loops: LoopView[];
   /** Same arrays for the scenario's base (no edits), when the scenario has edits. */
   base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null;
+  /** The lane amounts and changes the solve was made with. */
+  overlay: OverlayView;
   solveMs: number;
 }
 
