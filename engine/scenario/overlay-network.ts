@@ -78,9 +78,15 @@ export interface PlanAmounts {
  * planned for `request` by the planner's own rules.
  */
 export function overlayPlanAmounts(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, network: Network, laneRecord: Int32Array): PlanAmounts {
+  const n = laneRecord.length;
+  if (!overlay.reshaped && !overlay.changed.includes(1)) {
+    // Nothing applied: the base plan's own amounts (re-planning would give the same).
+    const net = new Float64Array(n);
+    for (let p = 0; p < n; p++) net[p] = network.outNet[p];
+    return { toll: network.laneToll.slice(), fuel: network.laneFuel.slice(), fees: network.laneFees.slice(), rebate: network.laneRebate.slice(), closed: new Uint8Array(n), changed: new Uint8Array(n), notPlanned: new Uint8Array(n), weights: net };
+  }
   const { columns } = planOverlay(overlay, base, request, undefined, false);
   const t = overlay.table;
-  const n = laneRecord.length;
   let sameRows = columns.record.length === n;
   for (let e = 0; sameRows && e < n; e++) if (columns.record[e] !== laneRecord[e]) sameRows = false;
   // Planned entry of each base row (a class copy stands for the row it copies).

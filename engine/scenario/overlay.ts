@@ -57,16 +57,19 @@ export function overlayKeys(base: OverlayBase): LaneKey[] {
   return laneKeysOfTable(base.lanes, base.depots);
 }
 
-/** Lays `scenario` over `base`; see the file header. A scenario without changes costs no copy. */
-export function buildOverlay(base: OverlayBase, scenario: Scenario | null): LaneOverlay {
+/**
+ * Lays `scenario` over `base`; see the file header. A scenario without changes costs no copy.
+ * `keys` (overlayKeys of the same base) saves recounting them when many scenarios meet one import.
+ */
+export function buildOverlay(base: OverlayBase, scenario: Scenario | null, keys?: readonly LaneKey[]): LaneOverlay {
   const t = base.lanes;
-  const keys = laneKeysOfTable(t, base.depots);
+  const rowKeys = keys ? keys.slice() : laneKeysOfTable(t, base.depots);
   const changes = scenario?.changes ?? [];
   if (changes.length === 0) {
     return {
       table: t,
       baseCount: t.count,
-      keys,
+      keys: rowKeys,
       sourceOf: Int32Array.from({ length: t.count }, (_, i) => i),
       changeOf: new Int32Array(t.count).fill(-1),
       closed: new Uint8Array(t.count),
@@ -75,7 +78,7 @@ export function buildOverlay(base: OverlayBase, scenario: Scenario | null): Lane
       reshaped: false,
     };
   }
-  return new OverlayBuilder(base, keys, changes).run();
+  return new OverlayBuilder(base, rowKeys, changes).run();
 }
 
 class OverlayBuilder {

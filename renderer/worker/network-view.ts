@@ -3,7 +3,7 @@
 // come from the engine (counted over the file's rows), so the UI never counts them itself.
 
 import { isoDateText, overlayKeys } from '../../engine/index';
-import type { ImportResult, Network } from '../../engine/index';
+import type { ImportResult, LaneKey, Network } from '../../engine/index';
 import type { LaneRowsView, NetworkView, PlanChoice } from './protocol';
 
 /** Base network lane of each lanes-file row, -1 for a row the plan leaves out. */
@@ -13,10 +13,9 @@ export function laneOfRows(result: ImportResult): Int32Array {
   return lane;
 }
 
-function rowsView(result: ImportResult, lane: Int32Array): LaneRowsView {
+function rowsView(result: ImportResult, lane: Int32Array, keys: LaneKey[]): LaneRowsView {
   const t = result.lanes;
   const n = t.count;
-  const keys = overlayKeys(result);
   const cls = t.vehicleClass;
   return {
     from: t.from.slice(0, n),
@@ -32,10 +31,10 @@ function rowsView(result: ImportResult, lane: Int32Array): LaneRowsView {
 }
 
 /** The UI's view of a planned import: the network, its lane keys and every row of the lanes file. */
-export function networkView(result: ImportResult, plan: PlanChoice): NetworkView {
+export function networkView(result: ImportResult, plan: PlanChoice, keys: LaneKey[] = overlayKeys(result)): NetworkView {
   const network: Network = result.network!;
   const lane = laneOfRows(result);
-  const rows = rowsView(result, lane);
+  const rows = rowsView(result, lane, keys);
   return {
     currency: network.currency,
     exponent: network.exponent,
