@@ -7,7 +7,7 @@ import type { LaneKey } from '../import/lane-key';
 import type { DepotRecord, LaneTable, ValidationItem } from '../import/types';
 import { netCost } from '../money/net-cost';
 import type { Network } from '../network/types';
-import { planLanes } from '../planning/plan-network';
+import { planLanes, plannedRowToll, tollChoice } from '../planning/plan-network';
 import type { PlannedNetwork, PlanningSettings, PlanRequest } from '../planning/types';
 import { buildOverlay, type LaneOverlay } from './overlay';
 import type { Scenario } from './types';
@@ -85,6 +85,10 @@ export function overlayPlanAmounts(overlay: LaneOverlay, base: OverlayPlanBase, 
     for (let p = 0; p < n; p++) net[p] = network.outNet[p];
     return { toll: network.laneToll.slice(), fuel: network.laneFuel.slice(), fees: network.laneFees.slice(), rebate: network.laneRebate.slice(), closed: new Uint8Array(n), changed: new Uint8Array(n), notPlanned: new Uint8Array(n), weights: net };
   }
+  if (!overlay.reshaped) {
+    const repriced = repriceChangedRows(overlay, base, request, network, laneRecord);
+    if (repriced) return repriced;
+  }
   const { columns } = planOverlay(overlay, base, request, undefined, false);
   const t = overlay.table;
   let sameRows = columns.record.length === n;
@@ -129,6 +133,51 @@ export function overlayPlanAmounts(overlay: LaneOverlay, base: OverlayPlanBase, 
     }
     out.weights = weights;
   }
+  return out;
+}
+
+/**
+ * The fast path of an edit: when every row a change touches is already planned, the planned rows
+ * stay the same, so only those lanes are priced again (with the planner's own toll rule) instead of
+ * planning the whole table. Null when it does not apply (the caller plans the table).
+ */
+function repriceChangedRows(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest, network: Network, laneRecord: Int32Array): PlanAmounts | null {
+  const n = laneRecord.length;
+  const t = overlay.table;
+  const laneOfRow = new Int32Array(overlay.baseCount).fill(-1);
+  for (let e = 0; e < n; e++) laneOfRow[laneRecord[e]] = e;
+  const { chosen, defaultToll } = tollChoice(t, request, base.exponent);
+  const out: PlanAmounts = {
+    toll: network.laneToll.slice(),
+    fuel: network.laneFuel.slice(),
+    fees: network.laneFees.slice(),
+    rebate: network.laneRebate.slice(),
+    closed: new Uint8Array(n),
+    changed: new Uint8Array(n),
+    notPlanned: new Uint8Array(n),
+    weights: null,
+  };
+  for (let r = 0; r < overlay.baseCount; r++) {
+    if (!overlay.changed[r]) continue;
+    const e = laneOfRow[r];
+    const toll = plannedRowToll(t, r, chosen, defaultToll);
+    // A row the base plan left out (or one without a toll now) may change the planned rows.
+    if (e === -1 || Number.isNaN(toll)) return null;
+    out.toll[e] = toll;
+    // A blank fuel is the planner's estimate, which depends on the distance alone: the base's.
+    out.fuel[e] = Number.isNaN(t.fuel[r]) ? network.laneFuel[e] : t.fuel[r];
+    out.fees[e] = t.fees[r];
+    out.rebate[e] = t.rebate[r];
+    out.closed[e] = overlay.closed[r];
+    out.changed[e] = 1;
+  }
+  const weights = network.outNet.slice();
+  for (let p = 0; p < n; p++) {
+    const e = network.outLane[p];
+    if (!out.changed[e]) continue;
+    weights[p] = out.closed[e] ? Infinity : netCost(out.toll[e], out.fuel[e], out.fees[e], out.rebate[e], () => `net cost of the lane from row ${network.laneRow[e]}`);
+  }
+  out.weights = weights;
   return out;
 }
 

@@ -34,7 +34,7 @@ export interface LaneOverlay {
   /** Rows of the base table; rows from here on were added by the scenario. */
   baseCount: number;
   /** Key of every row, occurrences counted over the file's rows (added lanes continue their group). */
-  keys: LaneKey[];
+  keys: readonly LaneKey[];
   /** Base row each row stands for: itself for a base row, the row it splits for a class copy, -1 for an added lane. */
   sourceOf: Int32Array;
   /** Index of the add-lane change that made a row, else -1. */
@@ -57,19 +57,39 @@ export function overlayKeys(base: OverlayBase): LaneKey[] {
   return laneKeysOfTable(base.lanes, base.depots);
 }
 
+/** The base rows' keys and their lookup tables, made once per import and shared by every overlay of it. */
+export interface OverlayIndex {
+  keys: readonly LaneKey[];
+  /** laneKeyId -> row. */
+  rowOf: ReadonlyMap<string, number>;
+  /** laneGroupText -> rows in the group (the last occurrence). */
+  groupCount: ReadonlyMap<string, number>;
+}
+
+export function overlayIndex(base: OverlayBase): OverlayIndex {
+  const keys = overlayKeys(base);
+  const rowOf = new Map<string, number>();
+  const groupCount = new Map<string, number>();
+  keys.forEach((k, i) => {
+    rowOf.set(laneKeyId(k), i);
+    groupCount.set(laneGroupText(k.from, k.to, k.ref), k.occurrence);
+  });
+  return { keys, rowOf, groupCount };
+}
+
 /**
  * Lays `scenario` over `base`; see the file header. A scenario without changes costs no copy.
- * `keys` (overlayKeys of the same base) saves recounting them when many scenarios meet one import.
+ * `index` (overlayIndex of the same base) saves recounting the keys for every scenario of one import.
  */
-export function buildOverlay(base: OverlayBase, scenario: Scenario | null, keys?: readonly LaneKey[]): LaneOverlay {
+export function buildOverlay(base: OverlayBase, scenario: Scenario | null, index?: OverlayIndex): LaneOverlay {
   const t = base.lanes;
-  const rowKeys = keys ? keys.slice() : laneKeysOfTable(t, base.depots);
+  const shared = index ?? overlayIndex(base);
   const changes = scenario?.changes ?? [];
   if (changes.length === 0) {
     return {
       table: t,
       baseCount: t.count,
-      keys: rowKeys,
+      keys: shared.keys,
       sourceOf: Int32Array.from({ length: t.count }, (_, i) => i),
       changeOf: new Int32Array(t.count).fill(-1),
       closed: new Uint8Array(t.count),
@@ -78,16 +98,20 @@ export function buildOverlay(base: OverlayBase, scenario: Scenario | null, keys?
       reshaped: false,
     };
   }
-  return new OverlayBuilder(base, rowKeys, changes).run();
+  return new OverlayBuilder(base, shared, changes).run();
 }
 
 class OverlayBuilder {
   private readonly copy: TableCopy;
-  private readonly index = new Map<string, number>();
+  /** Keys of the rows this scenario adds (base rows are looked up in the shared index). */
+  private readonly addedIndex = new Map<string, number>();
   private readonly groupCount = new Map<string, number>();
   private readonly depotIndex = new Map<string, number>();
-  private readonly sourceOf: number[] = [];
-  private readonly changeOf: number[] = [];
+  /** Keys of the rows, copied from the shared list only when the scenario adds a row. */
+  private keys: LaneKey[] | null = null;
+  /** Base row of each added row (class copies); -1 for an added lane. Base rows stand for themselves. */
+  private readonly sourceOfAdded: number[] = [];
+  private readonly changeOfAdded: number[] = [];
   private readonly closed: number[] = [];
   private readonly changed: number[] = [];
   /** Class copies of each base row, by class index. */
@@ -97,22 +121,37 @@ class OverlayBuilder {
 
   constructor(
     private readonly base: OverlayBase,
-    private readonly keys: LaneKey[],
+    private readonly shared: OverlayIndex,
     private readonly changes: readonly ScenarioChange[],
   ) {
     this.copy = new TableCopy(base.lanes, changes.length);
-    keys.forEach((k, i) => {
-      this.index.set(laneKeyId(k), i);
-      this.groupCount.set(laneGroupText(k.from, k.to, k.ref), k.occurrence);
-      this.sourceOf.push(i);
-      this.changeOf.push(-1);
-    });
     base.depots.forEach((d, i) => this.depotIndex.set(d.id, i));
+  }
+
+  private rowOfKey(key: LaneKey): number | undefined {
+    const id = laneKeyId(key);
+    return this.shared.rowOf.get(id) ?? this.addedIndex.get(id);
+  }
+
+  private keyOf(row: number): LaneKey {
+    return (this.keys ?? this.shared.keys)[row];
+  }
+
+  private pushRow(key: LaneKey, sourceOf: number, changeOf: number): void {
+    this.keys ??= this.shared.keys.slice();
+    this.keys.push(key);
+    this.sourceOfAdded.push(sourceOf);
+    this.changeOfAdded.push(changeOf);
   }
 
   run(): LaneOverlay {
     this.changes.forEach((change, i) => this.apply(change, i));
     const n = this.copy.count;
+    const baseCount = this.base.lanes.count;
+    const sourceOf = new Int32Array(n);
+    const changeOf = new Int32Array(n).fill(-1);
+    for (let r = 0; r < baseCount; r++) sourceOf[r] = r;
+    this.sourceOfAdded.forEach((s, i) => ((sourceOf[baseCount + i] = s), (changeOf[baseCount + i] = this.changeOfAdded[i])));
     const closed = new Uint8Array(n);
     const changed = new Uint8Array(n);
     for (const r of this.closed) closed[r] = 1;
@@ -120,9 +159,9 @@ class OverlayBuilder {
     return {
       table: this.copy.build(),
       baseCount: this.base.lanes.count,
-      keys: this.keys,
-      sourceOf: Int32Array.from(this.sourceOf),
-      changeOf: Int32Array.from(this.changeOf),
+      keys: this.keys ?? this.shared.keys,
+      sourceOf,
+      changeOf,
       closed,
       changed,
       problems: this.problems,
@@ -142,9 +181,9 @@ class OverlayBuilder {
 
   private apply(change: ScenarioChange, changeIndex: number): void {
     if (change.kind === 'add-lane') return this.addLane(change, changeIndex);
-    const row = this.index.get(laneKeyId(change.lane));
+    const row = this.rowOfKey(change.lane);
     if (row === undefined) {
-      const near = this.keys.filter((k) => k.from === change.lane.from && k.to === change.lane.to).map(laneKeyText);
+      const near = (this.keys ?? this.shared.keys).filter((k) => k.from === change.lane.from && k.to === change.lane.to).map(laneKeyText);
       const hint = near.length > 0 ? ` (lanes ${change.lane.from} > ${change.lane.to} in the file now: ${near.slice(0, 5).join(', ')})` : '';
       this.problem(changeIndex, 'lane-missing', change.lane, `change ${changeIndex + 1} (${change.kind}) names lane ${laneKeyText(change.lane)}, which the lanes file no longer has${hint}`);
       return;
@@ -224,9 +263,7 @@ class OverlayBuilder {
     if (r === undefined) {
       r = c.copyRow(row);
       c.column('vehicleClass')[r] = k;
-      this.keys.push(this.keys[row]);
-      this.sourceOf.push(row);
-      this.changeOf.push(-1);
+      this.pushRow(this.keyOf(row), row, -1);
       if (!copies) this.splits.set(row, (copies = new Map()));
       copies.set(k, r);
       if (this.closed.includes(row)) this.closed.push(r);
@@ -272,12 +309,10 @@ class OverlayBuilder {
       ref: l.ref ?? undefined,
     });
     const group = laneGroupText(l.from, l.to, l.ref);
-    key.occurrence = (this.groupCount.get(group) ?? 0) + 1;
+    key.occurrence = (this.groupCount.get(group) ?? this.shared.groupCount.get(group) ?? 0) + 1;
     this.groupCount.set(group, key.occurrence);
-    this.index.set(laneKeyId(key), r);
-    this.keys.push(key);
-    this.sourceOf.push(-1);
-    this.changeOf.push(changeIndex);
+    this.addedIndex.set(laneKeyId(key), r);
+    this.pushRow(key, -1, changeIndex);
     this.changed.push(r);
     this.reshaped = true;
   }

@@ -13,7 +13,7 @@ export function laneOfRows(result: ImportResult): Int32Array {
   return lane;
 }
 
-function rowsView(result: ImportResult, lane: Int32Array, keys: LaneKey[]): LaneRowsView {
+function rowsView(result: ImportResult, lane: Int32Array, keys: readonly LaneKey[]): LaneRowsView {
   const t = result.lanes;
   const n = t.count;
   const cls = t.vehicleClass;
@@ -25,13 +25,13 @@ function rowsView(result: ImportResult, lane: Int32Array, keys: LaneKey[]): Lane
     validFrom: Array.from(t.validFrom.subarray(0, n), isoDateText),
     validTo: Array.from(t.validTo.subarray(0, n), isoDateText),
     vehicleClass: Array.from({ length: n }, (_, r) => (cls && cls[r] >= 0 ? t.classNames[cls[r]] : null)),
-    keys,
+    keys: keys.slice(),
     lane: lane.slice(),
   };
 }
 
 /** The UI's view of a planned import: the network, its lane keys and every row of the lanes file. */
-export function networkView(result: ImportResult, plan: PlanChoice, keys: LaneKey[] = overlayKeys(result)): NetworkView {
+export function networkView(result: ImportResult, plan: PlanChoice, keys: readonly LaneKey[] = overlayKeys(result)): NetworkView {
   const network: Network = result.network!;
   const lane = laneOfRows(result);
   const rows = rowsView(result, lane, keys);

@@ -5,7 +5,7 @@
 import { LanewrightError } from '../../engine/index';
 import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
-import { overlayKeys, type LaneKey } from '../../engine/index';
+import { overlayIndex, type OverlayIndex } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { importTexts, replanImport, reportOf } from './import-texts';
@@ -32,7 +32,7 @@ export class WorkerSession {
   /** Base network lane of each lanes-file row (-1 = not planned), to map a rebuilt network back. */
   private laneOfRow: Int32Array = new Int32Array(0);
   /** Keys of the import's lane rows, counted once per import (occurrences over the whole file). */
-  private rowKeys: LaneKey[] = [];
+  private rowIndex: OverlayIndex | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
   constructor(private readonly post: Post) {}
@@ -100,12 +100,12 @@ export class WorkerSession {
     this.network = result.network;
     this.plan = plan;
     this.laneOfRow = laneOfRows(result);
-    this.rowKeys = overlayKeys(result);
+    this.rowIndex = overlayIndex(result);
     this.solved = null;
     this.solvedId = null;
     this.base = null;
     this.baseKey = '';
-    const view = networkView(result, plan, this.rowKeys);
+    const view = networkView(result, plan, this.rowIndex!.keys);
     this.post({ kind: 'loaded', id, network: view, report: reportOf(result) }, transferablesOf(view));
   }
 
@@ -143,7 +143,7 @@ export class WorkerSession {
     this.scenario = scenario;
     this.solvedId = id;
     let view: SolveView;
-    const input = scenarioSolveInput(this.imported!, network, scenario, this.rowKeys);
+    const input = scenarioSolveInput(this.imported!, network, scenario, this.rowIndex ?? undefined);
     if (input.rebuilt) {
       // The scenario changes which rows are planned (added lanes, validity, a class copy): the
       // engine plans the overlay's network, and the answer is mapped back onto the base lanes.

@@ -8,7 +8,7 @@ import type { Network } from '../../engine/index';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../../engine/index';
 import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/index';
 import { routePath } from '../../engine/index';
-import type { ImportResult, LaneKey, OverlayNetwork } from '../../engine/index';
+import type { ImportResult, OverlayIndex, OverlayNetwork } from '../../engine/index';
 import { buildOverlay, describeChanges, overlayNetwork, overlayPlanAmounts, overlayRowAmounts, planRequestOf } from '../../engine/index';
 import { addedLaneRef } from '../model/added-lanes';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
@@ -27,10 +27,10 @@ export interface ScenarioSolveInput {
 }
 
 /** Lays the scenario over the import with the engine's overlay; see the file header. */
-export function scenarioSolveInput(imported: ImportResult, network: Network, scenario: Scenario | null, keys?: readonly LaneKey[]): ScenarioSolveInput {
+export function scenarioSolveInput(imported: ImportResult, network: Network, scenario: Scenario | null, index?: OverlayIndex): ScenarioSolveInput {
   const changed = hasChanges(scenario);
   const request = planRequestOf(imported);
-  const overlay = buildOverlay(imported, changed ? scenario : null, keys);
+  const overlay = buildOverlay(imported, changed ? scenario : null, index);
   const amounts = overlayPlanAmounts(overlay, imported, request, network, imported.plan.laneRecord);
   const rows = overlayRowAmounts(overlay, imported.plan.vehicleClass);
   const base = overlay.baseCount;

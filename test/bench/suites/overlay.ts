@@ -5,7 +5,7 @@
 
 import { importNetwork } from '../../../engine/planning/import-network';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
-import { buildOverlay, overlayKeys } from '../../../engine/scenario/overlay';
+import { buildOverlay, overlayIndex } from '../../../engine/scenario/overlay';
 import { overlayNetwork, overlayPlanAmounts, planRequestOf } from '../../../engine/scenario/overlay-network';
 import { compareImport } from '../../../engine/scenario/compare';
 import type { Scenario } from '../../../engine/scenario/types';
@@ -34,7 +34,8 @@ export const suite: BenchSuite = {
     const f = files(9);
     const imported = importNetwork(f.depots, f.lanes, { plan: { date: '2026-08-15', vehicleClass: '2axle' } });
     const network = imported.network!;
-    const keys = overlayKeys(imported);
+    const index = overlayIndex(imported);
+    const keys = index.keys;
     const request = planRequestOf(imported);
     // Ten toll edits for the class on screen, on rows planned for the day.
     const rand = seeded(10);
@@ -45,12 +46,12 @@ export const suite: BenchSuite = {
     }
     const origin = network.depotIndex.get('D0')!;
     const edit = timeBest(() => {
-      const overlay = buildOverlay(imported, scenario, keys);
+      const overlay = buildOverlay(imported, scenario, index);
       const amounts = overlayPlanAmounts(overlay, imported, request, network, imported.plan.laneRecord);
       return cheapestRoutes(network, origin, amounts.weights!);
     }, 3);
     const rebuild = timeBest(() => {
-      const overlay = buildOverlay(imported, scenario, keys);
+      const overlay = buildOverlay(imported, scenario, index);
       const planned = overlayNetwork(overlay, imported, request);
       return cheapestRoutes(planned.network, planned.network.depotIndex.get('D0')!);
     }, 3);
