@@ -323,6 +323,34 @@ describe('workspace in the browser', () => {
     await expect.poll(() => page.locator('#lw-route-title').innerText()).toContain(`Route to ${id}`);
   });
 
+  it('edits a toll for the vehicle class on screen and lists every row of the file', async () => {
+    let before = await solveCount(page);
+    await page.getByLabel('Vehicle class').selectOption('2axle');
+    await waitForPlan(page, before);
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    await page.getByLabel('Filter lanes by depot or contract ref').fill('BFH-L-014');
+    // sample-data/lanes.csv row 15: LUX > SXB, toll 18.20, 2axle 8.19, 5axle 18.20.
+    const cell = page.locator('tr[data-lane-row="15"] input[aria-label^="toll of lane"]');
+    expect(await cell.getAttribute('aria-label')).toMatch(/\(2axle\)$/);
+    expect(await cell.inputValue()).toBe('8.19');
+    before = await solveCount(page);
+    await cell.fill('9,00'); // read by the importer's rules: a decimal comma
+    await cell.press('Enter');
+    await waitForPlan(page, before);
+    const compare = page.locator('[data-testid="scenario-compare"]');
+    await expect.poll(() => compare.innerText()).toContain('toll 2axle 8.19 → 9.00');
+    await page.getByLabel('Filter lanes by depot or contract ref').fill('');
+    await page.getByLabel(/Every row of the file/).check();
+    await expect.poll(() => page.locator('.lw-lanes [aria-live="polite"]').innerText()).toMatch(/^147 lanes/);
+    await page.getByLabel(/Every row of the file/).uncheck();
+    before = await solveCount(page);
+    await compare.getByRole('button', { name: 'Back to the base contract' }).click();
+    await waitForPlan(page, before);
+    before = await solveCount(page);
+    await page.getByLabel('Vehicle class').selectOption('');
+    await waitForPlan(page, before);
+  });
+
   it('opens the about box with the cautions from the keyboard', async () => {
     await page.getByRole('button', { name: 'About & cautions' }).focus();
     await page.keyboard.press('Enter');
