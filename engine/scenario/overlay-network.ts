@@ -73,6 +73,21 @@ export interface PlanAmounts {
   weights: Float64Array | null;
 }
 
+/** The base plan's own amounts, nothing closed or changed; the starting point of every PlanAmounts. */
+function baseAmounts(network: Network): PlanAmounts {
+  const n = network.laneCount;
+  return {
+    toll: network.laneToll.slice(),
+    fuel: network.laneFuel.slice(),
+    fees: network.laneFees.slice(),
+    rebate: network.laneRebate.slice(),
+    closed: new Uint8Array(n),
+    changed: new Uint8Array(n),
+    notPlanned: new Uint8Array(n),
+    weights: null,
+  };
+}
+
 /**
  * The base plan's lanes (`network`, whose lane e is table row `laneRecord[e]`) under the overlay,
  * planned for `request` by the planner's own rules.
@@ -81,9 +96,7 @@ export function overlayPlanAmounts(overlay: LaneOverlay, base: OverlayPlanBase, 
   const n = laneRecord.length;
   if (!overlay.reshaped && !overlay.changed.includes(1)) {
     // Nothing applied: the base plan's own amounts (re-planning would give the same).
-    const net = new Float64Array(n);
-    for (let p = 0; p < n; p++) net[p] = network.outNet[p];
-    return { toll: network.laneToll.slice(), fuel: network.laneFuel.slice(), fees: network.laneFees.slice(), rebate: network.laneRebate.slice(), closed: new Uint8Array(n), changed: new Uint8Array(n), notPlanned: new Uint8Array(n), weights: net };
+    return { ...baseAmounts(network), weights: network.outNet.slice() };
   }
   if (!overlay.reshaped) {
     const repriced = repriceChangedRows(overlay, base, request, network, laneRecord);
@@ -99,16 +112,7 @@ export function overlayPlanAmounts(overlay: LaneOverlay, base: OverlayPlanBase, 
     const b = overlay.sourceOf[r];
     if (b >= 0) plannedOf[b] = i;
   });
-  const out: PlanAmounts = {
-    toll: network.laneToll.slice(),
-    fuel: network.laneFuel.slice(),
-    fees: network.laneFees.slice(),
-    rebate: network.laneRebate.slice(),
-    closed: new Uint8Array(n),
-    changed: new Uint8Array(n),
-    notPlanned: new Uint8Array(n),
-    weights: null,
-  };
+  const out = baseAmounts(network);
   for (let e = 0; e < n; e++) {
     const i = plannedOf[laneRecord[e]];
     if (i === -1) {
@@ -147,16 +151,7 @@ function repriceChangedRows(overlay: LaneOverlay, base: OverlayPlanBase, request
   const laneOfRow = new Int32Array(overlay.baseCount).fill(-1);
   for (let e = 0; e < n; e++) laneOfRow[laneRecord[e]] = e;
   const { chosen, defaultToll } = tollChoice(t, request, base.exponent);
-  const out: PlanAmounts = {
-    toll: network.laneToll.slice(),
-    fuel: network.laneFuel.slice(),
-    fees: network.laneFees.slice(),
-    rebate: network.laneRebate.slice(),
-    closed: new Uint8Array(n),
-    changed: new Uint8Array(n),
-    notPlanned: new Uint8Array(n),
-    weights: null,
-  };
+  const out = baseAmounts(network);
   for (let r = 0; r < overlay.baseCount; r++) {
     if (!overlay.changed[r]) continue;
     const e = laneOfRow[r];

@@ -3,7 +3,7 @@
 // problems) is the engine overlay's, computed in the worker and shipped with each solve.
 
 import { withChange, withoutChange } from '../../engine/index';
-import type { LaneKey } from '../../engine/index';
+import type { LaneKey, PlanAmounts } from '../../engine/index';
 import type { Scenario, ScenarioChange } from '../../engine/index';
 
 export type { Scenario, ScenarioChange } from '../../engine/index';
@@ -42,16 +42,8 @@ export function setLaneClosed(scenario: Scenario, lane: LaneKey, closed: boolean
   return withLaneChange(scenario, { kind: 'close-lane', lane, note: null }, !closed);
 }
 
-/** Lane amounts under the scenario, one entry per network lane, as the worker's overlay gives them. */
-export interface LaneAmounts {
-  toll: Float64Array;
-  fuel: Float64Array;
-  fees: Float64Array;
-  rebate: Float64Array;
-  closed: Uint8Array;
-  /** Lanes some change touches. */
-  changed: Uint8Array;
-}
+/** Lane amounts under the scenario, one entry per network lane, as the worker ships the overlay's. */
+export type LaneAmounts = Pick<PlanAmounts, 'toll' | 'fuel' | 'fees' | 'rebate' | 'closed' | 'changed'>;
 
 /** The scenario plus one rebate change per fix-plan row (rows of the lanes file name the lanes). */
 export function fixPlanScenario(

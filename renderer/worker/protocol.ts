@@ -1,7 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { ChangeView, LaneKey } from '../../engine/index';
+import type { ChangeView, LaneKey, PlanAmounts } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
@@ -98,15 +98,7 @@ export interface LaneRowsView {
  * per network lane the amounts under the scenario for the planned class, per lanes-file row the
  * same for the "every row" view, and each change as text with whether it applied.
  */
-export interface OverlayView {
-  toll: Float64Array;
-  fuel: Float64Array;
-  fees: Float64Array;
-  rebate: Float64Array;
-  closed: Uint8Array;
-  changed: Uint8Array;
-  /** 1 for a lane whose row the scenario no longer plans for this date and class. */
-  notPlanned: Uint8Array;
+export interface OverlayView extends Omit<PlanAmounts, 'weights'> {
   rows: { toll: Float64Array; fuel: Float64Array; fees: Float64Array; rebate: Float64Array; closed: Uint8Array; changed: Uint8Array };
   changes: ChangeView[];
 }

@@ -3,6 +3,7 @@
 // Invented test data: four depots at real city coordinates.
 
 import fc from 'fast-check';
+import { seededRandom } from '../../support/seeded-random';
 import { formatMinor, type Minor } from '../../../engine/money/minor';
 import { overlayKeys } from '../../../engine/scenario/overlay';
 import type { ImportResult } from '../../../engine/planning/import-types';
@@ -49,21 +50,9 @@ export function randomLaneFile(): fc.Arbitrary<string> {
   });
 }
 
-/** A small deterministic generator (mulberry32), so a scenario follows from its seed. */
-function prng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** 0..5 changes over the import's rows: amounts (tolls by class or for every class), closures, validity, added lanes, a missing lane. */
 export function randomScenario(imported: ImportResult, seed: number): Scenario {
-  const rand = prng(seed);
+  const rand = seededRandom(seed);
   const pick = <T,>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
   const int = (max: number) => Math.floor(rand() * (max + 1));
   const keys = overlayKeys(imported);
