@@ -21,12 +21,7 @@ export interface ScenarioDocument extends Scenario {
  * a version 1 toll change meant "the toll", which every class then got, so it reads as every class.
  */
 const MIGRATIONS: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {
-  1: (doc) => ({
-    ...doc,
-    changes: Array.isArray(doc.changes)
-      ? doc.changes.map((c: unknown) => (isObject(c) && c.kind === 'set-amount' && c.field === 'toll' && c.vehicleClass === undefined ? { ...c, vehicleClass: null } : c))
-      : doc.changes,
-  }),
+  1: (doc) => ({ ...doc, changes: withTollClasses(doc.changes) }),
 };
 
 /** Reads a scenario file's text. Throws ScenarioFormatError naming `source` and the field. */
@@ -47,10 +42,17 @@ export function serializeScenarioDocument(scenario: Scenario): string {
 
 /** The JSON object for a scenario embedded in another document; validates it first. */
 export function scenarioToJson(scenario: Scenario): ScenarioDocument {
-  // In memory a toll change may leave its class out (= every class); the file always says so.
-  const changes = scenario.changes.map((c) => (c.kind === 'set-amount' && c.field === 'toll' && c.vehicleClass === undefined ? { ...c, vehicleClass: null } : c));
-  const checked = readScenario({ format: SCENARIO_FORMAT, version: SCENARIO_VERSION, ...scenario, changes }, 'scenario');
+  const checked = readScenario({ format: SCENARIO_FORMAT, version: SCENARIO_VERSION, ...scenario, changes: withTollClasses(scenario.changes) }, 'scenario');
   return { format: SCENARIO_FORMAT, version: SCENARIO_VERSION, ...checked };
+}
+
+/**
+ * In memory a toll change may leave its class out (= every class, as `Scenario` allows); a document
+ * always says so. Anything that is not a list of such changes is returned as it is, for the reader to refuse.
+ */
+export function withTollClasses(changes: unknown): unknown {
+  if (!Array.isArray(changes)) return changes;
+  return changes.map((c: unknown) => (isObject(c) && c.kind === 'set-amount' && c.field === 'toll' && c.vehicleClass === undefined ? { ...c, vehicleClass: null } : c));
 }
 
 /** Reads a scenario from parsed JSON (a file or a workspace entry), migrating older versions. */
