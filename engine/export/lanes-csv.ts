@@ -23,7 +23,9 @@ export function lanesCsvRows(input: LanesExportInput, loops: readonly RebateLoop
   for (const loop of loops) for (const e of loop.lanes) onLoop.add(e);
   const withClass = plan.lanes.some((l) => l.vehicleClass !== null);
   const money = (v: number) => formatMinor(v as Minor, exponent);
-  const header = ['from', 'to', 'ref', ...(withClass ? ['vehicle_class'] : []), 'toll', 'fuel', 'fees', 'rebate', 'net', 'currency', 'distance_km', 'drive_minutes',
+  // The clause column only when the file had one, so a file without it exports as before.
+  const clauses = input.lanes?.clause;
+  const header = ['from', 'to', 'ref', ...(clauses ? ['clause'] : []), ...(withClass ? ['vehicle_class'] : []), 'toll', 'fuel', 'fees', 'rebate', 'net', 'currency', 'distance_km', 'drive_minutes',
     'valid_from', 'valid_to', 'distance_source', 'fuel_source', 'net_negative', 'on_rebate_loop', 'notes'];
   const rows: (string | number)[][] = [header];
   plan.lanes.forEach((lane, i) => {
@@ -33,6 +35,7 @@ export function lanesCsvRows(input: LanesExportInput, loops: readonly RebateLoop
       lane.from,
       lane.to,
       lane.ref ?? '',
+      ...(clauses ? [clauses[record] ?? ''] : []),
       ...(withClass ? [lane.vehicleClass ?? ''] : []),
       money(lane.toll),
       money(lane.fuel),

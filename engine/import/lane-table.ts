@@ -30,6 +30,8 @@ export class LaneTableBuilder {
   classTolls: { name: string; key: string; toll: Float64Array; header?: string }[] = [];
   classNames: string[] = [];
   ref: (string | undefined)[] = [];
+  /** Null until the header has a clause column. */
+  clause: (string | undefined)[] | null = null;
   notes: (string | undefined)[] = [];
   extra: { column: string; values: (string | undefined)[] }[] = [];
   columnHeaders: NonNullable<LaneTable['columnHeaders']> = {};
@@ -78,6 +80,7 @@ export class LaneTableBuilder {
       validFrom: this.validFrom.slice(0, n),
       validTo: this.validTo.slice(0, n),
       ref: this.ref,
+      ...(this.clause ? { clause: this.clause } : {}),
       notes: this.notes,
       extra: this.extra,
       columnHeaders: this.columnHeaders,
@@ -101,6 +104,7 @@ export function laneRecordAt(table: LaneTable, depots: readonly DepotRecord[], e
     from: depots[table.from[i]].id,
     to: depots[table.to[i]].id,
     ref: table.ref[i] ?? null,
+    clause: table.clause?.[i] ?? null,
     vehicleClass: cls >= 0 ? table.classNames[cls] : null,
     toll: money(table.toll[i]),
     classTolls,

@@ -42,6 +42,8 @@ describe('lanes CSV round trip', () => {
     const first = importNetwork(depots, sample(file), { plan });
     const second = roundTrip(first, depots);
     expect(laneTuples(second.network!)).toEqual(laneTuples(first.network!));
+    const clauses = (r: ImportResult) => Array.from(r.plan.laneRecord, (i) => r.lanes.clause?.[i]);
+    expect(clauses(second)).toEqual(clauses(first));
     const origin = first.network!.depotIndex.get('RTM')!;
     const a = routesReport(first.network!, cheapestRoutes(first.network!, origin));
     const b = routesReport(second.network!, cheapestRoutes(second.network!, origin));
