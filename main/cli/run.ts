@@ -30,8 +30,10 @@ const USAGE = `usage:
   lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
   lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
                     [--loops-out FILE] [--geojson-out FILE]
-  lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
+  lanewright audit --depots FILE --lanes FILE [--from-date D] [--to-date D] [--fix-by lane|clause] [--report FILE.html]
+                   [--vehicle-class C] [--loop-cap N] [--negotiable REF|CLAUSE,...]
                    [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
+                   (the whole calendar of the contract; with --date D, one day's review instead)
   lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
   lanewright dispatch --depots FILE --lanes FILE --loads FILE [--vehicles FILE] [--alternatives K] [--json] [--out FILE] [--timings]
   Planning options (routes, check, export, audit, compare, dispatch):

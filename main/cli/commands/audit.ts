@@ -1,17 +1,23 @@
-// `lanewright audit`: the contract review of the whole network, independent of any origin: every
-// distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one row per
-// lane) or JSON; --loops-csv also writes one row per lane of each loop.
+// `lanewright audit --date D`: the contract review of one day's network, independent of any origin:
+// every distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one
+// row per lane) or JSON; --loops-csv also writes one row per lane of each loop. Without --date the
+// command reviews the whole calendar (audit-calendar.ts).
 
 import { auditNetwork } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
-import { wholeNumberOption, type ParsedArgs } from '../args';
+import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
+import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
 import type { CommandOutput } from '../run';
 
 export const auditFlags = ['json', 'progress', 'timings', ...LOAD_NETWORK_FLAGS];
 
 export function runAudit(args: ParsedArgs, out: CommandOutput): number {
+  if (!args.values.has('date')) return runCalendarAudit(args, out);
+  for (const name of CALENDAR_AUDIT_OPTIONS) {
+    if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
+  }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
@@ -36,7 +42,9 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
+  // Which review this is: one day, named.
+  const dayReport = { review: 'day' as const, date: args.values.get('date'), ...report };
+  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : formatCsvRows(auditLaneRows(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 
