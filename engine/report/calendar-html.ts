@@ -95,7 +95,8 @@ export function calendarReviewHtml(report: CalendarReport, options: CalendarHtml
   );
 
   const negotiable = report.headroom.filter((h) => h.negotiable);
-  const shown = negotiable.length > 0 ? negotiable : report.headroom.filter((h) => report.clauses.some((c) => c.lanes.includes(h.row) && c.rebate_minor > 0));
+  const withRebate = new Set(report.clauses.filter((c) => c.rebate_minor > 0).flatMap((c) => c.lanes));
+  const shown = negotiable.length > 0 ? negotiable : report.headroom.filter((h) => withRebate.has(h.row));
   const cap = options.maxHeadroomRows ?? 500;
   parts.push(`<h2>Headroom ${negotiable.length > 0 ? 'of the negotiable lanes' : 'of the lanes with a rebate (no lane was marked negotiable)'}</h2>`);
   parts.push(`<p class="note">Floor: the lowest net the lane can carry in every period it is valid in without making a loop${report.headroom_after_fix_plan ? ', after the fix plan' : ''}; the period named sets it.</p>`);

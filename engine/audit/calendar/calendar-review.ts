@@ -11,7 +11,7 @@ import type { ImportResult } from '../../planning/import-types';
 import { clauseFixPlan } from './clause-fix-plan';
 import { clauseTable, type ClauseRow } from './clause-table';
 import { daysInRange } from './days';
-import { headroomOverTime, type RowHeadroom } from './headroom-over-time';
+import { headroomOverTime, type HeadroomWork, type RowHeadroom } from './headroom-over-time';
 import { laneFixPlan, verifyCuts, type CalendarFixPlan } from './lane-fix-plan';
 import { loopsOverTime, type CalendarLoop } from './loops-over-time';
 import { periodNetworks, type PeriodNetwork } from './period-networks';
@@ -50,6 +50,8 @@ export interface CalendarReview {
   fixPlan: CalendarFixPlan | null;
   /** Empty when a fix plan was needed and could not be verified. */
   headroom: RowHeadroom[];
+  /** How the floors were found (whole-network solves, rows left to targeted searches); null without headroom. */
+  headroomWork: HeadroomWork | null;
   headroomAfterFixPlan: boolean;
   clauses: ClauseRow[];
   /** Per LaneTable row: 1 when marked negotiable. */
@@ -85,8 +87,8 @@ export function reviewCalendar(result: ImportResult, options: CalendarReviewOpti
     progress?.({ phase: 'verify', done: 0, total: 1 });
     fixPlan.verified = fixPlan.unfixable.length === 0 && fixPlan.changes.length > 0 && verifyCuts(table, networks, fixPlan.cut);
   }
-  const headroom =
-    fixPlan && !fixPlan.verified ? [] : headroomOverTime(networks, table.count, fixPlan?.cut ?? null, (done, total) => progress?.({ phase: 'headroom', done, total }));
+  const floors =
+    fixPlan && !fixPlan.verified ? null : headroomOverTime(networks, table.count, fixPlan?.cut ?? null, (done, total) => progress?.({ phase: 'headroom', done, total }));
   return {
     window,
     periods,
@@ -95,7 +97,8 @@ export function reviewCalendar(result: ImportResult, options: CalendarReviewOpti
     loops: found.loops,
     loopCapReached: found.capReached,
     fixPlan,
-    headroom,
+    headroom: floors?.rows ?? [],
+    headroomWork: floors?.work ?? null,
     headroomAfterFixPlan: fixPlan !== null,
     clauses: clauseTable(table, found.loops),
     negotiable,

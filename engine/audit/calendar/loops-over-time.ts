@@ -45,6 +45,12 @@ export function loopsOverTime(nets: readonly PeriodNetwork[], options: { cap?: n
   const maximal = nets.filter((n) => n.maximal);
   maximal.forEach((net, i) => {
     options.onProgress?.(i, maximal.length);
+    // Once the cap is full the search stops: where a loop exists is read off every network below,
+    // and whether more loops exist is already answered (yes, or maybe).
+    if (found.size >= cap) {
+      capReached = true;
+      return;
+    }
     const distinct = findDistinctLoops(net.network, { cap });
     if (distinct.capReached) capReached = true;
     for (const loop of distinct.loops) {
