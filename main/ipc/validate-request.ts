@@ -46,7 +46,7 @@ const VALIDATORS: Validators = {
     }
     if (typeof o.text !== 'string') throw new FieldCheckFailure('/text', typeof o.text, 'must be text');
     if (o.text.length > MAX_EXPORT_CHARS) throw new FieldCheckFailure('/text', `${o.text.length} characters`, `longer than ${MAX_EXPORT_CHARS} characters`);
-    const kind = checkChoice(o.kind, '/kind', ['csv', 'geojson', 'scenario'] as const);
+    const kind = checkChoice(o.kind, '/kind', ['csv', 'geojson', 'scenario', 'html'] as const);
     if (kind === 'scenario') checkScenarioText(o.text);
     return { suggestedName, text: o.text, kind };
   },

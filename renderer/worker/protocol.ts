@@ -123,7 +123,7 @@ export type ToWorker =
   /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
   | { kind: 'route'; id: number; target: number; solveId: number }
   | { kind: 'export'; id: number; what: ExportKind }
-  | { kind: 'review'; id: number; scenario: Scenario | null }
+  | { kind: 'review'; id: number; scenario: Scenario | null; fixBy?: 'lane' | 'clause' }
   | { kind: 'dispatch'; id: number; request: DispatchRequest };
 
 export interface WorkerErrorView {

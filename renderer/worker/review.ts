@@ -2,16 +2,34 @@
 // not only those reachable from the origin; the fix plan; rebate headroom per lane) of the network
 // under the active scenario.
 
-import { auditNetwork } from '../../engine/index';
+import { auditNetwork, calendarReport, calendarReviewHtml, reviewCalendar, type CalendarReport, type ImportResult, type ReviewedFile } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { auditReport, type AuditReport } from '../../engine/index';
 import { applyScenario } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 
-export type ContractReviewView = AuditReport & { scenarioProblems: string[] };
+export type ContractReviewView = AuditReport & {
+  scenarioProblems: string[];
+  /** The review across the whole calendar of the files as loaded (the scenario is not applied to it). */
+  calendar: CalendarReport | null;
+  /** The printable report of `calendar` (self-contained HTML). */
+  calendarHtml: string | null;
+};
+
+export interface CalendarContext {
+  imported: ImportResult;
+  files: readonly ReviewedFile[];
+  fixBy: 'lane' | 'clause';
+}
 
 /** Audits the network, with the scenario's changes applied first when it has any. */
-export function reviewContract(network: Network, scenario: Scenario | null, date: string | null, onProgress?: (phase: string, fraction: number) => void): ContractReviewView {
+export function reviewContract(
+  network: Network,
+  scenario: Scenario | null,
+  date: string | null,
+  onProgress?: (phase: string, fraction: number) => void,
+  context?: CalendarContext,
+): ContractReviewView {
   let target = network;
   let scenarioProblems: string[] = [];
   if (scenario && hasChanges(scenario)) {
@@ -22,7 +40,18 @@ export function reviewContract(network: Network, scenario: Scenario | null, date
   const phases = { loops: 'Finding rebate loops', 'fix-plan': 'Working out a fix plan', headroom: 'Rebate headroom per lane' } as const;
   const order = { loops: 0, 'fix-plan': 1, headroom: 2 } as const;
   const audit = auditNetwork(target, {
-    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / 3),
+    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / 6),
   });
-  return { ...auditReport(target, audit), scenarioProblems };
+  let calendar: CalendarReport | null = null;
+  let calendarHtml: string | null = null;
+  if (context) {
+    const calendarPhases = { periods: 'Planning every period', loops: 'Rebate loops over the calendar', 'fix-plan': 'A fix plan for the whole calendar', verify: 'Checking the plan in every period', headroom: 'Headroom over the calendar' } as const;
+    const review = reviewCalendar(context.imported, {
+      fixBy: context.fixBy,
+      onProgress: (p) => onProgress?.(calendarPhases[p.phase], 0.5 + (p.total > 0 ? p.done / p.total : 0) / 2),
+    });
+    calendar = calendarReport(context.imported, review, context.fixBy);
+    calendarHtml = calendarReviewHtml(calendar, { files: context.files, exponent: context.imported.exponent });
+  }
+  return { ...auditReport(target, audit), scenarioProblems, calendar, calendarHtml };
 }
