@@ -28,8 +28,12 @@ export interface CovalidFloors {
   setIn: Int32Array;
 }
 
-/** Null when the union of the networks has a loop (no common potentials): solve them one by one. */
-export function covalidFloors(template: Network, lanes: MaskedLanes): CovalidFloors | null {
+/**
+ * Null when the union of the networks has a loop (no common potentials), or when the labels do not
+ * pay: after the first searches, more than a third as many labels settle per depot as there are
+ * networks (paths valid in many different sets of networks); then solve the networks one by one.
+ */
+export function covalidFloors(template: Network, lanes: MaskedLanes, networks: number): CovalidFloors | null {
   const union = laneSetNetwork(template, lanes.from, lanes.to, lanes.net, lanes.row);
   if (firstLoop(union, union.outNet) !== null) return null;
   const { potential, reweighted } = johnsonReweighting(union);
@@ -58,10 +62,14 @@ export function covalidFloors(template: Network, lanes: MaskedLanes): CovalidFlo
   const waiting = new Int32Array(n);
   const dominated = (x: number, mask: number) => settled[x].some((s) => (s | mask) === s);
 
+  let searches = 0;
+  let labels = 0;
+  let depots = 0;
   for (let v = 0; v < n; v++) {
     const first = inStart[v];
     const last = inStart[v + 1];
     if (first === last) continue;
+    if (++searches === 50 && labels > (depots * networks) / 3) return null;
     let open = 0;
     for (let i = first; i < last; i++) {
       const u = lanes.from[inLane[i]];
@@ -73,8 +81,12 @@ export function covalidFloors(template: Network, lanes: MaskedLanes): CovalidFlo
     while (open > 0 && heap.size > 0) {
       const { node: x, cost: d, mask } = heap.pop();
       if (dominated(x, mask)) continue;
-      if (settled[x].length === 0) touched.push(x);
+      if (settled[x].length === 0) {
+        touched.push(x);
+        depots++;
+      }
       settled[x].push(mask);
+      labels++;
       if (waiting[x] > 0) {
         for (let i = first; i < last; i++) {
           const e = inLane[i];

@@ -3,7 +3,8 @@
 // A covered network's back paths all exist, no dearer, in its cover, so only the maximal networks
 // count. One maximal network: the one-network headroom (engine/audit/headroom.ts). Several: one
 // search per destination over all of them at once (covalid-floors.ts), falling back to one
-// headroom solve per network when their union has a loop or there are more than 30 of them.
+// headroom solve per network when their union has a loop, there are more than 30 of them, or the
+// joint search settles too many labels per depot to save work.
 
 import type { PeriodNetwork } from './period-networks';
 import { laneFloors } from '../headroom';
@@ -71,7 +72,7 @@ function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState
   for (let e = 0; e < pn.record.length; e++) offer(state, pn.record[e], floors.floor[e], floors.net[e], pn.periods[0]);
 }
 
-/** All maximal networks of a class in one search per destination; false when their union has a loop. */
+/** All maximal networks of a class in one search per destination; false when their union has a loop or the labels do not pay. */
 function together(maximal: Maximal, state: FloorState): boolean {
   // One masked lane per (row, net under the cuts): the bits of the networks holding the row at that net.
   const index = new Map<string, number>();
@@ -103,7 +104,7 @@ function together(maximal: Maximal, state: FloorState): boolean {
     net: Float64Array.from(net),
     mask: Int32Array.from(mask),
     row: Int32Array.from(row),
-  });
+  }, maximal.length);
   if (found === null) return false;
   const earliest = (bits: number) => {
     let period = Infinity;
