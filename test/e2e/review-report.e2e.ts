@@ -53,7 +53,7 @@ describe('calendar review and its report', () => {
 
     const printed = await session.context.newPage();
     await printed.setContent(html);
-    const pages = await pdfPages(await printed.pdf({ format: 'A4', landscape: true, printBackground: true }));
+    const pages = await pdfPages(new Uint8Array(await printed.pdf({ format: 'A4', landscape: true, printBackground: true })));
     await printed.close();
     expect(pages.length).toBeGreaterThanOrEqual(1);
     const all = pages.join(' ');
