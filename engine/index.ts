@@ -44,6 +44,8 @@ export * from './planning/route-breakdown';
 export * from './export/lanes-csv';
 export * from './export/loops-csv';
 export * from './export/routes-csv';
+export * from './export/routes-json';
+export * from './report/route-totals';
 export * from './export/geojson';
 export * from './export/geojson-text';
 export * from './workspace/document';

@@ -3,7 +3,7 @@
 
 import { LanewrightError } from '../../engine/index';
 import { parseArgs, UsageError } from './args';
-import { writeFileAtomic } from '../workspace/atomic-write';
+import { openAtomicFileStream, writeFileAtomic, type AtomicFileStream } from '../workspace/atomic-write';
 import { LOAD_NETWORK_USAGE } from './load-network';
 import { routesFlags, runRoutes } from './commands/routes';
 import { checkFlags, runCheck } from './commands/check';
@@ -14,6 +14,10 @@ import { dispatchFlags, runDispatch } from './commands/dispatch';
 
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
+  /**
+   * Writes text now: to stdout, or with --out to a temporary file renamed over the target once the
+   * command has succeeded. Nothing is kept in memory, so output of any size can be written in chunks.
+   */
   write(text: string): void;
   /**
    * Queues a whole output file; every file is written atomically once the command has succeeded,
@@ -26,7 +30,8 @@ export interface CommandOutput {
 }
 
 const USAGE = `usage:
-  lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--max-legs K] [--json] [--out FILE] [--timings]
+  lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--to DEPOT_ID,...] [--no-paths] [--max-legs K] [--json]
+                   [--out FILE] [--timings]
   lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
   lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
                     [--loops-out FILE] [--geojson-out FILE]
@@ -61,18 +66,32 @@ export async function main(argv: readonly string[]): Promise<number> {
     if (!command) throw new UsageError(`unknown command "${word ?? ''}" (try: ${Object.keys(COMMANDS).join(', ')})`);
     const args = parseArgs(argv, new Set(command.flags));
     const outPath = args.values.get('out');
-    const chunks: string[] = [];
+    // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
+    const opened: { file: AtomicFileStream | null } = { file: null };
     const files: [path: string, text: string, done?: string][] = [];
     const output: CommandOutput = {
-      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(text)),
+      write: (text) => {
+        if (!outPath) {
+          process.stdout.write(text);
+          return;
+        }
+        opened.file ??= openAtomicFileStream(outPath);
+        opened.file.write(text);
+      },
       writeFile: (path, text, done) => files.push([path, text, done]),
       warn: (line) => process.stderr.write(line + '\n'),
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
-    const status = command.run(args, output);
-    // The same atomic write as workspace saves (temporary file, fsync, rename, clean-up on failure):
+    let status: number;
+    try {
+      status = command.run(args, output);
+    } catch (error) {
+      opened.file?.abort();
+      throw error;
+    }
+    // The same guarantees as workspace saves (temporary file, fsync, rename, clean-up on failure):
     // a failed or interrupted run never leaves half a report where a spreadsheet will read it.
-    if (outPath) files.unshift([outPath, chunks.join('')]);
+    if (outPath) await (opened.file ?? openAtomicFileStream(outPath)).commit();
     for (const [path, text, done] of files) {
       await writeFileAtomic(path, text);
       if (done) process.stdout.write(`wrote ${done}\n`);
