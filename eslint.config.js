@@ -14,7 +14,7 @@ import { builtinModules } from 'node:module';
  */
 const ENGINE_ORDER = [
   ['errors', 'text'],
-  ['money', 'io', 'geo'],
+  ['money', 'io', 'geo', 'json'],
   ['network'],
   ['import'],
   ['planning'],
