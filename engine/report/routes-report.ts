@@ -232,19 +232,13 @@ export function routesReportHeader(paths: boolean): string[] {
 /** One row of the flat table, in the columns of `routesReportHeader(paths)`. */
 export function routesReportCells(row: RouteRowSummary | DepotRouteRow, paths: boolean): (string | number)[] {
   const b = row.breakdown;
-  const head = [row.id, row.name, row.status, row.cost ?? '', row.legs ?? '', row.via ?? '', row.via_lane ?? ''];
-  const breakdown = [
-    b?.toll ?? '',
-    b?.fuel ?? '',
-    b?.fees ?? '',
-    b?.rebate ?? '',
-    b?.distance_km ?? '',
-    b?.drive_minutes ?? '',
-    b ? (b.over_drive_limit ? 'yes' : 'no') : '',
-  ];
-  if (!paths) return [...head, ...breakdown];
-  const full = row as DepotRouteRow;
-  return [...head, full.path.join('>'), ...breakdown, full.lanes.join('>'), full.refs.some((r) => r !== '') ? full.refs.join('>') : ''];
+  const cells: (string | number)[] = [row.id, row.name, row.status, row.cost ?? '', row.legs ?? '', row.via ?? '', row.via_lane ?? ''];
+  const full = paths ? (row as DepotRouteRow) : null;
+  if (full) cells.push(full.path.join('>'));
+  if (b) cells.push(b.toll, b.fuel, b.fees, b.rebate, b.distance_km ?? '', b.drive_minutes ?? '', b.over_drive_limit ? 'yes' : 'no');
+  else cells.push('', '', '', '', '', '', '');
+  if (full) cells.push(full.lanes.join('>'), full.refs.some((r) => r !== '') ? full.refs.join('>') : '');
+  return cells;
 }
 
 /** Flat table of the report: a header and one row per depot, the breakdown after the path. */
