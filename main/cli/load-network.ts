@@ -15,11 +15,7 @@ import { readTextChunks } from './read-chunks';
 /** Boolean flags every command that loads a network accepts; list them among the command's flags. */
 export const LOAD_NETWORK_FLAGS = ['skip-invalid'];
 
-/** Usage text of the options read here, for the help screen. */
-export const LOAD_NETWORK_USAGE =
-  '[--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid] [--drive-limit eu|us|HOURS] [--detour-factor F]\n' +
-  '    [--fuel-consumption L_PER_100KM] [--fuel-price PRICE] [--average-speed KMH] [--default-toll AMOUNT]\n' +
-  '    [--currency CODE] [--rates CODE=RATE,...]';
+export { LOAD_NETWORK_USAGE } from './usage';
 
 function positive(args: ParsedArgs, name: string): number | undefined {
   const text = args.values.get(name);

@@ -1,16 +1,10 @@
 // Command dispatch for `lanewright`. Known errors print as one line on stderr with a non-zero exit
-// status; only a genuine bug shows a stack trace.
+// status; only a genuine bug shows a stack trace. Everything but the usage text is imported when a
+// command needs it, so `--help` starts without loading the engine.
 
-import { LanewrightError } from '../../engine/index';
-import { parseArgs, UsageError } from './args';
-import { openAtomicFileStream, writeFileAtomic, type AtomicFileStream } from '../workspace/atomic-write';
-import { LOAD_NETWORK_USAGE } from './load-network';
-import { routesFlags, runRoutes } from './commands/routes';
-import { checkFlags, runCheck } from './commands/check';
-import { exportFlags, runExport } from './commands/export';
-import { auditFlags, runAudit } from './commands/audit';
-import { compareFlags, runCompare } from './commands/compare';
-import { dispatchFlags, runDispatch } from './commands/dispatch';
+import type { ParsedArgs } from './args';
+import type { AtomicFileStream } from '../workspace/atomic-write';
+import { USAGE } from './usage';
 
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
@@ -29,29 +23,19 @@ export interface CommandOutput {
   timing(figures: Record<string, number>): void;
 }
 
-const USAGE = `usage:
-  lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--to DEPOT_ID,...] [--no-paths] [--max-legs K] [--json]
-                   [--out FILE] [--timings]
-  lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
-  lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
-                    [--loops-out FILE] [--geojson-out FILE]
-  lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
-                   [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
-  lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
-  lanewright dispatch --depots FILE --lanes FILE --loads FILE [--vehicles FILE] [--alternatives K] [--json] [--out FILE] [--timings]
-  Planning options (routes, check, export, audit, compare, dispatch):
-    ${LOAD_NETWORK_USAGE}
+interface Command {
+  flags: string[];
+  run: (args: ParsedArgs, out: CommandOutput) => number;
+}
 
-Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
-local regulations apply; defer to local codes and licensed practice.`;
-
-const COMMANDS: Record<string, { flags: string[]; run: (args: ReturnType<typeof parseArgs>, out: CommandOutput) => number }> = {
-  routes: { flags: routesFlags, run: runRoutes },
-  check: { flags: checkFlags, run: runCheck },
-  export: { flags: exportFlags, run: runExport },
-  audit: { flags: auditFlags, run: runAudit },
-  compare: { flags: compareFlags, run: runCompare },
-  dispatch: { flags: dispatchFlags, run: runDispatch },
+// Each command's module, imported only when that command runs.
+const COMMANDS: Record<string, () => Promise<Command>> = {
+  routes: async () => import('./commands/routes').then((m) => ({ flags: m.routesFlags, run: m.runRoutes })),
+  check: async () => import('./commands/check').then((m) => ({ flags: m.checkFlags, run: m.runCheck })),
+  export: async () => import('./commands/export').then((m) => ({ flags: m.exportFlags, run: m.runExport })),
+  audit: async () => import('./commands/audit').then((m) => ({ flags: m.auditFlags, run: m.runAudit })),
+  compare: async () => import('./commands/compare').then((m) => ({ flags: m.compareFlags, run: m.runCompare })),
+  dispatch: async () => import('./commands/dispatch').then((m) => ({ flags: m.dispatchFlags, run: m.runDispatch })),
 };
 
 /** Runs the command line; returns the exit status. */
@@ -62,8 +46,11 @@ export async function main(argv: readonly string[]): Promise<number> {
       process.stdout.write(USAGE + '\n');
       return argv.length === 0 ? 2 : 0;
     }
-    const command = word === undefined ? undefined : COMMANDS[word];
-    if (!command) throw new UsageError(`unknown command "${word ?? ''}" (try: ${Object.keys(COMMANDS).join(', ')})`);
+    const { parseArgs, UsageError } = await import('./args');
+    const load = word === undefined ? undefined : Object.hasOwn(COMMANDS, word) ? COMMANDS[word] : undefined;
+    if (!load) throw new UsageError(`unknown command "${word ?? ''}" (try: ${Object.keys(COMMANDS).join(', ')})`);
+    const command = await load();
+    const { openAtomicFileStream, writeFileAtomic } = await import('../workspace/atomic-write');
     const args = parseArgs(argv, new Set(command.flags));
     const outPath = args.values.get('out');
     // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
@@ -98,6 +85,7 @@ export async function main(argv: readonly string[]): Promise<number> {
     }
     return status;
   } catch (error) {
+    const [{ LanewrightError }, { UsageError }] = await Promise.all([import('../../engine/index'), import('./args')]);
     if (error instanceof LanewrightError) {
       process.stderr.write(`lanewright: ${error.message}\n`);
       return error instanceof UsageError ? 2 : 1;
