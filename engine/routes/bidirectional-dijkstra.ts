@@ -161,6 +161,10 @@ export function bidirectionalDijkstra(
         const nd = dx + weights[p];
         if (nd === Infinity) continue;
         const y = outTo[p];
+        if (bStamp[y] === run && nd + bDist[y] < best) best = nd + bDist[y];
+        // Past the other side's radius nothing cheaper can come through y: a cheaper rest of the
+        // route from y would lie inside the other side's settled ball, and was just counted above.
+        if (nd + bKey[0] >= best) continue;
         if (fStamp[y] === run) {
           if (!(nd < fDist[y])) continue;
           fDist[y] = nd;
@@ -171,7 +175,6 @@ export function bidirectionalDijkstra(
           fDist[y] = nd;
           siftUp(fHeap, fKey, fPos, fCount++, y, nd);
         }
-        if (bStamp[y] === run && nd + bDist[y] < best) best = nd + bDist[y];
       }
     } else {
       const x = bHeap[0];
@@ -181,6 +184,10 @@ export function bidirectionalDijkstra(
         const nd = dx + inCost[p];
         if (nd === Infinity) continue;
         const y = inFrom[p];
+        if (fStamp[y] === run && nd + fDist[y] < best) best = nd + fDist[y];
+        // Past the other side's radius nothing cheaper can come through y: a cheaper rest of the
+        // route from y would lie inside the other side's settled ball, and was just counted above.
+        if (nd + fKey[0] >= best) continue;
         if (bStamp[y] === run) {
           if (!(nd < bDist[y])) continue;
           bDist[y] = nd;
@@ -191,7 +198,6 @@ export function bidirectionalDijkstra(
           bDist[y] = nd;
           siftUp(bHeap, bKey, bPos, bCount++, y, nd);
         }
-        if (fStamp[y] === run && nd + fDist[y] < best) best = nd + fDist[y];
       }
     }
   }
