@@ -22,6 +22,8 @@ interface Run {
   ms: number;
   /** Peak resident memory, when /usr/bin/time is there to measure it. */
   mb?: number;
+  /** User + system CPU seconds (all threads), from the same; less disturbed than wall time on a busy machine. */
+  cpuS?: number;
   ok: boolean;
   /** The command's own timing line, or the first line of its error. */
   detail: string;
@@ -39,11 +41,14 @@ function measure(args: string[], out: string | null): Run {
   });
   const ms = performance.now() - start;
   const rss = /Maximum resident set size \(kbytes\): (\d+)/.exec(result.stderr)?.[1];
+  const user = /User time \(seconds\): ([\d.]+)/.exec(result.stderr)?.[1];
+  const system = /System time \(seconds\): ([\d.]+)/.exec(result.stderr)?.[1];
   const timing = result.stderr.split('\n').find((line) => line.startsWith('{'));
   const failure = result.stderr.split('\n').find((line) => /heap|RangeError|FATAL|lanewright:/.test(line));
   const outputMb = out && existsSync(out) ? statSync(out).size / 2 ** 20 : 0;
   if (out) rmSync(out, { force: true });
-  return { ms, mb: rss ? Number(rss) / 1024 : undefined, ok: result.status === 0, detail: result.status === 0 ? (timing ?? '') : (failure ?? `exit ${result.status}`), outputMb };
+  const cpuS = user && system ? Number(user) + Number(system) : undefined;
+  return { ms, mb: rss ? Number(rss) / 1024 : undefined, cpuS, ok: result.status === 0, detail: result.status === 0 ? (timing ?? '') : (failure ?? `exit ${result.status}`), outputMb };
 }
 
 export const suite: BenchSuite = {
@@ -65,7 +70,8 @@ export const suite: BenchSuite = {
           const baselineArgs = [`--max-old-space-size=${BASELINE_HEAP_MB}`, '--import', 'tsx', 'test/bench/routes-path-walk-command.ts', files.depots, files.lanes, files.origin, paths ? 'paths' : 'no-paths', 'csv', out];
           const baseline = measure(baselineArgs, out);
           const name = `routes CSV ${paths ? 'with paths' : '--no-paths'}, ${label}`;
-          const say = (r: Run) => (r.ok ? `${r.outputMb.toFixed(0)} MB written, ${r.detail}` : `FAILED: ${r.detail}`);
+          const cpu = (r: Run) => (r.cpuS === undefined ? '' : `${r.cpuS.toFixed(1)} s CPU, `);
+          const say = (r: Run) => cpu(r) + (r.ok ? `${r.outputMb.toFixed(0)} MB written, ${r.detail}` : `FAILED: ${r.detail}`);
           record({
             case: `${name}: wall`,
             engine: engine.ms,
