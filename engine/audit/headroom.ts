@@ -1,12 +1,13 @@
 // Rebate headroom for every lane: the lowest net cost a lane u -> v can carry before some loop
 // through it pays, given all other lanes, is -(cheapest cost from v back to u); with no way back
 // there is no limit. One label-correcting solve gives Johnson's potentials; then each distinct
-// (v, u) pair gets a bidirectional Dijkstra on the reweighted costs, which settles two small balls
-// around v and u instead of most of the network (a Dijkstra per destination, kept in
-// headroom-per-destination.ts as the reference, has to reach the farthest origin of any lane into v).
+// (v, u) pair gets a bidirectional Dijkstra on the reweighted costs (the forward ball from v shared by
+// all of v's origins), which settles two small balls around v and u instead of most of the network
+// (a Dijkstra per destination, kept in headroom-per-destination.ts as the reference, has to reach
+// the farthest origin of any lane into v).
 
 import type { Network } from '../network/types';
-import { bidirectionalDijkstra, createBidirectionalWorkspace, reverseLanes } from '../routes/bidirectional-dijkstra';
+import { createBidirectionalWorkspace, reverseLanes, searchTo, startForward } from '../routes/bidirectional-dijkstra';
 import { johnsonReweighting, restoreCost } from '../routes/johnson-potentials';
 
 export interface HeadroomOptions {
@@ -92,8 +93,10 @@ export function laneFloors(network: Network, options: HeadroomOptions = {}): Lan
   const every = Math.max(1, Math.floor(total / 100));
   options.onProgress?.(0, total);
   for (let k = 0; k < total; k++) {
-    // floor(u -> v) = -(cheapest v -> u): search from the lane's destination back to its origin.
-    back[k] = bidirectionalDijkstra(network, reweighted, reverse, pairDestination[k], pairOrigin[k], workspace);
+    // floor(u -> v) = -(cheapest v -> u): search from the lane's destination back to its origin. The
+    // pairs come grouped by destination, so its forward ball is grown once for all its origins.
+    if (k === 0 || pairDestination[k] !== pairDestination[k - 1]) startForward(workspace, pairDestination[k]);
+    back[k] = searchTo(network, reweighted, reverse, pairOrigin[k], workspace);
     settled += workspace.settled;
     if ((k + 1) % every === 0 || k + 1 === total) options.onProgress?.(k + 1, total);
   }

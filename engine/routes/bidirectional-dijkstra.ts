@@ -1,10 +1,12 @@
-// Bidirectional Dijkstra for one origin-destination pair on lane costs that are never negative
-// (Johnson-reweighted): a forward search from the origin over lanes out of each depot and a backward
-// search from the destination over lanes into it, each growing the side with the smaller heap, stopped
-// once the two smallest heap keys add up to at least the best meeting found (Pohl, "Bi-directional
-// search", Machine Intelligence 6, 1971; the stopping rule as usually taught for non-negative costs).
-// A search settles the depots of two small balls instead of most of the network, and the workspace
-// is reset by run stamps, so thousands of searches allocate nothing and clear nothing.
+// Bidirectional Dijkstra on lane costs that are never negative (Johnson-reweighted): a forward
+// search from the origin over lanes out of each depot and a backward search from the destination over
+// lanes into it, growing the side with the smaller radius, stopped once the two smallest heap keys
+// add up to at least the best meeting found (Pohl, "Bi-directional search", Machine Intelligence 6,
+// 1971; the stopping rule as usually taught for non-negative costs). The forward side may be kept for
+// several destinations from one origin (`startForward`, then `searchTo` per destination): what it has
+// settled stays exact, so later searches start from the ball earlier ones grew. Depots reached past
+// the other side's radius are not queued on the backward side (no cheaper route can pass them). The
+// workspace is reset by run stamps, so thousands of searches allocate nothing and clear nothing.
 
 import { MoneyOverflowError } from '../errors';
 import type { Network } from '../network/types';
@@ -51,8 +53,11 @@ export interface BidirectionalWorkspace {
   readonly bHeap: Int32Array;
   readonly bKey: Float64Array;
   readonly bPos: Int32Array;
-  run: number;
-  /** Depots settled by the last search (both sides). */
+  /** Stamp of the current forward search (one per origin) and of the current backward one (one per destination). */
+  fRun: number;
+  bRun: number;
+  fCount: number;
+  /** Depots settled by the last `searchTo` (both sides). */
   settled: number;
 }
 
@@ -69,7 +74,9 @@ export function createBidirectionalWorkspace(depotCount: number): BidirectionalW
     bHeap: new Int32Array(n),
     bKey: new Float64Array(n),
     bPos: new Int32Array(n),
-    run: 0,
+    fRun: 0,
+    bRun: 0,
+    fCount: 0,
     settled: 0,
   };
 }
@@ -113,65 +120,67 @@ function siftUp(heap: Int32Array, key: Float64Array, pos: Int32Array, at: number
   pos[d] = at;
 }
 
+/** Starts a forward search from `origin`; every `searchTo` until the next start shares it. */
+export function startForward(ws: BidirectionalWorkspace, origin: number): void {
+  const run = ++ws.fRun;
+  ws.fStamp[origin] = run;
+  ws.fDist[origin] = 0;
+  ws.fHeap[0] = origin;
+  ws.fKey[0] = 0;
+  ws.fPos[origin] = 0;
+  ws.fCount = 1;
+}
+
 /**
- * Cheapest cost from `origin` to `destination` with costs `weights` (per CSR position, all >= 0,
- * +Infinity = closed) and `reverse` built from the same weights; +Infinity when there is no route.
- * Throws MoneyOverflowError past the exact range. The two sides are written out separately: this
- * runs once per lane in an audit, and one shape per loop keeps it fast.
+ * Cheapest cost from the origin of the forward search started last to `destination`, with costs
+ * `weights` (per CSR position, all >= 0, +Infinity = closed) and `reverse` built from the same
+ * weights; +Infinity when there is no route. Throws MoneyOverflowError past the exact range. The two
+ * sides are written out separately: this runs once per lane in an audit, and one shape per loop keeps it fast.
  */
-export function bidirectionalDijkstra(
-  network: Network,
-  weights: Float64Array,
-  reverse: ReverseLanes,
-  origin: number,
-  destination: number,
-  ws: BidirectionalWorkspace,
-): number {
-  ws.settled = 0;
-  if (origin === destination) return 0;
+export function searchTo(network: Network, weights: Float64Array, reverse: ReverseLanes, destination: number, ws: BidirectionalWorkspace): number {
   const { outStart, outTo } = network;
   const { inStart, inFrom, inCost } = reverse;
   const { fDist, fStamp, fHeap, fKey, fPos, bDist, bStamp, bHeap, bKey, bPos } = ws;
-  const run = ++ws.run;
+  const fRun = ws.fRun;
+  const bRun = ++ws.bRun;
   const MAX = Number.MAX_SAFE_INTEGER;
-  fStamp[origin] = run;
-  fDist[origin] = 0;
-  fHeap[0] = origin;
-  fKey[0] = 0;
-  fPos[origin] = 0;
-  let fCount = 1;
-  bStamp[destination] = run;
+  let fCount = ws.fCount;
+  bStamp[destination] = bRun;
   bDist[destination] = 0;
   bHeap[0] = destination;
   bKey[0] = 0;
   bPos[destination] = 0;
   let bCount = 1;
-  let best = Infinity;
+  // The forward ball may already reach the destination (a label is a route, so a bound).
+  let best = fStamp[destination] === fRun ? fDist[destination] : Infinity;
   let settled = 0;
 
-  while (fCount > 0 && bCount > 0 && fKey[0] + bKey[0] < best) {
+  for (;;) {
+    // An empty forward heap means every depot the origin reaches is settled: its labels are exact.
+    const fTop = fCount > 0 ? fKey[0] : Infinity;
+    if (bCount === 0 || fTop + bKey[0] >= best) break;
     settled++;
-    // Grow the side with fewer queued depots: the two balls stay about the same size. A depot
-    // already settled on a side is never improved again there, because costs are >= 0.
-    if (fCount <= bCount) {
+    // Grow the side with the smaller radius: the forward ball, shared by every destination of this
+    // origin, then grows only as far as some destination needs (measured on the bench networks, this
+    // settles fewer depots than balancing the heap sizes). A depot already settled on a side is never
+    // improved again there, because costs are >= 0.
+    if (fCount > 0 && fTop <= bKey[0]) {
       const x = fHeap[0];
-      const dx = fKey[0];
+      const dx = fTop;
       if (--fCount > 0) siftDownFromTop(fHeap, fKey, fPos, fCount);
+      // Not pruned: later destinations share this side, so it settles in plain Dijkstra order.
       for (let p = outStart[x], end = outStart[x + 1]; p < end; p++) {
         const nd = dx + weights[p];
         if (nd === Infinity) continue;
         const y = outTo[p];
-        if (bStamp[y] === run && nd + bDist[y] < best) best = nd + bDist[y];
-        // Past the other side's radius nothing cheaper can come through y: a cheaper rest of the
-        // route from y would lie inside the other side's settled ball, and was just counted above.
-        if (nd + bKey[0] >= best) continue;
-        if (fStamp[y] === run) {
+        if (bStamp[y] === bRun && nd + bDist[y] < best) best = nd + bDist[y];
+        if (fStamp[y] === fRun) {
           if (!(nd < fDist[y])) continue;
           fDist[y] = nd;
           siftUp(fHeap, fKey, fPos, fPos[y], y, nd);
         } else {
           if (nd > MAX) throw new MoneyOverflowError('route cost in bidirectional search');
-          fStamp[y] = run;
+          fStamp[y] = fRun;
           fDist[y] = nd;
           siftUp(fHeap, fKey, fPos, fCount++, y, nd);
         }
@@ -184,23 +193,37 @@ export function bidirectionalDijkstra(
         const nd = dx + inCost[p];
         if (nd === Infinity) continue;
         const y = inFrom[p];
-        if (fStamp[y] === run && nd + fDist[y] < best) best = nd + fDist[y];
-        // Past the other side's radius nothing cheaper can come through y: a cheaper rest of the
-        // route from y would lie inside the other side's settled ball, and was just counted above.
-        if (nd + fKey[0] >= best) continue;
-        if (bStamp[y] === run) {
+        if (fStamp[y] === fRun && nd + fDist[y] < best) best = nd + fDist[y];
+        // Past the forward radius nothing cheaper can come through y: a cheaper start of the route
+        // to y would lie inside the forward side's settled ball, and was just counted above.
+        if (nd + fTop >= best) continue;
+        if (bStamp[y] === bRun) {
           if (!(nd < bDist[y])) continue;
           bDist[y] = nd;
           siftUp(bHeap, bKey, bPos, bPos[y], y, nd);
         } else {
           if (nd > MAX) throw new MoneyOverflowError('route cost in bidirectional search');
-          bStamp[y] = run;
+          bStamp[y] = bRun;
           bDist[y] = nd;
           siftUp(bHeap, bKey, bPos, bCount++, y, nd);
         }
       }
     }
   }
+  ws.fCount = fCount;
   ws.settled = settled;
   return best;
+}
+
+/** Cheapest cost from `origin` to `destination` (see searchTo); +Infinity when there is no route. */
+export function bidirectionalDijkstra(
+  network: Network,
+  weights: Float64Array,
+  reverse: ReverseLanes,
+  origin: number,
+  destination: number,
+  ws: BidirectionalWorkspace,
+): number {
+  startForward(ws, origin);
+  return searchTo(network, weights, reverse, destination, ws);
 }
