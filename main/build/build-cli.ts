@@ -4,7 +4,7 @@
 // `prepare` script, so `npm install` and `npm ci` build it; main/cli/lanewright.mjs uses it while
 // no source it was built from is newer (main/cli/fresh-bundle.mjs), else falls back to tsx.
 
-import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build, type Metafile } from 'esbuild';
@@ -36,7 +36,8 @@ export interface CliBuild {
 /** Builds the bundle and its manifest (inputs.json) into `outDir`. */
 export async function buildCli(outDir: string = CLI_OUT_DIR): Promise<CliBuild> {
   const builtAt = Date.now();
-  rmSync(outDir, { recursive: true, force: true });
+  // Written over the previous build, not after deleting it: a command already running from it may
+  // still import its chunks. Chunks no longer part of the bundle are removed afterwards.
   mkdirSync(outDir, { recursive: true });
   const result = await build({
     absWorkingDir: REPO_ROOT,
@@ -55,6 +56,11 @@ export async function buildCli(outDir: string = CLI_OUT_DIR): Promise<CliBuild> 
     logLevel: 'warning',
     define: { 'process.env.NODE_ENV': '"production"' },
   });
+  const written = new Set(Object.keys(result.metafile.outputs).map((out) => path.resolve(REPO_ROOT, out)));
+  const chunks = path.join(outDir, 'chunks');
+  for (const name of existsSync(chunks) ? readdirSync(chunks) : []) {
+    if (!written.has(path.join(chunks, name))) rmSync(path.join(chunks, name), { force: true });
+  }
   const inputs = Object.keys(result.metafile.inputs)
     .filter((input) => !input.includes('node_modules/'))
     .sort();
