@@ -2,7 +2,7 @@
 // the previous depot and lane, path and breakdown) as RFC 4180 CSV, whole or as a stream of chunks.
 
 import { formatCsvRows } from '../io/csv-papaparse';
-import { routesReportCells, routesReportHeader, routesReportRows, type RoutesReport, type RoutesReportStream } from '../report/routes-report';
+import { routesReportHeader, routesReportRows, type RoutesReport, type RoutesReportStream } from '../report/routes-report';
 
 /** Characters gathered before a chunk is handed on: large enough that writes are few. */
 export const ROUTES_CHUNK_CHARS = 1 << 20;
@@ -19,8 +19,8 @@ export function routesCsv(report: RoutesReport): string {
 export function* routesCsvChunks(stream: RoutesReportStream, chunkChars = ROUTES_CHUNK_CHARS): Generator<string> {
   let batch: (string | number)[][] = [routesReportHeader(stream.paths)];
   let size = 0;
-  for (const row of stream.rows()) {
-    const cells = routesReportCells(row, stream.paths);
+  for (let i = 0; i < stream.depots.length; i++) {
+    const cells = stream.cells(stream.depots[i]);
     batch.push(cells);
     for (const cell of cells) size += typeof cell === 'string' ? cell.length + 1 : 12;
     if (size >= chunkChars) {

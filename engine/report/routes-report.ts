@@ -99,6 +99,8 @@ export interface RoutesReportStream {
   rows(): Generator<RouteRowSummary | DepotRouteRow>;
   /** One depot's row with its path. */
   fullRow(d: number): DepotRouteRow;
+  /** One depot's row of the flat table (columns of `routesReportHeader(paths)`), the same as routesReportCells of its row. */
+  cells(d: number): (string | number)[];
 }
 
 // Totals and the lane into each depot, from either kind of solve.
@@ -182,15 +184,68 @@ export function routesReportStream(network: Network, solved: RouteTree | LegLimi
   };
   // Unbounded depots never get a path: following predecessors there would circle a rebate loop.
   const fullRow = (d: number): DepotRouteRow => {
-    const { breakdown, ...head } = summary(d);
+    const s = summary(d);
     const path = solved.status[d] === STATUS_REACHABLE ? pathOf(d) : null;
+    // Built in one literal, in the order the JSON shows (no spread: this runs once per depot).
     return {
-      ...head,
+      id: s.id,
+      name: s.name,
+      status: s.status,
+      cost_minor: s.cost_minor,
+      cost: s.cost,
+      legs: s.legs,
+      via: s.via,
+      via_lane: s.via_lane,
       path: path ? path.depots.map((x) => network.depotIds[x]) : [],
       lanes: path ? path.lanes.map((e) => network.laneRow[e]) : [],
       refs: path ? path.lanes.map((e) => network.laneRef[e] ?? '') : [],
-      breakdown,
+      breakdown: s.breakdown,
     };
+  };
+
+  // The flat row straight from the arrays: no row object and no array per path, because a CSV of
+  // every path of a large network writes hundreds of millions of legs.
+  const { depotIds, laneRow, laneRef } = network;
+  const cells = (d: number): (string | number)[] => {
+    const reachable = solved.status[d] === STATUS_REACHABLE;
+    const lane = reachable ? viaLane[d] : -1;
+    const row: (string | number)[] = [
+      depotIds[d],
+      network.depotNames[d],
+      statusName(solved.status[d]),
+      reachable ? money(solved.cost[d]) : '',
+      reachable ? solved.legs[d] : '',
+      lane === -1 ? '' : depotIds[network.laneFrom[lane]],
+      lane === -1 ? '' : laneRow[lane],
+    ];
+    const path = paths && reachable ? pathOf(d) : null;
+    if (paths) {
+      let text = '';
+      if (path) for (let i = 0; i < path.depots.length; i++) text += (i === 0 ? '' : '>') + depotIds[path.depots[i]];
+      row.push(text);
+    }
+    if (reachable) {
+      row.push(money(totals.toll[d]), money(totals.fuel[d]), money(totals.fees[d]), money(totals.rebate[d]));
+      row.push(roundedKm(totals.distanceKm[d]) ?? '', roundedMinutes(totals.driveMinutes[d]) ?? '', overLimit(d) ? 'yes' : 'no');
+    } else {
+      row.push('', '', '', '', '', '', '');
+    }
+    if (paths) {
+      let rows = '';
+      let refs = '';
+      let anyRef = false;
+      if (path) {
+        for (let i = 0; i < path.lanes.length; i++) {
+          const e = path.lanes[i];
+          const ref = laneRef[e];
+          if (ref !== undefined && ref !== '') anyRef = true;
+          rows += (i === 0 ? '' : '>') + laneRow[e];
+          refs += (i === 0 ? '' : '>') + (ref ?? '');
+        }
+      }
+      row.push(rows, anyRef ? refs : '');
+    }
+    return row;
   };
 
   return {
@@ -211,6 +266,7 @@ export function routesReportStream(network: Network, solved: RouteTree | LegLimi
       for (let i = 0; i < depots.length; i++) yield paths ? fullRow(depots[i]) : summary(depots[i]);
     },
     fullRow,
+    cells,
   };
 }
 

@@ -56,8 +56,8 @@ export const suite: BenchSuite = {
   run(record) {
     const folder = mkdtempSync(join(tmpdir(), 'lanewright-bench-routes-command-'));
     try {
-      const bundled = freshBundle(root, join(root, 'dist', 'cli')) !== null;
-      const launcher = bundled ? 'the bundle' : 'tsx (no fresh bundle: npm run build:cli)';
+      // Checked before each run: a source edited while the bench runs makes the launcher use tsx.
+      const launcher = () => (freshBundle(root, join(root, 'dist', 'cli')) !== null ? 'the bundle' : 'tsx (no fresh bundle: npm run build:cli)');
       const networks: [string, NetworkFiles][] = [
         ['grid 500x500 (250k depots, 998k lanes)', writeNetworkFiles(folder, 'grid', 500)],
         ['random 100k/1M', writeNetworkFiles(folder, 'random', 100_000, 1_000_000)],
@@ -66,6 +66,7 @@ export const suite: BenchSuite = {
         for (const paths of [false, true]) {
           const out = join(folder, 'routes.csv');
           const engineArgs = ['main/cli/lanewright.mjs', 'routes', '--depots', files.depots, '--lanes', files.lanes, '--from', files.origin, '--out', out, '--timings'];
+          const via = launcher();
           const engine = measure(paths ? engineArgs : [...engineArgs, '--no-paths'], out);
           const baselineArgs = [`--max-old-space-size=${BASELINE_HEAP_MB}`, '--import', 'tsx', 'test/bench/routes-path-walk-command.ts', files.depots, files.lanes, files.origin, paths ? 'paths' : 'no-paths', 'csv', out];
           const baseline = measure(baselineArgs, out);
@@ -78,7 +79,7 @@ export const suite: BenchSuite = {
             baseline: baseline.ms,
             unit: 'ms',
             target: files.depotCount === 250_000 && !paths ? 4_000 : undefined,
-            note: `engine via ${launcher}: ${say(engine)}; baseline (path walk, one string, tsx, ${BASELINE_HEAP_MB} MB heap): ${say(baseline)}`,
+            note: `engine via ${via}: ${say(engine)}; baseline (path walk, one string, tsx, ${BASELINE_HEAP_MB} MB heap): ${say(baseline)}`,
           });
           if (engine.mb !== undefined) {
             record({
@@ -93,6 +94,7 @@ export const suite: BenchSuite = {
       }
 
       // Start-up: the help screen from the bundle, from the sources through tsx, and bare Node.
+      const helpVia = launcher();
       const best = (args: string[]) => Math.min(...[0, 1, 2].map(() => measure(args, null).ms));
       const help = best(['main/cli/lanewright.mjs', '--help']);
       const script = "const { main } = await import('./main/cli/run.ts'); await main(['--help']);";
@@ -104,7 +106,7 @@ export const suite: BenchSuite = {
         baseline: viaTsx,
         unit: 'ms',
         target: 300,
-        note: `best of 3; engine via ${launcher}; baseline = the same help through tsx; bare node -e 0 takes ${bare.toFixed(0)} ms on this machine now`,
+        note: `best of 3; engine via ${helpVia}; baseline = the same help through tsx; bare node -e 0 takes ${bare.toFixed(0)} ms on this machine now`,
       });
     } finally {
       rmSync(folder, { recursive: true, force: true });

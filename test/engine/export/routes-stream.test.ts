@@ -41,6 +41,15 @@ describe('routes report stream', () => {
     expect(streamed).toEqual(parseCsvText(routesCsv(routesReport(net, tree, { driveLimitMinutes: 540 }))).rows);
     const [header, ...rows] = streamed;
     expect(rows).toHaveLength(net.depotCount);
+    // The same on a network with rebate loops (unbounded rows), with and without paths, and leg-limited.
+    const looped = randomPricedNetwork(9, 200, 700, true);
+    for (const solved of [cheapestRoutes(looped, 0), legLimitedRoutes(looped, 0, 5)]) {
+      const whole = parseCsvText(routesCsv(routesReport(looped, solved, { driveLimitMinutes: 540 }))).rows;
+      expect(parseCsvText([...routesCsvChunks(routesReportStream(looped, solved, { driveLimitMinutes: 540 }), CHUNK)].join('')).rows).toEqual(whole);
+      const withoutPaths = parseCsvText([...routesCsvChunks(routesReportStream(looped, solved, { driveLimitMinutes: 540, paths: false }), CHUNK)].join('')).rows;
+      const keep = whole[0].map((name, c) => (['path', 'lane_rows', 'lane_refs'].includes(name) ? -1 : c)).filter((c) => c !== -1);
+      expect(withoutPaths).toEqual(whole.map((row) => keep.map((c) => row[c])));
+    }
     // Every row names the depot before it and that lane's row: following them rebuilds each path.
     const column = (name: string) => header.indexOf(name);
     const byId = new Map(rows.map((r) => [r[column('id')], r]));
