@@ -71,6 +71,7 @@ export class InputFileError extends LanewrightError {
 export class ScenarioFormatError extends LanewrightError {
   constructor(
     readonly source: string,
+    /** JSON pointer of the offending field ('' = the whole document). */
     readonly path: string,
     readonly value: string | null,
     readonly reason: string,

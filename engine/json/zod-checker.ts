@@ -153,6 +153,10 @@ export const json = {
   anything() {
     return z.unknown();
   },
+  /** The schema, or `fallback` when the field is absent. */
+  optional<S extends z.ZodType, F extends z.output<S> | undefined>(schema: S, fallback: F) {
+    return schema.optional().transform((v) => (v === undefined ? fallback : v));
+  },
   /** The schema, or null. */
   nullable<S extends z.ZodType>(schema: S) {
     return schema.nullable();

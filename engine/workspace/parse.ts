@@ -53,10 +53,6 @@ const workspaceSchema = json.object({
  */
 export type ScenarioForm = 'memory' | 'stored';
 
-// Scenario errors name fields like "changes[2].lane.occurrence"; the workspace names JSON pointers.
-function pointerOf(path: string): string {
-  return path === '' ? '' : `/${path.replace(/\[(\d+)\]/g, '.$1').split('.').join('/')}`;
-}
 
 function readScenario(value: unknown, field: string, form: ScenarioForm): Scenario {
   try {
@@ -65,7 +61,7 @@ function readScenario(value: unknown, field: string, form: ScenarioForm): Scenar
     const { format: _format, version: _version, ...scenario } = value as Record<string, unknown>;
     return scenarioFromJson({ ...scenario, changes: withTollClasses(scenario.changes), format: SCENARIO_FORMAT, version: SCENARIO_VERSION }, field);
   } catch (error) {
-    if (error instanceof ScenarioFormatError) throw new JsonCheckFailure(`${field}${pointerOf(error.path)}`, error.value, error.reason);
+    if (error instanceof ScenarioFormatError) throw new JsonCheckFailure(`${field}${error.path}`, error.value, error.reason);
     throw error;
   }
 }

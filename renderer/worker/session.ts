@@ -37,6 +37,8 @@ export class WorkerSession {
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
   /** Names and SHA-256 of the texts last loaded, for the printable review (hashed as they arrive). */
   private files: ReviewedFile[] = [];
+  /** Settles once the loaded files' SHA-256 (named in the review report) are known. */
+  filesHashed: Promise<void> = Promise.resolve();
   private loads = 0;
 
   constructor(private readonly post: Post) {}
@@ -128,7 +130,9 @@ export class WorkerSession {
     progress('Compiling the network', 0.95);
     this.files = [message.depots, message.lanes].map((f) => ({ name: f.name, sha256: 'computing…' }));
     const load = ++this.loads;
-    void hashTexts([message.depots, message.lanes]).then((files) => load === this.loads && (this.files = files));
+    this.filesHashed = hashTexts([message.depots, message.lanes]).then((files) => {
+      if (load === this.loads) this.files = files;
+    });
     this.adopt(message.id, result, message.plan);
   }
 

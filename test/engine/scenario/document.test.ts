@@ -46,24 +46,24 @@ describe('scenario document', () => {
   it('names the field and value that are wrong', () => {
     const bad = (changes: unknown[]) => JSON.stringify({ format: 'lanewright-scenario', version: 1, name: 'x', changes });
     const e1 = formatError(() => parseScenarioDocument(bad([{ kind: 'set-amount', lane: key('A', 'B'), field: 'rebate', amountMinor: 12.5 }]), 'plan.json'));
-    expect([e1.source, e1.path, e1.value]).toEqual(['plan.json', 'changes[0].amountMinor', '12.5']);
+    expect([e1.source, e1.path, e1.value]).toEqual(['plan.json', '/changes/0/amountMinor', '12.5']);
     const e2 = formatError(() => parseScenarioDocument(bad([{ kind: 'close-lane', lane: { from: 'A', to: 'B', ref: null, occurrence: 0 } }])));
-    expect(e2.path).toBe('changes[0].lane.occurrence');
+    expect(e2.path).toBe('/changes/0/lane/occurrence');
     const e3 = formatError(() => parseScenarioDocument(bad([{ kind: 'set-validity', lane: key('A', 'B'), validFrom: '2025-02-30', validTo: null }])));
-    expect(e3.path).toBe('changes[0].validFrom');
+    expect(e3.path).toBe('/changes/0/validFrom');
     const e4 = formatError(() => parseScenarioDocument(bad([{ kind: 'set-validity', lane: key('A', 'B'), validFrom: '2025-05-01', validTo: '2025-04-01' }])));
-    expect(e4.path).toBe('changes[0].validTo');
+    expect(e4.path).toBe('/changes/0/validTo');
     const e5 = formatError(() => parseScenarioDocument(bad([{ kind: 'rename-lane', lane: key('A', 'B') }])));
-    expect(e5.path).toBe('changes[0].kind');
+    expect(e5.path).toBe('/changes/0/kind');
     const e6 = formatError(() => parseScenarioDocument(bad([{ kind: 'set-amount', lane: key('A', 'B'), field: 'rebate', amountMinor: -5 }])));
-    expect(e6.path).toBe('changes[0].amountMinor');
+    expect(e6.path).toBe('/changes/0/amountMinor');
     expect(formatError(() => parseScenarioDocument('{"format":')).path).toBe('');
-    expect(formatError(() => parseScenarioDocument('{"format":"something-else","version":1}')).path).toBe('format');
+    expect(formatError(() => parseScenarioDocument('{"format":"something-else","version":1}')).path).toBe('/format');
   });
 
   it('refuses a document from a newer version instead of half reading it', () => {
     const error = formatError(() => scenarioFromJson({ format: 'lanewright-scenario', version: SCENARIO_VERSION + 1, name: 'x', changes: [] }));
-    expect(error.path).toBe('version');
+    expect(error.path).toBe('/version');
   });
 
   it('withChange replaces an earlier edit of the same lane and field, keeps others', () => {

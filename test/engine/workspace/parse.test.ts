@@ -134,10 +134,9 @@ describe('parseWorkspace', () => {
     expect(JSON.parse(serializeWorkspace(checked)).scenarios[0].changes.at(-1)).toMatchObject({ vehicleClass: null });
   });
 
-  it('keeps unknown fields of an in-memory scenario out of the checked copy', () => {
-    const doc = sampleWorkspace() as any;
-    doc.scenarios[0].changes[1].extra = 1;
-    expect(checkWorkspace(doc, 'ipc').scenarios[0].changes[1]).not.toHaveProperty('extra');
+  it('refuses unknown fields inside a scenario as everywhere else, naming them', () => {
+    expect(failure(withField((d) => (d.scenarios[0].changes[1].extra = 1)))).toMatchObject({ field: '/scenarios/0/changes/1/extra', reason: 'unknown field' });
+    expect(failure(withField((d) => (d.scenarios[0].colour = 'red')))).toMatchObject({ field: '/scenarios/0/colour', reason: 'unknown field' });
   });
 
   it('checks scenarios: change kinds, lane keys, whole minor units, unique names, active scenario', () => {

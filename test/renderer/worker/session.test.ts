@@ -192,7 +192,7 @@ describe('scenarios that change the lane set', () => {
     const out: FromWorker[] = [];
     const session = new WorkerSession((m) => out.push(m));
     session.handle({ ...load('lanes-rebate-loop.csv'), plan: { date: '2026-11-01', vehicleClass: '' } } as ToWorker);
-    await new Promise((resolve) => setTimeout(resolve, 50)); // the files' SHA-256 are computed as they arrive
+    await session.filesHashed; // the files' SHA-256 are computed as they arrive
     session.handle({ kind: 'review', id: 2, scenario: null, fixBy: 'clause' });
     const reviewed = out.find((m) => m.kind === 'reviewed') as { review: ContractReviewView };
     expect(reviewed.review.loops).toEqual([]);
