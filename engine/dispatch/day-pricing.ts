@@ -1,13 +1,15 @@
 // The one place dispatch turns an import into a priced network for a (date, toll class, fuel
-// consumption): today through planNetwork, the same planning every command uses. Kept to one small
-// function so the pricing path can be switched without touching the planner.
+// consumption): the scenario's overlay planned by the planner's own rules (overlayNetwork), so a
+// load under a what-if is priced exactly as `compare`, the exports and the app price that lane.
+// Without a scenario the overlay is the lane table itself.
 
 import { LanewrightError } from '../errors';
-import { planNetwork } from '../planning/import-network';
 import type { ValidationItem } from '../import/types';
 import type { ImportResult } from '../planning/import-types';
 import type { Network } from '../network/types';
 import type { PlanningSettings } from '../planning/types';
+import type { LaneOverlay } from '../scenario/overlay';
+import { overlayNetwork } from '../scenario/overlay-network';
 
 export interface PricingKey {
   date: string;
@@ -18,7 +20,7 @@ export interface PricingKey {
 
 export interface PricedDay {
   network: Network;
-  /** Lane table row of each network lane. */
+  /** Overlay table row of each network lane (base rows keep their index; added lanes follow). */
   laneRecord: Int32Array;
   vehicleClass: string | null;
   /** Problems of planning this day and class beyond those of the import (lane rows left out). */
@@ -40,16 +42,16 @@ export function pricingKeyText(k: PricingKey): string {
   return `${k.date}|${k.vehicleClass ?? ''}|${k.fuelLitresPer100Km ?? ''}`;
 }
 
-/** Prices the lanes for one day, class and consumption. */
-export function priceDay(imported: ImportResult, key: PricingKey, settings: Partial<PlanningSettings>, skipInvalid: boolean): PricedDay {
+/** Prices the overlaid lanes for one day, class and consumption. */
+export function priceDay(imported: ImportResult, overlay: LaneOverlay, key: PricingKey, settings: Partial<PlanningSettings>, skipInvalid: boolean): PricedDay {
   const request = {
     date: key.date,
     vehicleClass: key.vehicleClass ?? undefined,
     settings: key.fuelLitresPer100Km === null ? settings : { ...settings, fuelLitresPer100Km: key.fuelLitresPer100Km },
   };
-  const planned = planNetwork(imported, request, { skipInvalid: true });
-  const before = imported.importReport.errors.length;
-  const problems = planned.report.errors.slice(before);
+  const lanesFile = imported.importReport.files.find((f) => f.kind === 'lanes')?.file;
+  const planned = overlayNetwork(overlay, { ...imported, lanesFile }, request);
+  const problems = planned.planProblems;
   if (problems.length > 0 && !skipInvalid) throw new DispatchPlanError(key, problems);
-  return { network: planned.network!, laneRecord: planned.plan.laneRecord, vehicleClass: planned.plan.vehicleClass, problems, notes: planned.plan.notes };
+  return { network: planned.network, laneRecord: planned.plan.laneRecord, vehicleClass: planned.plan.vehicleClass, problems, notes: planned.plan.notes };
 }

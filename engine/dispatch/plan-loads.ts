@@ -2,6 +2,7 @@
 // consumption, restriction profile) so one restricted solve serves a group, and one solve without
 // limits per (origin, date, class) tells what the limits cost and whether a load is blocked.
 // Statuses: planned, no-route, blocked (naming the limits), unbounded (naming the loop).
+// Under a what-if scenario every day is priced from the scenario's overlay (day-pricing.ts).
 
 import type { ImportResult } from '../planning/import-types';
 import type { LoadRecord } from '../import/loads-reader';
@@ -12,6 +13,8 @@ import { routeBreakdown, type RouteBreakdown } from '../planning/route-breakdown
 import type { PlanningSettings } from '../planning/types';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../routes/cheapest-routes';
 import { routePath } from '../routes/route-path';
+import { buildOverlay, type OverlayIndex } from '../scenario/overlay';
+import type { Scenario } from '../scenario/types';
 import { priceDay, pricingKeyText, type PricedDay, type PricingKey } from './day-pricing';
 import { canRepair, repairTree } from './restricted-repair';
 import { fewestClosedPath, fewestClosedTree, type FewestClosedTree } from './fewest-closed';
@@ -66,12 +69,18 @@ export interface DispatchOptions {
   alternatives?: number;
   /** Spur searches allowed per load for alternatives. */
   maxSearches?: number;
+  /** The what-if the loads are planned under (null = the lanes as the file has them). */
+  scenario?: Scenario | null;
+  /** The import's key index (overlayIndex), when the caller keeps one; saves counting keys again. */
+  overlayIndex?: OverlayIndex;
   /** Called after each group with loads done so far. */
   onProgress?: (done: number, total: number) => void;
 }
 
 export interface DispatchPlan {
   date: string;
+  /** The scenario's name, null when planned on the lanes as the file has them. */
+  scenario: string | null;
   currency: string;
   exponent: number;
   driveLimitMinutes: number | null;
@@ -93,7 +102,10 @@ interface GroupWork {
 export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], options: DispatchOptions): DispatchPlan {
   const settings = options.settings ?? {};
   const k = options.alternatives ?? 0;
-  const limits = imported.lanes.limits ?? null;
+  const scenario = options.scenario ?? null;
+  const overlay = buildOverlay(imported, scenario, options.overlayIndex);
+  // Limits by overlay row: base rows at their own index, a class copy keeps its row's limits.
+  const limits = overlay.table.limits ?? null;
   const days = new Map<string, PricedDay>();
   const plain = new Map<string, RouteTree>();
   const masks = new Map<string, Uint8Array | null>();
@@ -101,12 +113,13 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
   const repairable = new Map<RouteTree, boolean>();
   const warnings: string[] = [];
   const notes: string[] = [];
+  for (const p of overlay.problems) warnings.push(`scenario "${scenario?.name ?? ''}", change ${p.changeIndex + 1}: ${p.message}; not applied`);
   const stats = { groups: 0, restrictedSolves: 0, plainSolves: 0, pricedDays: 0 };
 
   // A vehicle's consumption only prices lanes whose fuel is blank (estimated); without such lanes it
   // must not split groups.
   let fuelEstimated = false;
-  for (let r = 0; r < imported.lanes.count && !fuelEstimated; r++) if (Number.isNaN(imported.lanes.fuel[r])) fuelEstimated = true;
+  for (let r = 0; r < overlay.table.count && !fuelEstimated; r++) if (Number.isNaN(overlay.table.fuel[r])) fuelEstimated = true;
 
   const groups = new Map<string, GroupWork>();
   loads.forEach((load, i) => {
@@ -123,7 +136,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     const text = pricingKeyText(key);
     let day = days.get(text);
     if (!day) {
-      day = priceDay(imported, key, settings, options.skipInvalid ?? false);
+      day = priceDay(imported, overlay, key, settings, options.skipInvalid ?? false);
       days.set(text, day);
       stats.pricedDays++;
       for (const p of day.problems) warnings.push(`${key.date}, class ${day.vehicleClass ?? '(default)'}: ${p.file}, row ${p.row}, column "${p.column}": ${p.message} (lane left out)`);
@@ -224,6 +237,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
   const network0 = days.values().next().value?.network ?? imported.network;
   return {
     date: options.date,
+    scenario: scenario?.name ?? null,
     currency: network0?.currency ?? imported.currency,
     exponent: network0?.exponent ?? imported.exponent,
     driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes,

@@ -11,6 +11,7 @@ import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { DEFAULT_LOADS_QUERY, loadCautions, queryLoads, toggleLoadSort, type LoadSortKey, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
 import type { DispatchView } from '../../worker/dispatch-loads';
 import type { NamedText, NetworkView } from '../../worker/protocol';
+import { hasChanges, type Scenario } from '../../model/scenario-edits';
 import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
 import { PRODUCT_NAME } from '../../../engine/index';
@@ -26,6 +27,8 @@ export interface LoadsPanelProps {
   network: NetworkView;
   /** Date for loads without one (the plan's dispatch date). */
   date: string;
+  /** The active what-if scenario; the loads are planned under it. */
+  scenario: Scenario;
   /** The routes to draw on the map for the selected load (null = none). */
   onDraw(routes: LoadRouteDrawing[] | null): void;
   onMessage(text: string): void;
@@ -45,7 +48,7 @@ const COLUMNS: { key: LoadSortKey; label: string; numeric?: boolean }[] = [
 
 const ALTERNATIVES = 3;
 
-export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: LoadsPanelProps) {
+export function LoadsPanel({ engine, host, network, date, scenario, onDraw, onMessage }: LoadsPanelProps) {
   const [files, setFiles] = useState<{ loads: NamedText; vehicles: NamedText | null } | null>(null);
   const [view, setView] = useState<DispatchView | null>(null);
   const [busy, setBusy] = useState(false);
@@ -59,7 +62,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
     setBusy(true);
     setProblem(null);
     engine
-      .track((onProgress) => engine.client.request('dispatch', { request: { ...next, date, alternatives: ALTERNATIVES, acceptPartial } }, onProgress), 'Planning the loads')
+      .track((onProgress) => engine.client.request('dispatch', { request: { ...next, date, alternatives: ALTERNATIVES, acceptPartial, scenario: hasChanges(scenario) ? scenario : null } }, onProgress), 'Planning the loads')
       .then((answer) => {
         setView(answer.result);
         const t = answer.result.report?.totals.all;
@@ -68,10 +71,10 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
       .catch((error: Error) => setProblem(error instanceof WorkCancelledError ? 'Planning the loads was stopped.' : error.message))
       .finally(() => setBusy(false));
   };
-  // A new network (import, re-plan) makes the plan stale: plan the same files again.
+  // A new network (import, re-plan) or another what-if makes the plan stale: plan the same files again.
   useEffect(() => {
     if (files) run(files, true);
-  }, [network]);
+  }, [network, scenario]);
   useEffect(() => () => onDraw(null), []);
 
   const pick = async (kind: 'loads' | 'vehicles') => {
@@ -158,6 +161,11 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
       )}
       {report && (
         <>
+          {report.scenario !== null && (
+            <p className="lw-warn" data-testid="loads-scenario">
+              Planned under the what-if scenario “{report.scenario}”, not the lanes as the file has them.
+            </p>
+          )}
           <div className="lw-table-tools" role="group" aria-label="Filter loads">
             <input type="search" aria-label="Filter loads" placeholder="Filter by load, depot, vehicle or reason" value={query.text} onChange={(e) => setQuery({ ...query, text: e.target.value })} />
             <select aria-label="Load status filter" value={query.status} onChange={(e) => setQuery({ ...query, status: e.target.value as LoadStatusWord | 'all' })}>
