@@ -3,7 +3,7 @@
 // sortable and filterable), the selected load's breakdown and why it is blocked, alternatives on
 // request, totals, the dispatch sheet as CSV and a printable sheet (one page per date).
 
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import type { LanewrightHost } from '../../../main/ipc/contract';
@@ -16,6 +16,7 @@ import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
 import { PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
+import type { LoadFiles } from '../../app/workspace-doc';
 import './loads.css';
 
 /** A component whose own sum is outside the exact range (engine RouteBreakdown); the cost stands. */
@@ -29,6 +30,9 @@ export interface LoadsPanelProps {
   date: string;
   /** The active what-if scenario; the loads are planned under it. */
   scenario: Scenario;
+  /** The loads and vehicles files, kept with the workspace (null = none chosen). */
+  files: LoadFiles | null;
+  onFiles(files: LoadFiles | null): void;
   /** The routes to draw on the map for the selected load (null = none). */
   onDraw(routes: LoadRouteDrawing[] | null): void;
   onMessage(text: string): void;
@@ -48,8 +52,7 @@ const COLUMNS: { key: LoadSortKey; label: string; numeric?: boolean }[] = [
 
 const ALTERNATIVES = 3;
 
-export function LoadsPanel({ engine, host, network, date, scenario, onDraw, onMessage }: LoadsPanelProps) {
-  const [files, setFiles] = useState<{ loads: NamedText; vehicles: NamedText | null } | null>(null);
+export function LoadsPanel({ engine, host, network, date, scenario, files, onFiles, onDraw, onMessage }: LoadsPanelProps) {
   const [view, setView] = useState<DispatchView | null>(null);
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -57,8 +60,10 @@ export function LoadsPanel({ engine, host, network, date, scenario, onDraw, onMe
   const [selected, setSelected] = useState<string | null>(null);
   const [showAlternatives, setShowAlternatives] = useState(false);
 
-  const run = (next: { loads: NamedText; vehicles: NamedText | null }, acceptPartial: boolean) => {
-    setFiles(next);
+  // What the plan on screen was made from: files, network and scenario.
+  const planned = useRef<{ files: LoadFiles; network: NetworkView; scenario: Scenario } | null>(null);
+  const run = (next: LoadFiles, acceptPartial: boolean) => {
+    planned.current = { files: next, network, scenario };
     setBusy(true);
     setProblem(null);
     engine
@@ -71,10 +76,18 @@ export function LoadsPanel({ engine, host, network, date, scenario, onDraw, onMe
       .catch((error: Error) => setProblem(error instanceof WorkCancelledError ? 'Planning the loads was stopped.' : error.message))
       .finally(() => setBusy(false));
   };
-  // A new network (import, re-plan) or another what-if makes the plan stale: plan the same files again.
+  // New files (picked, or reopened with a workspace) are planned as they are; a new network (import,
+  // re-plan) or another what-if makes the plan stale: the same files are planned again.
   useEffect(() => {
-    if (files) run(files, true);
-  }, [network, scenario]);
+    const last = planned.current;
+    if (!files || files.loads.name === '') {
+      planned.current = null;
+      if (!files) setView(null);
+      return;
+    }
+    if (last && last.files === files && last.network === network && last.scenario === scenario) return;
+    run(files, last !== null && last.files === files);
+  }, [files, network, scenario]);
   useEffect(() => () => onDraw(null), []);
 
   const pick = async (kind: 'loads' | 'vehicles') => {
@@ -82,10 +95,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, onDraw, onMe
     if (!picked.ok) return setProblem(`${kind === 'loads' ? 'Loads' : 'Vehicles'} file not read: ${picked.failure.message}`);
     if (!picked.value) return;
     const text: NamedText = { name: picked.value.name, text: picked.value.text, path: picked.value.path };
-    if (kind === 'vehicles') {
-      if (files) run({ ...files, vehicles: text }, false);
-      else setFiles({ loads: { name: '', text: '' }, vehicles: text });
-    } else run({ loads: text, vehicles: files?.vehicles ?? null }, false);
+    onFiles(kind === 'vehicles' ? { loads: files?.loads ?? { name: '', text: '' }, vehicles: text } : { loads: text, vehicles: files?.vehicles ?? null });
   };
 
   const report = view?.report ?? null;
@@ -120,7 +130,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, onDraw, onMe
         <button type="button" onClick={() => void pick('vehicles')} disabled={busy}>
           {files?.vehicles ? `Vehicles: ${files.vehicles.name}` : 'Import vehicles…'}
         </button>
-        <button type="button" onClick={() => run(sampleLoadFiles(), false)} disabled={busy}>
+        <button type="button" onClick={() => onFiles(sampleLoadFiles())} disabled={busy}>
           Sample loads
         </button>
         {view?.files.fatal && (
