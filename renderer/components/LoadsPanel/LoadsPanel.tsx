@@ -8,12 +8,13 @@ import { createPortal } from 'react-dom';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
-import { DEFAULT_LOADS_QUERY, loadCautions, queryLoads, toggleLoadSort, type LoadSortKey, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
+import { DEFAULT_LOADS_QUERY, queryLoads, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
 import type { DispatchView } from '../../worker/dispatch-loads';
 import type { NamedText, NetworkView } from '../../worker/protocol';
 import { hasChanges, type Scenario } from '../../model/scenario-edits';
 import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
+import { LoadsTable } from './LoadsTable';
 import { PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
 import type { LoadFiles } from '../../app/workspace-doc';
@@ -38,17 +39,6 @@ export interface LoadsPanelProps {
   onMessage(text: string): void;
 }
 
-const COLUMNS: { key: LoadSortKey; label: string; numeric?: boolean }[] = [
-  { key: 'load', label: 'Load' },
-  { key: 'from', label: 'From' },
-  { key: 'to', label: 'To' },
-  { key: 'date', label: 'Date' },
-  { key: 'vehicle', label: 'Vehicle' },
-  { key: 'status', label: 'Status' },
-  { key: 'cost', label: 'Cost', numeric: true },
-  { key: 'limits', label: 'Limits cost', numeric: true },
-  { key: 'drive', label: 'Drive time', numeric: true },
-];
 
 const ALTERNATIVES = 3;
 
@@ -189,47 +179,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, files, onFil
               {rows.length} of {report.loads.length} loads
             </span>
           </div>
-          <table className="lw-table" aria-label="Loads" data-testid="loads-table">
-            <thead>
-              <tr>
-                {COLUMNS.map((c) => (
-                  <th key={c.key} scope="col" aria-sort={query.sortKey === c.key ? (query.descending ? 'descending' : 'ascending') : 'none'} className={c.numeric ? 'lw-num' : undefined}>
-                    <button type="button" className="lw-sort" onClick={() => setQuery(toggleLoadSort(query, c.key))}>
-                      {c.label}
-                      <span aria-hidden="true">{query.sortKey === c.key ? (query.descending ? ' ▼' : ' ▲') : ''}</span>
-                    </button>
-                  </th>
-                ))}
-                <th scope="col">Cautions</th>
-              </tr>
-            </thead>
-            <tbody>
-              {rows.map((r) => (
-                <tr
-                  key={r.load}
-                  tabIndex={0}
-                  data-load={r.load}
-                  aria-current={r.load === selected ? 'true' : undefined}
-                  className={r.load === selected ? 'lw-selected' : undefined}
-                  onClick={() => setSelected(r.load)}
-                  onKeyDown={(e) => (e.key === 'Enter' || e.key === ' ') && (e.preventDefault(), setSelected(r.load))}
-                >
-                  <th scope="row">{r.load}</th>
-                  <td>{r.from}</td>
-                  <td>{r.to}</td>
-                  <td>{r.date}</td>
-                  <td>{r.vehicle ?? `class ${r.vehicle_class ?? '(default)'}`}</td>
-                  <td>
-                    <span className={`lw-badge lw-badge-${r.status}`}>{r.status}</span>
-                  </td>
-                  <td className="lw-num">{money(r.cost_minor)}</td>
-                  <td className="lw-num">{money(r.limits_extra_minor)}</td>
-                  <td className="lw-num">{formatDriveMinutes(r.breakdown?.drive_minutes ?? NaN)}</td>
-                  <td>{loadCautions(r).join(', ')}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <LoadsTable rows={rows} exponent={network.exponent} query={query} onQuery={setQuery} selected={selected} onSelect={setSelected} />
           {current && (
             <div className="lw-loads-detail" data-testid="load-detail" aria-live="polite">
               <h3>
