@@ -1,5 +1,5 @@
 // The one place dispatch turns an import into a priced network for a (date, toll class, fuel
-// consumption): the scenario's overlay planned by the planner's own rules (overlayNetwork), so a
+// consumption): the scenario's overlay planned by the planner's own rules (overlayPlan), so a
 // load under a what-if is priced exactly as `compare`, the exports and the app price that lane.
 // Without a scenario the overlay is the lane table itself.
 
@@ -9,7 +9,7 @@ import type { ImportResult } from '../planning/import-types';
 import type { Network } from '../network/types';
 import type { PlanningSettings } from '../planning/types';
 import type { LaneOverlay } from '../scenario/overlay';
-import { overlayNetwork } from '../scenario/overlay-network';
+import { overlayPlan } from '../scenario/overlay-network';
 
 export interface PricingKey {
   date: string;
@@ -50,7 +50,7 @@ export function priceDay(imported: ImportResult, overlay: LaneOverlay, key: Pric
     settings: key.fuelLitresPer100Km === null ? settings : { ...settings, fuelLitresPer100Km: key.fuelLitresPer100Km },
   };
   const lanesFile = imported.importReport.files.find((f) => f.kind === 'lanes')?.file;
-  const planned = overlayNetwork(overlay, { ...imported, lanesFile }, request);
+  const planned = overlayPlan(overlay, { ...imported, lanesFile }, request);
   const problems = planned.planProblems;
   if (problems.length > 0 && !skipInvalid) throw new DispatchPlanError(key, problems);
   return { network: planned.network, laneRecord: planned.plan.laneRecord, vehicleClass: planned.plan.vehicleClass, problems, notes: planned.plan.notes };

@@ -4,10 +4,35 @@
 // keep their cost, and only the subtrees hanging below closed tree lanes are re-solved, by Dijkstra
 // seeded from the depots that kept theirs. Exact integers throughout; restricted cost = d(v) + key.
 // Only for a solve without unbounded depots (no potentials exist past a rebate loop).
+// The seeds are found over the lanes INTO the cut-off depots (a reverse index made once per network),
+// so a repair costs the size of the cut-off subtrees, not a scan of every lane of the network.
 
 import { MoneyOverflowError } from '../errors';
 import type { Network } from '../network/types';
 import { STATUS_REACHABLE, STATUS_UNBOUNDED, STATUS_UNREACHABLE, type RouteTree } from '../routes/cheapest-routes';
+
+/** Lanes into each depot: `inPos[inStart[v] .. inStart[v + 1])` are CSR positions p with outTo[p] = v, ascending. */
+interface ReverseIndex {
+  inStart: Int32Array;
+  inPos: Int32Array;
+}
+
+const reverseIndexes = new WeakMap<Network, ReverseIndex>();
+
+function reverseIndexOf(network: Network): ReverseIndex {
+  let r = reverseIndexes.get(network);
+  if (r) return r;
+  const n = network.depotCount;
+  const { outTo } = network;
+  const inStart = new Int32Array(n + 1);
+  for (let p = 0; p < outTo.length; p++) inStart[outTo[p] + 1]++;
+  for (let v = 0; v < n; v++) inStart[v + 1] += inStart[v];
+  const fill = inStart.slice(0, n);
+  const inPos = new Int32Array(outTo.length);
+  for (let p = 0; p < outTo.length; p++) inPos[fill[outTo[p]]++] = p;
+  reverseIndexes.set(network, (r = { inStart, inPos }));
+  return r;
+}
 
 /** True when `repairTree` may be used on `plain`. */
 export function canRepair(plain: RouteTree): boolean {
@@ -76,6 +101,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
       push(v, k);
     }
   };
+  const { inStart, inPos } = reverseIndexOf(network);
   for (let v = 0; v < n; v++) {
     if (!kept[v]) continue;
     status[v] = STATUS_REACHABLE;
@@ -84,7 +110,22 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
     viaLane[v] = plain.viaLane[v];
     key[v] = 0;
   }
-  for (let v = 0; v < n; v++) if (kept[v]) relaxFrom(v);
+  // Seeds: each cut-off depot's cheapest open lane from a kept depot (the first of equals, by position).
+  for (let v = 0; v < n; v++) {
+    if (kept[v] || plain.status[v] !== STATUS_REACHABLE) continue;
+    for (let q = inStart[v], end = inStart[v + 1]; q < end; q++) {
+      const p = inPos[q];
+      const e = outLane[p];
+      const u = laneFrom[e];
+      if (!kept[u] || closed[e] === 1) continue;
+      const k = outNet[p] + d[u] - d[v];
+      if (!(k < key[v])) continue;
+      if (!Number.isSafeInteger(k)) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
+      key[v] = k;
+      viaLane[v] = e;
+    }
+    if (key[v] !== Infinity) push(v, key[v]);
+  }
   // 2. Dijkstra over the rest, seeded above.
   while (count > 0) {
     const u = heap[0];
