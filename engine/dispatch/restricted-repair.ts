@@ -11,10 +11,15 @@ import { MoneyOverflowError } from '../errors';
 import type { Network } from '../network/types';
 import { STATUS_REACHABLE, STATUS_UNBOUNDED, STATUS_UNREACHABLE, type RouteTree } from '../routes/cheapest-routes';
 
-/** Lanes into each depot: `inPos[inStart[v] .. inStart[v + 1])` are CSR positions p with outTo[p] = v, ascending. */
+/**
+ * Lanes into each depot: for q in `inStart[v] .. inStart[v + 1]`, `inPos[q]` is a CSR position p with
+ * outTo[p] = v (ascending), `inFrom[q]` its origin depot and `inLane[q]` its lane (fewer lookups per lane).
+ */
 interface ReverseIndex {
   inStart: Int32Array;
   inPos: Int32Array;
+  inFrom: Int32Array;
+  inLane: Int32Array;
 }
 
 const reverseIndexes = new WeakMap<Network, ReverseIndex>();
@@ -30,7 +35,9 @@ function reverseIndexOf(network: Network): ReverseIndex {
   const fill = inStart.slice(0, n);
   const inPos = new Int32Array(outTo.length);
   for (let p = 0; p < outTo.length; p++) inPos[fill[outTo[p]]++] = p;
-  reverseIndexes.set(network, (r = { inStart, inPos }));
+  const inLane = Int32Array.from(inPos, (p) => network.outLane[p]);
+  const inFrom = Int32Array.from(inLane, (e) => network.laneFrom[e]);
+  reverseIndexes.set(network, (r = { inStart, inPos, inFrom, inLane }));
   return r;
 }
 
@@ -101,7 +108,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
       push(v, k);
     }
   };
-  const { inStart, inPos } = reverseIndexOf(network);
+  const { inStart, inPos, inFrom, inLane } = reverseIndexOf(network);
   for (let v = 0; v < n; v++) {
     if (!kept[v]) continue;
     status[v] = STATUS_REACHABLE;
@@ -114,11 +121,11 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
   for (let v = 0; v < n; v++) {
     if (kept[v] || plain.status[v] !== STATUS_REACHABLE) continue;
     for (let q = inStart[v], end = inStart[v + 1]; q < end; q++) {
-      const p = inPos[q];
-      const e = outLane[p];
-      const u = laneFrom[e];
-      if (!kept[u] || closed[e] === 1) continue;
-      const k = outNet[p] + d[u] - d[v];
+      const u = inFrom[q];
+      if (!kept[u]) continue;
+      const e = inLane[q];
+      if (closed[e] === 1) continue;
+      const k = outNet[inPos[q]] + d[u] - d[v];
       if (!(k < key[v])) continue;
       if (!Number.isSafeInteger(k)) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
       key[v] = k;
