@@ -15,7 +15,7 @@ import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } fr
 import { routePath } from '../routes/route-path';
 import { buildOverlay, type OverlayIndex } from '../scenario/overlay';
 import type { Scenario } from '../scenario/types';
-import { priceDay, pricingKeyText, type PricedDay, type PricingKey } from './day-pricing';
+import { priceDay, pricingKeyText, sameDayAs, shareKeyText, validitySpans, type PricedDay, type PricingKey } from './day-pricing';
 import { canRepair, repairTree } from './restricted-repair';
 import { fewestClosedPath, fewestClosedTree, type FewestClosedTree } from './fewest-closed';
 import { closedLanes, closureReasons, profileKey, restrictedWeights, restrictionProfile, type RestrictionProfile } from './vehicle-limits';
@@ -111,6 +111,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
   const masks = new Map<string, Uint8Array | null>();
   const maskWeights = new Map<string, Float64Array>();
   const repairable = new Map<RouteTree, boolean>();
+  const restricted = new Map<string, RouteTree>();
   const warnings: string[] = [];
   const notes: string[] = [];
   for (const p of overlay.problems) warnings.push(`scenario "${scenario?.name ?? ''}", change ${p.changeIndex + 1}: ${p.message}; not applied`);
@@ -132,13 +133,22 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     group.loads.push(i);
   });
 
+  // Dates whose valid rows are the same share one priced network, so its solves are shared too.
+  const spanOf = validitySpans(overlay.table);
+  const shared = new Map<string, { day: PricedDay; date: string }>();
   const dayOf = (key: PricingKey): PricedDay => {
     const text = pricingKeyText(key);
     let day = days.get(text);
     if (!day) {
-      day = priceDay(imported, overlay, key, settings, options.skipInvalid ?? false);
+      const shareKey = shareKeyText(key, spanOf(key.date));
+      const twin = shared.get(shareKey);
+      if (twin) day = sameDayAs(twin.day, twin.date, key.date);
+      else {
+        day = priceDay(imported, overlay, key, settings, options.skipInvalid ?? false, shareKey);
+        shared.set(shareKey, { day, date: key.date });
+        stats.pricedDays++;
+      }
       days.set(text, day);
-      stats.pricedDays++;
       for (const p of day.problems) warnings.push(`${key.date}, class ${day.vehicleClass ?? '(default)'}: ${p.file}, row ${p.row}, column "${p.column}": ${p.message} (lane left out)`);
       for (const n of day.notes) if (!notes.includes(n)) notes.push(n);
     }
@@ -151,7 +161,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     stats.groups++;
     const day = dayOf(group.key);
     const { network } = day;
-    const dayKey = pricingKeyText(group.key);
+    const dayKey = day.shareKey;
     const maskKey = `${dayKey}\u0000${profileKey(group.profile)}`;
     let closed = masks.get(maskKey);
     if (closed === undefined) masks.set(maskKey, (closed = closedLanes(network, day.laneRecord, limits, group.profile)));
@@ -172,10 +182,17 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     };
     let tree = free;
     if (closed) {
-      let ok = repairable.get(free);
-      if (ok === undefined) repairable.set(free, (ok = canRepair(free)));
-      tree = ok ? repairTree(network, free, closed) : cheapestRoutes(network, origin, weightsOf());
-      stats.restrictedSolves++;
+      // Groups of one origin and profile on dates that share the network share the restricted tree.
+      const restrictedKey = `${maskKey}\u0000${group.origin}`;
+      const known = restricted.get(restrictedKey);
+      if (known) tree = known;
+      else {
+        let ok = repairable.get(free);
+        if (ok === undefined) repairable.set(free, (ok = canRepair(free)));
+        tree = ok ? repairTree(network, free, closed) : cheapestRoutes(network, origin, weightsOf());
+        restricted.set(restrictedKey, tree);
+        stats.restrictedSolves++;
+      }
     }
     let blockedTree: FewestClosedTree | null = null;
     let yen: YenContext | null = null;
