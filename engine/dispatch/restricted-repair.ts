@@ -34,9 +34,15 @@ function reverseIndexOf(network: Network): ReverseIndex {
   for (let v = 0; v < n; v++) inStart[v + 1] += inStart[v];
   const fill = inStart.slice(0, n);
   const inPos = new Int32Array(outTo.length);
-  for (let p = 0; p < outTo.length; p++) inPos[fill[outTo[p]]++] = p;
-  const inLane = Int32Array.from(inPos, (p) => network.outLane[p]);
-  const inFrom = Int32Array.from(inLane, (e) => network.laneFrom[e]);
+  const inLane = new Int32Array(outTo.length);
+  const inFrom = new Int32Array(outTo.length);
+  const { outLane, laneFrom } = network;
+  for (let p = 0; p < outTo.length; p++) {
+    const q = fill[outTo[p]]++;
+    inPos[q] = p;
+    inLane[q] = outLane[p];
+    inFrom[q] = laneFrom[outLane[p]];
+  }
   reverseIndexes.set(network, (r = { inStart, inPos, inFrom, inLane }));
   return r;
 }
@@ -53,6 +59,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
   const n = network.depotCount;
   const { outStart, outTo, outLane, outNet, laneFrom } = network;
   const d = plain.cost;
+  const plainStatus = plain.status;
   // 1. Depots whose cheapest route is open: walk the tree from the origin along open tree lanes.
   const childStart = new Int32Array(n + 1);
   for (let v = 0; v < n; v++) if (plain.viaLane[v] !== -1) childStart[laneFrom[plain.viaLane[v]] + 1]++;
@@ -99,7 +106,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
   const relaxFrom = (u: number) => {
     for (let p = outStart[u], end = outStart[u + 1]; p < end; p++) {
       const v = outTo[p];
-      if (kept[v] || closed[outLane[p]] === 1 || plain.status[v] !== STATUS_REACHABLE) continue;
+      if (kept[v] || closed[outLane[p]] === 1 || plainStatus[v] !== STATUS_REACHABLE) continue;
       const k = key[u] + outNet[p] + d[u] - d[v];
       if (!(k < key[v])) continue;
       if (!Number.isSafeInteger(k)) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
@@ -119,7 +126,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
   }
   // Seeds: each cut-off depot's cheapest open lane from a kept depot (the first of equals, by position).
   for (let v = 0; v < n; v++) {
-    if (kept[v] || plain.status[v] !== STATUS_REACHABLE) continue;
+    if (kept[v] || plainStatus[v] !== STATUS_REACHABLE) continue;
     for (let q = inStart[v], end = inStart[v + 1]; q < end; q++) {
       const u = inFrom[q];
       if (!kept[u]) continue;
