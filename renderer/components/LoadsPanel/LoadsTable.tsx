@@ -1,13 +1,13 @@
 // The loads table: one row per load, sortable and filterable, windowed so 10,000 loads scroll with
-// a few dozen rows in the DOM (DataTable/use-row-window). One Tab stop; the arrow keys, Page Up/Down,
-// Home and End move between rows by index (rows outside the window included), Enter or Space selects.
+// a few dozen rows in the DOM (DataTable/use-row-window), and the results table's keyboard
+// (DataTable/use-row-keys): one Tab stop, arrows, Page Up/Down, Home and End, Enter or Space selects.
 
-import { useEffect, useRef, useState } from 'react';
 import type { DispatchLoadRow } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { loadCautions, toggleLoadSort, type LoadSortKey, type LoadsQuery } from '../../model/loads-table';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
+import { useRowKeys } from '../DataTable/use-row-keys';
 
 const COLUMNS: { key: LoadSortKey; label: string; numeric?: boolean }[] = [
   { key: 'load', label: 'Load' },
@@ -21,8 +21,6 @@ const COLUMNS: { key: LoadSortKey; label: string; numeric?: boolean }[] = [
   { key: 'drive', label: 'Drive time', numeric: true },
 ];
 const COLUMN_COUNT = COLUMNS.length + 1;
-/** Rows a Page Up / Page Down moves. */
-const PAGE_ROWS = 15;
 
 export interface LoadsTableProps {
   rows: readonly DispatchLoadRow[];
@@ -34,38 +32,9 @@ export interface LoadsTableProps {
 }
 
 export function LoadsTable({ rows, exponent, query, onQuery, selected, onSelect }: LoadsTableProps) {
-  const [active, setActive] = useState(0);
-  const focusWanted = useRef<number | null>(null);
   const rowWindow = useRowWindow(rows.length);
-  const last = rows.length - 1;
-  const current = Math.max(0, Math.min(active, last));
-  const tabStop = current >= rowWindow.start && current < rowWindow.end ? current : rowWindow.start;
+  const keys = useRowKeys(rowWindow, rows.length, (i) => onSelect(rows[i].load));
   const money = (v: number | null) => (v === null ? '—' : formatMoney(v, exponent));
-
-  // Focus follows the keys once the wanted row is rendered (after the window has scrolled to it).
-  useEffect(() => {
-    const wanted = focusWanted.current;
-    if (wanted === null) return;
-    const row = rowWindow.bodyRef.current?.querySelector<HTMLElement>(`tr[aria-rowindex="${wanted + 2}"]`);
-    if (row) {
-      focusWanted.current = null;
-      row.focus();
-    }
-  });
-
-  const onKey = (event: React.KeyboardEvent<HTMLTableRowElement>, i: number, load: string) => {
-    const steps: Record<string, number> = { ArrowDown: 1, ArrowUp: -1, PageDown: PAGE_ROWS, PageUp: -PAGE_ROWS, Home: -Infinity, End: Infinity };
-    if (event.key in steps) {
-      event.preventDefault();
-      const next = Math.max(0, Math.min(last, i + steps[event.key]));
-      setActive(next);
-      focusWanted.current = next;
-      rowWindow.scrollToIndex(next);
-    } else if (event.key === 'Enter' || event.key === ' ') {
-      event.preventDefault();
-      onSelect(load);
-    }
-  };
 
   return (
     <div className="lw-loads-scroll" data-testid="loads-scroll">
@@ -91,13 +60,13 @@ export function LoadsTable({ rows, exponent, query, onQuery, selected, onSelect 
               <tr
                 key={r.load}
                 aria-rowindex={i + 2}
-                tabIndex={i === tabStop ? 0 : -1}
+                tabIndex={i === keys.tabStop ? 0 : -1}
                 data-load={r.load}
                 aria-current={r.load === selected ? 'true' : undefined}
                 className={r.load === selected ? 'lw-selected' : undefined}
-                onClick={() => (onSelect(r.load), setActive(i))}
-                onFocus={() => setActive(i)}
-                onKeyDown={(e) => onKey(e, i, r.load)}
+                onClick={() => (onSelect(r.load), keys.setActive(i))}
+                onFocus={() => keys.setActive(i)}
+                onKeyDown={(e) => keys.onKeyDown(e, i)}
               >
                 <th scope="row">{r.load}</th>
                 <td>{r.from}</td>
