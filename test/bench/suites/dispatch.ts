@@ -22,7 +22,7 @@ const HUBS = 25;
 const BASELINE_LOADS = 500;
 const DATES = ['2026-09-14', '2026-09-15'];
 
-export function writeFiles(folder: string) {
+function writeFiles(folder: string) {
   const random = seeded(20260914);
   const depots = ['id,name,lat,lon'];
   for (let d = 0; d < DEPOTS; d++) depots.push(`D${d},Depot ${d},${(45 + random() * 10).toFixed(4)},${(random() * 15).toFixed(4)}`);
