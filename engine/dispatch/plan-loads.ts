@@ -213,6 +213,12 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
         plan.breakdown = routeBreakdown(network, path.lanes, imported.plan.settings.drivingLimit.dailyDrivingMinutes);
         plan.path = path.depots.map((d) => network.depotIds[d]);
         plan.lanes = path.lanes.map((e) => network.laneRow[e]);
+        // A lane the what-if adds has no row in the file (its row reads 0): say which it is.
+        const added = path.lanes.filter((e) => overlay.sourceOf[day.laneRecord[e]] === -1);
+        if (added.length > 0) {
+          const named = added.map((e) => `${network.depotIds[network.laneFrom[e]]} → ${network.depotIds[network.laneTo[e]]}${network.laneRef[e] ? ` (${network.laneRef[e]})` : ''}`);
+          plan.notes.push(`the route uses ${added.length === 1 ? 'a lane' : 'lanes'} the what-if scenario adds, not in the lanes file (lane row 0): ${named.join(', ')}`);
+        }
         if (!closed) plan.limitsExtraMinor = 0;
         else if (free.status[target] === STATUS_REACHABLE) {
           plan.limitsExtraMinor = tree.cost[target] - free.cost[target];

@@ -50,13 +50,17 @@ function limitsOf(t: LaneTable, keep: (r: number) => boolean = () => true) {
   };
 }
 
-function dispatchOf(lanes: string, what: Scenario | null) {
+function planLoadsOf(lanes: string, what: Scenario | null) {
   const imported = importNetwork(DEPOTS, lanes, { plan: { date: DATE } });
   expect(imported.report.errors).toEqual([]);
   const vehicles = importVehicles(VEHICLES, { classes: imported.vehicleClasses });
   const loads = importLoads(LOADS, { depots: imported.network!.depotIndex, vehicles: vehicles.byId, classes: imported.vehicleClasses, planDate: DATE });
   expect(loads.report.errors).toEqual([]);
-  return planLoads(imported, loads.loads, { date: DATE, vehicles: vehicles.byId, scenario: what }).loads.map((p) => ({ load: p.load.id, status: p.status, cost: p.costMinor, path: p.path, blocked: p.blockedBy.length > 0 }));
+  return planLoads(imported, loads.loads, { date: DATE, vehicles: vehicles.byId, scenario: what }).loads;
+}
+
+function dispatchOf(lanes: string, what: Scenario | null) {
+  return planLoadsOf(lanes, what).map((p) => ({ load: p.load.id, status: p.status, cost: p.costMinor, path: p.path, blocked: p.blockedBy.length > 0 }));
 }
 
 describe('lanes export with lane limits', () => {
@@ -94,5 +98,9 @@ describe('lanes export with lane limits', () => {
     // added lane, and the tank may not use A>C (dangerous goods banned), its only way to C.
     expect(fromExport.find((l) => l.load === 'L4')).toMatchObject({ status: 'planned', path: ['A', 'C', 'B'] });
     expect(fromExport.find((l) => l.load === 'L5')).toMatchObject({ status: 'blocked', blocked: true });
+    // Under the scenario itself, the added lane has no file row: the load names it.
+    const underScenario = planLoadsOf(LANES, scenario).find((p) => p.load.id === 'L4')!;
+    expect(underScenario.lanes).toEqual([4, 0]); // A>C is row 4 of the file (header = 1)
+    expect(underScenario.notes).toContain('the route uses a lane the what-if scenario adds, not in the lanes file (lane row 0): C → B (NEW)');
   });
 });
