@@ -22,8 +22,10 @@ const ENGINE_ORDER = [
   ['planning'],
   ['routes'],
   ['loops'],
-  ['audit', 'dispatch'],
+  ['audit'],
   ['scenario'],
+  // dispatch above scenario: a day's loads are priced through the what-if overlay.
+  ['dispatch'],
   ['workspace'],
   ['report'],
   ['export'],

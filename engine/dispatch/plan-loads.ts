@@ -2,6 +2,7 @@
 // consumption, restriction profile) so one restricted solve serves a group, and one solve without
 // limits per (origin, date, class) tells what the limits cost and whether a load is blocked.
 // Statuses: planned, no-route, blocked (naming the limits), unbounded (naming the loop).
+// Under a what-if scenario every day is priced from the scenario's overlay (day-pricing.ts).
 
 import type { ImportResult } from '../planning/import-types';
 import type { LoadRecord } from '../import/loads-reader';
@@ -12,7 +13,9 @@ import { routeBreakdown, type RouteBreakdown } from '../planning/route-breakdown
 import type { PlanningSettings } from '../planning/types';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../routes/cheapest-routes';
 import { routePath } from '../routes/route-path';
-import { priceDay, pricingKeyText, type PricedDay, type PricingKey } from './day-pricing';
+import { buildOverlay, type OverlayIndex } from '../scenario/overlay';
+import type { Scenario } from '../scenario/types';
+import { priceDay, pricingKeyText, sameDayAs, shareKeyText, validitySpans, type PricedDay, type PricingKey } from './day-pricing';
 import { canRepair, repairTree } from './restricted-repair';
 import { fewestClosedPath, fewestClosedTree, type FewestClosedTree } from './fewest-closed';
 import { closedLanes, closureReasons, profileKey, restrictedWeights, restrictionProfile, type RestrictionProfile } from './vehicle-limits';
@@ -66,12 +69,18 @@ export interface DispatchOptions {
   alternatives?: number;
   /** Spur searches allowed per load for alternatives. */
   maxSearches?: number;
+  /** The what-if the loads are planned under (null = the lanes as the file has them). */
+  scenario?: Scenario | null;
+  /** The import's key index (overlayIndex), when the caller keeps one; saves counting keys again. */
+  overlayIndex?: OverlayIndex;
   /** Called after each group with loads done so far. */
   onProgress?: (done: number, total: number) => void;
 }
 
 export interface DispatchPlan {
   date: string;
+  /** The scenario's name, null when planned on the lanes as the file has them. */
+  scenario: string | null;
   currency: string;
   exponent: number;
   driveLimitMinutes: number | null;
@@ -93,20 +102,25 @@ interface GroupWork {
 export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], options: DispatchOptions): DispatchPlan {
   const settings = options.settings ?? {};
   const k = options.alternatives ?? 0;
-  const limits = imported.lanes.limits ?? null;
+  const scenario = options.scenario ?? null;
+  const overlay = buildOverlay(imported, scenario, options.overlayIndex);
+  // Limits by overlay row: base rows at their own index, a class copy keeps its row's limits.
+  const limits = overlay.table.limits ?? null;
   const days = new Map<string, PricedDay>();
   const plain = new Map<string, RouteTree>();
   const masks = new Map<string, Uint8Array | null>();
   const maskWeights = new Map<string, Float64Array>();
   const repairable = new Map<RouteTree, boolean>();
+  const restricted = new Map<string, RouteTree>();
   const warnings: string[] = [];
   const notes: string[] = [];
+  for (const p of overlay.problems) warnings.push(`scenario "${scenario?.name ?? ''}", change ${p.changeIndex + 1}: ${p.message}; not applied`);
   const stats = { groups: 0, restrictedSolves: 0, plainSolves: 0, pricedDays: 0 };
 
   // A vehicle's consumption only prices lanes whose fuel is blank (estimated); without such lanes it
   // must not split groups.
   let fuelEstimated = false;
-  for (let r = 0; r < imported.lanes.count && !fuelEstimated; r++) if (Number.isNaN(imported.lanes.fuel[r])) fuelEstimated = true;
+  for (let r = 0; r < overlay.table.count && !fuelEstimated; r++) if (Number.isNaN(overlay.table.fuel[r])) fuelEstimated = true;
 
   const groups = new Map<string, GroupWork>();
   loads.forEach((load, i) => {
@@ -119,13 +133,22 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     group.loads.push(i);
   });
 
+  // Dates whose valid rows are the same share one priced network, so its solves are shared too.
+  const spanOf = validitySpans(overlay.table);
+  const shared = new Map<string, { day: PricedDay; date: string }>();
   const dayOf = (key: PricingKey): PricedDay => {
     const text = pricingKeyText(key);
     let day = days.get(text);
     if (!day) {
-      day = priceDay(imported, key, settings, options.skipInvalid ?? false);
+      const shareKey = shareKeyText(key, spanOf(key.date));
+      const twin = shared.get(shareKey);
+      if (twin) day = sameDayAs(twin.day, twin.date, key.date);
+      else {
+        day = priceDay(imported, overlay, key, settings, options.skipInvalid ?? false, shareKey);
+        shared.set(shareKey, { day, date: key.date });
+        stats.pricedDays++;
+      }
       days.set(text, day);
-      stats.pricedDays++;
       for (const p of day.problems) warnings.push(`${key.date}, class ${day.vehicleClass ?? '(default)'}: ${p.file}, row ${p.row}, column "${p.column}": ${p.message} (lane left out)`);
       for (const n of day.notes) if (!notes.includes(n)) notes.push(n);
     }
@@ -138,7 +161,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     stats.groups++;
     const day = dayOf(group.key);
     const { network } = day;
-    const dayKey = pricingKeyText(group.key);
+    const dayKey = day.shareKey;
     const maskKey = `${dayKey}\u0000${profileKey(group.profile)}`;
     let closed = masks.get(maskKey);
     if (closed === undefined) masks.set(maskKey, (closed = closedLanes(network, day.laneRecord, limits, group.profile)));
@@ -159,10 +182,17 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
     };
     let tree = free;
     if (closed) {
-      let ok = repairable.get(free);
-      if (ok === undefined) repairable.set(free, (ok = canRepair(free)));
-      tree = ok ? repairTree(network, free, closed) : cheapestRoutes(network, origin, weightsOf());
-      stats.restrictedSolves++;
+      // Groups of one origin and profile on dates that share the network share the restricted tree.
+      const restrictedKey = `${maskKey}\u0000${group.origin}`;
+      const known = restricted.get(restrictedKey);
+      if (known) tree = known;
+      else {
+        let ok = repairable.get(free);
+        if (ok === undefined) repairable.set(free, (ok = canRepair(free)));
+        tree = ok ? repairTree(network, free, closed) : cheapestRoutes(network, origin, weightsOf());
+        restricted.set(restrictedKey, tree);
+        stats.restrictedSolves++;
+      }
     }
     let blockedTree: FewestClosedTree | null = null;
     let yen: YenContext | null = null;
@@ -183,6 +213,12 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
         plan.breakdown = routeBreakdown(network, path.lanes, imported.plan.settings.drivingLimit.dailyDrivingMinutes);
         plan.path = path.depots.map((d) => network.depotIds[d]);
         plan.lanes = path.lanes.map((e) => network.laneRow[e]);
+        // A lane the what-if adds has no row in the file (its row reads 0): say which it is.
+        const added = path.lanes.filter((e) => overlay.sourceOf[day.laneRecord[e]] === -1);
+        if (added.length > 0) {
+          const named = added.map((e) => `${network.depotIds[network.laneFrom[e]]} → ${network.depotIds[network.laneTo[e]]}${network.laneRef[e] ? ` (${network.laneRef[e]})` : ''}`);
+          plan.notes.push(`the route uses ${added.length === 1 ? 'a lane' : 'lanes'} the what-if scenario adds, not in the lanes file (lane row 0): ${named.join(', ')}`);
+        }
         if (!closed) plan.limitsExtraMinor = 0;
         else if (free.status[target] === STATUS_REACHABLE) {
           plan.limitsExtraMinor = tree.cost[target] - free.cost[target];
@@ -224,6 +260,7 @@ export function planLoads(imported: ImportResult, loads: readonly LoadRecord[], 
   const network0 = days.values().next().value?.network ?? imported.network;
   return {
     date: options.date,
+    scenario: scenario?.name ?? null,
     currency: network0?.currency ?? imported.currency,
     exponent: network0?.exponent ?? imported.exponent,
     driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes,

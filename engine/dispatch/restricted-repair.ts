@@ -4,10 +4,48 @@
 // keep their cost, and only the subtrees hanging below closed tree lanes are re-solved, by Dijkstra
 // seeded from the depots that kept theirs. Exact integers throughout; restricted cost = d(v) + key.
 // Only for a solve without unbounded depots (no potentials exist past a rebate loop).
+// The seeds are found over the lanes INTO the cut-off depots (a reverse index made once per network),
+// so a repair costs the size of the cut-off subtrees, not a scan of every lane of the network.
 
 import { MoneyOverflowError } from '../errors';
 import type { Network } from '../network/types';
 import { STATUS_REACHABLE, STATUS_UNBOUNDED, STATUS_UNREACHABLE, type RouteTree } from '../routes/cheapest-routes';
+
+/**
+ * Lanes into each depot: for q in `inStart[v] .. inStart[v + 1]`, `inPos[q]` is a CSR position p with
+ * outTo[p] = v (ascending), `inFrom[q]` its origin depot and `inLane[q]` its lane (fewer lookups per lane).
+ */
+interface ReverseIndex {
+  inStart: Int32Array;
+  inPos: Int32Array;
+  inFrom: Int32Array;
+  inLane: Int32Array;
+}
+
+const reverseIndexes = new WeakMap<Network, ReverseIndex>();
+
+function reverseIndexOf(network: Network): ReverseIndex {
+  let r = reverseIndexes.get(network);
+  if (r) return r;
+  const n = network.depotCount;
+  const { outTo } = network;
+  const inStart = new Int32Array(n + 1);
+  for (let p = 0; p < outTo.length; p++) inStart[outTo[p] + 1]++;
+  for (let v = 0; v < n; v++) inStart[v + 1] += inStart[v];
+  const fill = inStart.slice(0, n);
+  const inPos = new Int32Array(outTo.length);
+  const inLane = new Int32Array(outTo.length);
+  const inFrom = new Int32Array(outTo.length);
+  const { outLane, laneFrom } = network;
+  for (let p = 0; p < outTo.length; p++) {
+    const q = fill[outTo[p]]++;
+    inPos[q] = p;
+    inLane[q] = outLane[p];
+    inFrom[q] = laneFrom[outLane[p]];
+  }
+  reverseIndexes.set(network, (r = { inStart, inPos, inFrom, inLane }));
+  return r;
+}
 
 /** True when `repairTree` may be used on `plain`. */
 export function canRepair(plain: RouteTree): boolean {
@@ -21,6 +59,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
   const n = network.depotCount;
   const { outStart, outTo, outLane, outNet, laneFrom } = network;
   const d = plain.cost;
+  const plainStatus = plain.status;
   // 1. Depots whose cheapest route is open: walk the tree from the origin along open tree lanes.
   const childStart = new Int32Array(n + 1);
   for (let v = 0; v < n; v++) if (plain.viaLane[v] !== -1) childStart[laneFrom[plain.viaLane[v]] + 1]++;
@@ -67,7 +106,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
   const relaxFrom = (u: number) => {
     for (let p = outStart[u], end = outStart[u + 1]; p < end; p++) {
       const v = outTo[p];
-      if (kept[v] || closed[outLane[p]] === 1 || plain.status[v] !== STATUS_REACHABLE) continue;
+      if (kept[v] || closed[outLane[p]] === 1 || plainStatus[v] !== STATUS_REACHABLE) continue;
       const k = key[u] + outNet[p] + d[u] - d[v];
       if (!(k < key[v])) continue;
       if (!Number.isSafeInteger(k)) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
@@ -76,6 +115,7 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
       push(v, k);
     }
   };
+  const { inStart, inPos, inFrom, inLane } = reverseIndexOf(network);
   for (let v = 0; v < n; v++) {
     if (!kept[v]) continue;
     status[v] = STATUS_REACHABLE;
@@ -84,7 +124,22 @@ export function repairTree(network: Network, plain: RouteTree, closed: Uint8Arra
     viaLane[v] = plain.viaLane[v];
     key[v] = 0;
   }
-  for (let v = 0; v < n; v++) if (kept[v]) relaxFrom(v);
+  // Seeds: each cut-off depot's cheapest open lane from a kept depot (the first of equals, by position).
+  for (let v = 0; v < n; v++) {
+    if (kept[v] || plainStatus[v] !== STATUS_REACHABLE) continue;
+    for (let q = inStart[v], end = inStart[v + 1]; q < end; q++) {
+      const u = inFrom[q];
+      if (!kept[u]) continue;
+      const e = inLane[q];
+      if (closed[e] === 1) continue;
+      const k = outNet[inPos[q]] + d[u] - d[v];
+      if (!(k < key[v])) continue;
+      if (!Number.isSafeInteger(k)) throw new MoneyOverflowError(`route cost to depot "${network.depotIds[v]}"`);
+      key[v] = k;
+      viaLane[v] = e;
+    }
+    if (key[v] !== Infinity) push(v, key[v]);
+  }
   // 2. Dijkstra over the rest, seeded above.
   while (count > 0) {
     const u = heap[0];

@@ -161,6 +161,13 @@ export const json = {
   nullable<S extends z.ZodType>(schema: S) {
     return schema.nullable();
   },
+  /**
+   * The schema, null, or missing: a field added to a document version after files of that version
+   * were written (older files stay valid; the checked copy leaves it out when the file does).
+   */
+  optionalNullable<S extends z.ZodType>(schema: S) {
+    return schema.nullable().optional();
+  },
   /** One of several object shapes chosen by the value of `key` (e.g. a change's `kind`). */
   oneOf<K extends string, const O extends readonly [z.core.$ZodTypeDiscriminable, ...z.core.$ZodTypeDiscriminable[]]>(key: K, options: O, reason: string) {
     return z.discriminatedUnion(key, options, { error: reason });

@@ -52,6 +52,8 @@ export interface DispatchTotalRow {
 
 export interface DispatchReport {
   date: string;
+  /** The what-if scenario the loads were planned under; null = the lanes as the file has them. */
+  scenario: string | null;
   currency: string;
   drive_limit_minutes: number | null;
   loads: DispatchLoadRow[];
@@ -71,6 +73,7 @@ export function dispatchReport(plan: DispatchPlan): DispatchReport {
   const over = loads.filter((r) => r.over_drive_limit).length;
   return {
     date: plan.date,
+    scenario: plan.scenario,
     currency: plan.currency,
     drive_limit_minutes: plan.driveLimitMinutes,
     loads,
@@ -168,7 +171,7 @@ function total(key: string, rows: DispatchLoadRow[], money: (v: number) => strin
 export function dispatchReportRows(report: DispatchReport): (string | number | null)[][] {
   const header = [
     'load', 'from', 'to', 'date', 'vehicle', 'vehicle_class', 'status', 'cost', 'toll', 'fuel', 'fees', 'rebate', 'distance_km', 'drive_minutes',
-    'over_drive_limit', 'legs', 'path', 'lane_rows', 'limits_extra', 'avoided', 'blocked_by', 'loop', 'alternatives', 'notes', 'caution',
+    'over_drive_limit', 'legs', 'path', 'lane_rows', 'limits_extra', 'avoided', 'blocked_by', 'loop', 'alternatives', 'notes', 'scenario', 'caution',
   ];
   return [
     header,
@@ -179,7 +182,7 @@ export function dispatchReportRows(report: DispatchReport): (string | number | n
         b?.toll ?? '', b?.fuel ?? '', b?.fees ?? '', b?.rebate ?? '', b?.distance_km ?? '', b?.drive_minutes ?? '',
         b ? (r.over_drive_limit ? 'yes' : 'no') : '', r.legs ?? '', r.path.join('>'), r.lanes.join('>'), r.limits_extra ?? '',
         r.avoided.join('; '), r.blocked_by.join('; '), r.loop ? `${r.loop.depots.join('>')} (net per lap ${r.loop.net_per_lap_minor} minor units)` : '',
-        r.alternatives.map((a) => `${a.cost} via ${a.path.join('>')}`).join('; '), r.notes.join('; '), report.caution,
+        r.alternatives.map((a) => `${a.cost} via ${a.path.join('>')}`).join('; '), r.notes.join('; '), report.scenario ?? '', report.caution,
       ];
     }),
   ];

@@ -39,17 +39,21 @@ function planOverlay(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanR
   return planLanes({ depots: base.depots, lanes: overlay.table, currency: base.currency, exponent: base.exponent, lanesFile: base.lanesFile ?? 'lanes.csv', leaveOut }, request, () => build);
 }
 
+/** overlayNetwork without naming its lanes (no keys, base rows or changes): what a caller that only prices needs. */
+export function overlayPlan(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest): Pick<OverlayNetwork, 'network' | 'plan' | 'planProblems'> {
+  const outcome = planOverlay(overlay, base, request, overlay.closed, true);
+  return { network: outcome.plan.network!, plan: outcome.plan, planProblems: outcome.errors };
+}
+
 /** The network of `request`'s date and class under the overlay; closed rows are left out. */
 export function overlayNetwork(overlay: LaneOverlay, base: OverlayPlanBase, request: PlanRequest): OverlayNetwork {
-  const outcome = planOverlay(overlay, base, request, overlay.closed, true);
-  const rows = outcome.plan.laneRecord;
+  const planned = overlayPlan(overlay, base, request);
+  const rows = planned.plan.laneRecord;
   return {
-    network: outcome.plan.network!,
-    plan: outcome.plan,
+    ...planned,
     keys: Array.from(rows, (r) => overlay.keys[r]),
     baseRow: Int32Array.from(rows, (r) => overlay.sourceOf[r]),
     addedBy: Int32Array.from(rows, (r) => overlay.changeOf[r]),
-    planProblems: outcome.errors,
   };
 }
 

@@ -83,13 +83,16 @@ export function overlayIndex(base: OverlayBase): OverlayIndex {
  */
 export function buildOverlay(base: OverlayBase, scenario: Scenario | null, index?: OverlayIndex): LaneOverlay {
   const t = base.lanes;
-  const shared = index ?? overlayIndex(base);
   const changes = scenario?.changes ?? [];
   if (changes.length === 0) {
+    let keys = index?.keys ?? null;
     return {
       table: t,
       baseCount: t.count,
-      keys: shared.keys,
+      // Counted on first use: a caller that plans without naming lanes (dispatch) never pays for them.
+      get keys() {
+        return (keys ??= overlayKeys(base));
+      },
       sourceOf: Int32Array.from({ length: t.count }, (_, i) => i),
       changeOf: new Int32Array(t.count).fill(-1),
       closed: new Uint8Array(t.count),
@@ -98,7 +101,7 @@ export function buildOverlay(base: OverlayBase, scenario: Scenario | null, index
       reshaped: false,
     };
   }
-  return new OverlayBuilder(base, shared, changes).run();
+  return new OverlayBuilder(base, index ?? overlayIndex(base), changes).run();
 }
 
 class OverlayBuilder {

@@ -21,6 +21,13 @@ export const WORKSPACE_EXTENSION = 'lwspace.json';
 export interface WorkspaceFiles {
   depots: string | null;
   lanes: string | null;
+  /**
+   * The day's loads file and the vehicles file of the Loads panel, or null. Added within version 1
+   * as optional fields: missing = null (nothing to reopen). Written only when set, so a workspace
+   * without loads is the same file an earlier build wrote and still opens there.
+   */
+  loads?: string | null;
+  vehicles?: string | null;
 }
 
 /** The planning controls: the selected origin, dispatch date, vehicle class and maximum legs. */

@@ -27,6 +27,10 @@ const WORKSPACE_KIND: VersionedKind = { format: WORKSPACE_FORMAT, label: 'worksp
 const filesSchema = json.object({
   depots: json.nullable(json.text(MAX_PATH_LENGTH)),
   lanes: json.nullable(json.text(MAX_PATH_LENGTH)),
+  // Loads and vehicles came later within version 1: a file written before them has neither, and a
+  // workspace without them is written without them (an earlier build still opens it).
+  loads: json.optionalNullable(json.text(MAX_PATH_LENGTH)),
+  vehicles: json.optionalNullable(json.text(MAX_PATH_LENGTH)),
 });
 
 const settingsSchema = json.object({

@@ -3,7 +3,7 @@
 // and scripted dialogs. Requests arrive already validated (validate-request.ts).
 
 import path from 'node:path';
-import type { AppInfo, ChannelName, OpenedWorkspace, ReadFile, RecentWorkspace, RequestOf, ResponseOf } from '../ipc/contract';
+import type { AppInfo, ChannelName, OpenedWorkspace, ReadFile, RecentWorkspace, RequestOf, ResponseOf, WorkspaceDocument } from '../ipc/contract';
 import { writeFileAtomic } from '../workspace/atomic-write';
 import { FileAccessError } from '../workspace/errors';
 import type { RecentStore } from '../workspace/recent-list';
@@ -31,6 +31,12 @@ export interface HostServiceDeps {
 }
 
 type Handlers = { [C in ChannelName]: (request: RequestOf<C>) => Promise<ResponseOf<C>> };
+
+/** Every input file a workspace names: network, loads and vehicles (each grants reading when opened). */
+function inputFiles(document: WorkspaceDocument): (string | null)[] {
+  const f = document.files;
+  return [f.depots, f.lanes, f.loads ?? null, f.vehicles ?? null];
+}
 
 /** The desktop implementation of every channel. */
 export function createHostService(deps: HostServiceDeps): Handlers {
@@ -63,7 +69,7 @@ export function createHostService(deps: HostServiceDeps): Handlers {
         throw error;
       }
       deps.grants.allowWorkspace(file);
-      for (const input of [opened.document.files.depots, opened.document.files.lanes]) {
+      for (const input of inputFiles(opened.document)) {
         if (input !== null) deps.grants.allowRead(input);
       }
       currentWorkspace = file;
@@ -75,7 +81,7 @@ export function createHostService(deps: HostServiceDeps): Handlers {
       // A saved workspace grants reading of the files it names when reopened, so it may only name
       // files the user already chose; otherwise a page could grant itself any file. A bare file name
       // (the bundled sample) is let through: it can only ever resolve next to the workspace itself.
-      for (const input of [document.files.depots, document.files.lanes]) {
+      for (const input of inputFiles(document)) {
         if (input === null) continue;
         const bareName = !path.isAbsolute(input) && !/[/\\]/.test(input) && input !== '..' && input !== '.';
         if (!bareName && !deps.grants.canRead(input)) throw new FileGrantError(input, 'read');

@@ -28,10 +28,14 @@ export function resolvedPath(stored: string, workspacePath: string, api: PathApi
 }
 
 function mapFiles(files: WorkspaceFiles, map: (p: string) => string): WorkspaceFiles {
-  return {
+  const mapped: WorkspaceFiles = {
     depots: files.depots === null ? null : map(files.depots),
     lanes: files.lanes === null ? null : map(files.lanes),
   };
+  // The loads and vehicles fields are optional: left out when the document leaves them out.
+  if (files.loads !== undefined) mapped.loads = files.loads === null ? null : map(files.loads);
+  if (files.vehicles !== undefined) mapped.vehicles = files.vehicles === null ? null : map(files.vehicles);
+  return mapped;
 }
 
 /** The document as it should be written to `workspacePath`. */

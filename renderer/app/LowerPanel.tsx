@@ -65,7 +65,7 @@ export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, 
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
       {/* Kept mounted while other tabs show, so the loads and their plan stay. */}
       <div hidden={tab !== 'loads'}>
-        <LoadsPanel engine={bench.engine} host={bench.host} network={network} date={solve.settings.dispatchDate} onDraw={onDrawLoad} onMessage={bench.setMessage} />
+        <LoadsPanel engine={bench.engine} host={bench.host} network={network} date={solve.settings.dispatchDate} scenario={scenario} files={bench.loadFiles} onFiles={bench.setLoadFiles} onDraw={onDrawLoad} onMessage={bench.setMessage} />
       </div>
     </Tabs>
   );

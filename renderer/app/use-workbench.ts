@@ -14,7 +14,7 @@ import { useDataset, type DatasetFiles } from './use-dataset';
 import { useDiscardGuard } from './use-discard-guard';
 import { useEngine } from './use-engine';
 import { usePlan } from './use-plan';
-import { defaultSettings, documentOf, filesOf, stateOf } from './workspace-doc';
+import { defaultSettings, documentOf, filesOf, loadFilesOf, stateOf, type LoadFiles } from './workspace-doc';
 
 function planOf(settings: PlanSettings): PlanChoice {
   return { date: settings.dispatchDate, vehicleClass: settings.vehicleClass };
@@ -27,6 +27,8 @@ export function useWorkbench(host: LanewrightHost) {
   const { load, replan } = dataset;
   const [settings, setSettings] = useState<PlanSettings>(() => defaultSettings(SAMPLE_ORIGIN));
   const [scenario, setScenario] = useState<Scenario>(() => emptyScenario());
+  // The Loads panel's files belong to the workspace: saved with it and reopened with it.
+  const [loadFiles, setLoadFiles] = useState<LoadFiles | null>(null);
   const [selected, setSelected] = useState<number | null>(null);
   const [message, setMessage] = useState<string | null>(null);
   const lifecycle = useMemo(() => new LifecycleStore(), []);
@@ -47,6 +49,7 @@ export function useWorkbench(host: LanewrightHost) {
         const fresh = emptyScenario();
         setSettings(next);
         setScenario(fresh);
+        setLoadFiles(null);
         setSelected(null);
         // A new workspace: Save must ask where, not overwrite the workspace opened before.
         lifecycle.dispatch({ type: 'opened', savedPath: null, key: workspaceFingerprint(documentOf(files, next, fresh)) });
@@ -56,18 +59,22 @@ export function useWorkbench(host: LanewrightHost) {
     [load, lifecycle],
   );
 
+  // Null when the workspace did not open; otherwise a note for the message ('' when none).
   const openDocument = useCallback(
-    async (doc: Parameters<typeof stateOf>[0], path: string | null) => {
+    async (doc: Parameters<typeof stateOf>[0], path: string | null): Promise<string | null> => {
       const state = stateOf(doc);
       const files = await filesOf(host, doc);
       if (files && (await load(files, planOf(state.settings)))) {
+        const loads = await loadFilesOf(host, doc);
         setSettings(state.settings);
         setScenario(state.scenario);
+        setLoadFiles(loads.files);
         setSelected(null);
-        lifecycle.dispatch({ type: 'opened', savedPath: path, key: workspaceFingerprint(documentOf(files, state.settings, state.scenario)) });
-        return true;
+        // A loads file that could not be read is left out: the document then differs, so it is dirty.
+        lifecycle.dispatch({ type: 'opened', savedPath: path, key: workspaceFingerprint(documentOf(files, state.settings, state.scenario, loads.files)) });
+        return loads.problem === null ? '' : `Note: ${loads.problem}.`;
       }
-      return false;
+      return null;
     },
     [host, load, lifecycle],
   );
@@ -85,7 +92,11 @@ export function useWorkbench(host: LanewrightHost) {
         if (host.kind === 'web' || path) {
           const opened = await host.openWorkspace(path);
           if (!opened.ok) problem = opened.failure.message;
-          else if (opened.value && (await openDocument(opened.value.document, opened.value.path))) return;
+          else if (opened.value) {
+            const note = await openDocument(opened.value.document, opened.value.path);
+            if (note) setMessage(note);
+            if (note !== null) return;
+          }
         }
       } catch (error) {
         problem = (error as Error).message;
@@ -109,7 +120,7 @@ export function useWorkbench(host: LanewrightHost) {
     });
   }, [network, settings, replan]);
 
-  const document = useMemo(() => documentOf(dataset.files, settings, scenario), [dataset.files, settings, scenario]);
+  const document = useMemo(() => documentOf(dataset.files, settings, scenario, loadFiles), [dataset.files, settings, scenario, loadFiles]);
 
   // The lifecycle compares this fingerprint with the one last opened or saved ("unsaved" means the
   // document really differs); the first document after an open is the clean one.
@@ -182,7 +193,8 @@ export function useWorkbench(host: LanewrightHost) {
       const chosen = opened.value;
       await replaceWith(`Opening ${chosen.path}`, async () => {
         try {
-          if (await openDocument(chosen.document, chosen.path)) setMessage(`Opened ${chosen.path}.`);
+          const note = await openDocument(chosen.document, chosen.path);
+          if (note !== null) setMessage(`Opened ${chosen.path}.${note ? ` ${note}` : ''}`);
         } catch (error) {
           // A file the workspace names could not be read: the workspace on screen stays as it was.
           setMessage(`Could not open the workspace: ${(error as Error).message}`);
@@ -205,7 +217,7 @@ export function useWorkbench(host: LanewrightHost) {
     [load],
   );
 
-  return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
+  return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, loadFiles, setLoadFiles, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
 }
 
 export type Workbench = ReturnType<typeof useWorkbench>;

@@ -5,10 +5,21 @@ import type { LanewrightHost, WorkspaceDocument } from '../../main/ipc/contract'
 import { emptyWorkspace } from '../../engine/index';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { sampleText } from '../sample/sample';
-import type { PlanSettings } from '../worker/protocol';
+import type { NamedText, PlanSettings } from '../worker/protocol';
 import type { DatasetFiles } from './use-dataset';
 
 export const NO_CLASS = '';
+
+/**
+ * The Loads panel's files, kept with the workspace. `loads.name` is empty while only a vehicles file
+ * has been chosen (nothing to plan yet).
+ */
+export interface LoadFiles {
+  loads: NamedText;
+  vehicles: NamedText | null;
+}
+
+const workspaceName = (f: NamedText) => f.path ?? f.name;
 
 /** Today as an ISO 8601 date in the local calendar. */
 export function todayIso(now = new Date()): string {
@@ -21,10 +32,13 @@ export function defaultSettings(origin: string): PlanSettings {
 }
 
 /** The document for the current state. */
-export function documentOf(files: DatasetFiles | null, settings: PlanSettings, scenario: Scenario): WorkspaceDocument {
+export function documentOf(files: DatasetFiles | null, settings: PlanSettings, scenario: Scenario, loadFiles: LoadFiles | null = null): WorkspaceDocument {
   const doc = emptyWorkspace();
   doc.savedAt = new Date().toISOString();
-  doc.files = { depots: files ? (files.depots.path ?? files.depots.name) : null, lanes: files ? (files.lanes.path ?? files.lanes.name) : null };
+  doc.files = { depots: files ? workspaceName(files.depots) : null, lanes: files ? workspaceName(files.lanes) : null };
+  // Written only when chosen, so a workspace without loads is the file an earlier build wrote.
+  if (loadFiles && loadFiles.loads.name !== '') doc.files.loads = workspaceName(loadFiles.loads);
+  if (loadFiles?.vehicles) doc.files.vehicles = workspaceName(loadFiles.vehicles);
   doc.settings = {
     origin: settings.origin || null,
     dispatchDate: settings.dispatchDate || null,
@@ -59,4 +73,21 @@ async function readNamed(host: LanewrightHost, path: string): Promise<{ name: st
 export async function filesOf(host: LanewrightHost, doc: WorkspaceDocument): Promise<DatasetFiles | null> {
   if (!doc.files.depots || !doc.files.lanes) return null;
   return { depots: await readNamed(host, doc.files.depots), lanes: await readNamed(host, doc.files.lanes) };
+}
+
+/**
+ * The loads and vehicles files a document names, or null when it names neither. A file that cannot
+ * be read is named in `problem`; the network still opens.
+ */
+export async function loadFilesOf(host: LanewrightHost, doc: WorkspaceDocument): Promise<{ files: LoadFiles | null; problem: string | null }> {
+  const { loads, vehicles } = doc.files;
+  if (!loads && !vehicles) return { files: null, problem: null };
+  try {
+    return {
+      files: { loads: loads ? await readNamed(host, loads) : { name: '', text: '' }, vehicles: vehicles ? await readNamed(host, vehicles) : null },
+      problem: null,
+    };
+  } catch (error) {
+    return { files: null, problem: `the workspace's loads or vehicles file was not read: ${(error as Error).message}` };
+  }
 }

@@ -2,14 +2,11 @@
 // so the Loads panel can show lane limits at work offline: a 4.2 m double-deck trailer, a 2-axle
 // rigid and an ADR tanker against a low bridge, a weight-limited bridge and a category-D tunnel.
 
-import loadsText from '../../sample-data/loads.csv?raw';
-import vehiclesText from '../../sample-data/vehicles.csv?raw';
+// The texts are bundled in sample.ts, so a workspace naming sample:loads.csv reopens them.
 import type { NamedText } from '../worker/protocol';
-import { SAMPLE_PREFIX } from './sample';
+import { SAMPLE_PREFIX, sampleText } from './sample';
 
 export function sampleLoadFiles(): { loads: NamedText; vehicles: NamedText } {
-  return {
-    loads: { name: `${SAMPLE_PREFIX}loads.csv`, text: loadsText },
-    vehicles: { name: `${SAMPLE_PREFIX}vehicles.csv`, text: vehiclesText },
-  };
+  const named = (file: string): NamedText => ({ name: `${SAMPLE_PREFIX}${file}`, text: sampleText(`${SAMPLE_PREFIX}${file}`)! });
+  return { loads: named('loads.csv'), vehicles: named('vehicles.csv') };
 }

@@ -4,6 +4,8 @@
 import depotsText from '../../sample-data/depots.csv?raw';
 import lanesText from '../../sample-data/lanes.csv?raw';
 import loopLanesText from '../../sample-data/lanes-rebate-loop.csv?raw';
+import loadsText from '../../sample-data/loads.csv?raw';
+import vehiclesText from '../../sample-data/vehicles.csv?raw';
 import type { NamedText } from '../worker/protocol';
 
 /** Workspace "paths" of bundled files start with this, so they are never asked of the host. */
@@ -20,6 +22,9 @@ const FILES = new Map<string, string>([
   ['depots.csv', depotsText],
   ['lanes.csv', lanesText],
   ['lanes-rebate-loop.csv', loopLanesText],
+  // The Loads panel's sample day; a workspace names them as sample:loads.csv and sample:vehicles.csv.
+  ['loads.csv', loadsText],
+  ['vehicles.csv', vehiclesText],
 ]);
 
 /** The sample depots and lanes; `loop` picks the variant whose rebates form a loop. */

@@ -1,7 +1,8 @@
 // The worker's side of the Loads panel: reads the loads (and vehicles) texts against the imported
-// network, plans every load and returns the dispatch report, the files' report and the sheet as CSV.
+// network, plans every load (under the active what-if scenario, through the engine's overlay) and
+// returns the dispatch report, the files' report and the sheet as CSV.
 
-import { planLoads, dispatchCsv, importLoads, importVehicles, dispatchReport, type ImportResult, type ValidationItem, type ValidationReport, type DispatchReport } from '../../engine/index';
+import { planLoads, dispatchCsv, importLoads, importVehicles, dispatchReport, type ImportResult, type OverlayIndex, type Scenario, type ValidationItem, type ValidationReport, type DispatchReport } from '../../engine/index';
 import type { ImportIssue, ImportReport, NamedText } from './protocol';
 
 export interface DispatchRequest {
@@ -12,6 +13,8 @@ export interface DispatchRequest {
   alternatives: number;
   /** Plan with the accepted rows when some are rejected. */
   acceptPartial: boolean;
+  /** The active what-if scenario (null = the lanes as the file has them). */
+  scenario: Scenario | null;
 }
 
 export interface DispatchView {
@@ -35,7 +38,7 @@ function merged(reports: ValidationReport[]): ImportReport {
   };
 }
 
-export function dispatchLoads(imported: ImportResult, request: DispatchRequest): DispatchView {
+export function dispatchLoads(imported: ImportResult, request: DispatchRequest, index?: OverlayIndex): DispatchView {
   const network = imported.network!;
   const vehicles = request.vehicles ? importVehicles(request.vehicles.text, { file: request.vehicles.name, classes: imported.vehicleClasses }) : null;
   const loads = importLoads(request.loads.text, {
@@ -49,7 +52,7 @@ export function dispatchLoads(imported: ImportResult, request: DispatchRequest):
   });
   const files = merged(vehicles ? [vehicles.report, loads.report] : [loads.report]);
   if (files.issues.length > 0 && !request.acceptPartial) return { report: null, files: { ...files, fatal: true }, csv: null };
-  const plan = planLoads(imported, loads.loads, { date: request.date, vehicles: vehicles?.byId ?? new Map(), alternatives: request.alternatives, skipInvalid: true });
+  const plan = planLoads(imported, loads.loads, { date: request.date, vehicles: vehicles?.byId ?? new Map(), alternatives: request.alternatives, skipInvalid: true, scenario: request.scenario, overlayIndex: index });
   const report = dispatchReport(plan);
   return { report, files, csv: dispatchCsv(report) };
 }

@@ -80,7 +80,7 @@ export class WorkerSession {
       case 'dispatch': {
         if (!this.imported || !this.network) throw new LanewrightError('workspace: no network is loaded yet');
         this.post({ kind: 'progress', id: message.id, phase: 'Planning the loads', fraction: 0.1 });
-        this.post({ kind: 'dispatched', id: message.id, result: dispatchLoads(this.imported, message.request) });
+        this.post({ kind: 'dispatched', id: message.id, result: dispatchLoads(this.imported, message.request, this.rowIndex ?? undefined) });
         return;
       }
       case 'review': {

@@ -11,6 +11,8 @@ import { importLoads, importVehicles } from '../../engine/import/import-loads';
 import { importNetwork } from '../../engine/planning/import-network';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { DISPATCH_CAUTION } from '../../engine/text/cautions';
+import { serializeScenarioDocument } from '../../engine/scenario/document';
+import type { Scenario } from '../../engine/scenario/types';
 import { chooseFile, offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
 import { pdfPages } from './support/pdf-text';
 
@@ -104,6 +106,31 @@ describe('Loads panel', () => {
     for (const p of pages) expect(p).toContain(squeeze(DISPATCH_CAUTION));
     await page.evaluate(() => document.body.classList.remove('lw-printing-sheet'));
     expect(offsiteRequests(session)).toEqual([]);
+    expect(session.errors).toEqual([]);
+  });
+
+  it('plans the loads under the what-if scenario loaded in the app, as the engine does', async () => {
+    const scenario: Scenario = {
+      name: 'Gotthard toll up',
+      description: null,
+      changes: [{ kind: 'set-amount', lane: { from: 'ZRH', to: 'MIL', ref: 'BFH-L-211', occurrence: 1 }, field: 'toll', amountMinor: 90_000, vehicleClass: null, note: null }],
+    };
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Load a scenario file…' }).click()]);
+    await chooser.setFiles({ name: 'gotthard.json', mimeType: 'application/json', buffer: Buffer.from(serializeScenarioDocument(scenario), 'utf8') });
+    await page.getByRole('tab', { name: /Loads/ }).click();
+    await expect.poll(() => page.locator('[data-testid="loads-scenario"]').count()).toBe(1);
+    expect(await page.locator('[data-testid="loads-scenario"]').innerText()).toContain('Gotthard toll up');
+
+    const imported = importNetwork(text('depots.csv'), text('lanes.csv'), { plan: { date } });
+    const vehicles = importVehicles(text('vehicles.csv'), { classes: imported.vehicleClasses });
+    const loads = importLoads(text('loads.csv'), { depots: imported.network!.depotIndex, vehicles: vehicles.byId, classes: imported.vehicleClasses, planDate: date });
+    const expected = planLoads(imported, loads.loads, { date, vehicles: vehicles.byId, scenario }).loads.find((p) => p.load.id === 'L-0815-05')!;
+    expect(expected.path).not.toEqual(['BSL', 'ZRH', 'MIL']);
+    const row = page.locator('[data-testid="loads-table"] tr[data-load="L-0815-05"]');
+    await expect.poll(async () => (await row.locator('td').nth(5).innerText()).replace(/,/g, '')).toBe((expected.costMinor! / 100).toFixed(2));
+    await row.click();
+    expect(await page.locator('[data-testid="load-detail"]').innerText()).toContain(`Route ${expected.path.join(' › ')}`);
     expect(session.errors).toEqual([]);
   });
 });

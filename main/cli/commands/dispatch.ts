@@ -1,9 +1,11 @@
 // `lanewright dispatch`: the day's loads, each on its own vehicle, over the network's lanes with the
 // vehicles' limits: status, cost, what the limits cost, what blocks a load, alternatives and totals,
 // as CSV (one row per load, default) or JSON. Input problems stop it unless --skip-invalid.
+// --scenario plans the loads under a what-if through the engine's overlay, as the app does.
 
-import { planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
+import { parseScenarioDocument, planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
+import { readTextFile } from '../files';
 import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
 import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { readTextChunks } from '../read-chunks';
@@ -21,6 +23,7 @@ export const dispatchCommand: CommandSpec = {
     ...NETWORK_FILES,
     { name: 'loads', value: 'FILE', help: 'loads CSV (load, from, to, date, vehicle, ...)', required: true },
     { name: 'vehicles', value: 'FILE', help: 'vehicles CSV (vehicle, vehicle_class, height_m, weight_t, ...)' },
+    { name: 'scenario', value: 'FILE', help: 'plan the loads under this what-if scenario file (lanewright-scenario)' },
     { name: 'alternatives', value: 'K', help: 'up to K alternative routes per load (at most 20)' },
     JSON_OPTION,
     OUT_OPTION,
@@ -49,10 +52,13 @@ function reportFile(report: ValidationReport, args: ParsedArgs, out: CommandOutp
 function runDispatch(args: ParsedArgs, out: CommandOutput): number {
   const loadsPath = required(args, 'loads');
   const vehiclesPath = args.values.get('vehicles');
+  const scenarioPath = args.values.get('scenario');
   const k = wholeNumberOption(args, 'alternatives', 0) ?? 0;
   if (k > MAX_ALTERNATIVES) throw new UsageError(`--alternatives must be at most ${MAX_ALTERNATIVES}, got ${k}`);
 
   const start = performance.now();
+  // Read before the network so a bad scenario file stops the command before any work.
+  const scenario = scenarioPath === undefined ? null : parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
   const imported = loadImport(args);
   // loadImport has printed the note when the date is today's; loads without a date go on this day.
   const { date } = planDateOf(args);
@@ -81,10 +87,12 @@ function runDispatch(args: ParsedArgs, out: CommandOutput): number {
     settings: importOptionsFromArgs(args).plan?.settings,
     skipInvalid: args.flags.has('skip-invalid'),
     alternatives: k,
+    scenario,
   });
   const solveMs = performance.now() - solveStart;
   const report = dispatchReport(plan);
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : dispatchCsv(report));
+  if (scenario) out.warn(`note: loads planned under the what-if scenario "${scenario.name}" (${scenarioPath}), not the lanes as the file has them`);
   for (const w of report.warnings) out.warn(`warning: ${w}`);
   for (const n of report.notes) out.warn(`note: ${n}`);
   const t = report.totals.all;

@@ -3,18 +3,21 @@
 // sortable and filterable), the selected load's breakdown and why it is blocked, alternatives on
 // request, totals, the dispatch sheet as CSV and a printable sheet (one page per date).
 
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
-import { DEFAULT_LOADS_QUERY, loadCautions, queryLoads, toggleLoadSort, type LoadSortKey, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
+import { DEFAULT_LOADS_QUERY, queryLoads, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
 import type { DispatchView } from '../../worker/dispatch-loads';
 import type { NamedText, NetworkView } from '../../worker/protocol';
+import { hasChanges, type Scenario } from '../../model/scenario-edits';
 import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
+import { LoadsTable } from './LoadsTable';
 import { PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
+import type { LoadFiles } from '../../app/workspace-doc';
 import './loads.css';
 
 /** A component whose own sum is outside the exact range (engine RouteBreakdown); the cost stands. */
@@ -26,27 +29,20 @@ export interface LoadsPanelProps {
   network: NetworkView;
   /** Date for loads without one (the plan's dispatch date). */
   date: string;
+  /** The active what-if scenario; the loads are planned under it. */
+  scenario: Scenario;
+  /** The loads and vehicles files, kept with the workspace (null = none chosen). */
+  files: LoadFiles | null;
+  onFiles(files: LoadFiles | null): void;
   /** The routes to draw on the map for the selected load (null = none). */
   onDraw(routes: LoadRouteDrawing[] | null): void;
   onMessage(text: string): void;
 }
 
-const COLUMNS: { key: LoadSortKey; label: string; numeric?: boolean }[] = [
-  { key: 'load', label: 'Load' },
-  { key: 'from', label: 'From' },
-  { key: 'to', label: 'To' },
-  { key: 'date', label: 'Date' },
-  { key: 'vehicle', label: 'Vehicle' },
-  { key: 'status', label: 'Status' },
-  { key: 'cost', label: 'Cost', numeric: true },
-  { key: 'limits', label: 'Limits cost', numeric: true },
-  { key: 'drive', label: 'Drive time', numeric: true },
-];
 
 const ALTERNATIVES = 3;
 
-export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: LoadsPanelProps) {
-  const [files, setFiles] = useState<{ loads: NamedText; vehicles: NamedText | null } | null>(null);
+export function LoadsPanel({ engine, host, network, date, scenario, files, onFiles, onDraw, onMessage }: LoadsPanelProps) {
   const [view, setView] = useState<DispatchView | null>(null);
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -54,12 +50,14 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
   const [selected, setSelected] = useState<string | null>(null);
   const [showAlternatives, setShowAlternatives] = useState(false);
 
-  const run = (next: { loads: NamedText; vehicles: NamedText | null }, acceptPartial: boolean) => {
-    setFiles(next);
+  // What the plan on screen was made from: files, network and scenario.
+  const planned = useRef<{ files: LoadFiles; network: NetworkView; scenario: Scenario } | null>(null);
+  const run = (next: LoadFiles, acceptPartial: boolean) => {
+    planned.current = { files: next, network, scenario };
     setBusy(true);
     setProblem(null);
     engine
-      .track((onProgress) => engine.client.request('dispatch', { request: { ...next, date, alternatives: ALTERNATIVES, acceptPartial } }, onProgress), 'Planning the loads')
+      .track((onProgress) => engine.client.request('dispatch', { request: { ...next, date, alternatives: ALTERNATIVES, acceptPartial, scenario: hasChanges(scenario) ? scenario : null } }, onProgress), 'Planning the loads')
       .then((answer) => {
         setView(answer.result);
         const t = answer.result.report?.totals.all;
@@ -68,10 +66,18 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
       .catch((error: Error) => setProblem(error instanceof WorkCancelledError ? 'Planning the loads was stopped.' : error.message))
       .finally(() => setBusy(false));
   };
-  // A new network (import, re-plan) makes the plan stale: plan the same files again.
+  // New files (picked, or reopened with a workspace) are planned as they are; a new network (import,
+  // re-plan) or another what-if makes the plan stale: the same files are planned again.
   useEffect(() => {
-    if (files) run(files, true);
-  }, [network]);
+    const last = planned.current;
+    if (!files || files.loads.name === '') {
+      planned.current = null;
+      if (!files) setView(null);
+      return;
+    }
+    if (last && last.files === files && last.network === network && last.scenario === scenario) return;
+    run(files, last !== null && last.files === files);
+  }, [files, network, scenario]);
   useEffect(() => () => onDraw(null), []);
 
   const pick = async (kind: 'loads' | 'vehicles') => {
@@ -79,10 +85,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
     if (!picked.ok) return setProblem(`${kind === 'loads' ? 'Loads' : 'Vehicles'} file not read: ${picked.failure.message}`);
     if (!picked.value) return;
     const text: NamedText = { name: picked.value.name, text: picked.value.text, path: picked.value.path };
-    if (kind === 'vehicles') {
-      if (files) run({ ...files, vehicles: text }, false);
-      else setFiles({ loads: { name: '', text: '' }, vehicles: text });
-    } else run({ loads: text, vehicles: files?.vehicles ?? null }, false);
+    onFiles(kind === 'vehicles' ? { loads: files?.loads ?? { name: '', text: '' }, vehicles: text } : { loads: text, vehicles: files?.vehicles ?? null });
   };
 
   const report = view?.report ?? null;
@@ -117,7 +120,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
         <button type="button" onClick={() => void pick('vehicles')} disabled={busy}>
           {files?.vehicles ? `Vehicles: ${files.vehicles.name}` : 'Import vehicles…'}
         </button>
-        <button type="button" onClick={() => run(sampleLoadFiles(), false)} disabled={busy}>
+        <button type="button" onClick={() => onFiles(sampleLoadFiles())} disabled={busy}>
           Sample loads
         </button>
         {view?.files.fatal && (
@@ -158,6 +161,11 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
       )}
       {report && (
         <>
+          {report.scenario !== null && (
+            <p className="lw-warn" data-testid="loads-scenario">
+              Planned under the what-if scenario “{report.scenario}”, not the lanes as the file has them.
+            </p>
+          )}
           <div className="lw-table-tools" role="group" aria-label="Filter loads">
             <input type="search" aria-label="Filter loads" placeholder="Filter by load, depot, vehicle or reason" value={query.text} onChange={(e) => setQuery({ ...query, text: e.target.value })} />
             <select aria-label="Load status filter" value={query.status} onChange={(e) => setQuery({ ...query, status: e.target.value as LoadStatusWord | 'all' })}>
@@ -171,47 +179,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
               {rows.length} of {report.loads.length} loads
             </span>
           </div>
-          <table className="lw-table" aria-label="Loads" data-testid="loads-table">
-            <thead>
-              <tr>
-                {COLUMNS.map((c) => (
-                  <th key={c.key} scope="col" aria-sort={query.sortKey === c.key ? (query.descending ? 'descending' : 'ascending') : 'none'} className={c.numeric ? 'lw-num' : undefined}>
-                    <button type="button" className="lw-sort" onClick={() => setQuery(toggleLoadSort(query, c.key))}>
-                      {c.label}
-                      <span aria-hidden="true">{query.sortKey === c.key ? (query.descending ? ' ▼' : ' ▲') : ''}</span>
-                    </button>
-                  </th>
-                ))}
-                <th scope="col">Cautions</th>
-              </tr>
-            </thead>
-            <tbody>
-              {rows.map((r) => (
-                <tr
-                  key={r.load}
-                  tabIndex={0}
-                  data-load={r.load}
-                  aria-current={r.load === selected ? 'true' : undefined}
-                  className={r.load === selected ? 'lw-selected' : undefined}
-                  onClick={() => setSelected(r.load)}
-                  onKeyDown={(e) => (e.key === 'Enter' || e.key === ' ') && (e.preventDefault(), setSelected(r.load))}
-                >
-                  <th scope="row">{r.load}</th>
-                  <td>{r.from}</td>
-                  <td>{r.to}</td>
-                  <td>{r.date}</td>
-                  <td>{r.vehicle ?? `class ${r.vehicle_class ?? '(default)'}`}</td>
-                  <td>
-                    <span className={`lw-badge lw-badge-${r.status}`}>{r.status}</span>
-                  </td>
-                  <td className="lw-num">{money(r.cost_minor)}</td>
-                  <td className="lw-num">{money(r.limits_extra_minor)}</td>
-                  <td className="lw-num">{formatDriveMinutes(r.breakdown?.drive_minutes ?? NaN)}</td>
-                  <td>{loadCautions(r).join(', ')}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <LoadsTable rows={rows} exponent={network.exponent} query={query} onQuery={setQuery} selected={selected} onSelect={setSelected} />
           {current && (
             <div className="lw-loads-detail" data-testid="load-detail" aria-live="polite">
               <h3>

@@ -3,9 +3,10 @@
 // (arrow keys, Page Up/Down, Home/End move between rows, Enter shows the route), exportable as CSV.
 // Long tables are windowed: only rows near the view are in the DOM.
 
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useMemo, useState } from 'react';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
+import { useRowKeys } from '../DataTable/use-row-keys';
 import { ALL_FLAG_LABELS, flagExplanations } from '../../model/flags';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { costText, DEFAULT_QUERY, queryRows, resultRows, statusBadges, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
@@ -19,8 +20,6 @@ export interface ResultsTableProps {
   onExport(): void;
 }
 
-const PAGE_ROWS = 15;
-
 const COLUMNS: { key: SortKey; label: string; numeric?: boolean }[] = [
   { key: 'id', label: 'Depot' },
   { key: 'name', label: 'Name' },
@@ -33,42 +32,12 @@ const COLUMNS: { key: SortKey; label: string; numeric?: boolean }[] = [
 
 export function ResultsTable({ network, solve, selected, onSelect, onExport }: ResultsTableProps) {
   const [query, setQuery] = useState<TableQuery>(DEFAULT_QUERY);
-  // Roving tab stop: the table is one Tab stop; the keys move between rows (by index, so rows
-  // outside the rendered window are reached too).
-  const [active, setActive] = useState(0);
-  const focusWanted = useRef<number | null>(null);
   const rows = useMemo(() => resultRows(network, solve), [network, solve]);
   const visible = useMemo(() => queryRows(rows, query), [rows, query]);
   const rowWindow = useRowWindow(visible.length);
+  // The table is one Tab stop; the keys move between rows by index (rows outside the window too).
+  const keys = useRowKeys(rowWindow, visible.length, (i) => onSelect(visible[i].depot));
   const columns = solve.base ? [...COLUMNS, { key: 'delta' as SortKey, label: 'Change vs base', numeric: true }] : COLUMNS;
-  const last = visible.length - 1;
-  const current = Math.max(0, Math.min(active, last));
-  const tabStop = current >= rowWindow.start && current < rowWindow.end ? current : rowWindow.start;
-
-  // Focus follows the keys once the wanted row is rendered (a windowed table renders it after scrolling).
-  useEffect(() => {
-    const wanted = focusWanted.current;
-    if (wanted === null) return;
-    const row = rowWindow.bodyRef.current?.querySelector<HTMLElement>(`tr[aria-rowindex="${wanted + 2}"]`);
-    if (row) {
-      focusWanted.current = null;
-      row.focus();
-    }
-  });
-
-  const moveFocus = (event: React.KeyboardEvent<HTMLTableRowElement>, i: number, depot: number) => {
-    const steps: Record<string, number> = { ArrowDown: 1, ArrowUp: -1, PageDown: PAGE_ROWS, PageUp: -PAGE_ROWS, Home: -Infinity, End: Infinity };
-    if (event.key in steps) {
-      event.preventDefault();
-      const next = Math.max(0, Math.min(last, i + steps[event.key]));
-      setActive(next);
-      focusWanted.current = next;
-      rowWindow.scrollToIndex(next);
-    } else if (event.key === 'Enter' || event.key === ' ') {
-      event.preventDefault();
-      onSelect(depot);
-    }
-  };
   return (
     <div className="lw-results">
       <div className="lw-table-tools" role="group" aria-label="Filter results">
@@ -111,14 +80,14 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
             <tr
               key={row.depot}
               aria-rowindex={i + 2}
-              tabIndex={i === tabStop ? 0 : -1}
+              tabIndex={i === keys.tabStop ? 0 : -1}
               data-depot={row.id}
               data-cost-minor={Number.isFinite(row.costMinor) ? row.costMinor : ''}
               aria-current={row.depot === selected ? 'true' : undefined}
               className={`lw-status-${row.status}${row.unbounded && row.status === 'origin' ? ' lw-status-unbounded' : ''}${row.depot === selected ? ' lw-selected' : ''}`}
-              onClick={() => (onSelect(row.depot), setActive(i))}
-              onFocus={() => setActive(i)}
-              onKeyDown={(event) => moveFocus(event, i, row.depot)}
+              onClick={() => (onSelect(row.depot), keys.setActive(i))}
+              onFocus={() => keys.setActive(i)}
+              onKeyDown={(event) => keys.onKeyDown(event, i)}
             >
               <th scope="row">{row.id}</th>
               <td>{row.name}</td>

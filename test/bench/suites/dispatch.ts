@@ -6,6 +6,7 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { buildOverlay } from '../../../engine/scenario/overlay';
 import { priceDay, pricingKeyText, type PricedDay } from '../../../engine/dispatch/day-pricing';
 import { closedLanes, restrictedWeights, restrictionProfile } from '../../../engine/dispatch/vehicle-limits';
 import { importLoads, importVehicles } from '../../../engine/import/import-loads';
@@ -97,10 +98,11 @@ export const suite: BenchSuite = {
       const imported = importNetwork(text.depots, text.lanes, { plan: { date: DATES[0] } });
       const vehicles = importVehicles(text.vehicles, { classes: imported.vehicleClasses });
       const loads = importLoads(text.loads, { depots: imported.network!.depotIndex, vehicles: vehicles.byId, classes: imported.vehicleClasses, planDate: DATES[0] }).loads.slice(0, BASELINE_LOADS);
+      const overlay = buildOverlay(imported, null);
       const days = new Map<string, PricedDay>();
       for (const l of loads) {
         const key = { date: l.date, vehicleClass: l.vehicleClass, fuelLitresPer100Km: null };
-        if (!days.has(pricingKeyText(key))) days.set(pricingKeyText(key), priceDay(imported, key, {}, false));
+        if (!days.has(pricingKeyText(key))) days.set(pricingKeyText(key), priceDay(imported, overlay, key, {}, false));
       }
       const baseCpu0 = process.cpuUsage();
       const baseStart = performance.now();

@@ -56,6 +56,19 @@ describe('parseWorkspace', () => {
     expect(migratedFrom).toBe(WORKSPACE_VERSION);
   });
 
+  it('keeps the loads and vehicles files; a version 1 file without them opens, and is written without them', () => {
+    const doc = { ...sampleWorkspace(), files: { depots: 'depots.csv', lanes: 'lanes.csv', loads: '/srv/plans/loads-0815.csv', vehicles: null } };
+    const text = serializeWorkspace(doc);
+    expect(JSON.parse(text).files).toEqual({ depots: 'depots.csv', lanes: 'lanes.csv', loads: '/srv/plans/loads-0815.csv', vehicles: null });
+    expect(parseWorkspace(text, 'x').document.files).toEqual(doc.files);
+    // Written before the fields existed: nothing to reopen, and saving it again adds nothing.
+    const older = sampleWorkspace();
+    expect(JSON.parse(serializeWorkspace(older)).files).toEqual({ depots: '/srv/plans/depots.csv', lanes: 'lanes.csv' });
+    expect(parseWorkspace(serializeWorkspace(older), 'x').document.files.loads ?? null).toBeNull();
+    expect(failure(withField((d) => (d.files.loads = 7)))).toMatchObject({ field: '/files/loads', reason: 'must be text' });
+    expect(failure(withField((d) => (d.files.vehicles = '')))).toMatchObject({ field: '/files/vehicles', reason: 'must not be empty' });
+  });
+
   it('accepts a UTF-8 byte-order mark before the JSON (RFC 8259 section 8.1 lets parsers ignore it)', () => {
     expect(parseWorkspace(`\ufeff${serializeWorkspace(emptyWorkspace())}`, 'x').document).toEqual(emptyWorkspace());
   });

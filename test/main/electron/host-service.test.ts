@@ -63,6 +63,21 @@ describe('workspaces', () => {
     expect((await h.service['file:read']({ path: lanes })).text).toBe('from,to\n');
   });
 
+  it('grants reading the loads and vehicles files an opened workspace names, and saves only chosen ones', async () => {
+    const loads = await h.write('loads.csv', 'load,from,to\n');
+    const vehicles = await h.write('vehicles.csv', 'vehicle,vehicle_class\n');
+    const ws = await h.write('w.json', JSON.stringify({ ...emptyWorkspace(), files: { depots: null, lanes: null, loads: 'loads.csv', vehicles: 'vehicles.csv' } }));
+    h.dialogs.chooseWorkspaceToOpen = ws;
+    const opened = await h.service['workspace:open']({ path: null });
+    expect(opened!.document.files).toMatchObject({ loads, vehicles });
+    expect((await h.service['file:read']({ path: loads })).text).toBe('load,from,to\n');
+    expect((await h.service['file:read']({ path: vehicles })).text).toBe('vehicle,vehicle_class\n');
+    const secret = await h.write('secret.txt', 'x');
+    h.dialogs.chooseWorkspaceTarget = join(h.dir, 'w2.json');
+    await expect(h.service['workspace:save']({ document: { ...emptyWorkspace(), files: { depots: null, lanes: null, loads: secret } }, path: null, saveAs: true })).rejects.toBeInstanceOf(FileGrantError);
+    await expect(h.service['workspace:save']({ document: { ...emptyWorkspace(), files: { depots: null, lanes: null, vehicles: secret } }, path: null, saveAs: true })).rejects.toBeInstanceOf(FileGrantError);
+  });
+
   it('refuses to open by path a workspace that is not on the recent list', async () => {
     const ws = await h.write('w.json', JSON.stringify(emptyWorkspace()));
     await expect(h.service['workspace:open']({ path: ws })).rejects.toMatchObject({ name: 'FileGrantError', operation: 'open' });

@@ -48,4 +48,12 @@ describe('whole documents', () => {
     expect(stored.files).toEqual({ depots: 'depots.csv', lanes: null });
     expect(withResolvedPaths(stored, '/srv/plan/w.json', path.posix)).toEqual(doc);
   });
+
+  it('stores the loads and vehicles files like the network files, and leaves them out when absent', () => {
+    const doc = { ...emptyWorkspace(), files: { depots: '/srv/plan/depots.csv', lanes: null, loads: '/srv/plan/day/loads.csv', vehicles: '/fleet/vehicles.csv' } };
+    const stored = withStoredPaths(doc, '/srv/plan/w.json', path.posix);
+    expect(stored.files).toEqual({ depots: 'depots.csv', lanes: null, loads: 'day/loads.csv', vehicles: '/fleet/vehicles.csv' });
+    expect(withResolvedPaths(stored, '/srv/plan/w.json', path.posix)).toEqual(doc);
+    expect(Object.keys(withStoredPaths(emptyWorkspace(), '/srv/plan/w.json', path.posix).files)).toEqual(['depots', 'lanes']);
+  });
 });

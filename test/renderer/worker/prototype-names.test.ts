@@ -59,6 +59,7 @@ describe.each(PROTOTYPE_NAMES)('worker import with "%s"', (name) => {
             date: '2026-06-01',
             alternatives: 0,
             acceptPartial: true,
+            scenario: null,
           },
         },
       ])[1];
