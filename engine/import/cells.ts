@@ -1,36 +1,24 @@
 // Small readers shared by the depots and lanes readers: cell text, ISO 8601 dates and drive times.
 // Each returns a value or a reason; the row readers turn reasons into report items.
 
-/** Trimmed cell text; an apostrophe our own exporter put before a formula-like text is removed. */
+import { withoutFormulaGuard } from '../io/csv-cell-safety';
+
+/** Trimmed cell text; the apostrophes our own exporter put before formula-like text are removed. */
 export function cellText(cells: readonly string[], index: number | undefined): string {
   if (index === undefined) return '';
   const raw = cells[index];
   if (raw === undefined) return '';
-  const text = raw.trim();
-  return text.charCodeAt(0) === 39 && /^'[=+\-@\t\r]/.test(text) ? text.slice(1) : text;
+  return withoutFormulaGuard(raw.trim());
 }
 
-/** An ISO 8601 calendar date (YYYY-MM-DD) as the number yyyymmdd, or null when it is not a real date. */
-export function readIsoDate(text: string): number | null {
-  const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
-  if (!m) return null;
-  const year = Number(m[1]);
-  const month = Number(m[2]);
-  const day = Number(m[3]);
-  if (month < 1 || month > 12 || day < 1) return null;
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
-  if (day > days) return null;
-  return year * 10000 + month * 100 + day;
-}
+export { readIsoDate, isoDateText } from '../text/iso-date';
 
-/** yyyymmdd back to "YYYY-MM-DD"; 0 (open) gives null. */
-export function isoDateText(value: number): string | null {
-  if (value === 0) return null;
-  const y = Math.floor(value / 10000);
-  const m = Math.floor(value / 100) % 100;
-  const d = value % 100;
-  return `${String(y).padStart(4, '0')}-${String(m).padStart(2, '0')}-${String(d).padStart(2, '0')}`;
+/**
+ * A copy of text that is kept (refs, notes): V8 keeps a substring pointing into its parent, so
+ * copying lets each parsed block of the file go.
+ */
+export function ownText(text: string): string {
+  return text.length > 12 ? (' ' + text).slice(1) : text;
 }
 
 /**

@@ -1,19 +1,10 @@
 // Reads and writes the workspace file: JSON text in, a checked and migrated WorkspaceDocument out,
 // and back. Pure (no file access); the Electron main process and the browser host both use it.
 
-import { WORKSPACE_FORMAT, WORKSPACE_VERSION, type WorkspaceSettings, type WorkspaceDocument, type WorkspaceFiles } from './document';
-import { WorkspaceFormatError } from './errors';
-import { migrateWorkspace } from './migrate';
-import {
-  checkArray,
-  checkInteger,
-  checkIsoDate,
-  checkIsoTimestamp,
-  checkObject,
-  checkOptionalText,
-  FieldCheckFailure,
-  showValue,
-} from './check';
+import { WORKSPACE_FORMAT, WORKSPACE_VERSION, type WorkspaceDocument } from './document';
+import { WorkspaceFormatError, WorkspaceVersionError } from './errors';
+import { checkJson, json, JsonCheckFailure, parseJsonText, showValue } from '../json/zod-checker';
+import { NewerVersionFailure, upgradeDocument, type UpgradeStep, type VersionedKind } from '../json/versioned';
 import { SCENARIO_FORMAT, SCENARIO_VERSION, scenarioFromJson, scenarioToJson } from '../scenario/document';
 import { ScenarioFormatError } from '../errors';
 import type { Scenario } from '../scenario/types';
@@ -25,25 +16,36 @@ export const MAX_SCENARIOS = 500;
 /** Largest maximum-legs setting. */
 export const MAX_LEGS_LIMIT = 100_000;
 
-const TOP_FIELDS = ['format', 'version', 'savedAt', 'files', 'settings', 'scenarios', 'activeScenario'];
+/**
+ * Upgrade steps keyed by the version they upgrade from. Version 1 is the first released format, so
+ * the table is empty; a format change adds `[n]: step` here and bumps WORKSPACE_VERSION.
+ */
+export const WORKSPACE_UPGRADES: Readonly<Record<number, UpgradeStep>> = {};
 
-function checkFiles(value: unknown): WorkspaceFiles {
-  const o = checkObject(value, '/files', ['depots', 'lanes']);
-  return {
-    depots: checkOptionalText(o.depots, '/files/depots', MAX_PATH_LENGTH),
-    lanes: checkOptionalText(o.lanes, '/files/lanes', MAX_PATH_LENGTH),
-  };
-}
+const WORKSPACE_KIND: VersionedKind = { format: WORKSPACE_FORMAT, label: 'workspace', current: WORKSPACE_VERSION, steps: WORKSPACE_UPGRADES };
 
-function checkSettings(value: unknown): WorkspaceSettings {
-  const o = checkObject(value, '/settings', ['origin', 'dispatchDate', 'vehicleClass', 'maxLegs']);
-  return {
-    origin: checkOptionalText(o.origin, '/settings/origin', 200),
-    dispatchDate: o.dispatchDate === null ? null : checkIsoDate(o.dispatchDate, '/settings/dispatchDate'),
-    vehicleClass: checkOptionalText(o.vehicleClass, '/settings/vehicleClass', 60),
-    maxLegs: o.maxLegs === null ? null : checkInteger(o.maxLegs, '/settings/maxLegs', 1, MAX_LEGS_LIMIT),
-  };
-}
+const filesSchema = json.object({
+  depots: json.nullable(json.text(MAX_PATH_LENGTH)),
+  lanes: json.nullable(json.text(MAX_PATH_LENGTH)),
+});
+
+const settingsSchema = json.object({
+  origin: json.nullable(json.text(200)),
+  dispatchDate: json.nullable(json.isoDate()),
+  vehicleClass: json.nullable(json.text(60)),
+  maxLegs: json.nullable(json.integer(1, MAX_LEGS_LIMIT)),
+});
+
+// Scenarios are checked by the scenario reader (their own format and version), then for unique names.
+const workspaceSchema = json.object({
+  format: json.exactly(WORKSPACE_FORMAT, `must be "${WORKSPACE_FORMAT}"; this is not a Lanewright workspace`),
+  version: json.exactly(WORKSPACE_VERSION, `must be ${WORKSPACE_VERSION}`),
+  savedAt: json.nullable(json.isoTimestamp()),
+  files: filesSchema,
+  settings: settingsSchema,
+  scenarios: json.list(json.anything(), MAX_SCENARIOS),
+  activeScenario: json.nullable(json.text(200)),
+});
 
 /**
  * How scenarios appear: in memory (and over IPC) as the engine's `Scenario`; on disk as scenario
@@ -59,11 +61,11 @@ function pointerOf(path: string): string {
 function readScenario(value: unknown, field: string, form: ScenarioForm): Scenario {
   try {
     if (form === 'stored') return scenarioFromJson(value, field);
-    if (typeof value !== 'object' || value === null || Array.isArray(value)) throw new FieldCheckFailure(field, showValue(value), 'must be an object');
+    if (typeof value !== 'object' || value === null || Array.isArray(value)) throw new JsonCheckFailure(field, showValue(value), 'must be an object');
     const { format: _format, version: _version, ...scenario } = value as Record<string, unknown>;
     return scenarioFromJson({ ...scenario, format: SCENARIO_FORMAT, version: SCENARIO_VERSION }, field);
   } catch (error) {
-    if (error instanceof ScenarioFormatError) throw new FieldCheckFailure(`${field}${pointerOf(error.path)}`, error.value, error.reason);
+    if (error instanceof ScenarioFormatError) throw new JsonCheckFailure(`${field}${pointerOf(error.path)}`, error.value, error.reason);
     throw error;
   }
 }
@@ -74,34 +76,19 @@ function readScenario(value: unknown, field: string, form: ScenarioForm): Scenar
  */
 export function checkWorkspace(value: unknown, source: string, form: ScenarioForm = 'memory'): WorkspaceDocument {
   try {
-    const o = checkObject(value, '', TOP_FIELDS);
-    if (o.format !== WORKSPACE_FORMAT) {
-      throw new FieldCheckFailure('/format', showValue(o.format), `must be "${WORKSPACE_FORMAT}"; this is not a Lanewright workspace`);
-    }
-    if (o.version !== WORKSPACE_VERSION) {
-      throw new FieldCheckFailure('/version', showValue(o.version), `must be ${WORKSPACE_VERSION}`);
-    }
-    const scenarios = checkArray(o.scenarios, '/scenarios', MAX_SCENARIOS).map((s, i) => readScenario(s, `/scenarios/${i}`, form));
+    const o = checkJson(workspaceSchema, value);
+    const scenarios = o.scenarios.map((s, i) => readScenario(s, `/scenarios/${i}`, form));
     const names = new Set<string>();
     scenarios.forEach((s, i) => {
-      if (names.has(s.name)) throw new FieldCheckFailure(`/scenarios/${i}/name`, showValue(s.name), 'another scenario has this name; names must be unique');
+      if (names.has(s.name)) throw new JsonCheckFailure(`/scenarios/${i}/name`, showValue(s.name), 'another scenario has this name; names must be unique');
       names.add(s.name);
     });
-    const activeScenario = checkOptionalText(o.activeScenario, '/activeScenario', 200);
-    if (activeScenario !== null && !names.has(activeScenario)) {
-      throw new FieldCheckFailure('/activeScenario', showValue(activeScenario), 'names no scenario in this workspace');
+    if (o.activeScenario !== null && !names.has(o.activeScenario)) {
+      throw new JsonCheckFailure('/activeScenario', showValue(o.activeScenario), 'names no scenario in this workspace');
     }
-    return {
-      format: WORKSPACE_FORMAT,
-      version: WORKSPACE_VERSION,
-      savedAt: o.savedAt === null ? null : checkIsoTimestamp(o.savedAt, '/savedAt'),
-      files: checkFiles(o.files),
-      settings: checkSettings(o.settings),
-      scenarios,
-      activeScenario,
-    };
+    return { ...o, scenarios };
   } catch (error) {
-    if (error instanceof FieldCheckFailure) throw new WorkspaceFormatError(source, error.field, error.value, error.reason);
+    if (error instanceof JsonCheckFailure) throw new WorkspaceFormatError(source, error.pointer, error.value, error.reason);
     throw error;
   }
 }
@@ -111,21 +98,14 @@ export function checkWorkspace(value: unknown, source: string, form: ScenarioFor
  * refused with WorkspaceVersionError), then every field. `source` names the file in errors.
  */
 export function parseWorkspace(text: string, source: string): { document: WorkspaceDocument; migratedFrom: number } {
-  let value: unknown;
   try {
-    value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    const { raw, migratedFrom } = upgradeDocument(parseJsonText(text), WORKSPACE_KIND);
+    return { document: checkWorkspace(raw, source, 'stored'), migratedFrom };
   } catch (error) {
-    throw new WorkspaceFormatError(source, '', null, `not valid JSON (${(error as Error).message})`);
+    if (error instanceof NewerVersionFailure) throw new WorkspaceVersionError(source, error.found, error.supported);
+    if (error instanceof JsonCheckFailure) throw new WorkspaceFormatError(source, error.pointer, error.value, error.reason);
+    throw error;
   }
-  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
-    throw new WorkspaceFormatError(source, '', showValue(value), 'must be a JSON object');
-  }
-  const record = value as Record<string, unknown>;
-  if (record.format !== WORKSPACE_FORMAT) {
-    throw new WorkspaceFormatError(source, '/format', record.format === undefined ? null : showValue(record.format), `must be "${WORKSPACE_FORMAT}"; this is not a Lanewright workspace`);
-  }
-  const { raw, migratedFrom } = migrateWorkspace(record, source);
-  return { document: checkWorkspace(raw, source, 'stored'), migratedFrom };
 }
 
 /**

@@ -2,7 +2,7 @@
 // types, sane sizes. Anything else is refused with IpcPayloadError naming the channel and field.
 
 import type { ChannelName, RequestOf } from './contract';
-import { checkBoolean, checkChoice, checkObject, checkOptionalText, checkText, FieldCheckFailure } from '../../engine/index';
+import { checkJson, json, JsonCheckFailure } from '../../engine/index';
 import { checkWorkspace } from '../../engine/index';
 import { WorkspaceFormatError } from '../../engine/index';
 import { ScenarioFormatError } from '../../engine/index';
@@ -14,47 +14,47 @@ export const MAX_IPC_PATH = 32_767;
 /** Largest export text (UTF-16 code units); far above 50,000 lanes of CSV. */
 export const MAX_EXPORT_CHARS = 512 * 1024 * 1024;
 
+const NO_FIELDS = json.object({});
+
+// A plain file name: no folders, no characters a file system reserves.
+const fileName = json.text(255).refine((name) => !/[/\\:*?"<>|]/.test(name) && name !== '.' && name !== '..', {
+  error: 'must be a plain file name without folders or reserved characters',
+});
+
+/** The payload schema of each channel (the workspace document is checked by its own reader). */
+const SCHEMAS = {
+  'workspace:open': json.object({ path: json.nullable(json.text(MAX_IPC_PATH)) }),
+  'workspace:save': json.object({ document: json.anything(), path: json.nullable(json.text(MAX_IPC_PATH)), saveAs: json.boolean() }),
+  'workspace:recent': NO_FIELDS,
+  'file:pick-and-read': json.object({ kind: json.choice(['depots', 'lanes', 'scenario', 'loads', 'vehicles']) }),
+  'file:read': json.object({ path: json.text(MAX_IPC_PATH) }),
+  'file:save-export': json.object({
+    suggestedName: fileName,
+    text: json.anyText(MAX_EXPORT_CHARS),
+    kind: json.choice(['csv', 'geojson', 'scenario', 'html']),
+  }),
+  'app:set-dirty': json.object({ dirty: json.boolean() }),
+  'app:info': NO_FIELDS,
+} as const;
+
 type Validators = { [C in ChannelName]: (payload: unknown) => RequestOf<C> };
 
 const VALIDATORS: Validators = {
-  'workspace:open': (p) => {
-    const o = checkObject(p, '', ['path']);
-    return { path: checkOptionalText(o.path, '/path', MAX_IPC_PATH) };
-  },
+  'workspace:open': (p) => checkJson(SCHEMAS['workspace:open'], p),
   'workspace:save': (p) => {
-    const o = checkObject(p, '', ['document', 'path', 'saveAs']);
-    return {
-      document: checkDocument(o.document),
-      path: checkOptionalText(o.path, '/path', MAX_IPC_PATH),
-      saveAs: checkBoolean(o.saveAs, '/saveAs'),
-    };
+    const o = checkJson(SCHEMAS['workspace:save'], p);
+    return { ...o, document: checkDocument(o.document) };
   },
-  'workspace:recent': (p) => (checkObject(p, '', []), {}),
-  'file:pick-and-read': (p) => {
-    const o = checkObject(p, '', ['kind']);
-    return { kind: checkChoice(o.kind, '/kind', ['depots', 'lanes', 'scenario', 'loads', 'vehicles'] as const) };
-  },
-  'file:read': (p) => {
-    const o = checkObject(p, '', ['path']);
-    return { path: checkText(o.path, '/path', MAX_IPC_PATH) };
-  },
+  'workspace:recent': (p) => checkJson(SCHEMAS['workspace:recent'], p),
+  'file:pick-and-read': (p) => checkJson(SCHEMAS['file:pick-and-read'], p),
+  'file:read': (p) => checkJson(SCHEMAS['file:read'], p),
   'file:save-export': (p) => {
-    const o = checkObject(p, '', ['suggestedName', 'text', 'kind']);
-    const suggestedName = checkText(o.suggestedName, '/suggestedName', 255);
-    if (/[/\\:*?"<>|]/.test(suggestedName) || suggestedName === '.' || suggestedName === '..') {
-      throw new FieldCheckFailure('/suggestedName', JSON.stringify(suggestedName), 'must be a plain file name without folders or reserved characters');
-    }
-    if (typeof o.text !== 'string') throw new FieldCheckFailure('/text', typeof o.text, 'must be text');
-    if (o.text.length > MAX_EXPORT_CHARS) throw new FieldCheckFailure('/text', `${o.text.length} characters`, `longer than ${MAX_EXPORT_CHARS} characters`);
-    const kind = checkChoice(o.kind, '/kind', ['csv', 'geojson', 'scenario', 'html'] as const);
-    if (kind === 'scenario') checkScenarioText(o.text);
-    return { suggestedName, text: o.text, kind };
+    const o = checkJson(SCHEMAS['file:save-export'], p);
+    if (o.kind === 'scenario') checkScenarioText(o.text);
+    return o;
   },
-  'app:set-dirty': (p) => {
-    const o = checkObject(p, '', ['dirty']);
-    return { dirty: checkBoolean(o.dirty, '/dirty') };
-  },
-  'app:info': (p) => (checkObject(p, '', []), {}),
+  'app:set-dirty': (p) => checkJson(SCHEMAS['app:set-dirty'], p),
+  'app:info': (p) => checkJson(SCHEMAS['app:info'], p),
 };
 
 // A scenario export must be a file `lanewright compare --scenario` can read back.
@@ -63,7 +63,7 @@ function checkScenarioText(text: string): void {
     parseScenarioDocument(text, 'ipc');
   } catch (error) {
     if (error instanceof ScenarioFormatError) {
-      throw new FieldCheckFailure('/text', error.value ?? '(document)', `not a scenario document: ${error.path === '' ? '' : `field "${error.path}" `}${error.reason}`);
+      throw new JsonCheckFailure('/text', error.value ?? '(document)', `not a scenario document: ${error.path === '' ? '' : `field "${error.path}" `}${error.reason}`);
     }
     throw error;
   }
@@ -74,7 +74,7 @@ function checkDocument(value: unknown) {
     return checkWorkspace(value, 'ipc');
   } catch (error) {
     if (error instanceof WorkspaceFormatError) {
-      throw new FieldCheckFailure(`/document${error.field}`, error.value, error.reason);
+      throw new JsonCheckFailure(`/document${error.field}`, error.value, error.reason);
     }
     throw error;
   }
@@ -85,7 +85,7 @@ export function validateRequest<C extends ChannelName>(channel: C, payload: unkn
   try {
     return (VALIDATORS[channel] as (p: unknown) => RequestOf<C>)(payload);
   } catch (error) {
-    if (error instanceof FieldCheckFailure) throw new IpcPayloadError(channel, error.field, error.value, error.reason);
+    if (error instanceof JsonCheckFailure) throw new IpcPayloadError(channel, error.pointer, error.value, error.reason);
     throw error;
   }
 }

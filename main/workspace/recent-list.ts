@@ -4,7 +4,7 @@
 import { access } from 'node:fs/promises';
 import path from 'node:path';
 import type { RecentWorkspace } from '../ipc/contract';
-import { checkArray, checkIsoTimestamp, checkObject, checkText } from '../../engine/index';
+import { checkJson, json, parseJsonText } from '../../engine/index';
 import { writeFileAtomic } from './atomic-write';
 import { readTextFile } from './workspace-file';
 
@@ -51,19 +51,17 @@ async function fileExists(p: string): Promise<boolean> {
   }
 }
 
+const RECENT_SCHEMA = json.object({
+  format: json.exactly(FORMAT, `must be "${FORMAT}"`),
+  version: json.exactly(1, 'must be 1'),
+  entries: json.list(json.object({ path: json.text(32_767), name: json.text(1000), openedAt: json.isoTimestamp() }), MAX_RECENT),
+});
+
 /** Parses the stored list; a damaged or foreign file yields an empty list, never an error at start-up. */
 export function parseRecent(text: string): RecentWorkspace[] {
   try {
-    const o = checkObject(JSON.parse(text), '', ['format', 'version', 'entries']);
-    if (o.format !== FORMAT || o.version !== 1) return [];
-    return checkArray(o.entries, '/entries', MAX_RECENT).map((value, i) => {
-      const e = checkObject(value, `/entries/${i}`, ['path', 'name', 'openedAt']);
-      return {
-        path: checkText(e.path, `/entries/${i}/path`, 32_767),
-        name: checkText(e.name, `/entries/${i}/name`, 1000),
-        openedAt: checkIsoTimestamp(e.openedAt, `/entries/${i}/openedAt`),
-      };
-    }).filter((e) => path.isAbsolute(e.path));
+    const o = checkJson(RECENT_SCHEMA, parseJsonText(text));
+    return o.entries.map((e) => ({ ...e }))      .filter((e) => path.isAbsolute(e.path));
   } catch {
     return [];
   }

@@ -7,10 +7,16 @@ import { readFileSync } from 'node:fs';
 import { calendarLaneRows, calendarLoopRows, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport } from '../load-network';
+import type { OptionSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-/** Value options only the calendar review reads (kept together so the option table can take them as they are). */
-export const CALENDAR_AUDIT_OPTIONS = ['from-date', 'to-date', 'fix-by', 'report'] as const;
+/** Options only the calendar review reads; `audit` lists them in its table and refuses them with --date. */
+export const CALENDAR_AUDIT_OPTIONS: readonly OptionSpec[] = [
+  { name: 'from-date', value: 'YYYY-MM-DD', help: 'calendar review: first day of the window (default: the earliest date the lanes file names)' },
+  { name: 'to-date', value: 'YYYY-MM-DD', help: 'calendar review: last day of the window (default: the latest date the lanes file names)' },
+  { name: 'fix-by', value: 'lane|clause', help: 'calendar review: cut rebates per lane row (default) or one percentage per clause' },
+  { name: 'report', value: 'FILE.html', help: 'calendar review: also write a printable, self-contained HTML report to FILE' },
+].map((o) => ({ ...o, group: 'calendar review' }));
 
 function fixByOption(args: ParsedArgs): 'lane' | 'clause' {
   const value = args.values.get('fix-by') ?? 'lane';
@@ -28,7 +34,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   const reportPath = args.values.get('report');
 
   const readStart = performance.now();
-  const imported = loadImport(args);
+  const imported = loadImport(args, {}, { undated: true });
   const readMs = performance.now() - readStart;
 
   let lastLine = '';

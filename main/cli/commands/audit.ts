@@ -8,14 +8,40 @@ import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
-import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
+import { loadNetwork, planDateOf } from '../load-network';
+import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-export const auditFlags = ['json', 'progress', 'timings', ...LOAD_NETWORK_FLAGS];
+export const auditCommand: CommandSpec = {
+  name: 'audit',
+  summary: 'contract review across the whole calendar (one day with --date): rebate loops, a verified fix plan, headroom',
+  details:
+    'Without --date: the whole calendar of the contract (--from-date to --to-date, default every date the lanes\n' +
+    'file names), every period and vehicle class; loops by date range and clause, one fix plan for every date\n' +
+    '(--fix-by lane or clause), headroom per lane row and the period that sets it, --report FILE.html.\n' +
+    'With --date: that day\'s network. Finds the distinct rebate loops (up to --loop-cap), a set of rebate cuts\n' +
+    'that removes them all (checked by solving again) and how far each lane\'s rebate can grow before a loop\n' +
+    'appears. Prints one CSV row per lane, or one JSON object with --json (its "review" says which); --loops-csv\n' +
+    'also writes one row per lane (one day) or per loop range (calendar) of each loop.',
+  example: 'lanewright audit --depots sample-data/depots.csv --lanes sample-data/lanes.csv --date 2026-06-01 --negotiable K-2',
+  options: [
+    ...NETWORK_FILES,
+    LOOP_CAP_OPTION,
+    { name: 'negotiable', value: 'REF,...', help: 'contract references, clauses or lane keys (FROM>TO|ref|n) whose rebates may change' },
+    ...CALENDAR_AUDIT_OPTIONS,
+    { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
+    { name: 'progress', help: 'print progress by phase on stderr' },
+    JSON_OPTION,
+    OUT_OPTION,
+    TIMINGS_OPTION,
+    ...PLANNING_OPTIONS,
+  ],
+  run: runAudit,
+};
 
-export function runAudit(args: ParsedArgs, out: CommandOutput): number {
+function runAudit(args: ParsedArgs, out: CommandOutput): number {
   if (!args.values.has('date')) return runCalendarAudit(args, out);
-  for (const name of CALENDAR_AUDIT_OPTIONS) {
+  for (const { name } of CALENDAR_AUDIT_OPTIONS) {
     if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
   }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
@@ -42,9 +68,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
-  // Which review this is: one day, named.
-  const dayReport = { review: 'day' as const, date: args.values.get('date'), ...report };
-  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : formatCsvRows(auditLaneRows(network, report)));
+  out.write(args.flags.has('json') ? JSON.stringify({ review: 'day', date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(auditLaneRows(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 
