@@ -1,5 +1,6 @@
-// Floors of many period networks in one search per destination. The networks share most lanes, so
-// instead of one Dijkstra per network, labels carry the set of networks their path is valid in (a
+// Floors of many period networks in one search per destination. The networks share most lanes. A
+// plain Dijkstra on their union answers every lane whose cheapest back path holds in one of its
+// networks. For the others, instead of one Dijkstra per network, labels carry the set of networks their path is valid in (a
 // bit mask): a lane keeps only the networks that hold it, and a label is dropped when the depot was
 // already settled for a superset of its networks (at no higher cost, since labels leave the heap in
 // cost order). The first label settled at u valid in a network of lane u -> v gives the cheapest back
@@ -30,7 +31,7 @@ export interface CovalidFloors {
 
 /**
  * Null when the union of the networks has a loop (no common potentials), or when the labels do not
- * pay: after the first searches, more than a third as many labels settle per depot as there are
+ * pay: after 50 label searches, more than a third as many labels settle per depot as there are
  * networks (paths valid in many different sets of networks); then solve the networks one by one.
  */
 export function covalidFloors(template: Network, lanes: MaskedLanes, networks: number): CovalidFloors | null {
@@ -65,17 +66,71 @@ export function covalidFloors(template: Network, lanes: MaskedLanes, networks: n
   let searches = 0;
   let labels = 0;
   let depots = 0;
+  // Per destination, first one plain Dijkstra on the union that remembers the networks its tree path
+  // is valid in: where that path (the cheapest of all) holds in a network of the lane, it is the
+  // answer. Only lanes left open go to the label search.
+  const dist = new Float64Array(n).fill(Infinity);
+  const pathMask = new Int32Array(n);
+  const done = new Uint8Array(n);
   for (let v = 0; v < n; v++) {
     const first = inStart[v];
     const last = inStart[v + 1];
     if (first === last) continue;
-    if (++searches === 50 && labels > (depots * networks) / 3) return null;
     let open = 0;
     for (let i = first; i < last; i++) {
       const u = lanes.from[inLane[i]];
       if (waiting[u]++ === 0) touched.push(u);
       open++;
     }
+    heap.clear();
+    heap.push(v, 0, all);
+    dist[v] = 0;
+    touched.push(v);
+    while (open > 0 && heap.size > 0) {
+      const { node: x, cost: d, mask } = heap.pop();
+      if (done[x]) continue;
+      done[x] = 1;
+      pathMask[x] = mask;
+      if (waiting[x] > 0) {
+        for (let i = first; i < last; i++) {
+          const e = inLane[i];
+          if (lanes.from[e] !== x) continue;
+          open--;
+          const common = mask & lanes.mask[e];
+          if (common === 0) continue;
+          setIn[e] = common;
+          const back = restoreCost(d, potential, v, x);
+          floor[e] = back === 0 ? 0 : -back;
+        }
+      }
+      for (let p = outStart[x], end = outStart[x + 1]; p < end; p++) {
+        const y = outTo[p];
+        const nd = d + reweighted[p];
+        if (nd < dist[y]) {
+          if (dist[y] === Infinity) touched.push(y);
+          dist[y] = nd;
+          heap.push(y, nd, mask & posMask[p]);
+        }
+      }
+    }
+    for (const x of touched) {
+      dist[x] = Infinity;
+      done[x] = 0;
+      waiting[x] = 0;
+    }
+    touched.length = 0;
+
+    // Lanes whose cheapest back path holds in none of their networks (or none at all): labels.
+    open = 0;
+    for (let i = first; i < last; i++) {
+      const e = inLane[i];
+      if (setIn[e] !== 0) continue;
+      const u = lanes.from[e];
+      if (waiting[u]++ === 0) touched.push(u);
+      open++;
+    }
+    if (open === 0) continue;
+    if (++searches === 50 && labels > (depots * networks) / 3) return null;
     heap.clear();
     heap.push(v, 0, all);
     while (open > 0 && heap.size > 0) {

@@ -41,7 +41,7 @@ const money = (minor: number) => (minor / 100).toFixed(2);
 const iso = (d: number) => isoDateText(d)!;
 
 /** A generated contract: nets c + p(u) - p(v) (rebates without loops), seasonal cheaper twins in 100 windows, 20 seasonal loops. */
-function generated(depotCount: number, laneCount: number, windows: number, loops: number, seasonalEvery: number): { depots: string; lanes: string } {
+export function generated(depotCount: number, laneCount: number, windows: number, loops: number, seasonalEvery: number): { depots: string; lanes: string } {
   const rand = seeded(12);
   const pick = (k: number) => Math.floor(rand() * k);
   const potential = Array.from({ length: depotCount }, () => pick(20_000));
