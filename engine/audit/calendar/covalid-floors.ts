@@ -8,6 +8,7 @@
 // Johnson-reweighted with potentials of the union (valid for every network, as each is part of it).
 
 import type { Network } from '../../network/types';
+import { createDijkstraWorkspace, dijkstra } from '../../routes/dijkstra';
 import { johnsonReweighting, restoreCost } from '../../routes/johnson-potentials';
 import { laneSetNetwork } from './lane-set-network';
 import { firstLoop } from './period-weights';
@@ -69,59 +70,33 @@ export function covalidFloors(template: Network, lanes: MaskedLanes, networks: n
   // Per destination, first one plain Dijkstra on the union that remembers the networks its tree path
   // is valid in: where that path (the cheapest of all) holds in a network of the lane, it is the
   // answer. Only lanes left open go to the label search.
-  const dist = new Float64Array(n).fill(Infinity);
-  const pathMask = new Int32Array(n);
-  const done = new Uint8Array(n);
+  const workspace = createDijkstraWorkspace(n);
+  const targets: number[] = [];
   for (let v = 0; v < n; v++) {
     const first = inStart[v];
     const last = inStart[v + 1];
     if (first === last) continue;
-    let open = 0;
+    targets.length = 0;
+    for (let i = first; i < last; i++) targets.push(lanes.from[inLane[i]]);
+    const tree = dijkstra(union, v, { weights: reweighted, workspace, targets });
     for (let i = first; i < last; i++) {
-      const u = lanes.from[inLane[i]];
-      if (waiting[u]++ === 0) touched.push(u);
-      open++;
-    }
-    heap.clear();
-    heap.push(v, 0, all);
-    dist[v] = 0;
-    touched.push(v);
-    while (open > 0 && heap.size > 0) {
-      const { node: x, cost: d, mask } = heap.pop();
-      if (done[x]) continue;
-      done[x] = 1;
-      pathMask[x] = mask;
-      if (waiting[x] > 0) {
-        for (let i = first; i < last; i++) {
-          const e = inLane[i];
-          if (lanes.from[e] !== x) continue;
-          open--;
-          const common = mask & lanes.mask[e];
-          if (common === 0) continue;
-          setIn[e] = common;
-          const back = restoreCost(d, potential, v, x);
-          floor[e] = back === 0 ? 0 : -back;
-        }
+      const e = inLane[i];
+      const u = lanes.from[e];
+      if (tree.dist[u] === Infinity || !tree.settled[u]) continue;
+      let common = lanes.mask[e];
+      for (let x = u; x !== v && common !== 0; ) {
+        const p = tree.parentPos[x];
+        common &= posMask[p];
+        x = union.laneFrom[outLane[p]];
       }
-      for (let p = outStart[x], end = outStart[x + 1]; p < end; p++) {
-        const y = outTo[p];
-        const nd = d + reweighted[p];
-        if (nd < dist[y]) {
-          if (dist[y] === Infinity) touched.push(y);
-          dist[y] = nd;
-          heap.push(y, nd, mask & posMask[p]);
-        }
-      }
+      if (common === 0) continue;
+      setIn[e] = common;
+      const back = restoreCost(tree.dist[u], potential, v, u);
+      floor[e] = back === 0 ? 0 : -back;
     }
-    for (const x of touched) {
-      dist[x] = Infinity;
-      done[x] = 0;
-      waiting[x] = 0;
-    }
-    touched.length = 0;
 
     // Lanes whose cheapest back path holds in none of their networks (or none at all): labels.
-    open = 0;
+    let open = 0;
     for (let i = first; i < last; i++) {
       const e = inLane[i];
       if (setIn[e] !== 0) continue;
