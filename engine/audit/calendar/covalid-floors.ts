@@ -28,6 +28,9 @@ export interface CovalidFloors {
   floor: Float64Array;
   /** Per masked lane: the networks in which that back path exists (0 when none). */
   setIn: Int32Array;
+  /** Destinations searched by plain Dijkstra, and those that needed the label search too. */
+  destinations: number;
+  labelSearches: number;
 }
 
 /**
@@ -72,10 +75,12 @@ export function covalidFloors(template: Network, lanes: MaskedLanes, networks: n
   // answer. Only lanes left open go to the label search.
   const workspace = createDijkstraWorkspace(n);
   const targets: number[] = [];
+  let destinations = 0;
   for (let v = 0; v < n; v++) {
     const first = inStart[v];
     const last = inStart[v + 1];
     if (first === last) continue;
+    destinations++;
     targets.length = 0;
     for (let i = first; i < last; i++) targets.push(lanes.from[inLane[i]]);
     const tree = dijkstra(union, v, { weights: reweighted, workspace, targets });
@@ -143,7 +148,7 @@ export function covalidFloors(template: Network, lanes: MaskedLanes, networks: n
     }
     touched.length = 0;
   }
-  return { floor, setIn };
+  return { floor, setIn, destinations, labelSearches: searches };
 }
 
 /** A binary heap of (depot, cost, mask) labels by cost. */
