@@ -1,18 +1,18 @@
 // Export files the UI offers, made in the worker with the engine's exporters (the same files the
-// command line writes). With an active scenario they describe the changed contract: the scenario
-// is applied by the engine and the routes are solved again on the result.
+// command line writes). With an active scenario they describe the changed contract: the engine's
+// overlay lays the scenario over every lane row (as `lanewright export --scenario` does) and the
+// routes are solved again on the result.
 
 import { findDistinctLoops } from '../../engine/index';
 import { geoJsonText } from '../../engine/index';
 import { networkGeoJson } from '../../engine/index';
-import { lanesCsv } from '../../engine/index';
+import { lanesCsv, type LanesExportInput } from '../../engine/index';
 import { loopsCsv } from '../../engine/index';
 import { routesCsv } from '../../engine/index';
 import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
-import type { PlannedLane, PlannedNetwork } from '../../engine/index';
 import { routesReport } from '../../engine/index';
-import { applyScenario } from '../../engine/index';
+import { scenarioImport } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import type { ExportKind, PlanSettings } from './protocol';
 import { solveFor } from './solve-plan';
@@ -31,25 +31,20 @@ export interface ExportContext {
   date: string | null;
 }
 
-/** The network and plan the exports describe: the import's, or the scenario's when it changes anything. */
-function target(ctx: ExportContext): { network: Network; plan: PlannedNetwork } {
+/** The network and lane rows the exports describe: the import's, or the scenario's when it changes anything. */
+function target(ctx: ExportContext): { network: Network; lanes: LanesExportInput } {
   const { imported, network, scenario } = ctx;
-  if (!scenario || !hasChanges(scenario)) return { network, plan: imported.plan };
-  const applied = applyScenario(network, scenario, { date: ctx.date });
-  const lanes: PlannedLane[] = applied.lanes.map((lane, i) => {
-    const b = applied.baseLaneOf[i];
-    const base = b >= 0 ? imported.plan.lanes[b] : { vehicleClass: null, distanceEstimated: false, fuelEstimated: false, driveEstimated: false };
-    return { ...base, ...lane, validFrom: lane.validFrom ?? null, validTo: lane.validTo ?? null };
-  });
-  const laneRecord = Int32Array.from(applied.baseLaneOf, (b) => (b >= 0 ? imported.plan.laneRecord[b] : -1));
-  return { network: applied.network, plan: { ...imported.plan, network: applied.network, lanes, laneRecord } };
+  if (!scenario || !hasChanges(scenario)) return { network, lanes: imported };
+  const what = scenarioImport(imported, scenario);
+  return { network: what.network, lanes: what };
 }
 
 const suffix = (ctx: ExportContext) => (ctx.scenario && hasChanges(ctx.scenario) ? `-${ctx.scenario.name.replace(/[^\w-]+/g, '-').toLowerCase()}` : '');
 
 /** Builds one export file. Routes need a chosen origin; the others describe the whole contract. */
 export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
-  const { network, plan } = target(ctx);
+  const { network, lanes } = target(ctx);
+  const plan = ctx.imported.plan;
   const tag = suffix(ctx);
   const loops = () => findDistinctLoops(network).loops;
   const report = () => {
@@ -64,7 +59,7 @@ export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
       return { fileName: `routes-from-${routes.origin}${tag}.csv`, mime: 'text/csv', text: routesCsv(routes) };
     }
     case 'lanes-csv':
-      return { fileName: `lanes${tag}.csv`, mime: 'text/csv', text: lanesCsv({ plan, lanes: ctx.imported.lanes, currency: network.currency, exponent: network.exponent }, loops()) };
+      return { fileName: `lanes${tag}.csv`, mime: 'text/csv', text: lanesCsv(lanes, loops()) };
     case 'loops-csv':
       return { fileName: `rebate-loops${tag}.csv`, mime: 'text/csv', text: loopsCsv(network, loops()) };
     case 'geojson':

@@ -2,10 +2,10 @@
 // not only those reachable from the origin; the fix plan; rebate headroom per lane) of the network
 // under the active scenario.
 
-import { auditNetwork, calendarReport, calendarReviewHtml, reviewCalendar, type CalendarReport, type ImportResult, type ReviewedFile } from '../../engine/index';
-import type { Network } from '../../engine/index';
+import { auditNetwork, calendarReport, calendarReviewHtml, reviewCalendar, type CalendarReport, type ReviewedFile } from '../../engine/index';
+import type { ImportResult, Network } from '../../engine/index';
 import { auditReport, type AuditReport } from '../../engine/index';
-import { applyScenario } from '../../engine/index';
+import { overlayKeys, scenarioImport } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 
 export type ContractReviewView = AuditReport & {
@@ -17,41 +17,48 @@ export type ContractReviewView = AuditReport & {
 };
 
 export interface CalendarContext {
-  imported: ImportResult;
   files: readonly ReviewedFile[];
   fixBy: 'lane' | 'clause';
 }
 
-/** Audits the network, with the scenario's changes applied first when it has any. */
+/**
+ * Audits the planned network, with the scenario laid over the import's lane rows first when it has
+ * changes; with `calendar`, also reviews the whole calendar of the files as loaded.
+ */
 export function reviewContract(
+  imported: ImportResult,
   network: Network,
   scenario: Scenario | null,
-  date: string | null,
   onProgress?: (phase: string, fraction: number) => void,
-  context?: CalendarContext,
+  calendarContext?: CalendarContext,
 ): ContractReviewView {
   let target = network;
   let scenarioProblems: string[] = [];
+  // Lane keys as scenarios name them (counted over the file's rows), for the fix plan's changes.
+  const rowKeys = overlayKeys(imported);
+  let laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
   if (scenario && hasChanges(scenario)) {
-    const applied = applyScenario(network, scenario, { date });
-    target = applied.network;
-    scenarioProblems = applied.problems.map((p) => p.message);
+    const what = scenarioImport(imported, scenario);
+    target = what.network;
+    laneKeys = what.keys;
+    scenarioProblems = what.overlay.problems.map((p) => p.message);
   }
   const phases = { loops: 'Finding rebate loops', 'fix-plan': 'Working out a fix plan', headroom: 'Rebate headroom per lane' } as const;
   const order = { loops: 0, 'fix-plan': 1, headroom: 2 } as const;
   const audit = auditNetwork(target, {
-    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / 6),
+    laneKeys,
+    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / (calendarContext ? 6 : 3)),
   });
   let calendar: CalendarReport | null = null;
   let calendarHtml: string | null = null;
-  if (context) {
+  if (calendarContext) {
     const calendarPhases = { periods: 'Planning every period', loops: 'Rebate loops over the calendar', 'fix-plan': 'A fix plan for the whole calendar', verify: 'Checking the plan in every period', headroom: 'Headroom over the calendar' } as const;
-    const review = reviewCalendar(context.imported, {
-      fixBy: context.fixBy,
+    const review = reviewCalendar(imported, {
+      fixBy: calendarContext.fixBy,
       onProgress: (p) => onProgress?.(calendarPhases[p.phase], 0.5 + (p.total > 0 ? p.done / p.total : 0) / 2),
     });
-    calendar = calendarReport(context.imported, review, context.fixBy);
-    calendarHtml = calendarReviewHtml(calendar, { files: context.files, exponent: context.imported.exponent });
+    calendar = calendarReport(imported, review, calendarContext.fixBy);
+    calendarHtml = calendarReviewHtml(calendar, { files: calendarContext.files, exponent: imported.exponent });
   }
   return { ...auditReport(target, audit), scenarioProblems, calendar, calendarHtml };
 }
