@@ -24,6 +24,16 @@ function fixByOption(args: ParsedArgs): 'lane' | 'clause' {
   return value;
 }
 
+/** `--progress`: one stderr line per phase and whole percent, for both reviews; undefined without it. */
+export function auditProgress(args: ParsedArgs, out: CommandOutput): ((p: { phase: string; done: number; total: number }) => void) | undefined {
+  if (!args.flags.has('progress')) return undefined;
+  let lastLine = '';
+  return ({ phase, done, total }) => {
+    const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+    if (line !== lastLine) out.warn((lastLine = line));
+  };
+}
+
 const sha256 = (path: string) => createHash('sha256').update(readFileSync(path)).digest('hex');
 
 export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
@@ -37,7 +47,6 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   const imported = loadImport(args, {}, { undated: true });
   const readMs = performance.now() - readStart;
 
-  let lastLine = '';
   const solveStart = performance.now();
   const review = reviewCalendar(imported, {
     fromDate: args.values.get('from-date'),
@@ -47,12 +56,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
     negotiable,
     fixBy,
     skipInvalid: args.flags.has('skip-invalid'),
-    onProgress: args.flags.has('progress')
-      ? ({ phase, done, total }) => {
-          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-          if (line !== lastLine) out.warn((lastLine = line));
-        }
-      : undefined,
+    onProgress: auditProgress(args, out),
   });
   const solveMs = performance.now() - solveStart;
 

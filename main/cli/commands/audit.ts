@@ -7,7 +7,7 @@ import { auditNetwork, overlayKeys } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
-import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
+import { auditProgress, CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadImport, planDateOf } from '../load-network';
 import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
@@ -56,18 +56,12 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
   const readMs = performance.now() - readStart;
 
-  let lastLine = '';
   const solveStart = performance.now();
   const audit = auditNetwork(network, {
     loopCap,
     negotiable,
     laneKeys,
-    onProgress: args.flags.has('progress')
-      ? ({ phase, done, total }) => {
-          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-          if (line !== lastLine) out.warn((lastLine = line));
-        }
-      : undefined,
+    onProgress: auditProgress(args, out),
   });
   const solveMs = performance.now() - solveStart;
 
