@@ -14,7 +14,7 @@ import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-
 import type { LaneTableBuilder } from './lane-table';
 
 /** Columns the fast path reads itself; a file with any other matched column uses the general path. */
-const FAST_FIELDS = new Set<LaneField>(['from', 'to', 'ref', 'distance', 'drive', 'toll', 'fuel', 'fees', 'rebate', 'valid_from', 'valid_to', 'notes', 'clause']);
+const FAST_FIELDS = new Set<LaneField>(['from', 'to', 'ref', 'clause', 'distance', 'drive', 'toll', 'fuel', 'fees', 'rebate', 'valid_from', 'valid_to', 'notes']);
 
 const SLOW = -1;
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000];

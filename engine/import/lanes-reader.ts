@@ -221,13 +221,13 @@ export class LanesReader extends RecordFileReader {
       const ref = cellText(cells, col.ref);
       t.ref.push(ref === '' ? undefined : own(ref));
     }
-    if (t.clause) {
-      const clause = cellText(cells, col.clause);
-      t.clause.push(clause === '' ? undefined : own(clause));
-    }
     if (col.notes !== undefined) {
       const notes = cellText(cells, col.notes);
       t.notes.push(notes === '' ? undefined : own(notes));
+    }
+    if (t.clause) {
+      const clause = cellText(cells, col.clause);
+      t.clause.push(clause === '' ? undefined : own(clause));
     }
     for (let k = 0; k < h.unknown.length; k++) {
       const value = cellText(cells, h.unknown[k].index);

@@ -3,6 +3,7 @@
 // renamed over the target, which every supported OS does atomically within one file system.
 
 import { randomBytes } from 'node:crypto';
+import { closeSync, fsyncSync, openSync, statSync, unlinkSync, writeSync } from 'node:fs';
 import { open, readdir, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { fileAccessError } from './errors';
@@ -58,6 +59,96 @@ export async function writeFileAtomic(target: string, text: string, hooks: Atomi
   }
   await syncFolder(dirname(target));
   await removeLeftovers(target);
+}
+
+/** A file being written piece by piece that appears at its target only on `commit`. */
+export interface AtomicFileStream {
+  /** Appends text (UTF-8) to the temporary file; synchronous, so memory never holds a backlog. */
+  write(text: string): void;
+  /** Flushes, renames over the target and flushes the folder. */
+  commit(): Promise<void>;
+  /** Removes the temporary file; the target is untouched. Safe to call more than once. */
+  abort(): void;
+}
+
+/**
+ * Opens a temporary file beside `target` for output too large to hold as one string (a report of
+ * every route on a large network). Same guarantees as writeFileAtomic: until `commit` succeeds the
+ * previous file is intact; any failure removes the temporary file and throws a FileAccessError
+ * naming `target`.
+ */
+export function openAtomicFileStream(target: string): AtomicFileStream {
+  const temp = temporaryPathFor(target);
+  let mode = 0o644;
+  try {
+    mode = statSync(target).mode & 0o777;
+  } catch {
+    // New file: default permissions.
+  }
+  let fd = -1;
+  let tempExists = false;
+  const abort = () => {
+    if (fd !== -1) {
+      try {
+        closeSync(fd);
+      } catch {
+        // Closing a file that failed to write may fail too; it is removed next.
+      }
+      fd = -1;
+    }
+    if (tempExists) {
+      try {
+        unlinkSync(temp);
+      } catch {
+        // Already gone.
+      }
+      tempExists = false;
+    }
+    inFlight.delete(temp);
+  };
+  const fail = (error: unknown): never => {
+    abort();
+    throw fileAccessError(target, 'write', error);
+  };
+  const handleOrFail = () => {
+    if (fd === -1) fail(new Error('the output was already closed'));
+    return fd;
+  };
+  inFlight.add(temp);
+  try {
+    fd = openSync(temp, 'wx', mode);
+    tempExists = true;
+  } catch (error) {
+    fail(error);
+  }
+  return {
+    write(text) {
+      const handle = handleOrFail();
+      try {
+        // A write may take only part of the bytes (a full pipe, a signal); the rest follows.
+        const bytes = Buffer.from(text, 'utf8');
+        for (let at = 0; at < bytes.length; ) at += writeSync(handle, bytes, at, bytes.length - at);
+      } catch (error) {
+        fail(error);
+      }
+    },
+    async commit() {
+      const handle = handleOrFail();
+      try {
+        fsyncSync(handle);
+        closeSync(handle);
+        fd = -1;
+        await rename(temp, target);
+        tempExists = false;
+      } catch (error) {
+        fail(error);
+      }
+      inFlight.delete(temp);
+      await syncFolder(dirname(target));
+      await removeLeftovers(target);
+    },
+    abort,
+  };
 }
 
 // A save cut short by a crash or power cut leaves its temporary file behind (the target itself is

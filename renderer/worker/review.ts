@@ -2,8 +2,8 @@
 // not only those reachable from the origin; the fix plan; rebate headroom per lane) of the network
 // under the active scenario.
 
-import { auditNetwork, calendarReport, calendarReviewHtml, reviewCalendar, type CalendarReport, type ReviewedFile } from '../../engine/index';
-import type { ImportResult, Network } from '../../engine/index';
+import { auditNetwork, calendarReport, calendarReviewHtml, reviewCalendar, type CalendarReport, type ImportResult, type ReviewedFile } from '../../engine/index';
+import type { Network } from '../../engine/index';
 import { auditReport, type AuditReport } from '../../engine/index';
 import { overlayKeys, scenarioImport } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
@@ -17,20 +17,18 @@ export type ContractReviewView = AuditReport & {
 };
 
 export interface CalendarContext {
+  imported: ImportResult;
   files: readonly ReviewedFile[];
   fixBy: 'lane' | 'clause';
 }
 
-/**
- * Audits the planned network, with the scenario laid over the import's lane rows first when it has
- * changes; with `calendar`, also reviews the whole calendar of the files as loaded.
- */
+/** Audits the planned network, with the scenario laid over the import's lane rows first when it has changes. */
 export function reviewContract(
   imported: ImportResult,
   network: Network,
   scenario: Scenario | null,
   onProgress?: (phase: string, fraction: number) => void,
-  calendarContext?: CalendarContext,
+  context?: CalendarContext,
 ): ContractReviewView {
   let target = network;
   let scenarioProblems: string[] = [];
@@ -47,18 +45,18 @@ export function reviewContract(
   const order = { loops: 0, 'fix-plan': 1, headroom: 2 } as const;
   const audit = auditNetwork(target, {
     laneKeys,
-    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / (calendarContext ? 6 : 3)),
+    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / (context ? 6 : 3)),
   });
   let calendar: CalendarReport | null = null;
   let calendarHtml: string | null = null;
-  if (calendarContext) {
+  if (context) {
     const calendarPhases = { periods: 'Planning every period', loops: 'Rebate loops over the calendar', 'fix-plan': 'A fix plan for the whole calendar', verify: 'Checking the plan in every period', headroom: 'Headroom over the calendar' } as const;
-    const review = reviewCalendar(imported, {
-      fixBy: calendarContext.fixBy,
+    const review = reviewCalendar(context.imported, {
+      fixBy: context.fixBy,
       onProgress: (p) => onProgress?.(calendarPhases[p.phase], 0.5 + (p.total > 0 ? p.done / p.total : 0) / 2),
     });
-    calendar = calendarReport(imported, review, calendarContext.fixBy);
-    calendarHtml = calendarReviewHtml(calendar, { files: calendarContext.files, exponent: imported.exponent });
+    calendar = calendarReport(context.imported, review, context.fixBy);
+    calendarHtml = calendarReviewHtml(calendar, { files: context.files, exponent: context.imported.exponent });
   }
   return { ...auditReport(target, audit), scenarioProblems, calendar, calendarHtml };
 }

@@ -84,8 +84,8 @@ export class WorkerSession {
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const calendar = { files: this.files, fixBy: message.fixBy ?? 'lane' };
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, calendar) });
+        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
+        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
         return;
       }
       default: {

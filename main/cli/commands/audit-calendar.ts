@@ -7,31 +7,15 @@ import { readFileSync } from 'node:fs';
 import { calendarLaneRows, calendarLoopRows, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport } from '../load-network';
-import type { OptionSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-/** Options only the calendar review reads; `audit` lists them in its table and refuses them with --date. */
-export const CALENDAR_AUDIT_OPTIONS: readonly OptionSpec[] = [
-  { name: 'from-date', value: 'YYYY-MM-DD', help: 'calendar review: first day of the window (default: the earliest date the lanes file names)' },
-  { name: 'to-date', value: 'YYYY-MM-DD', help: 'calendar review: last day of the window (default: the latest date the lanes file names)' },
-  { name: 'fix-by', value: 'lane|clause', help: 'calendar review: cut rebates per lane row (default) or one percentage per clause' },
-  { name: 'report', value: 'FILE.html', help: 'calendar review: also write a printable, self-contained HTML report to FILE' },
-].map((o) => ({ ...o, group: 'calendar review' }));
+/** Value options only the calendar review reads (kept together so the option table can take them as they are). */
+export const CALENDAR_AUDIT_OPTIONS = ['from-date', 'to-date', 'fix-by', 'report'] as const;
 
 function fixByOption(args: ParsedArgs): 'lane' | 'clause' {
   const value = args.values.get('fix-by') ?? 'lane';
   if (value !== 'lane' && value !== 'clause') throw new UsageError(`--fix-by must be lane or clause, got "${value}"`);
   return value;
-}
-
-/** `--progress`: one stderr line per phase and whole percent, for both reviews; undefined without it. */
-export function auditProgress(args: ParsedArgs, out: CommandOutput): ((p: { phase: string; done: number; total: number }) => void) | undefined {
-  if (!args.flags.has('progress')) return undefined;
-  let lastLine = '';
-  return ({ phase, done, total }) => {
-    const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-    if (line !== lastLine) out.warn((lastLine = line));
-  };
 }
 
 const sha256 = (path: string) => createHash('sha256').update(readFileSync(path)).digest('hex');
@@ -44,9 +28,11 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   const reportPath = args.values.get('report');
 
   const readStart = performance.now();
-  const imported = loadImport(args, {}, { undated: true });
+  // The calendar review splits the contract into periods itself: the rows are read undated.
+  const imported = loadImport(args, {}, false);
   const readMs = performance.now() - readStart;
 
+  let lastLine = '';
   const solveStart = performance.now();
   const review = reviewCalendar(imported, {
     fromDate: args.values.get('from-date'),
@@ -56,7 +42,12 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
     negotiable,
     fixBy,
     skipInvalid: args.flags.has('skip-invalid'),
-    onProgress: auditProgress(args, out),
+    onProgress: args.flags.has('progress')
+      ? ({ phase, done, total }) => {
+          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+          if (line !== lastLine) out.warn((lastLine = line));
+        }
+      : undefined,
   });
   const solveMs = performance.now() - solveStart;
 

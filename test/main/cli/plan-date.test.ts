@@ -50,10 +50,10 @@ describe('the date planned for', () => {
     const dir = tempFiles({ 'what-if.json': JSON.stringify({ format: 'lanewright-scenario', version: 1, name: 'none', description: null, changes: [] }) });
     const check = await runCli(['check', ...SAMPLE, '--json']);
     expect(JSON.parse(check.stdout).date).toBe('2026-12-02');
+    // Without --date, audit is the review of the contract's whole calendar: no day is chosen for it.
     const audit = await runCli(['audit', ...SAMPLE, '--json']);
-    expect(JSON.parse(audit.stdout)).toMatchObject({ review: 'calendar', window: { from: '2026-01-01' } });
+    expect(JSON.parse(audit.stdout).review).toBe('calendar');
     expect(noteCount(audit.stderr)).toBe(0);
-    expect(audit.stderr).toMatch(/^calendar review: 2026-01-01 to /m);
     const compare = await runCli(['compare', ...SAMPLE, '--scenario', join(dir, 'what-if.json'), '--from', 'AMS', '--json']);
     expect(JSON.parse(compare.stdout).date).toBe('2026-12-02');
     const exported = await runCli(['export', ...SAMPLE, '--lanes-out', join(dir, 'lanes.csv')]);

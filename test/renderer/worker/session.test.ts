@@ -192,7 +192,9 @@ describe('scenarios that change the lane set', () => {
     const out: FromWorker[] = [];
     const session = new WorkerSession((m) => out.push(m));
     session.handle({ ...load('lanes-rebate-loop.csv'), plan: { date: '2026-11-01', vehicleClass: '' } } as ToWorker);
-    await new Promise((resolve) => setTimeout(resolve, 50)); // the files' SHA-256 are computed as they arrive
+    // The files' SHA-256 are computed as they arrive (crypto.subtle is asynchronous): wait for them.
+    const hashed = () => (session as unknown as { files: { sha256: string }[] }).files.every((f) => /^[0-9a-f]{64}$/.test(f.sha256));
+    for (let i = 0; i < 200 && !hashed(); i++) await new Promise((resolve) => setTimeout(resolve, 25));
     session.handle({ kind: 'review', id: 2, scenario: null, fixBy: 'clause' });
     const reviewed = out.find((m) => m.kind === 'reviewed') as { review: ContractReviewView };
     expect(reviewed.review.loops).toEqual([]);
