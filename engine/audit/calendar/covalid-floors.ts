@@ -1,5 +1,6 @@
-// Floors of many period networks in one search per destination. The networks share most lanes, so
-// instead of one Dijkstra per network, labels carry the set of networks their path is valid in (a
+// Floors of many period networks in one search per destination. The networks share most lanes. A
+// plain Dijkstra on their union answers every lane whose cheapest back path holds in one of its
+// networks. For the others, instead of one Dijkstra per network, labels carry the set of networks their path is valid in (a
 // bit mask): a lane keeps only the networks that hold it, and a label is dropped when the depot was
 // already settled for a superset of its networks (at no higher cost, since labels leave the heap in
 // cost order). The first label settled at u valid in a network of lane u -> v gives the cheapest back
@@ -7,6 +8,7 @@
 // Johnson-reweighted with potentials of the union (valid for every network, as each is part of it).
 
 import type { Network } from '../../network/types';
+import { createDijkstraWorkspace, dijkstra } from '../../routes/dijkstra';
 import { johnsonReweighting, restoreCost } from '../../routes/johnson-potentials';
 import { laneSetNetwork } from './lane-set-network';
 import { firstLoop } from './period-weights';
@@ -26,11 +28,14 @@ export interface CovalidFloors {
   floor: Float64Array;
   /** Per masked lane: the networks in which that back path exists (0 when none). */
   setIn: Int32Array;
+  /** Destinations searched by plain Dijkstra, and those that needed the label search too. */
+  destinations: number;
+  labelSearches: number;
 }
 
 /**
  * Null when the union of the networks has a loop (no common potentials), or when the labels do not
- * pay: after the first searches, more than a third as many labels settle per depot as there are
+ * pay: after 50 label searches, more than a third as many labels settle per depot as there are
  * networks (paths valid in many different sets of networks); then solve the networks one by one.
  */
 export function covalidFloors(template: Network, lanes: MaskedLanes, networks: number): CovalidFloors | null {
@@ -65,17 +70,47 @@ export function covalidFloors(template: Network, lanes: MaskedLanes, networks: n
   let searches = 0;
   let labels = 0;
   let depots = 0;
+  // Per destination, first one plain Dijkstra on the union that remembers the networks its tree path
+  // is valid in: where that path (the cheapest of all) holds in a network of the lane, it is the
+  // answer. Only lanes left open go to the label search.
+  const workspace = createDijkstraWorkspace(n);
+  const targets: number[] = [];
+  let destinations = 0;
   for (let v = 0; v < n; v++) {
     const first = inStart[v];
     const last = inStart[v + 1];
     if (first === last) continue;
-    if (++searches === 50 && labels > (depots * networks) / 3) return null;
+    destinations++;
+    targets.length = 0;
+    for (let i = first; i < last; i++) targets.push(lanes.from[inLane[i]]);
+    const tree = dijkstra(union, v, { weights: reweighted, workspace, targets });
+    for (let i = first; i < last; i++) {
+      const e = inLane[i];
+      const u = lanes.from[e];
+      if (tree.dist[u] === Infinity || !tree.settled[u]) continue;
+      let common = lanes.mask[e];
+      for (let x = u; x !== v && common !== 0; ) {
+        const p = tree.parentPos[x];
+        common &= posMask[p];
+        x = union.laneFrom[outLane[p]];
+      }
+      if (common === 0) continue;
+      setIn[e] = common;
+      const back = restoreCost(tree.dist[u], potential, v, u);
+      floor[e] = back === 0 ? 0 : -back;
+    }
+
+    // Lanes whose cheapest back path holds in none of their networks (or none at all): labels.
     let open = 0;
     for (let i = first; i < last; i++) {
-      const u = lanes.from[inLane[i]];
+      const e = inLane[i];
+      if (setIn[e] !== 0) continue;
+      const u = lanes.from[e];
       if (waiting[u]++ === 0) touched.push(u);
       open++;
     }
+    if (open === 0) continue;
+    if (++searches === 50 && labels > (depots * networks) / 3) return null;
     heap.clear();
     heap.push(v, 0, all);
     while (open > 0 && heap.size > 0) {
@@ -113,7 +148,7 @@ export function covalidFloors(template: Network, lanes: MaskedLanes, networks: n
     }
     touched.length = 0;
   }
-  return { floor, setIn };
+  return { floor, setIn, destinations, labelSearches: searches };
 }
 
 /** A binary heap of (depot, cost, mask) labels by cost. */

@@ -28,6 +28,9 @@ export interface HeadroomWork {
   together: number;
   /** Whole-network headroom solves (laneFloors calls). */
   wholeSolves: number;
+  /** Joint searches: destinations, and those that needed the label search after the plain Dijkstra. */
+  destinations: number;
+  labelSearches: number;
 }
 
 interface FloorState {
@@ -41,13 +44,13 @@ type Maximal = { pn: PeriodNetwork; weights: Float64Array }[];
 /** Headroom of every row in every class it is planned in, rows in table order within each class. */
 export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, cut: Float64Array | null, onProgress?: (done: number, total: number) => void): { rows: RowHeadroom[]; work: HeadroomWork } {
   const out: RowHeadroom[] = [];
-  const work: HeadroomWork = { together: 0, wholeSolves: 0 };
+  const work: HeadroomWork = { together: 0, wholeSolves: 0, destinations: 0, labelSearches: 0 };
   const classes = [...new Set(nets.map((n) => n.vehicleClass))];
   onProgress?.(0, classes.length);
   classes.forEach((vehicleClass, k) => {
     const maximal: Maximal = nets.filter((n) => n.maximal && n.vehicleClass === vehicleClass).map((pn) => ({ pn, weights: weightsWithCuts(pn, cut) }));
     const state: FloorState = { floor: new Float64Array(rows).fill(NaN), net: new Float64Array(rows).fill(NaN), setBy: new Int32Array(rows).fill(-1) };
-    if (maximal.length > 1 && maximal.length <= 30 && together(maximal, state)) work.together++;
+    if (maximal.length > 1 && maximal.length <= 30 && together(maximal, state, work)) work.together++;
     else for (const m of maximal) wholeFloors(m.pn, m.weights, state, work);
     for (let r = 0; r < rows; r++) if (!Number.isNaN(state.net[r])) out.push({ row: r, vehicleClass, net: state.net[r], floor: state.floor[r], setBy: state.setBy[r] });
     onProgress?.(k + 1, classes.length);
@@ -73,7 +76,7 @@ function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState
 }
 
 /** All maximal networks of a class in one search per destination; false when their union has a loop or the labels do not pay. */
-function together(maximal: Maximal, state: FloorState): boolean {
+function together(maximal: Maximal, state: FloorState, work: HeadroomWork): boolean {
   // One masked lane per (row, net under the cuts): the bits of the networks holding the row at that net.
   const index = new Map<string, number>();
   const from: number[] = [];
@@ -106,6 +109,8 @@ function together(maximal: Maximal, state: FloorState): boolean {
     row: Int32Array.from(row),
   }, maximal.length);
   if (found === null) return false;
+  work.destinations += found.destinations;
+  work.labelSearches += found.labelSearches;
   const earliest = (bits: number) => {
     let period = Infinity;
     maximal.forEach(({ pn }, bit) => {

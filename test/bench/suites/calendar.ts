@@ -41,7 +41,7 @@ const money = (minor: number) => (minor / 100).toFixed(2);
 const iso = (d: number) => isoDateText(d)!;
 
 /** A generated contract: nets c + p(u) - p(v) (rebates without loops), seasonal cheaper twins in 100 windows, 20 seasonal loops. */
-function generated(depotCount: number, laneCount: number, windows: number, loops: number, seasonalEvery: number): { depots: string; lanes: string } {
+export function generated(depotCount: number, laneCount: number, windows: number, loops: number, seasonalEvery: number): { depots: string; lanes: string } {
   const rand = seeded(12);
   const pick = (k: number) => Math.floor(rand() * k);
   const potential = Array.from({ length: depotCount }, () => pick(20_000));
@@ -154,7 +154,7 @@ export const suite: BenchSuite = {
         target: 30_000,
         note:
           `${rv.periods.length} periods, ${rv.networks.length} networks, ${rv.networks.filter((n) => n.maximal).length} maximal; ${rv.loops.length} loops, ` +
-          `${rv.fixPlan?.changes.length ?? 0} rows cut, verified ${rv.fixPlan?.verified}; headroom: ${rv.headroomWork?.together} class(es) searched over all maximal networks at once, ${rv.headroomWork?.wholeSolves} whole-network solves; ` +
+          `${rv.fixPlan?.changes.length ?? 0} rows cut, verified ${rv.fixPlan?.verified}; headroom: ${rv.headroomWork?.together} class(es) searched over all maximal networks at once (${rv.headroomWork?.destinations} destinations, ${rv.headroomWork?.labelSearches} needing labels), ${rv.headroomWork?.wholeSolves} whole-network solves; ` +
           `phases ms: ${Object.entries(phases).map(([k, v]) => `${k} ${Math.round(v)}`).join(', ')}; ` +
           `baseline = full one-day audit on ${sampleDays.length} days (${Math.round(baseline.ms / sampleDays.length)} ms each) x ${bigDays} days`,
       });

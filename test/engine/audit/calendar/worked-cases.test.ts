@@ -109,4 +109,13 @@ describe('calendar review: worked cases', () => {
     // Work shared: 12 periods x 2 classes plan to 24 networks, of which only 4 are maximal.
     expect([review.periods.length, review.networks.length, review.networks.filter((n) => n.maximal).length]).toEqual([12, 24, 4]);
   });
+
+  it('--negotiable names clauses as well as refs: the lane plan cuts the negotiable clause first', () => {
+    const imported = importNetwork(sample('depots.csv'), sample('lanes-rebate-loop.csv'));
+    const review = reviewCalendar(imported, { negotiable: ['7.3', 'BFH-L-188', '9.9'] });
+    expect(review.negotiableUnmatched).toEqual(['9.9']);
+    // Loop 1 pays 1.40: clause 7.3's row (95.00) is cut first; loop 2's negotiable row (ref BFH-L-188) takes its 5.82.
+    expect(review.fixPlan!.changes.map((c) => [imported.lanes.sourceRow[c.row], c.cut])).toEqual([[24, 140], [112, 582]]);
+    expect(review.fixPlan!.verified).toBe(true);
+  });
 });
