@@ -4,7 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { LanewrightError } from '../../engine/index';
 import { parseCommandLine, UsageError } from './args';
-import { writeFileAtomic } from '../workspace/atomic-write';
+import { writableTarget, writeFileAtomic } from '../workspace/atomic-write';
 import type { CommandSpec } from './options';
 import { commandHelp, overview } from './usage';
 import { closestName } from './closest-name';
@@ -76,6 +76,8 @@ export async function main(argv: readonly string[]): Promise<number> {
       return 0;
     }
     const outPath = args.values.get('out');
+    // Refused before any work, like a shell redirection into a read-only file.
+    if (outPath) await writableTarget(outPath);
     const chunks: string[] = [];
     const files: [path: string, text: string, done?: string][] = [];
     const output: CommandOutput = {
