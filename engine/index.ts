@@ -53,6 +53,7 @@ export * from './workspace/parse';
 export * from './workspace/dirty';
 export * from './text/cautions';
 export { escapeControls, shownText, SHOWN_VALUE_LIMIT } from './text/shown-text';
+export { safeFileName, MAX_FILE_NAME_BYTES } from './text/file-name';
 export * from './import/adr-tunnels';
 export * from './dispatch/plan-loads';
 export * from './dispatch/day-pricing';

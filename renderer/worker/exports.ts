@@ -3,6 +3,7 @@
 // is applied by the engine and the routes are solved again on the result.
 
 import { findDistinctLoops } from '../../engine/index';
+import { safeFileName } from '../../engine/index';
 import { geoJsonText } from '../../engine/index';
 import { networkGeoJson } from '../../engine/index';
 import { lanesCsv } from '../../engine/index';
@@ -61,13 +62,13 @@ export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
     case 'routes-csv': {
       const routes = report();
       if (!routes) throw new RangeError('export: choose an origin before exporting routes');
-      return { fileName: `routes-from-${routes.origin}${tag}.csv`, mime: 'text/csv', text: routesCsv(routes) };
+      return { fileName: safeFileName(`routes-from-${routes.origin}${tag}`, 'csv'), mime: 'text/csv', text: routesCsv(routes) };
     }
     case 'lanes-csv':
-      return { fileName: `lanes${tag}.csv`, mime: 'text/csv', text: lanesCsv({ plan, lanes: ctx.imported.lanes, currency: network.currency, exponent: network.exponent }, loops()) };
+      return { fileName: safeFileName(`lanes${tag}`, 'csv'), mime: 'text/csv', text: lanesCsv({ plan, lanes: ctx.imported.lanes, currency: network.currency, exponent: network.exponent }, loops()) };
     case 'loops-csv':
-      return { fileName: `rebate-loops${tag}.csv`, mime: 'text/csv', text: loopsCsv(network, loops()) };
+      return { fileName: safeFileName(`rebate-loops${tag}`, 'csv'), mime: 'text/csv', text: loopsCsv(network, loops()) };
     case 'geojson':
-      return { fileName: `network${tag}.geojson`, mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
+      return { fileName: safeFileName(`network${tag}`, 'geojson'), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
   }
 }
