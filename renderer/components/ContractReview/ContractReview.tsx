@@ -55,8 +55,9 @@ export function ContractReview({ engine, network, keys, scenario, onScenario }: 
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>
         Rebate loops in the whole contract{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
-        {review.loop_cap_reached ? ' (list capped)' : ''}
+        {review.loop_cap_reached ? ' (list incomplete)' : ''}
       </h3>
+      {review.loop_search_note !== null && <p className="lw-warn">Loop search: {review.loop_search_note}.</p>}
       {review.loops.length === 0 && <p>No loop of lanes has a negative net cost: every cheapest route is well defined.</p>}
       {review.loops.map((loop, i) => (
         <section key={i} className="lw-review-loop" aria-label={`Loop ${i + 1}`}>
