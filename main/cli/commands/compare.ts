@@ -7,7 +7,7 @@ import { parseScenarioDocument } from '../../../engine/index';
 import { compareReport, compareReportRows } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { readTextFile } from '../files';
+import { readDocumentFile } from '../files';
 import { loadNetwork, planDateOf } from '../load-network';
 import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
@@ -36,7 +36,7 @@ function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const scenarioPath = required(args, 'scenario');
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
-  const scenario = parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
+  const scenario = parseScenarioDocument(readDocumentFile(scenarioPath, 'scenario'), scenarioPath);
   const network = loadNetwork(args);
 
   const comparison = compareScenario(network, scenario, originId, {
