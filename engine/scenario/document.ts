@@ -3,6 +3,7 @@
 // refused rather than half understood. Writing always produces the current version.
 
 import { ScenarioFormatError } from '../errors';
+import { checkJsonDepth } from '../json/zod-checker';
 import { readIsoDate } from '../import/cells';
 import type { LaneKey } from '../import/lane-key';
 import { SCENARIO_AMOUNT_FIELDS, SCENARIO_CHANGE_KINDS, type NewLane, type Scenario, type ScenarioAmountField, type ScenarioChange } from './types';
@@ -26,6 +27,7 @@ const MIGRATIONS: Record<number, (doc: Record<string, unknown>) => Record<string
 export function parseScenarioDocument(text: string, source = 'scenario'): Scenario {
   let value: unknown;
   try {
+    checkJsonDepth(text);
     value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (error) {
     throw new ScenarioFormatError(source, '', null, `not valid JSON (${(error as Error).message})`);
