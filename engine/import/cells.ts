@@ -14,6 +14,14 @@ export function cellText(cells: readonly string[], index: number | undefined): s
 export { readIsoDate, isoDateText } from '../text/iso-date';
 
 /**
+ * A copy of text that is kept (refs, notes): V8 keeps a substring pointing into its parent, so
+ * copying lets each parsed block of the file go.
+ */
+export function ownText(text: string): string {
+  return text.length > 12 ? (' ' + text).slice(1) : text;
+}
+
+/**
  * A drive time in minutes from "h:mm", an ISO 8601 duration ("PT4H35M") or a plain number in
  * `unit` ('min' or 'h'; a number without a unit counts as minutes). Null when it is none of these.
  */

@@ -25,6 +25,11 @@ export const MAX_LANE_MINUTES = 60_000;
 const KM = ['km', 'kilometre', 'kilometres', 'kilometer', 'kilometers'];
 const MILES = ['mi', 'mile', 'miles'];
 
+/** True when a distance unit names miles (the header's unit, lower case). */
+export function isMilesUnit(unit: string | null): boolean {
+  return unit !== null && MILES.includes(unit);
+}
+
 /** A distance in km; `headerUnit` from "Distance (mi)", `unitText` from a unit column (wins when set). */
 export function readDistanceKm(text: string, headerUnit: string | null, unitText: string, decimalComma: boolean): number | CellFailure {
   let unit = headerUnit ?? 'km';

@@ -5,13 +5,15 @@
 import { MoneyOverflowError } from '../errors';
 import { formatMinor, laneNetMinor, type Minor } from '../money/minor';
 import { readAmount } from './amount-text';
-import { cellText, readIsoDate } from './cells';
+import { cellText, ownText, readIsoDate } from './cells';
 import { convertMinor, readRate } from './currency-convert';
 import { currencyExponent, lookupCurrency } from './currencies';
 import { checkDriveMinutes, readDistanceKm, readDriveTime } from './lane-cells';
 import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './headers';
 import { LaneLimitsBuilder } from './lane-limits';
 import { LaneTableBuilder } from './lane-table';
+import { PlainLaneRows } from './lane-row-fast';
+import { DepotIdIndex } from './depot-id-index';
 import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { isBlankRecord, RecordFileReader } from './record-file-reader';
@@ -24,10 +26,7 @@ export interface LanesReaderOptions {
   exchangeRates?: Record<string, string>;
 }
 
-// V8 keeps a substring pointing into its parent; copying stored strings lets each parsed block go.
-function own(text: string): string {
-  return text.length > 12 ? (' ' + text).slice(1) : text;
-}
+const own = ownText;
 
 export class LanesReader extends RecordFileReader {
   readonly table = new LaneTableBuilder();
@@ -45,6 +44,8 @@ export class LanesReader extends RecordFileReader {
   private rowOk = true;
   private row = 0;
   private rowCurrency: string | null = null;
+  /** The plain-row fast path, made once the header and the currency are known (null = not for this file). */
+  private fast: PlainLaneRows | null | undefined;
 
   constructor(
     file: string,
@@ -213,10 +214,15 @@ export class LanesReader extends RecordFileReader {
     t.validFrom[i] = validFrom;
     t.validTo[i] = validTo;
     if (t.vehicleClass) t.vehicleClass[i] = this.vehicleClass(cells);
-    const ref = cellText(cells, col.ref);
-    t.ref.push(ref === '' ? undefined : own(ref));
-    const notes = cellText(cells, col.notes);
-    t.notes.push(notes === '' ? undefined : own(notes));
+    // Absent optional columns get no per-row entries (a lookup past the end reads undefined).
+    if (col.ref !== undefined) {
+      const ref = cellText(cells, col.ref);
+      t.ref.push(ref === '' ? undefined : own(ref));
+    }
+    if (col.notes !== undefined) {
+      const notes = cellText(cells, col.notes);
+      t.notes.push(notes === '' ? undefined : own(notes));
+    }
     for (let k = 0; k < h.unknown.length; k++) {
       const value = cellText(cells, h.unknown[k].index);
       t.extra[k].values.push(value === '' ? undefined : own(value));
@@ -257,6 +263,22 @@ export class LanesReader extends RecordFileReader {
       this.fail(column, cellText(cells, index), 'amount-overflow', `the lane's net cost (toll + fuel + fees - rebate) is outside the exact range (±${Number.MAX_SAFE_INTEGER} minor units); it cannot be costed exactly`);
       return;
     }
+  }
+
+  protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    if (this.fast === undefined) {
+      if (this.currency === null || this.header === null) return false;
+      this.fast = PlainLaneRows.forFile({
+        header: this.header,
+        columnCount: this.headerCells.length,
+        exponent: this.exponent,
+        decimalComma: this.decimalComma,
+        driveUnit: this.driveUnit,
+        depots: new DepotIdIndex(this.depotIndex),
+        table: this.table,
+      });
+    }
+    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
   }
 
   private setRowCurrency(code: string): void {
