@@ -163,7 +163,7 @@ export class PlainLaneRows {
     return value * POW10[scale];
   }
 
-  // km of a plain decimal distance below 100,000 (miles converted as the general reader does).
+  // km of a plain decimal distance within the plausible bound (miles converted as the general reader does).
   private distance(text: string, column: number | undefined): number {
     if (column === undefined) return NaN;
     const s = this.starts[column];
@@ -183,13 +183,13 @@ export class PlainLaneRows {
     }
     if (whole === 0 || whole > 5 || fraction === 0 || fraction > 6) return SLOW;
     // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
-    const km = fraction > 0 ? value / POW10[fraction] : value;
-    const converted = this.miles ? km * KM_PER_MILE : km;
-    // Past the plausible bound the general reader reports a row error.
-    return converted > MAX_LANE_KM ? SLOW : converted;
+    const read = fraction > 0 ? value / POW10[fraction] : value;
+    const km = this.miles ? read * KM_PER_MILE : read;
+    // Past the plausible bound the general reader refuses it with its reason.
+    return km > MAX_LANE_KM ? SLOW : km;
   }
 
-  // Whole minutes (at most six digits); hours per the header go the general way.
+  // Whole minutes within the plausible bound; hours per the header go the general way.
   private drive(text: string, column: number | undefined): number {
     if (column === undefined) return NaN;
     const s = this.starts[column];

@@ -231,6 +231,22 @@ export class LanesReader extends RecordFileReader {
     return true;
   }
 
+  protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    if (this.fast === undefined) {
+      if (this.currency === null || this.header === null) return false;
+      this.fast = PlainLaneRows.forFile({
+        header: this.header,
+        columnCount: this.headerCells.length,
+        exponent: this.exponent,
+        decimalComma: this.decimalComma,
+        driveUnit: this.driveUnit,
+        depots: new DepotIdIndex(this.depotIndex),
+        table: this.table,
+      });
+    }
+    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
+  }
+
   /**
    * A negative amount is accepted (a credit can be real) but named: a negative rebate raises the
    * lane's cost, which is seldom what was meant, and a negative toll, fuel or fee lowers it.
@@ -263,22 +279,6 @@ export class LanesReader extends RecordFileReader {
       this.fail(column, cellText(cells, index), 'amount-overflow', `the lane's net cost (toll + fuel + fees - rebate) is outside the exact range (±${Number.MAX_SAFE_INTEGER} minor units); it cannot be costed exactly`);
       return;
     }
-  }
-
-  protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
-    if (this.fast === undefined) {
-      if (this.currency === null || this.header === null) return false;
-      this.fast = PlainLaneRows.forFile({
-        header: this.header,
-        columnCount: this.headerCells.length,
-        exponent: this.exponent,
-        decimalComma: this.decimalComma,
-        driveUnit: this.driveUnit,
-        depots: new DepotIdIndex(this.depotIndex),
-        table: this.table,
-      });
-    }
-    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
   }
 
   private setRowCurrency(code: string): void {
