@@ -53,6 +53,7 @@ export abstract class RecordFileReader implements CsvRecordSink {
       this.counts.total++;
       const flags = { badQuotes: bad?.has(i) ?? false, notUtf8: notUtf8?.has(i) ?? false };
       if (rejectFlaggedRow(this.report, this.file, this.counts, firstRow + i, cells, this.headerCells, flags)) continue;
+      if (cells.length < this.headerCells.length && !this.unusable) this.warnShortRow(cells.length, firstRow + i);
       if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
       else this.counts.accepted++;
     }
@@ -69,6 +70,16 @@ export abstract class RecordFileReader implements CsvRecordSink {
   issue(issue: CsvStreamIssue): void {
     if (issue.code === 'not-text') this.notText = true;
     takeStreamIssue(this.report, this.file, this.counts, issue, this.headerRead, this.headerCells);
+  }
+
+  /**
+   * A row with fewer fields than the header: its missing cells read as empty, which can mean an
+   * estimated fuel or a zero fee the file never said, so it is named (a warning; the row is read).
+   */
+  private warnShortRow(fields: number, row: number): void {
+    const missing = this.headerCells.slice(fields);
+    const named = missing.slice(0, 5).map((h) => `"${h}"`).join(', ') + (missing.length > 5 ? `, … (${missing.length} in all)` : '');
+    this.report.warning(this.file, row, missing[0] || `(column ${fields + 1})`, null, 'too-few-fields', `the row has ${fields} field(s) but the header has ${this.headerCells.length}; ${named} read as empty`);
   }
 
   finish(): void {

@@ -51,7 +51,8 @@ export type IssueCode =
   | 'duplicate-lane'
   | 'self-lane'
   | 'net-negative-lane'
-  | 'negative-amount';
+  | 'negative-amount'
+  | 'too-few-fields';
 
 /** One problem, located as a spreadsheet shows it. `row` 1 is the header; null = the whole file. */
 export interface ValidationItem {
