@@ -52,7 +52,8 @@ export type IssueCode =
   | 'self-lane'
   | 'net-negative-lane'
   | 'negative-amount'
-  | 'too-few-fields';
+  | 'too-few-fields'
+  | 'stray-quote';
 
 /** One problem, located as a spreadsheet shows it. `row` 1 is the header; null = the whole file. */
 export interface ValidationItem {
