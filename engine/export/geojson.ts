@@ -5,6 +5,8 @@ import type { RebateLoop } from '../routes/rebate-loop';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 import type { RoutesReport } from '../report/routes-report';
+import { ROUTE_CAUTION } from '../text/cautions';
+import type { ExportSettings } from './export-settings';
 
 export type Position = [number, number];
 export interface Feature {
@@ -12,14 +14,20 @@ export interface Feature {
   geometry: { type: 'Point'; coordinates: Position } | { type: 'LineString'; coordinates: Position[] };
   properties: Record<string, string | number | boolean | null | string[] | number[]>;
 }
+/** RFC 7946 section 6.1 allows foreign members: `caution` and `settings` travel with the features. */
 export interface FeatureCollection {
   type: 'FeatureCollection';
   features: Feature[];
+  /** Always the route caution (costs are estimates; restrictions, hours and regulations apply). */
+  caution?: string;
+  settings?: ExportSettings;
 }
 
 export interface GeoJsonOptions {
   report?: RoutesReport;
   loops?: readonly RebateLoop[];
+  /** What the file was made from (date, class, files, scenario). */
+  settings?: ExportSettings;
 }
 
 /** Depots, plus routes (when a routes report is given) and loops, as one FeatureCollection. */
@@ -86,5 +94,5 @@ export function networkGeoJson(network: Network, options: GeoJsonOptions = {}): 
       },
     });
   });
-  return { type: 'FeatureCollection', features };
+  return { type: 'FeatureCollection', features, caution: ROUTE_CAUTION, ...(options.settings ? { settings: options.settings } : {}) };
 }

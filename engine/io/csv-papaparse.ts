@@ -66,6 +66,8 @@ export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | 
 export interface CsvWriteOptions {
   /** Guard formula-like text (csv-cell-safety.ts, OWASP CSV-injection advice). Default true; tests only turn it off. */
   escapeFormulae?: boolean;
+  /** Field separator; default comma (RFC 4180). */
+  delimiter?: ',' | ';';
 }
 
 /**
@@ -81,6 +83,7 @@ export function formatCsvRows(rows: readonly (readonly (string | number | null)[
     Papa.unparse(cells as unknown[][], {
       newline: '\r\n',
       quotes: (value: unknown) => typeof value === 'string' && needsCsvQuotes(value),
+      delimiter: options.delimiter ?? ',',
       escapeFormulae: false,
     }) + '\r\n'
   );

@@ -19,6 +19,9 @@ export const CAUTIONS: readonly string[] = [
 export const ROUTE_CAUTION =
   'Cost estimate only. Vehicle restrictions (height, weight, axle load, hazardous goods), driver hours and local regulations apply: check them before dispatching.';
 
+/** One line in the map's attribution corner (kept short: the corner shares the map with the key). */
+export const MAP_CAUTION = 'Costs are estimates; vehicle restrictions, driver hours and local regulations apply.';
+
 /** Shown with every dispatch plan (CLI output, Loads panel, each page of the printed dispatch sheet). */
 export const DISPATCH_CAUTION =
   'Cost estimates only. Vehicle limits are checked only against the lane limits in your files (height, width, length, ' +

@@ -3,7 +3,6 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { laneKeyIndex, laneKeysOf } from '../../engine/index';
 import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
 import { AboutDialog } from '../components/AboutDialog/AboutDialog';
 import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';
@@ -14,14 +13,16 @@ import { MapLegend } from '../components/MapLegend/MapLegend';
 import { PlanControls } from '../components/PlanControls/PlanControls';
 import { ProgressBar } from '../components/ProgressBar/ProgressBar';
 import { RouteDetail } from '../components/RouteDetail/RouteDetail';
+import { Splitter } from '../components/Splitter/Splitter';
 import { StatusBar } from '../components/StatusBar/StatusBar';
 import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
 import { addedLanes, sameAddedLanes, type AddedLane } from '../model/added-lanes';
-import { applyScenarioAmounts } from '../model/scenario-edits';
+import { hasChanges } from '../model/scenario-edits';
 import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
+import { useLayout } from './use-layout';
 import { useWorkbench } from './use-workbench';
 
 export function App({ host, version }: { host: LanewrightHost; version: string }) {
@@ -37,13 +38,8 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const { replaceWith } = bench;
   const ui = useMemo(() => ({ openImport: () => void replaceWith('Importing CSV files', () => setImportOpen(true)), openAbout: () => setAboutOpen(true) }), [replaceWith]);
   const { exportFile } = useCommands(bench, ui);
+  const { layout, limits, setLowerPx, setSidePx } = useLayout();
 
-  const keys = useMemo(() => (network ? laneKeysOf(Array.from(network.laneFrom, (a, e) => ({ from: network.depotIds[a], to: network.depotIds[network.laneTo[e]], ref: network.laneRef[e] }))) : []), [network]);
-  const keyIndex = useMemo(() => laneKeyIndex(keys), [keys]);
-  const amounts = useMemo(
-    () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario, keyIndex) : null),
-    [network, keys, scenario, keyIndex],
-  );
   // An edit elsewhere in the scenario keeps the same list, so the map does not redraw layers built on it.
   const addedRef = useRef<AddedLane[]>([]);
   const added = useMemo(() => {
@@ -64,11 +60,18 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   };
   const solve = plan.solve && network && plan.solvedFor === network ? plan.solve : null;
   const route = solve ? plan.route : null;
+  // Amounts under the scenario and lane keys come from the engine's overlay in the worker.
+  const amounts = solve?.overlay ?? null;
   // The import dialog shows the progress bar itself (inside the modal, in its keyboard cycle).
   const importShown = importOpen || dataset.pending !== null;
   const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
   return (
-    <div className="lw-app" data-ready={solve && !plan.solving ? 'yes' : 'no'} data-solves={plan.solveCount}>
+    <div
+      className="lw-app"
+      data-ready={solve && !plan.solving ? 'yes' : 'no'}
+      data-solves={plan.solveCount}
+      style={{ '--lw-lower-px': `${layout.lowerPx}px`, '--lw-side-px': `${layout.sidePx}px` } as React.CSSProperties}
+    >
       <a className="lw-skip" href="#lw-lower">
         Skip to results
       </a>
@@ -81,23 +84,24 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
       )}
       {network && solve && amounts && <LoopAlert network={network} solve={solve} amounts={amounts} added={added} onReview={() => setTab('review')} />}
       <main className="lw-body">
-        <aside className="lw-side" aria-label="Plan and route">
+        <aside className="lw-side" id="lw-side" aria-label="Plan and route">
           {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
           {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
-            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} added={added} onPlanFrom={planFrom} />
+            <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} added={added} onPlanFrom={planFrom} scenarioName={hasChanges(scenario) ? scenario.name : null} host={host} onMessage={bench.setMessage} />
           )}
           {network && solve && selected === null && <p className="lw-muted">Click a depot on the map or a row in the results for its route and cost breakdown; double-click a depot on the map to plan from it.</p>}
         </aside>
+        <Splitter orientation="vertical" label="Width of the plan and route panel" controls="lw-side" value={layout.sidePx} min={limits.side.min} max={limits.side.max} grows={1} onChange={setSidePx} />
         <section className="lw-mapwrap" aria-label="Map">
           <ErrorBoundary what="map">
-            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} loadRoutes={tab === 'loads' ? loadRoutes : null} />
+            <NetworkMap network={network} solve={solve} route={route} added={added} selected={selected} onSelect={setSelected} onPlanFrom={planFrom} loadRoutes={tab === 'loads' ? loadRoutes : null} legend={<MapLegend />} />
           </ErrorBoundary>
-          <MapLegend />
         </section>
       </main>
+      <Splitter orientation="horizontal" label="Height of the results panel" controls="lw-lower" value={layout.lowerPx} min={limits.lower.min} max={limits.lower.max} grows={-1} onChange={setLowerPx} />
       <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
         <ErrorBoundary what="results panel">
-          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} added={added} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} onDrawLoad={setLoadRoutes} />}
+          {network && solve && <LowerPanel bench={bench} network={network} solve={solve} amounts={solve.overlay} added={added} tab={tab} onTab={setTab} onExport={exportFile} onDrawLoad={setLoadRoutes} />}
         </ErrorBoundary>
       </section>
       <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />

@@ -4,12 +4,17 @@
 
 import L from 'leaflet';
 import 'leaflet/dist/leaflet.css';
-import { useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { MAP_CAUTION } from '../../engine/index';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { addBasemap } from './basemap';
 import type { AddedLane } from '../model/added-lanes';
+import { depotLabelLayer } from './depot-labels';
+import { fitNetwork, depotsInView } from './fit-view';
 import { addedLaneLayer, depotMarkers, laneLayer, loopLayer, routeLayer, solveMarkers, styleDepots, treeLayer } from './network-layers';
 import { loadRouteLayer, type LoadRouteDrawing } from './load-route-layer';
+import { reverseLookup } from './two-way';
+import { useDepotCursor } from './use-depot-cursor';
 import './map.css';
 
 export interface NetworkMapProps {
@@ -23,6 +28,8 @@ export interface NetworkMapProps {
   onPlanFrom(depot: number): void;
   /** A load's route and alternatives from the Loads panel. */
   loadRoutes?: readonly LoadRouteDrawing[] | null;
+  /** The map key, placed in the corner the fitted network keeps clear. */
+  legend?: ReactNode;
 }
 
 /** One layer slot of the map, rebuilt when `deps` change (`build` is a new closure every render). */
@@ -69,8 +76,13 @@ function makeRenderers(map: L.Map): Renderers {
   };
 }
 
-export function NetworkMap({ network, solve, route, added, selected, onSelect, onPlanFrom, loadRoutes }: NetworkMapProps) {
+export function NetworkMap({ network, solve, route, added, selected, onSelect, onPlanFrom, loadRoutes, legend }: NetworkMapProps) {
   const element = useRef<HTMLDivElement>(null);
+  // The tools and the key sit over the map's top-right corner; fitting keeps the network clear of them.
+  const corner = useRef<HTMLDivElement>(null);
+  const [labelsOn, setLabelsOn] = useState(true);
+  // Bumped when the view moves or resizes: labels and the in-view count follow it.
+  const [view, setView] = useState(0);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
@@ -84,19 +96,23 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   useEffect(() => {
     if (!element.current) return;
     const map = L.map(element.current, { preferCanvas: true, zoomSnap: 0.25, worldCopyJump: false, attributionControl: true });
-    map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)');
+    // The caution is this app's own constant text (attribution takes HTML, so never file text here).
+    map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)').addAttribution(MAP_CAUTION);
     map.setView([49.5, 6], 5);
     const renderers = makeRenderers(map);
     addBasemap(map, renderers.base);
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
-    // The panels around the map resize (loop banner, window); Leaflet must re-measure its box.
-    // Until the user pans or zooms, the map keeps the whole network in view as its box changes.
+    map.on('moveend zoomend resize', () => setView((n) => n + 1));
+    // The panels around the map resize (loop banner, window, splitter), and so does the key when it
+    // is opened or closed; Leaflet must re-measure its box. Until the user pans or zooms, the map
+    // keeps the whole network in view as its box changes.
     const resize = new ResizeObserver(() => {
       map.invalidateSize();
-      if (autoFit.current && fitTo.current) map.fitBounds(fitTo.current, { animate: false });
+      if (autoFit.current && fitTo.current) fitNetwork(map, fitTo.current, corner.current);
     });
     resize.observe(element.current);
+    if (corner.current) resize.observe(corner.current);
     const stopAutoFit = () => (autoFit.current = false);
     element.current.addEventListener('wheel', stopAutoFit, { passive: true });
     element.current.addEventListener('mousedown', stopAutoFit);
@@ -113,21 +129,27 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
 
   useEffect(() => {
     if (!map || !network || network.depotIds.length === 0) return;
-    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number])).pad(0.08);
+    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number]));
     fitTo.current = bounds;
     autoFit.current = true;
-    map.fitBounds(bounds, { animate: false });
+    fitNetwork(map, bounds, corner.current);
   }, [map, network]);
+  const fit = useCallback(() => {
+    if (!map || !fitTo.current) return;
+    autoFit.current = true;
+    fitNetwork(map, fitTo.current, corner.current);
+  }, [map]);
 
-  useLayer(map, network && renderers ? () => laneLayer(network, renderers.lanes) : null, [network]);
+  const reverse = useMemo(() => (network ? reverseLookup(network) : () => false), [network]);
+  useLayer(map, network && renderers ? () => laneLayer(network, reverse, renderers.lanes) : null, [network, reverse]);
   // Most edits leave the route tree as it was: the same lanes keep the drawn layer, so the overlay
   // canvas (as large as the map and its margin) is not repainted and re-sent to the compositor.
   const tree = useSameLanes(solve?.treeLanes ?? null);
-  useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, added, renderers.overlay) : null, [network, tree, added]);
+  useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, added, reverse, renderers.overlay) : null, [network, tree, added, reverse]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
-  useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, renderers.overlay) : null, [network, route, added]);
+  useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, reverse, renderers.overlay) : null, [network, route, added, reverse]);
   useLayer(map, network && loadRoutes && renderers ? () => loadRouteLayer(network, loadRoutes, renderers.overlay) : null, [network, loadRoutes]);
-  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, added, renderers.overlay) : null, [network, solve, added]);
+  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, added, reverse, renderers.overlay) : null, [network, solve, added, reverse]);
   // Depot circles are made once per network (thousands of them) and only restyled per solve.
   const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);
   useEffect(() => {
@@ -145,19 +167,57 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   }, [depots, network, solve, selected]);
   useLayer(map, network && solve ? () => solveMarkers(network, solve, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) }) : null, [network, solve]);
 
+  // Depot ids beside the depots when zoomed in; rebuilt as the view moves (only depots in view).
+  const [labelCount, setLabelCount] = useState(0);
+  useEffect(() => {
+    if (!map || !network || !labelsOn) return setLabelCount(0);
+    const layer = depotLabelLayer(map, network);
+    setLabelCount(layer ? (layer as L.LayerGroup).getLayers().length : 0);
+    if (!layer) return;
+    layer.addTo(map);
+    return () => {
+      layer.remove();
+    };
+  }, [map, network, labelsOn, view]);
+  const inView = useMemo(() => (map && network && view >= 0 ? depotsInView(map, network, corner.current) : 0), [map, network, view]);
+  const spoken = useDepotCursor(map, network, solve, selected, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) }, 'lw-map-keys');
+
   const loopCount = solve?.loops.length ?? 0;
   const addedDrawn = added.filter((a) => a.from >= 0 && a.to >= 0).length;
   const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
+  const depotCount = network?.depotIds.length ?? 0;
   return (
-    <div
-      className="lw-map"
-      ref={element}
-      role="region"
-      aria-label={`Network map: ${network?.depotIds.length ?? 0} depots, ${network?.laneFrom.length ?? 0} lanes${addedDrawn ? `, ${addedDrawn} lane(s) the scenario adds drawn dotted and labelled` : ''}${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
-      data-loops={loopCount}
-      data-unbounded={unbounded}
-      data-added-lanes={addedDrawn}
-      data-tree-lanes={solve?.treeLanes.length ?? 0}
-    />
+    <div className="lw-map-frame">
+      <div
+        className="lw-map"
+        ref={element}
+        role="region"
+        aria-label={`Network map: ${depotCount} depots (${inView} in view), ${network?.laneFrom.length ?? 0} lanes${addedDrawn ? `, ${addedDrawn} lane(s) the scenario adds drawn dotted and labelled` : ''}${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
+        data-loops={loopCount}
+        data-unbounded={unbounded}
+        data-added-lanes={addedDrawn}
+        data-tree-lanes={solve?.treeLanes.length ?? 0}
+        data-depots-in-view={inView}
+        data-depot-labels={labelCount}
+        data-zoom={map && view >= 0 ? map.getZoom() : ''}
+      />
+      <div className="lw-map-corner" ref={corner}>
+        <div className="lw-map-tools" role="group" aria-label="Map view">
+          <button type="button" onClick={fit} disabled={!network}>
+            Fit network
+          </button>
+          <label className="lw-check">
+            <input type="checkbox" checked={labelsOn} onChange={(event) => setLabelsOn(event.target.checked)} /> Depot labels
+          </label>
+        </div>
+        {legend}
+      </div>
+      <p id="lw-map-keys" className="lw-visually-hidden">
+        Arrow keys move to the nearest depot in that direction, Home to the origin; Enter shows the depot's route, Shift+Enter plans from it.
+      </p>
+      <p className="lw-visually-hidden" role="status">
+        {spoken}
+      </p>
+    </div>
   );
 }

@@ -4,6 +4,7 @@
 
 import L from 'leaflet';
 import type { NetworkView } from '../worker/protocol';
+import { textNode } from './dom-text';
 
 export interface LoadRouteDrawing {
   /** Depot ids in travel order. */
@@ -14,12 +15,6 @@ export interface LoadRouteDrawing {
 
 const DASHES = ['10 6', '2 6', '14 4 2 4', '6 6 2 6'];
 
-/** Text as a DOM node: file-made ids never go through HTML. */
-function textNode(text: string): HTMLElement {
-  const span = document.createElement('span');
-  span.textContent = text;
-  return span;
-}
 
 export function loadRouteLayer(network: NetworkView, routes: readonly LoadRouteDrawing[], renderer: L.Renderer): L.Layer | null {
   const index = new Map(network.depotIds.map((id, i) => [id, i]));

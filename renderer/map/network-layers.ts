@@ -4,11 +4,23 @@
 import L from 'leaflet';
 import { addedLaneName, addedLaneOf, type AddedLane } from '../model/added-lanes';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
+import { textNode } from './dom-text';
 import { MAX_DIAMONDS, STYLE } from './map-style';
+import { OffsetLines } from './offset-lanes';
+import { offsetFor, type HasReverse } from './two-way';
 
 type Segments = L.LatLngExpression[][];
 
-function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: readonly AddedLane[] = []): Segments {
+/** Lines of these lanes; a lane whose reverse exists is shifted right of its direction (offset-lanes.ts). */
+function linesOf(network: NetworkView, lanes: ArrayLike<number>, reverse: HasReverse, style: L.PolylineOptions & { weight: number }, renderer: L.Renderer, added: readonly AddedLane[] = [], shift = offsetFor(style.weight)): L.Polyline {
+  const ends: number[] = [];
+  const segments = segmentsOf(network, lanes, added, ends);
+  const offsets = new Float32Array(segments.length);
+  for (let i = 0; i < segments.length; i++) if (reverse(ends[2 * i], ends[2 * i + 1])) offsets[i] = shift;
+  return new OffsetLines(segments, { ...style, renderer, interactive: false, lwOffsets: offsets });
+}
+
+function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: readonly AddedLane[] = [], ends: number[] = []): Segments {
   const out: Segments = [];
   for (let i = 0; i < lanes.length; i++) {
     const e = lanes[i];
@@ -18,6 +30,7 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: reado
     const a = extra ? extra.from : known ? network.laneFrom[e] : -1;
     const b = extra ? extra.to : known ? network.laneTo[e] : -1;
     if (a < 0 || b < 0) continue;
+    ends.push(a, b);
     out.push([
       [network.lat[a], network.lon[a]],
       [network.lat[b], network.lon[b]],
@@ -27,36 +40,33 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: reado
 }
 
 /** Every lane, thin and grey. */
-export function laneLayer(network: NetworkView, renderer: L.Renderer): L.Layer {
+export function laneLayer(network: NetworkView, reverse: HasReverse, renderer: L.Renderer): L.Layer {
   const all = new Int32Array(network.laneFrom.length).map((_, i) => i);
-  return L.polyline(segmentsOf(network, all), { ...STYLE.lane, renderer, interactive: false });
+  return linesOf(network, all, reverse, STYLE.lane, renderer);
 }
 
 /** The cheapest-route tree from the origin. */
-export function treeLayer(network: NetworkView, treeLanes: Int32Array, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
-  return L.polyline(segmentsOf(network, treeLanes, added), { ...STYLE.tree, renderer, interactive: false });
+export function treeLayer(network: NetworkView, treeLanes: Int32Array, added: readonly AddedLane[], reverse: HasReverse, renderer: L.Renderer): L.Layer {
+  return linesOf(network, treeLanes, reverse, STYLE.tree, renderer, added);
 }
 
 /** The selected route: a dark casing under a bright line, so it reads on any background. */
-export function routeLayer(network: NetworkView, route: RouteView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
-  const segments = segmentsOf(network, route.lanes, added);
-  return L.layerGroup([
-    L.polyline(segments, { ...STYLE.route, renderer, interactive: false }),
-    L.polyline(segments, { ...STYLE.routeInner, renderer, interactive: false }),
-  ]);
+export function routeLayer(network: NetworkView, route: RouteView, added: readonly AddedLane[], reverse: HasReverse, renderer: L.Renderer): L.Layer {
+  // Casing and line share the casing's shift, so the bright line stays centred on it.
+  const shift = offsetFor(STYLE.route.weight);
+  return L.layerGroup([linesOf(network, route.lanes, reverse, STYLE.route, renderer, added, shift), linesOf(network, route.lanes, reverse, STYLE.routeInner, renderer, added, shift)]);
 }
 
 /** Rebate loops: heavy dashed lines with a permanent text label on each loop. */
-export function loopLayer(network: NetworkView, solve: SolveView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
+export function loopLayer(network: NetworkView, solve: SolveView, added: readonly AddedLane[], reverse: HasReverse, renderer: L.Renderer): L.Layer {
   const group = L.layerGroup();
   solve.loops.forEach((loop, i) => {
-    const line = L.polyline(segmentsOf(network, loop.lanes, added), { ...STYLE.loop, renderer, interactive: false });
-    group.addLayer(line);
+    group.addLayer(linesOf(network, loop.lanes, reverse, STYLE.loop, renderer, added));
     const lats = loop.depots.map((d) => network.lat[d]);
     const lons = loop.depots.map((d) => network.lon[d]);
     const centre: L.LatLngExpression = [lats.reduce((a, b) => a + b, 0) / lats.length, lons.reduce((a, b) => a + b, 0) / lons.length];
     const label = `Rebate loop ${i + 1}: ${loop.depots.map((d) => network.depotIds[d]).join(' → ')} → ${network.depotIds[loop.depots[0]]}`;
-    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-loop-label' }).setLatLng(centre).setContent(label));
+    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-loop-label' }).setLatLng(centre).setContent(textNode(label)));
   });
   return group;
 }
@@ -74,7 +84,7 @@ export function addedLaneLayer(network: NetworkView, added: readonly AddedLane[]
     group.addLayer(L.polyline(ends, { ...STYLE.addedCasing, renderer, interactive: false }));
     group.addLayer(L.polyline(ends, { ...STYLE.added, renderer, interactive: false }));
     const middle: L.LatLngExpression = [(network.lat[a.from] + network.lat[a.to]) / 2, (network.lon[a.from] + network.lon[a.to]) / 2];
-    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(escapeHtml(`Added: ${addedLaneName(a.lane)}`)));
+    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(textNode(`Added: ${addedLaneName(a.lane)}`)));
   }
   return group;
 }
@@ -85,16 +95,16 @@ export interface DepotHandlers {
   onPlanFrom(depot: number): void;
 }
 
-function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-}
-
 // The label names the depot for screen readers (and for tests looking at the map).
 function diamond(id: string): L.DivIcon {
+  // Leaflet positions the icon with a transform, so the rotated diamond is an inner element.
+  const shape = textNode('', 'lw-diamond');
+  shape.setAttribute('role', 'img');
+  shape.setAttribute('aria-label', `${id}: cost unbounded`);
+  shape.append(textNode('∞'));
   return L.divIcon({
     className: 'lw-unbounded-marker',
-    // Leaflet positions the icon with a transform, so the rotated diamond is an inner element.
-    html: `<span class="lw-diamond" role="img" aria-label="${escapeHtml(id)}: cost unbounded"><span>∞</span></span>`,
+    html: shape,
     iconSize: [22, 22],
     iconAnchor: [11, 11],
   });
@@ -104,7 +114,7 @@ function diamond(id: string): L.DivIcon {
 export function depotMarkers(network: NetworkView, renderer: L.Renderer, handlers: DepotHandlers): { layer: L.LayerGroup; markers: L.CircleMarker[] } {
   const markers: L.CircleMarker[] = [];
   for (let d = 0; d < network.depotIds.length; d++) {
-    const marker = L.circleMarker([network.lat[d], network.lon[d]], { ...STYLE.depot, renderer }).bindTooltip(`${network.depotIds[d]} · ${network.depotNames[d]}`, { direction: 'top' });
+    const marker = L.circleMarker([network.lat[d], network.lon[d]], { ...STYLE.depot, renderer }).bindTooltip(() => textNode(`${network.depotIds[d]} · ${network.depotNames[d]}`), { direction: 'top' });
     marker.on('click', () => handlers.onSelect(d));
     marker.on('dblclick', (event) => {
       L.DomEvent.stop(event); // not the map's double-click zoom
@@ -167,6 +177,6 @@ export function solveMarkers(network: NetworkView, solve: SolveView, handlers: D
     }
   }
   const o = solve.origin;
-  group.addLayer(L.tooltip({ permanent: true, direction: 'right', offset: [10, 0], className: 'lw-origin-label' }).setLatLng([network.lat[o], network.lon[o]]).setContent(`Origin ${escapeHtml(network.depotIds[o])}${solve.status[o] === 2 ? ' · ∞ unbounded' : ''}`));
+  group.addLayer(L.tooltip({ permanent: true, direction: 'right', offset: [10, 0], className: 'lw-origin-label' }).setLatLng([network.lat[o], network.lon[o]]).setContent(textNode(`Origin ${network.depotIds[o]}${solve.status[o] === 2 ? ' · ∞ unbounded' : ''}`)));
   return group;
 }

@@ -1,19 +1,19 @@
 // Export files the UI offers, made in the worker with the engine's exporters (the same files the
-// command line writes). With an active scenario they describe the changed contract: the scenario
-// is applied by the engine and the routes are solved again on the result.
+// command line writes). With an active scenario they describe the changed contract: the engine's
+// overlay lays the scenario over every lane row (as `lanewright export --scenario` does) and the
+// routes are solved again on the result.
 
 import { findDistinctLoops } from '../../engine/index';
-import { safeFileName } from '../../engine/index';
+import { exportFileName } from '../../engine/index';
 import { geoJsonText } from '../../engine/index';
 import { networkGeoJson } from '../../engine/index';
-import { lanesCsv } from '../../engine/index';
+import { lanesCsv, type LanesExportInput } from '../../engine/index';
 import { loopsCsv } from '../../engine/index';
 import { routesCsv } from '../../engine/index';
 import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
-import type { PlannedLane, PlannedNetwork } from '../../engine/index';
 import { routesReport } from '../../engine/index';
-import { applyScenario } from '../../engine/index';
+import { scenarioImport } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import type { ExportKind, PlanSettings } from './protocol';
 import { solveFor } from './solve-plan';
@@ -32,25 +32,20 @@ export interface ExportContext {
   date: string | null;
 }
 
-/** The network and plan the exports describe: the import's, or the scenario's when it changes anything. */
-function target(ctx: ExportContext): { network: Network; plan: PlannedNetwork } {
+/** The network and lane rows the exports describe: the import's, or the scenario's when it changes anything. */
+function target(ctx: ExportContext): { network: Network; lanes: LanesExportInput } {
   const { imported, network, scenario } = ctx;
-  if (!scenario || !hasChanges(scenario)) return { network, plan: imported.plan };
-  const applied = applyScenario(network, scenario, { date: ctx.date });
-  const lanes: PlannedLane[] = applied.lanes.map((lane, i) => {
-    const b = applied.baseLaneOf[i];
-    const base = b >= 0 ? imported.plan.lanes[b] : { vehicleClass: null, distanceEstimated: false, fuelEstimated: false, driveEstimated: false };
-    return { ...base, ...lane, validFrom: lane.validFrom ?? null, validTo: lane.validTo ?? null };
-  });
-  const laneRecord = Int32Array.from(applied.baseLaneOf, (b) => (b >= 0 ? imported.plan.laneRecord[b] : -1));
-  return { network: applied.network, plan: { ...imported.plan, network: applied.network, lanes, laneRecord } };
+  if (!scenario || !hasChanges(scenario)) return { network, lanes: imported };
+  const what = scenarioImport(imported, scenario);
+  return { network: what.network, lanes: what };
 }
 
 const suffix = (ctx: ExportContext) => (ctx.scenario && hasChanges(ctx.scenario) ? `-${ctx.scenario.name.replace(/[^\w-]+/g, '-').toLowerCase()}` : '');
 
 /** Builds one export file. Routes need a chosen origin; the others describe the whole contract. */
 export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
-  const { network, plan } = target(ctx);
+  const { network, lanes } = target(ctx);
+  const plan = ctx.imported.plan;
   const tag = suffix(ctx);
   const loops = () => findDistinctLoops(network).loops;
   const report = () => {
@@ -62,13 +57,13 @@ export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
     case 'routes-csv': {
       const routes = report();
       if (!routes) throw new RangeError('export: choose an origin before exporting routes');
-      return { fileName: safeFileName(`routes-from-${routes.origin}${tag}`, 'csv'), mime: 'text/csv', text: routesCsv(routes) };
+      return { fileName: exportFileName({ kind: `routes-from-${routes.origin}${tag}` }, 'csv'), mime: 'text/csv', text: routesCsv(routes) };
     }
     case 'lanes-csv':
-      return { fileName: safeFileName(`lanes${tag}`, 'csv'), mime: 'text/csv', text: lanesCsv({ plan, lanes: ctx.imported.lanes, currency: network.currency, exponent: network.exponent }, loops()) };
+      return { fileName: exportFileName({ kind: `lanes${tag}` }, 'csv'), mime: 'text/csv', text: lanesCsv(lanes, loops()) };
     case 'loops-csv':
-      return { fileName: safeFileName(`rebate-loops${tag}`, 'csv'), mime: 'text/csv', text: loopsCsv(network, loops()) };
+      return { fileName: exportFileName({ kind: `rebate-loops${tag}` }, 'csv'), mime: 'text/csv', text: loopsCsv(network, loops()) };
     case 'geojson':
-      return { fileName: safeFileName(`network${tag}`, 'geojson'), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
+      return { fileName: exportFileName({ kind: `network${tag}` }, 'geojson'), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
   }
 }

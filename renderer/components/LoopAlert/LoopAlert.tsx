@@ -1,10 +1,14 @@
 // The rebate-loop warning: a banner that cannot be missed, announced to screen readers at once,
 // listing each loop's lanes with their file rows and contract references and the net per lap.
+// Once read (the user acts anywhere else, or presses Fold) it folds to one line that keeps the loop
+// in words and a button to unfold it, so on a laptop screen the map and the panels get the room.
 
+import { useEffect, useRef, useState } from 'react';
 import { FLAG_LIMIT_HIDES_LOOP } from '../../model/flags';
 import { formatMoneyWithCode } from '../../model/format';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
-import { laneNetMinor, type LaneAmounts } from '../../model/scenario-edits';
+import { netCost } from '../../../engine/index';
+import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
 
@@ -20,14 +24,63 @@ export interface LoopAlertProps {
   onReview(): void;
 }
 
-export function LoopAlert({ network, solve, amounts, added, onReview }: LoopAlertProps) {
-  if (solve.loops.length === 0) return null;
+/** Same loops (by depots) = same banner: re-solves for other edits keep it folded. */
+function loopsKey(solve: SolveView): string {
+  return solve.loops.map((loop) => loop.depots.join(',')).join(';');
+}
+
+export function LoopAlert(props: LoopAlertProps) {
+  if (props.solve.loops.length === 0) return null;
+  return <LoopBanner key={loopsKey(props.solve)} {...props} />;
+}
+
+function LoopBanner({ network, solve, amounts, added, onReview }: LoopAlertProps) {
+  const [folded, setFolded] = useState(false);
+  const box = useRef<HTMLElement>(null);
+  // Read = the user has moved on: a click or a key anywhere outside the banner folds it. On the
+  // click, not the press: folding moves the page up, which must not happen under a press in progress.
+  useEffect(() => {
+    if (folded) return;
+    const onElsewhere = (event: Event) => {
+      // A target gone from the page is the banner's own button that just re-rendered it (Details).
+      if (box.current && event.target instanceof Node && event.target.isConnected && !box.current.contains(event.target)) setFolded(true);
+    };
+    document.addEventListener('click', onElsewhere);
+    document.addEventListener('keydown', onElsewhere);
+    return () => {
+      document.removeEventListener('click', onElsewhere);
+      document.removeEventListener('keydown', onElsewhere);
+    };
+  }, [folded]);
   const unbounded = solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0);
   const limited = solve.settings.maxLegs !== null;
   const hidden = solve.flags.reduce((n, f) => n + ((f & FLAG_LIMIT_HIDES_LOOP) !== 0 ? 1 : 0), 0);
   const id = (d: number) => network.depotIds[d];
+  const first = solve.loops[0];
+  if (folded)
+    return (
+      <section className="lw-loop-alert lw-folded" role="alert" aria-labelledby="lw-loop-alert-title" ref={box} data-folded="yes">
+        <h2 id="lw-loop-alert-title">
+          <span className="lw-alert-icon" aria-hidden="true">
+            ⚠
+          </span>{' '}
+          Rebate loop: {first.depots.map(id).join(' → ')} → {id(first.depots[0])} · net per lap {formatMoneyWithCode(first.netPerLap, network.currency, network.exponent)}
+          {solve.loops.length > 1 ? ` (+${solve.loops.length - 1} more)` : ''}
+          {limited ? '' : ` · ${unbounded} unbounded`}
+        </h2>
+        <button type="button" aria-expanded="false" onClick={() => setFolded(false)}>
+          Details
+        </button>
+        <button type="button" onClick={onReview}>
+          Contract review
+        </button>
+      </section>
+    );
   return (
-    <section className="lw-loop-alert" role="alert" aria-labelledby="lw-loop-alert-title">
+    <section className="lw-loop-alert" role="alert" aria-labelledby="lw-loop-alert-title" ref={box} data-folded="no">
+      <button type="button" className="lw-fold" aria-expanded="true" onClick={() => setFolded(true)}>
+        Fold to one line
+      </button>
       <h2 id="lw-loop-alert-title">
         <span className="lw-alert-icon" aria-hidden="true">
           ⚠
@@ -73,7 +126,7 @@ export function LoopAlert({ network, solve, amounts, added, onReview }: LoopAler
                       <td colSpan={5}>a lane the scenario adds (see the scenario’s changes)</td>
                     </tr>
                   );
-                const net = laneNetMinor(amounts, e);
+                const net = netCost(amounts.toll[e], amounts.fuel[e], amounts.fees[e], amounts.rebate[e]);
                 return (
                   <tr key={e}>
                     <td>

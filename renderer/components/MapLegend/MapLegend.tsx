@@ -1,14 +1,32 @@
 // Key to the map's symbols. Each entry pairs a drawn sample with words, since line width, dash
-// pattern and marker shape (not colour alone) tell the states apart.
+// pattern and marker shape (not colour alone) tell the states apart. It folds to one button, and
+// starts folded on a small window, so it does not hide the network (or a loop's label).
+
+import { useState } from 'react';
+
+/** Below this window height or width the key starts folded. */
+const SMALL_WINDOW = { width: 1200, height: 800 };
 
 export function MapLegend() {
+  const [open, setOpen] = useState(() => window.innerWidth >= SMALL_WINDOW.width && window.innerHeight >= SMALL_WINDOW.height);
   return (
-    <ul className="lw-legend" aria-label="Map key">
+    <div className="lw-legend-box">
+      <button type="button" className="lw-legend-toggle" aria-expanded={open} aria-controls="lw-legend" onClick={() => setOpen(!open)}>
+        Map key {open ? '▴' : '▾'}
+      </button>
+      {open && <MapKey />}
+    </div>
+  );
+}
+
+function MapKey() {
+  return (
+    <ul className="lw-legend" id="lw-legend" aria-label="Map key">
       <li>
         <svg width="28" height="10" aria-hidden="true">
           <line x1="0" y1="5" x2="28" y2="5" stroke="#8d9aa0" strokeWidth="1" />
         </svg>
-        lane
+        lane (two-way: two lines side by side)
       </li>
       <li>
         <svg width="28" height="10" aria-hidden="true">
@@ -34,7 +52,7 @@ export function MapLegend() {
           <line x1="0" y1="5" x2="28" y2="5" stroke="#fff" strokeWidth="6" />
           <line x1="2" y1="5" x2="28" y2="5" stroke="#5b2a86" strokeWidth="4" strokeDasharray="0.1 8" strokeLinecap="round" />
         </svg>
-        lane the scenario adds (dotted, labelled “Added”)
+        lane a scenario adds (“Added”)
       </li>
       <li>
         <span className="lw-legend-diamond" aria-hidden="true">

@@ -1,13 +1,18 @@
 // The selected depot's route: each lane with its tolls, fuel, fees, rebate and net (under the
-// active scenario), the totals, a breakdown chart, and a button to plan from this depot instead.
+// active scenario), the totals, a breakdown chart, each lane in full (RouteLanes), the route on its
+// own as CSV or as a printed sheet, and a button to plan from this depot instead.
 
-import { ROUTE_CAUTION } from '../../../engine/index';
+import type { LanewrightHost } from '../../../main/ipc/contract';
+import { exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
 import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, RouteView, SolveView } from '../../worker/protocol';
+import { routeSheetOf } from '../../model/route-sheet';
 import { BreakdownChart } from '../BreakdownChart/BreakdownChart';
+import { RouteSheet, printRouteSheet } from '../RouteSheet/RouteSheet';
+import { RouteLanes } from './RouteLanes';
 import { TableHead } from '../DataTable/DataTable';
 
 export interface RouteDetailProps {
@@ -19,6 +24,11 @@ export interface RouteDetailProps {
   /** Lanes the scenario adds (a route may use them). */
   added: readonly AddedLane[];
   onPlanFrom(depot: number): void;
+  /** Name of the active what-if scenario, or null when it changes nothing. */
+  scenarioName: string | null;
+  /** Saves the route's CSV (save dialog or download). */
+  host: Pick<LanewrightHost, 'saveExport'>;
+  onMessage(text: string): void;
 }
 
 interface Leg {
@@ -51,13 +61,21 @@ function legOf(network: NetworkView, amounts: LaneAmounts, added: readonly Added
   };
 }
 
-export function RouteDetail({ network, solve, amounts, depot, route, added, onPlanFrom }: RouteDetailProps) {
+export function RouteDetail({ network, solve, amounts, depot, route, added, onPlanFrom, scenarioName, host, onMessage }: RouteDetailProps) {
   const status = solve.status[depot];
   const label = depotLabel(network.depotIds[depot], network.depotNames[depot]);
   const legs = route ? route.lanes.map((e) => legOf(network, amounts, added, e)) : [];
   const sum = (field: 'toll' | 'fuel' | 'fees' | 'rebate') => legs.reduce((s, leg) => s + (leg ? leg[field] : 0), 0);
   const totals = { toll: sum('toll'), fuel: sum('fuel'), fees: sum('fees'), rebate: sum('rebate') };
   const money = (v: number) => formatMoney(v, network.exponent);
+  const sheet = status === 1 && route && route.lanes.length > 0 ? routeSheetOf(network, solve, amounts, route, added, scenarioName) : null;
+  const exportRoute = async () => {
+    if (!sheet) return;
+    const name = exportFileName({ kind: `route-${sheet.origin}-${sheet.destination}`, date: sheet.date, vehicleClass: sheet.vehicleClass, scenario: sheet.scenario }, 'csv');
+    const result = await host.saveExport(name, routeSheetCsv(sheet), 'csv');
+    if (!result.ok) onMessage(`Export failed: ${result.failure.message}`);
+    else if (result.value) onMessage(`Exported ${result.value.path}.`);
+  };
   return (
     <section className="lw-route" aria-labelledby="lw-route-title">
       <h2 id="lw-route-title">Route to {label}</h2>
@@ -106,7 +124,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
                     <td className="lw-num">{money(leg.fuel)}</td>
                     <td className="lw-num">{money(leg.fees)}</td>
                     <td className="lw-num">{leg.rebate ? `-${money(leg.rebate)}` : money(0)}</td>
-                    <td className="lw-num">{money(leg.toll + leg.fuel + leg.fees - leg.rebate)}</td>
+                    <td className="lw-num">{money(netCost(leg.toll, leg.fuel, leg.fees, leg.rebate))}</td>
                   </tr>
                 ),
               )}
@@ -123,6 +141,20 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
             </tfoot>
           </table>
           <BreakdownChart tollMinor={totals.toll} fuelMinor={totals.fuel} feesMinor={totals.fees} rebateMinor={totals.rebate} exponent={network.exponent} currency={network.currency} />
+          {sheet && (
+            <>
+              <RouteLanes sheet={sheet} />
+              <p className="lw-route-actions">
+                <button type="button" onClick={() => void exportRoute()}>
+                  Export this route (CSV)
+                </button>
+                <button type="button" onClick={printRouteSheet}>
+                  Print route sheet
+                </button>
+              </p>
+              <RouteSheet sheet={sheet} total={solve.cost[depot]} />
+            </>
+          )}
         </>
       )}
       {depot !== solve.origin && (
