@@ -143,7 +143,9 @@ export class CsvRecordStream {
     // The first block stays on the general path: the header, the delimiter and the network's
     // currency are settled there. Blocks with U+FFFD stay there too, so every such row is flagged.
     const sink = this.sink;
-    const fast = sink.plainLine !== undefined && this.nextRow > 1 && !block.includes('\uFFFD');
+    // NUL past the first 64 KB (which refuses the whole file) marks its rows as not text, like U+FFFD.
+    const suspect = block.includes('\uFFFD') || block.includes('\u0000');
+    const fast = sink.plainLine !== undefined && this.nextRow > 1 && !suspect;
     const take: PlainLineTaker | undefined = fast
       ? (text, start, end, before) => {
           this.deliver(before.rows, before.badQuoteRows, false, before.strayQuoteCells);
@@ -153,7 +155,7 @@ export class CsvRecordStream {
         }
       : undefined;
     const { rows, badQuoteRows, strayQuoteCells } = splitCsvBlock(block, this.delimiter, this.newline, take);
-    this.deliver(rows, badQuoteRows, block.includes('\uFFFD'), strayQuoteCells);
+    this.deliver(rows, badQuoteRows, suspect, strayQuoteCells);
   }
 
   // Hands records to the sink with their spreadsheet row numbers.
@@ -162,7 +164,7 @@ export class CsvRecordStream {
     const first = this.nextRow;
     this.nextRow += rows.length;
     const badText: number[] = [];
-    if (mayHaveBadText) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD')) && badText.push(i));
+    if (mayHaveBadText) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD') || c.includes('\u0000')) && badText.push(i));
     this.sink.records(rows, first, badQuoteRows, badText, strayQuotes);
   }
 
