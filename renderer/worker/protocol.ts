@@ -197,7 +197,7 @@ export interface WorkerRequests {
   /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
   route: { request: { target: number; solveId: number }; answer: { route: RouteView | null } };
   export: { request: { what: ExportKind }; answer: { fileName: string; mime: string; text: string } };
-  review: { request: { scenario: Scenario | null }; answer: { review: ContractReviewView } };
+  review: { request: { scenario: Scenario | null; fixBy?: 'lane' | 'clause' }; answer: { review: ContractReviewView } };
   dispatch: { request: { request: DispatchRequest }; answer: { result: DispatchView } };
 }
 

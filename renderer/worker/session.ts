@@ -3,7 +3,7 @@
 // (for routes and exports) and the base solve of the active scenario (for the comparison).
 
 import { LanewrightError } from '../../engine/index';
-import type { ImportResult } from '../../engine/index';
+import type { ImportResult, ReviewedFile } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { overlayIndex, type OverlayIndex } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
@@ -35,6 +35,9 @@ export class WorkerSession {
   /** Keys of the import's lane rows, counted once per import (occurrences over the whole file). */
   private rowIndex: OverlayIndex | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
+  /** Names and SHA-256 of the texts last loaded, for the printable review (hashed as they arrive). */
+  private files: ReviewedFile[] = [];
+  private loads = 0;
 
   constructor(private readonly post: Post) {}
 
@@ -81,7 +84,8 @@ export class WorkerSession {
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress) });
+        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
+        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
         return;
       }
       default: {
@@ -122,6 +126,9 @@ export class WorkerSession {
       return;
     }
     progress('Compiling the network', 0.95);
+    this.files = [message.depots, message.lanes].map((f) => ({ name: f.name, sha256: 'computing…' }));
+    const load = ++this.loads;
+    void hashTexts([message.depots, message.lanes]).then((files) => load === this.loads && (this.files = files));
     this.adopt(message.id, result, message.plan);
   }
 
@@ -169,4 +176,14 @@ export class WorkerSession {
     }
     this.post({ kind: 'solved', id, result: view }, overlayTransferables(view.overlay));
   }
+}
+
+/** SHA-256 of each text as UTF-8 (the bytes of a UTF-8 file without a byte-order mark). */
+async function hashTexts(texts: readonly { name: string; text: string }[]): Promise<ReviewedFile[]> {
+  return Promise.all(
+    texts.map(async ({ name, text }) => {
+      const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text)));
+      return { name, sha256: Array.from(digest, (b) => b.toString(16).padStart(2, '0')).join('') };
+    }),
+  );
 }
