@@ -61,6 +61,8 @@ export * from './export/export-settings';
 export * from './export/lanes-csv';
 export * from './export/loops-csv';
 export * from './export/routes-csv';
+export * from './export/routes-json';
+export * from './report/route-totals';
 export * from './export/geojson';
 export * from './export/geojson-text';
 export * from './workspace/document';

@@ -70,21 +70,38 @@ export interface CsvWriteOptions {
   delimiter?: ',' | ';';
 }
 
+// A cell written as it is: a plain number, or text with no separator of any common dialect, quote,
+// line break or byte-order mark, no space at either end and no formula-like start (so the guard and
+// the quoting below would leave it unchanged).
+const PLAIN_TEXT = /^(?:[-+]?(?:\d+(?:\.\d*)?|\.\d+)|(?![\s=+\-@'])[^\r\n",;\t\uFEFF]*(?<!\s))$/;
+
+function isPlainRow(row: readonly (string | number | null)[]): boolean {
+  for (const cell of row) {
+    if (typeof cell === 'string' ? !PLAIN_TEXT.test(cell) : typeof cell === 'number' && !Number.isFinite(cell)) return false;
+  }
+  return true;
+}
+
 /**
  * Writes rows as RFC 4180 CSV (CRLF line ends, doubled quotes). Every CSV the project writes goes
  * through here: text cells are guarded against formulas, and quoted when they hold a separator of
  * any common dialect (`,`, `;`, tab, quote, line break), so a spreadsheet that splits on `;` still
- * sees one cell. Numbers are written as numbers.
+ * sees one cell. Numbers are written as numbers. Rows whose every cell needs no guard and no quotes
+ * are joined directly (the same text, about twice as fast for large reports).
  */
 export function formatCsvRows(rows: readonly (readonly (string | number | null)[])[], options: CsvWriteOptions = {}): string {
   const guard = options.escapeFormulae !== false;
-  const cells = rows.map((row) => row.map((cell) => (typeof cell === 'string' && guard ? guardFormulaCell(cell) : cell)));
-  return (
-    Papa.unparse(cells as unknown[][], {
-      newline: '\r\n',
-      quotes: (value: unknown) => typeof value === 'string' && needsCsvQuotes(value),
-      delimiter: options.delimiter ?? ',',
-      escapeFormulae: false,
-    }) + '\r\n'
-  );
+  const delimiter = options.delimiter ?? ',';
+  const papaOptions = {
+    newline: '\r\n',
+    quotes: (value: unknown) => typeof value === 'string' && needsCsvQuotes(value),
+    delimiter,
+    escapeFormulae: false,
+  };
+  let text = '';
+  for (const row of rows) {
+    if (guard && isPlainRow(row)) text += row.join(delimiter) + '\r\n';
+    else text += Papa.unparse([guard ? row.map((cell) => (typeof cell === 'string' ? guardFormulaCell(cell) : cell)) : row] as unknown[][], papaOptions) + '\r\n';
+  }
+  return text;
 }

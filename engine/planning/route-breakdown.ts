@@ -29,9 +29,8 @@ export function routeBreakdown(network: Network, lanes: readonly number[], drive
     distance += network.laneDistanceKm[e];
     drive += network.laneDriveMinutes[e];
   }
-  // Distances are read or estimated to 0.1 km; rounding the sum drops float noise from adding them.
-  const distanceKm = Number.isNaN(distance) ? null : Math.round(distance * 1000) / 1000;
-  const driveMinutes = Number.isNaN(drive) ? null : Math.round(drive * 100) / 100;
+  const distanceKm = roundedKm(distance);
+  const driveMinutes = roundedMinutes(drive);
   return {
     toll: sumMinorOrNull(lanes.map((e) => network.laneToll[e])),
     fuel: sumMinorOrNull(lanes.map((e) => network.laneFuel[e])),
@@ -41,4 +40,17 @@ export function routeBreakdown(network: Network, lanes: readonly number[], drive
     driveMinutes,
     overDriveLimit: driveLimitMinutes !== null && driveMinutes !== null && driveMinutes > driveLimitMinutes,
   };
+}
+
+// Distances are read or estimated to 0.1 km; rounding the sum drops float noise from adding them.
+// Rounding twice gives the same figure, so a sum may be rounded again where it is shown.
+
+/** A summed distance as reported: rounded to metres, null when a lane had none (NaN). */
+export function roundedKm(sum: number): number | null {
+  return Number.isNaN(sum) ? null : Math.round(sum * 1000) / 1000;
+}
+
+/** A summed drive time as reported: rounded to 0.01 minute, null when a lane had none (NaN). */
+export function roundedMinutes(sum: number): number | null {
+  return Number.isNaN(sum) ? null : Math.round(sum * 100) / 100;
 }

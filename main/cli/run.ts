@@ -1,10 +1,11 @@
 // Command dispatch for `lanewright`. Known errors print as one line on stderr with a non-zero exit
-// status; only a genuine bug shows a stack trace.
+// status; only a genuine bug shows a stack trace. Every command is declared by its option table
+// (options.ts); start-up speed comes from the prebuilt bundle (main/build/build-cli.ts).
 
 import { readFileSync } from 'node:fs';
 import { LanewrightError } from '../../engine/index';
 import { parseCommandLine, UsageError } from './args';
-import { writableTarget, writeFileAtomic } from '../workspace/atomic-write';
+import { openAtomicFileStream, writableTarget, writeFileAtomic, type AtomicFileStream } from '../workspace/atomic-write';
 import type { CommandSpec } from './options';
 import { commandHelp, overview } from './usage';
 import { closestName } from './closest-name';
@@ -18,6 +19,10 @@ import { dispatchCommand } from './commands/dispatch';
 
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
+  /**
+   * Writes text now: to stdout, or with --out to a temporary file renamed over the target once the
+   * command has succeeded. Nothing is kept in memory, so output of any size can be written in chunks.
+   */
   write(text: string): void;
   /**
    * Queues a whole output file; every file is written atomically once the command has succeeded,
@@ -78,18 +83,32 @@ export async function main(argv: readonly string[]): Promise<number> {
     const outPath = args.values.get('out');
     // Refused before any work, like a shell redirection into a read-only file.
     if (outPath) await writableTarget(outPath);
-    const chunks: string[] = [];
+    // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
+    const opened: { file: AtomicFileStream | null } = { file: null };
     const files: [path: string, text: string, done?: string][] = [];
     const output: CommandOutput = {
-      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(forStdout(text))),
+      write: (text) => {
+        if (!outPath) {
+          process.stdout.write(forStdout(text));
+          return;
+        }
+        opened.file ??= openAtomicFileStream(outPath);
+        opened.file.write(text);
+      },
       writeFile: (path, text, done) => files.push([path, text, done]),
       warn: printError,
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
-    const status = command.run(args, output);
-    // The same atomic write as workspace saves (temporary file, fsync, rename, clean-up on failure):
+    let status: number;
+    try {
+      status = command.run(args, output);
+    } catch (error) {
+      opened.file?.abort();
+      throw error;
+    }
+    // The same guarantees as workspace saves (temporary file, fsync, rename, clean-up on failure):
     // a failed or interrupted run never leaves half a report where a spreadsheet will read it.
-    if (outPath) files.unshift([outPath, chunks.join('')]);
+    if (outPath) await (opened.file ?? openAtomicFileStream(outPath)).commit();
     for (const [path, text, done] of files) {
       await writeFileAtomic(path, text);
       if (done) process.stdout.write(forStdout(`wrote ${done}\n`));

@@ -3,7 +3,9 @@
 // renamed over the target, which every supported OS does atomically within one file system.
 
 import { randomBytes } from 'node:crypto';
+import { closeSync, fsyncSync, lstatSync, openSync, readlinkSync, unlinkSync, writeSync } from 'node:fs';
 import * as nodeFs from 'node:fs/promises';
+import { rename } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import { FileAccessError, fileAccessError } from './errors';
 
@@ -93,6 +95,31 @@ export async function writableTarget(target: string, fs: AtomicWriteFs = NODE_AT
   }
 }
 
+/** `writableTarget` for callers that must stay synchronous (openAtomicFileStream). */
+export function writableTargetSync(target: string): { path: string; mode: number } {
+  try {
+    let path = resolve(target);
+    for (let links = 0; ; links++) {
+      let info;
+      try {
+        info = lstatSync(path);
+      } catch (error) {
+        if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { path, mode: 0o644 };
+        throw error;
+      }
+      if (!info.isSymbolicLink()) {
+        const mode = info.mode & 0o777;
+        if ((mode & 0o222) === 0) throw new FileAccessError(target, 'write', 'EACCES', 'the file is read-only');
+        return { path, mode };
+      }
+      if (links >= MAX_LINKS) throw Object.assign(new Error('too many levels of symbolic links'), { code: 'ELOOP' });
+      path = resolve(dirname(path), readlinkSync(path));
+    }
+  } catch (error) {
+    throw fileAccessError(target, 'write', error);
+  }
+}
+
 /**
  * Replaces `target` with `text` (UTF-8) atomically. The previous file keeps its permission bits; a
  * symbolic link is written through to its file; a read-only file is refused, as the shell refuses
@@ -125,6 +152,92 @@ export async function writeFileAtomic(target: string, text: string, hooks: Atomi
   }
   await syncFolder(dirname(real), fs);
   await removeLeftovers(real, fs);
+}
+
+/** A file being written piece by piece that appears at its target only on `commit`. */
+export interface AtomicFileStream {
+  /** Appends text (UTF-8) to the temporary file; synchronous, so memory never holds a backlog. */
+  write(text: string): void;
+  /** Flushes, renames over the target and flushes the folder. */
+  commit(): Promise<void>;
+  /** Removes the temporary file; the target is untouched. Safe to call more than once. */
+  abort(): void;
+}
+
+/**
+ * Opens a temporary file beside `target` for output too large to hold as one string (a report of
+ * every route on a large network). Same guarantees as writeFileAtomic: until `commit` succeeds the
+ * previous file is intact; any failure removes the temporary file and throws a FileAccessError
+ * naming `target`.
+ */
+export function openAtomicFileStream(target: string): AtomicFileStream {
+  // Through symbolic links to the linked file, and a read-only file refused, as writeFileAtomic does.
+  const { path: real, mode } = writableTargetSync(target);
+  const temp = temporaryPathFor(real);
+  let fd = -1;
+  let tempExists = false;
+  const abort = () => {
+    if (fd !== -1) {
+      try {
+        closeSync(fd);
+      } catch {
+        // Closing a file that failed to write may fail too; it is removed next.
+      }
+      fd = -1;
+    }
+    if (tempExists) {
+      try {
+        unlinkSync(temp);
+      } catch {
+        // Already gone.
+      }
+      tempExists = false;
+    }
+    inFlight.delete(temp);
+  };
+  const fail = (error: unknown): never => {
+    abort();
+    throw fileAccessError(target, 'write', error);
+  };
+  const handleOrFail = () => {
+    if (fd === -1) fail(new Error('the output was already closed'));
+    return fd;
+  };
+  inFlight.add(temp);
+  try {
+    fd = openSync(temp, 'wx', mode);
+    tempExists = true;
+  } catch (error) {
+    fail(error);
+  }
+  return {
+    write(text) {
+      const handle = handleOrFail();
+      try {
+        // A write may take only part of the bytes (a full pipe, a signal); the rest follows.
+        const bytes = Buffer.from(text, 'utf8');
+        for (let at = 0; at < bytes.length; ) at += writeSync(handle, bytes, at, bytes.length - at);
+      } catch (error) {
+        fail(error);
+      }
+    },
+    async commit() {
+      const handle = handleOrFail();
+      try {
+        fsyncSync(handle);
+        closeSync(handle);
+        fd = -1;
+        await rename(temp, real);
+        tempExists = false;
+      } catch (error) {
+        fail(error);
+      }
+      inFlight.delete(temp);
+      await syncFolder(dirname(real), NODE_ATOMIC_FS);
+      await removeLeftovers(real, NODE_ATOMIC_FS);
+    },
+    abort,
+  };
 }
 
 // A save cut short by a crash or power cut leaves its temporary file behind (the target itself is

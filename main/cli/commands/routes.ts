@@ -1,11 +1,14 @@
 // `lanewright routes`: cheapest routes from one depot with each route's breakdown, as CSV (default)
-// or JSON; --out writes the routes CSV to a file. Input problems stop it unless --skip-invalid.
+// or JSON; --out writes it to a file. Rows are written as they are made (routesCsvChunks,
+// routesJsonChunks), so memory follows the depot count, never the output's size. --no-paths leaves
+// out each route's path; --to lists only the named depots. Input problems stop it unless --skip-invalid.
 
 import { depotIndexOf } from '../../../engine/index';
 import { cheapestRoutes } from '../../../engine/index';
 import { legLimitedRoutes } from '../../../engine/index';
-import { routesReport } from '../../../engine/index';
-import { routesCsv } from '../../../engine/index';
+import { routesReportStream } from '../../../engine/index';
+import { routesCsvChunks, routesJsonChunks } from '../../../engine/index';
+import type { Network } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport, planDateOf } from '../load-network';
 import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
@@ -23,6 +26,8 @@ export const routesCommand: CommandSpec = {
     ...NETWORK_FILES,
     { name: 'from', value: 'DEPOT_ID', help: 'origin depot', required: true },
     { name: 'max-legs', value: 'K', help: 'routes of at most K lanes' },
+    { name: 'to', value: 'ID,...', help: 'only these destination depots (comma-separated ids)' },
+    { name: 'no-paths', help: 'leave out each route\'s path, lane rows and refs (via and via_lane still give the whole tree)' },
     JSON_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
@@ -30,6 +35,15 @@ export const routesCommand: CommandSpec = {
   ],
   run: runRoutes,
 };
+
+/** Depot indices named by --to (comma-separated ids, in the order given, repeats dropped); undefined = all. */
+function targetDepots(network: Network, args: ParsedArgs): number[] | undefined {
+  const text = args.values.get('to');
+  if (text === undefined) return undefined;
+  const seen = new Set<number>();
+  for (const id of text.split(',')) seen.add(depotIndexOf(network, id.trim(), '--to'));
+  return [...seen];
+}
 
 function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
@@ -39,23 +53,34 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const imported = loadImport(args);
   const network = imported.network;
   const origin = depotIndexOf(network, originId, `--from`);
+  const depots = targetDepots(network, args);
   const readMs = performance.now() - readStart;
 
   const solveStart = performance.now();
   const solved = maxLegs === undefined ? cheapestRoutes(network, origin) : legLimitedRoutes(network, origin, maxLegs);
   const solveMs = performance.now() - solveStart;
 
-  const report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : routesCsv(report));
+  const reportStart = performance.now();
+  const report = routesReportStream(network, solved, {
+    driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes,
+    paths: !args.flags.has('no-paths'),
+    depots,
+  });
+  const reportMs = performance.now() - reportStart;
+
+  const writeStart = performance.now();
+  for (const chunk of args.flags.has('json') ? routesJsonChunks(report, undefined, { date: planDateOf(args).date }) : routesCsvChunks(report)) out.write(chunk);
+  const writeMs = performance.now() - writeStart;
   if (args.flags.has('timings')) {
-    out.timing({ read_ms: readMs, solve_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
+    out.timing({ read_ms: readMs, solve_ms: solveMs, report_ms: reportMs, write_ms: writeMs, depots: network.depotCount, lanes: network.laneCount, rows: report.depots.length });
   }
-  if (report.over_drive_limit > 0) {
+  const { over_drive_limit: over, caution, loops } = report.tail;
+  if (over > 0) {
     const limit = imported.plan.settings.drivingLimit;
-    out.warn(`CAUTION: ${report.over_drive_limit} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.caution}`);
+    out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${caution}`);
   }
-  if (report.loops.length > 0) {
-    out.warn(`WARNING: ${report.loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
+  if (loops.length > 0) {
+    out.warn(`WARNING: ${loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
   }
   return 0;
 }

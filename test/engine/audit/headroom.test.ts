@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { laneFloors } from '../../../engine/audit/headroom';
+import { laneFloorsPerDestination } from '../../../engine/audit/headroom-per-destination';
 import { auditNetwork } from '../../../engine/audit/network-audit';
 import { networkOf } from '../../support/network-builder';
 import { indexedLanes, randomNetwork, referenceHasNegativeLoop } from './reference';
@@ -56,11 +57,40 @@ describe('rebate headroom', () => {
     expect(withLoops).toBeGreaterThan(10);
   });
 
-  it('reports progress up to the number of distinct destinations', () => {
+  it('reports progress up to the number of searches', () => {
     const net = randomNetwork(7, 30, 120, true);
     const seen: [number, number][] = [];
     const result = laneFloors(net, { onProgress: (done, total) => seen.push([done, total]) });
     expect(seen[0][0]).toBe(0);
     expect(seen.at(-1)).toEqual([result.sources, result.sources]);
   });
+
+  it('equals the Dijkstra-per-destination method on 80 random networks, closed lanes and parallel lanes included', () => {
+    let limited = 0;
+    let unlimited = 0;
+    for (let seed = 1; seed <= 80; seed++) {
+      const depots = 5 + (seed % 13) * 7;
+      const net = randomNetwork(seed, depots, depots * (2 + (seed % 5)), true, 40 + seed);
+      // Every fifth network closes some lanes through weights, as a fix plan or a what-if does.
+      let weights: Float64Array | undefined;
+      if (seed % 5 === 0) {
+        weights = Float64Array.from(net.outNet);
+        for (let p = 0; p < weights.length; p += 3) weights[p] = Infinity;
+      }
+      const fast = laneFloors(net, { weights });
+      const reference = laneFloorsPerDestination(net, { weights });
+      expect(Array.from(fast.floor), `seed ${seed}`).toEqual(Array.from(reference.floor));
+      expect(Array.from(fast.net)).toEqual(Array.from(reference.net));
+      for (const f of fast.floor) if (Number.isNaN(f)) unlimited++;
+      else limited++;
+    }
+    expect(limited).toBeGreaterThan(1_000);
+    expect(unlimited).toBeGreaterThan(50);
+  });
+
+  it('equals the reference on a larger sparse network with many rebates', () => {
+    const net = randomNetwork(4242, 600, 3_000, true, 5_000);
+    expect(Array.from(laneFloors(net).floor)).toEqual(Array.from(laneFloorsPerDestination(net).floor));
+  });
 });
+

@@ -165,6 +165,52 @@ describe('lanewright routes', () => {
     expect(csvObjects(result.stdout).find((r) => r.id === 'C')).toMatchObject({ cost: '17.50', path: 'A>B>C' });
   });
 
+  it('every row names the depot before it and that lane (via, via_lane), in CSV and JSON', () => {
+    const csv = csvObjects(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A').stdout);
+    expect(csv.map((r) => [r.id, r.via, r.via_lane])).toEqual([['A', '', ''], ['B', 'A', '2'], ['C', 'B', '3'], ['D', '', '']]);
+    const json = JSON.parse(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--json').stdout);
+    expect(json.depots.map((d: { via: string | null; via_lane: number | null }) => [d.via, d.via_lane])).toEqual([[null, null], ['A', 2], ['B', 3], [null, null]]);
+  });
+
+  it('--no-paths leaves out path, lane rows and refs; costs and breakdown stay', () => {
+    const csv = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--no-paths');
+    expect(csv.status).toBe(0);
+    const rows = csvObjects(csv.stdout);
+    for (const column of ['path', 'lane_rows', 'lane_refs']) expect(Object.keys(rows[0])).not.toContain(column);
+    expect(rows.find((r) => r.id === 'C')).toMatchObject({ cost: '17.50', via: 'B', rebate: '2.50' });
+    const json = JSON.parse(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--json', '--no-paths').stdout);
+    expect(json.depots[2]).not.toHaveProperty('path');
+    expect(json.depots[2]).toMatchObject({ id: 'C', cost_minor: 1750, via: 'B', via_lane: 3 });
+  });
+
+  it('--to gives only the named depots, in the order given; an unknown id is one line naming it', () => {
+    const rows = csvObjects(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--to', 'C,A', '--date', '2026-06-01').stdout);
+    expect(rows.map((r) => [r.id, r.cost, r.path])).toEqual([['C', '17.50', 'A>B>C'], ['A', '0.00', 'A']]);
+    const json = JSON.parse(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--to', 'D', '--json', '--date', '2026-06-01').stdout);
+    expect(json.depots.map((d: { id: string }) => d.id)).toEqual(['D']);
+    expectOneLineError(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--to', 'C,NOWHERE', '--date', '2026-06-01'), 'NOWHERE');
+  });
+
+  it('a report far larger than its chunks streams to --out, parses, and still gets its timings line', () => {
+    // A chain of 1,500 depots: the paths add up to about 1.1 million legs (tens of MB of JSON).
+    const count = 1_500;
+    const chainDepots = file('chain-depots.csv', ['id,name,lat,lon', ...Array.from({ length: count }, (_, d) => `K${d},Chain ${d},50,${(d / 1000).toFixed(3)}`)].join('\n') + '\n');
+    const chainLanes = file('chain-lanes.csv', ['from,to,ref,toll,fuel,fees,rebate', ...Array.from({ length: count - 1 }, (_, d) => `K${d},K${d + 1},C${d},1.00,2.00,0,0.50`)].join('\n') + '\n');
+    const folder = mkdtempSync(join(work, 'big-'));
+    const out = join(folder, 'routes.json');
+    const result = run('routes', '--depots', chainDepots, '--lanes', chainLanes, '--from', 'K0', '--json', '--out', out, '--timings');
+    expect(result.status, result.stderr).toBe(0);
+    expect(readdirSync(folder)).toEqual(['routes.json']);
+    const text = readFileSync(out, 'utf8');
+    expect(text.length).toBeGreaterThan(10_000_000);
+    const report = JSON.parse(text);
+    expect(report.depots).toHaveLength(count);
+    expect(report.depots[count - 1]).toMatchObject({ legs: count - 1, cost: (2.5 * (count - 1)).toFixed(2), via: `K${count - 2}` });
+    expect(report.depots[count - 1].path).toHaveLength(count);
+    const timing = JSON.parse(result.stderr.split('\n').find((line) => line.startsWith('{'))!);
+    expect(timing).toMatchObject({ depots: count, rows: count });
+  });
+
   it('a bad --max-legs is refused in one line', () => {
     expectOneLineError(run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--max-legs', 'two'), 'max-legs');
   });

@@ -1,10 +1,10 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
-import { mkdtemp, readdir, readFile, rm, stat, writeFile, chmod } from 'node:fs/promises';
+import { mkdir, mkdtemp, readdir, readFile, rm, stat, writeFile, chmod } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { writeFileAtomic } from '../../../main/workspace/atomic-write';
+import { openAtomicFileStream, writeFileAtomic } from '../../../main/workspace/atomic-write';
 import { FileAccessError } from '../../../main/workspace/errors';
 
 let dir: string;
@@ -94,5 +94,42 @@ describe('writeFileAtomic', () => {
       expect(parsed.filler).toHaveLength(1024 * 1024);
       expect(parsed.version).toBeGreaterThanOrEqual(2 + round);
     }
+  });
+});
+
+describe('openAtomicFileStream', () => {
+  it('writes pieces to a temporary file; the target changes only on commit', async () => {
+    const target = join(dir, 'routes.csv');
+    await writeFile(target, 'last good');
+    const stream = openAtomicFileStream(target);
+    stream.write('id,cost\r\n');
+    stream.write('A,1.00\r\n');
+    expect(await readFile(target, 'utf8')).toBe('last good');
+    expect((await readdir(dir)).length).toBe(2);
+    await stream.commit();
+    expect(await readFile(target, 'utf8')).toBe('id,cost\r\nA,1.00\r\n');
+    expect(await readdir(dir)).toEqual(['routes.csv']);
+  });
+
+  it('abort removes the temporary file and leaves the previous file intact', async () => {
+    const target = join(dir, 'routes.csv');
+    await writeFile(target, 'last good');
+    const stream = openAtomicFileStream(target);
+    stream.write('half');
+    stream.abort();
+    stream.abort();
+    expect(await readFile(target, 'utf8')).toBe('last good');
+    expect(await readdir(dir)).toEqual(['routes.csv']);
+  });
+
+  it('a rename that fails is a FileAccessError naming the target, with no temporary file left', async () => {
+    const target = join(dir, 'taken');
+    await mkdir(target);
+    const stream = openAtomicFileStream(target);
+    stream.write('text');
+    const error = await stream.commit().catch((e) => e);
+    expect(error).toBeInstanceOf(FileAccessError);
+    expect(error).toMatchObject({ path: target, operation: 'write' });
+    expect(await readdir(dir)).toEqual(['taken']);
   });
 });
