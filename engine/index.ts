@@ -68,6 +68,7 @@ export * from './export/geojson-text';
 export * from './workspace/document';
 export * from './workspace/errors';
 export * from './json/versioned';
+export * from './json/document-size';
 export * from './workspace/parse';
 export * from './workspace/dirty';
 export * from './text/cautions';

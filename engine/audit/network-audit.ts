@@ -4,7 +4,7 @@
 
 import type { Network } from '../network/types';
 import { laneKeysOf, laneKeyText, type LaneKey } from '../import/lane-key';
-import { findDistinctLoops } from './distinct-loops';
+import { DEFAULT_LOOP_MEMORY_BOUND, DEFAULT_LOOP_WORK_BUDGET, findDistinctLoops, type LoopSearchStop } from './distinct-loops';
 import { buildFixPlan, type FixPlan } from './fix-plan';
 import { laneFloors, type LaneFloors } from './headroom';
 import { reachableFrom } from './loop-reach';
@@ -16,6 +16,9 @@ export type AuditPhase = 'loops' | 'fix-plan' | 'headroom';
 export interface AuditOptions {
   /** Most distinct loops to report (default 100). */
   loopCap?: number;
+  /** Work budget and memory bound of the loop search (defaults in distinct-loops.ts). */
+  loopWorkBudget?: number;
+  loopMemoryBound?: number;
   /** Contract references or lane key texts ("FROM>TO|ref|n") the user marks as negotiable. */
   negotiable?: Iterable<string>;
   /**
@@ -36,6 +39,8 @@ export interface AuditLoop {
 export interface NetworkAudit {
   loops: AuditLoop[];
   loopCapReached: boolean;
+  /** How the loop search went: what stopped it, with its count, budget and bound. */
+  loopSearch: { stoppedBy: LoopSearchStop; cap: number; searches: number; work: number; workBudget: number; memoryBound: number };
   /** Null when the network has no loop (nothing to fix). */
   fixPlan: FixPlan | null;
   /** Null only when the fix plan could not remove every loop. */
@@ -52,8 +57,13 @@ export function auditNetwork(network: Network, options: AuditOptions = {}): Netw
   const report = options.onProgress;
   const { marks: negotiable, unmatched } = markNegotiable(network, options.negotiable, options.laneKeys);
 
+  const cap = Math.max(1, options.loopCap ?? 100);
+  const workBudget = options.loopWorkBudget ?? DEFAULT_LOOP_WORK_BUDGET;
+  const memoryBound = options.loopMemoryBound ?? DEFAULT_LOOP_MEMORY_BOUND;
   const distinct = findDistinctLoops(network, {
-    cap: options.loopCap,
+    cap,
+    workBudget,
+    memoryBound,
     onProgress: (done, total) => report?.({ phase: 'loops', done, total }),
   });
   const reachOfComponent = new Map<number, number[]>();
@@ -75,7 +85,8 @@ export function auditNetwork(network: Network, options: AuditOptions = {}): Netw
   }
   const headroom =
     fixPlan && !fixPlan.verified ? null : laneFloors(network, { weights, onProgress: (done, total) => report?.({ phase: 'headroom', done, total }) });
-  return { loops, loopCapReached: distinct.capReached, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable, negotiableUnmatched: unmatched };
+  const loopSearch = { stoppedBy: distinct.stoppedBy, cap, searches: distinct.searches, work: distinct.work, workBudget, memoryBound };
+  return { loops, loopCapReached: distinct.capReached, loopSearch, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable, negotiableUnmatched: unmatched };
 }
 
 function markNegotiable(network: Network, names: Iterable<string> | undefined, laneKeys: readonly LaneKey[] | undefined): { marks: Uint8Array; unmatched: string[] } {

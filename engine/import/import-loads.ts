@@ -13,9 +13,9 @@ export type { VehicleRecord } from './vehicles-reader';
 
 function readAll(source: TextSource, reader: RecordFileReader): void {
   const stream: CsvRecordStream = new CsvRecordStream({
-    records: (rows, first, bad, text) => {
+    records: (rows, first, bad, text, stray) => {
       reader.decimalComma = stream.delimiter === ';';
-      reader.records(rows, first, bad, text);
+      reader.records(rows, first, bad, text, stray);
     },
     issue: (issue) => reader.issue(issue),
   });

@@ -7,6 +7,7 @@
 // (test/engine/import/lane-row-fast.test.ts checks both on random rows).
 
 import { isoDateNumber } from '../text/iso-date';
+import { withoutFormulaGuard } from '../io/csv-cell-safety';
 import { ownText } from './cells';
 import type { DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
@@ -132,7 +133,8 @@ export class PlainLaneRows {
 
   private kept(text: string, column: number | undefined): string | undefined {
     if (column === undefined || this.starts[column] === this.ends[column]) return undefined;
-    return ownText(text.slice(this.starts[column], this.ends[column]));
+    // The exporter's formula guard may also sit after a separator inside the cell ("a;'=b"): removed as cellText does.
+    return ownText(withoutFormulaGuard(text.slice(this.starts[column], this.ends[column])));
   }
 
   // Minor units of a plain non-negative amount ("1234", "12.5", "12.50"; decimal comma in semicolon

@@ -33,8 +33,9 @@ export abstract class RecordFileReader implements CsvRecordSink {
     return this.counts.total;
   }
 
-  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = []): void {
+  records(records: string[][], firstRow: number, badQuotes: readonly number[] = [], badText: readonly number[] = [], strayQuotes: readonly { row: number; column: number }[] = []): void {
     const bad = badQuotes.length > 0 ? new Set(badQuotes) : null;
+    let stray = 0;
     const notUtf8 = badText.length > 0 ? new Set(badText) : null;
     let start = 0;
     if (!this.headerRead) {
@@ -53,6 +54,9 @@ export abstract class RecordFileReader implements CsvRecordSink {
       this.counts.total++;
       const flags = { badQuotes: bad?.has(i) ?? false, notUtf8: notUtf8?.has(i) ?? false };
       if (rejectFlaggedRow(this.report, this.file, this.counts, firstRow + i, cells, this.headerCells, flags)) continue;
+      if (cells.length < this.headerCells.length && !this.unusable) this.warnShortRow(cells.length, firstRow + i);
+      while (stray < strayQuotes.length && strayQuotes[stray].row < i) stray++;
+      for (; stray < strayQuotes.length && strayQuotes[stray].row === i; stray++) this.warnStrayQuote(cells, strayQuotes[stray].column, firstRow + i);
       if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
       else this.counts.accepted++;
     }
@@ -69,6 +73,28 @@ export abstract class RecordFileReader implements CsvRecordSink {
   issue(issue: CsvStreamIssue): void {
     if (issue.code === 'not-text') this.notText = true;
     takeStreamIssue(this.report, this.file, this.counts, issue, this.headerRead, this.headerCells);
+  }
+
+  /**
+   * A row with fewer fields than the header: its missing cells read as empty, which can mean an
+   * estimated fuel or a zero fee the file never said, so it is named (a warning; the row is read).
+   */
+  private warnShortRow(fields: number, row: number): void {
+    const missing = this.headerCells.slice(fields);
+    const named = missing.slice(0, 5).map((h) => `"${h}"`).join(', ') + (missing.length > 5 ? `, … (${missing.length} in all)` : '');
+    this.report.warning(this.file, row, missing[0] || `(column ${fields + 1})`, null, 'too-few-fields', `the row has ${fields} field(s) but the header has ${this.headerCells.length}; ${named} read as empty`);
+  }
+
+  /** A quote inside an unquoted field (an inch mark, say) is read as itself, and named. */
+  private warnStrayQuote(cells: readonly string[], column: number, row: number): void {
+    this.report.warning(
+      this.file,
+      row,
+      this.headerCells[column] ?? `(column ${column + 1})`,
+      cells[column] ?? null,
+      'stray-quote',
+      'a quote inside a field that does not start with one is read as a literal character (RFC 4180 quotes whole fields); quote the field to be sure',
+    );
   }
 
   finish(): void {

@@ -48,11 +48,16 @@ export function rejectFlaggedRow(
 ): boolean {
   if (flags.badQuotes) {
     counts.rejected++;
-    report.error(file, row, null, null, 'unbalanced-quotes', 'malformed quotes: a quote inside a field that is not quoted, or text after a closing quote; the row cannot be read safely');
+    report.error(file, row, null, null, 'unbalanced-quotes', 'malformed quotes: text after the closing quote of a quoted field; the row cannot be read safely');
     return true;
   }
   if (flags.notUtf8) {
     counts.rejected++;
+    const nul = cells.findIndex((c) => c.includes('\u0000'));
+    if (nul !== -1) {
+      report.error(file, row, header[nul] ?? `(column ${nul + 1})`, cells[nul], 'not-text', 'holds a NUL byte: binary data, not text (a damaged file, or not a CSV file); the row is refused');
+      return true;
+    }
     const k = cells.findIndex((c) => c.includes('\uFFFD'));
     report.error(file, row, header[k] ?? `(column ${k + 1})`, cells[k], 'not-text', 'holds bytes that are not UTF-8 text (the file may be saved as Latin-1 or Windows-1252); save it as UTF-8');
     return true;

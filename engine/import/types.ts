@@ -51,7 +51,9 @@ export type IssueCode =
   | 'duplicate-lane'
   | 'self-lane'
   | 'net-negative-lane'
-  | 'negative-amount';
+  | 'negative-amount'
+  | 'too-few-fields'
+  | 'stray-quote';
 
 /** One problem, located as a spreadsheet shows it. `row` 1 is the header; null = the whole file. */
 export interface ValidationItem {

@@ -4,11 +4,14 @@
 // records at a time, so quoted files keep papaparse's exact rules and plain files do not pay for them.
 
 import { parseCsvBlock } from './csv-papaparse';
+import { strayQuotes } from './csv-quotes';
 
 export interface CsvBlockRows {
   rows: string[][];
   /** Positions in `rows` whose quoting is malformed. */
   badQuoteRows: number[];
+  /** Cells (position in `rows`, field) holding a quote as a literal character in an unquoted field. */
+  strayQuoteCells: { row: number; column: number }[];
 }
 
 /**
@@ -27,6 +30,7 @@ export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | 
   const lineBreak = newline === '\r' ? '\r' : '\n';
   let rows: string[][] = [];
   let badQuoteRows: number[] = [];
+  let strayQuoteCells: CsvBlockRows['strayQuoteCells'] = [];
   const length = block.length;
   let start = 0;
   // The next quote at or after `start`, found once per quote (not once per line), so the scan stays linear.
@@ -36,9 +40,10 @@ export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | 
     if (end === -1) end = length;
     if (quote !== -1 && quote < start) quote = block.indexOf('"', start);
     if (quote !== -1 && quote < end) {
-      const runEnd = quotedRunEnd(block, start, lineBreak);
+      const runEnd = quotedRunEnd(block, start, lineBreak, delimiter);
       const parsed = parseCsvBlock(block.slice(start, runEnd), delimiter, newline);
       for (const r of parsed.badQuoteRows) badQuoteRows.push(rows.length + r);
+      for (const q of strayQuotes(block, start, runEnd, delimiter, lineBreak.charCodeAt(0))) strayQuoteCells.push({ row: rows.length + q.record, column: q.field });
       for (const row of parsed.rows) rows.push(row);
       start = runEnd;
       continue;
@@ -46,9 +51,10 @@ export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | 
     let lineEnd = end;
     if (lineBreak === '\n' && lineEnd > start && block.charCodeAt(lineEnd - 1) === 13) lineEnd--;
     if (take !== undefined) {
-      const taken = take(block, start, lineEnd, { rows, badQuoteRows });
+      const taken = take(block, start, lineEnd, { rows, badQuoteRows, strayQuoteCells });
       rows = [];
       badQuoteRows = [];
+      strayQuoteCells = [];
       if (taken) {
         start = end + 1;
         continue;
@@ -57,19 +63,24 @@ export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | 
     rows.push(block.slice(start, lineEnd).split(delimiter));
     start = end + 1;
   }
-  return { rows, badQuoteRows };
+  return { rows, badQuoteRows, strayQuoteCells };
 }
 
 // The offset just after the line break (outside quotes) that ends the run of records from `start`
 // whose lines hold quotes: the run stops before the first following line without a quote. Only
 // these records are scanned character by character.
-function quotedRunEnd(block: string, start: number, lineBreak: string): number {
+function quotedRunEnd(block: string, start: number, lineBreak: string, delimiter: string): number {
   const breakCode = lineBreak.charCodeAt(0);
   let inQuotes = false;
   for (let i = start; i < block.length; i++) {
     const c = block.charCodeAt(i);
-    if (c === 34) inQuotes = !inQuotes;
-    else if (c === breakCode && !inQuotes) {
+    if (c === 34) {
+      // The rules of csv-quotes.ts: opens only at a field's start; "" inside is an escaped quote.
+      if (inQuotes) {
+        if (block.charCodeAt(i + 1) === 34) i++;
+        else inQuotes = false;
+      } else if (i === 0 || block.charCodeAt(i - 1) === breakCode || block.charCodeAt(i - 1) === 13 || block[i - 1] === delimiter) inQuotes = true;
+    } else if (c === breakCode && !inQuotes) {
       let next = i + 1;
       let hasQuote = false;
       for (; next < block.length; next++) {

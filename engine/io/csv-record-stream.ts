@@ -4,6 +4,7 @@
 
 import { splitCsvBlock, type PlainLineTaker } from './csv-block';
 import { parseCsvBlock } from './csv-papaparse';
+import { scanQuotes } from './csv-quotes';
 
 /** A problem with the file as a whole or with its quoting, before any column is looked at. */
 export interface CsvStreamIssue {
@@ -23,7 +24,7 @@ export interface CsvRecordSink {
    * (as [""]). `badQuotes` lists positions in `records` whose quoting is malformed; `badText`
    * those holding U+FFFD, which a decoder puts where bytes were not UTF-8 (a Latin-1 file, say).
    */
-  records(records: string[][], firstRow: number, badQuotes: readonly number[], badText: readonly number[]): void;
+  records(records: string[][], firstRow: number, badQuotes: readonly number[], badText: readonly number[], strayQuotes?: readonly { row: number; column: number }[]): void;
   issue(issue: CsvStreamIssue): void;
   /**
    * Optional fast path: offered each line without quotes (`text` from `start` to `end`, line break
@@ -113,28 +114,18 @@ export class CsvRecordStream {
 
   // Scans the unscanned part of `pending` and returns the offset just after the last line break
   // outside quotes (0 when there is none yet).
+  // A quote opens a quoted field only at a field's start (csv-quotes.ts): a stray inch mark in notes
+  // is a literal, so it cannot make the rest of the file one quoted field.
   private scan(): number {
-    const s = this.pending;
-    const len = s.length;
-    let i = this.scanned;
-    let q = this.inQuotes;
-    let cut = 0;
-    while (i < len) {
-      const quote = s.indexOf('"', i);
-      if (!q) {
-        const end = quote === -1 ? len : quote;
-        if (end > i) {
-          const nl = s.lastIndexOf('\n', end - 1);
-          if (nl >= i) cut = nl + 1;
-        }
-      }
-      if (quote === -1) break;
-      q = !q;
-      i = quote + 1;
-    }
-    this.scanned = len;
-    this.inQuotes = q;
-    return cut;
+    const r = scanQuotes(this.pending, this.scanned, this.pending.length, this.inQuotes, this.separators(), 10, false);
+    this.scanned = r.stop;
+    this.inQuotes = r.inQuotes;
+    return r.lastBreak + 1;
+  }
+
+  // The separators an opening quote may follow: the file's once known, all three before.
+  private separators(): string {
+    return this.layoutKnown ? this.delimiter : ',;\t';
   }
 
   private emit(block: string): void {
@@ -152,27 +143,29 @@ export class CsvRecordStream {
     // The first block stays on the general path: the header, the delimiter and the network's
     // currency are settled there. Blocks with U+FFFD stay there too, so every such row is flagged.
     const sink = this.sink;
-    const fast = sink.plainLine !== undefined && this.nextRow > 1 && !block.includes('\uFFFD');
+    // NUL past the first 64 KB (which refuses the whole file) marks its rows as not text, like U+FFFD.
+    const suspect = block.includes('\uFFFD') || block.includes('\u0000');
+    const fast = sink.plainLine !== undefined && this.nextRow > 1 && !suspect;
     const take: PlainLineTaker | undefined = fast
       ? (text, start, end, before) => {
-          this.deliver(before.rows, before.badQuoteRows, false);
+          this.deliver(before.rows, before.badQuoteRows, false, before.strayQuoteCells);
           if (!sink.plainLine!(text, start, end, this.nextRow, this.delimiter)) return false;
           this.nextRow++;
           return true;
         }
       : undefined;
-    const { rows, badQuoteRows } = splitCsvBlock(block, this.delimiter, this.newline, take);
-    this.deliver(rows, badQuoteRows, block.includes('\uFFFD'));
+    const { rows, badQuoteRows, strayQuoteCells } = splitCsvBlock(block, this.delimiter, this.newline, take);
+    this.deliver(rows, badQuoteRows, suspect, strayQuoteCells);
   }
 
   // Hands records to the sink with their spreadsheet row numbers.
-  private deliver(rows: string[][], badQuoteRows: number[], mayHaveBadText: boolean): void {
+  private deliver(rows: string[][], badQuoteRows: number[], mayHaveBadText: boolean, strayQuotes: readonly { row: number; column: number }[] = []): void {
     if (rows.length === 0) return;
     const first = this.nextRow;
     this.nextRow += rows.length;
     const badText: number[] = [];
-    if (mayHaveBadText) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD')) && badText.push(i));
-    this.sink.records(rows, first, badQuoteRows, badText);
+    if (mayHaveBadText) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD') || c.includes('\u0000')) && badText.push(i));
+    this.sink.records(rows, first, badQuoteRows, badText, strayQuotes);
   }
 
   private detectLayout(block: string): void {
@@ -194,13 +187,7 @@ export class CsvRecordStream {
   // every line after it are lost, and the loss is counted so accepted + rejected still equals total.
   private startSwallowing(): void {
     const s = this.pending;
-    let q = false;
-    let cut = 0;
-    for (let i = 0; i < s.length; i++) {
-      const c = s.charCodeAt(i);
-      if (c === 34) q = !q;
-      else if (c === 10 && !q) cut = i + 1;
-    }
+    const cut = scanQuotes(s, 0, s.length, false, this.separators(), 10, true).lastBreak + 1;
     if (cut > 0) this.emit(s.slice(0, cut));
     const rest = s.slice(cut);
     if (this.nextRow === 1) this.detectLayout(rest);

@@ -38,9 +38,9 @@ export function startImport(options: ImportOptions = {}): ImportSession {
   const collector = new ReportCollector(options.maxItems ?? 1000);
   const depots = new DepotsReader(depotsFile, collector);
   const depotStream = new CsvRecordStream({
-    records: (rows, first, bad, text) => {
+    records: (rows, first, bad, text, stray) => {
       depots.decimalComma = depotStream.delimiter === ';';
-      depots.records(rows, first, bad, text);
+      depots.records(rows, first, bad, text, stray);
     },
     issue: (issue) => depots.issue(issue),
   });
@@ -61,9 +61,9 @@ export function startImport(options: ImportOptions = {}): ImportSession {
       const reader = new LanesReader(lanesFile, collector, depots.index, { currency: options.currency, exchangeRates: options.exchangeRates }, depots.rejectedIds, depotsFile);
       lanes = reader;
       const stream: CsvRecordStream = new CsvRecordStream({
-        records: (rows, first, bad, text) => {
+        records: (rows, first, bad, text, stray) => {
           reader.decimalComma = stream.delimiter === ';';
-          reader.records(rows, first, bad, text);
+          reader.records(rows, first, bad, text, stray);
         },
         plainLine: (text, start, end, row, delimiter) => reader.plainLine(text, start, end, row, delimiter),
         issue: (issue) => reader.issue(issue),

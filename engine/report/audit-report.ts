@@ -3,6 +3,7 @@
 // of each loop. Rows are source rows of the lanes file (header = row 1).
 
 import type { NetworkAudit } from '../audit/network-audit';
+import type { LoopSearchStop } from '../audit/distinct-loops';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 import { LANE_AMOUNT_COLUMNS, laneAmountCells } from './lane-amount-cells';
@@ -68,6 +69,31 @@ export interface AuditReport {
   headroom: HeadroomRow[];
   headroom_after_fix_plan: boolean;
   loop_cap_reached: boolean;
+  /** What ended the loop search ('complete', 'cap', 'cap-unsettled', 'work-budget', 'memory-bound') and its figures. */
+  loop_search: { stopped_by: LoopSearchStop; cap: number; searches: number; work: number; work_budget: number; memory_bound: number };
+  /** One sentence saying truthfully what stopped the loop search; null when it was complete. */
+  loop_search_note: string | null;
+}
+
+/**
+ * The sentence every front end shows about an incomplete loop search. "More loops exist" only when
+ * one more was found past the cap; when a budget ran out first, the count was not reached and more
+ * loops may or may not exist.
+ */
+export function loopSearchNote(found: number, search: NetworkAudit['loopSearch']): string | null {
+  const figures = `${search.searches} searches, ${search.work.toLocaleString('en')} depots and lanes examined`;
+  switch (search.stoppedBy) {
+    case 'complete':
+      return null;
+    case 'cap':
+      return `more loops exist than the ${found} reported (the loop cap is ${search.cap}; raise it to see them)`;
+    case 'cap-unsettled':
+      return `${found} loops reported, the loop cap; the search for one more stopped at its budget (${figures}), so more may exist`;
+    case 'work-budget':
+      return `the loop search stopped at its work budget of ${search.workBudget.toLocaleString('en')} (${figures}) with ${found} loop(s) found, before the loop cap of ${search.cap}; more loops may exist`;
+    case 'memory-bound':
+      return `the loop search stopped at its memory bound of ${search.memoryBound.toLocaleString('en')} kept lane positions (${figures}) with ${found} loop(s) found, before the loop cap of ${search.cap}; more loops may exist`;
+  }
 }
 
 /** Builds the report object. */
@@ -111,6 +137,15 @@ export function auditReport(network: Network, audit: NetworkAudit): AuditReport 
     headroom: audit.headroom ? headroomRows(network, audit.headroom.floor, audit.headroom.net, end, ref) : [],
     headroom_after_fix_plan: audit.headroomAfterFixPlan,
     loop_cap_reached: audit.loopCapReached,
+    loop_search: {
+      stopped_by: audit.loopSearch.stoppedBy,
+      cap: audit.loopSearch.cap,
+      searches: audit.loopSearch.searches,
+      work: audit.loopSearch.work,
+      work_budget: audit.loopSearch.workBudget,
+      memory_bound: audit.loopSearch.memoryBound,
+    },
+    loop_search_note: loopSearchNote(audit.loops.length, audit.loopSearch),
   };
 }
 

@@ -10,6 +10,8 @@ import { clauseOf } from '../import/lane-clause';
 import type { DepotRecord, LaneTable } from '../import/types';
 import { formatMinor, type Minor } from '../money/minor';
 import { CAUTIONS } from '../text/cautions';
+import { loopSearchNote } from './audit-report';
+import type { LoopSearchStop } from '../audit/distinct-loops';
 
 export interface DateRange {
   from: string | null;
@@ -68,6 +70,10 @@ export interface CalendarReport {
   periods: (DateRange & { loops: number[] })[];
   loops: CalendarLoopRow[];
   loop_cap_reached: boolean;
+  /** What ended the loop search and its figures, as in the one-day audit report. */
+  loop_search: { stopped_by: LoopSearchStop; cap: number; searches: number; work: number; work_budget: number; memory_bound: number };
+  /** One sentence saying truthfully what stopped the loop search; null when it was complete. */
+  loop_search_note: string | null;
   clauses: { clause: string; source: 'clause' | 'ref' | 'row'; lanes: number[]; rebate_minor: number; loops: number[]; ranges: DateRange[] }[];
   fix_by: 'lane' | 'clause';
   fix_plan: CalendarFixRow[];
@@ -129,6 +135,15 @@ export function calendarReport(input: CalendarReportInput, review: CalendarRevie
       };
     }),
     loop_cap_reached: review.loopCapReached,
+    loop_search: {
+      stopped_by: review.loopSearch.stoppedBy,
+      cap: review.loopSearch.cap,
+      searches: review.loopSearch.searches,
+      work: review.loopSearch.work,
+      work_budget: review.loopSearch.workBudget,
+      memory_bound: review.loopSearch.memoryBound,
+    },
+    loop_search_note: loopSearchNote(review.loops.length, review.loopSearch),
     clauses: review.clauses.map((c) => ({
       clause: c.name,
       source: c.source,

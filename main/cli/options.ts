@@ -62,4 +62,4 @@ export const TIMINGS_OPTION: OptionSpec = { name: 'timings', help: 'print read a
 export const HELP_OPTION: OptionSpec = { name: 'help', help: 'print this help' };
 
 /** How many distinct rebate loops to search for (audit, compare). */
-export const LOOP_CAP_OPTION: OptionSpec = { name: 'loop-cap', value: 'N', help: 'report at most N distinct rebate loops' };
+export const LOOP_CAP_OPTION: OptionSpec = { name: 'loop-cap', value: 'N', help: 'report at most N distinct rebate loops (the search also stops at a work budget and a memory bound, and says which)' };

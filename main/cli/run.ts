@@ -5,7 +5,7 @@
 import { readFileSync } from 'node:fs';
 import { LanewrightError } from '../../engine/index';
 import { parseCommandLine, UsageError } from './args';
-import { openAtomicFileStream, writeFileAtomic, type AtomicFileStream } from '../workspace/atomic-write';
+import { openAtomicFileStream, writableTarget, writeFileAtomic, type AtomicFileStream } from '../workspace/atomic-write';
 import type { CommandSpec } from './options';
 import { commandHelp, overview } from './usage';
 import { closestName } from './closest-name';
@@ -81,6 +81,8 @@ export async function main(argv: readonly string[]): Promise<number> {
       return 0;
     }
     const outPath = args.values.get('out');
+    // Refused before any work, like a shell redirection into a read-only file.
+    if (outPath) await writableTarget(outPath);
     // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
     const opened: { file: AtomicFileStream | null } = { file: null };
     const files: [path: string, text: string, done?: string][] = [];

@@ -3,7 +3,8 @@
 // and scripted dialogs. Requests arrive already validated (validate-request.ts).
 
 import path from 'node:path';
-import type { AppInfo, ChannelName, OpenedWorkspace, ReadFile, RecentWorkspace, RequestOf, ResponseOf, WorkspaceDocument } from '../ipc/contract';
+import { MAX_DOCUMENT_BYTES } from '../../engine/index';
+import type { AppInfo, ChannelName, InputFileKind, OpenedWorkspace, ReadFile, RecentWorkspace, RequestOf, ResponseOf, WorkspaceDocument } from '../ipc/contract';
 import { writeFileAtomic } from '../workspace/atomic-write';
 import { FileAccessError } from '../workspace/errors';
 import type { RecentStore } from '../workspace/recent-list';
@@ -43,8 +44,9 @@ export function createHostService(deps: HostServiceDeps): Handlers {
   const now = () => (deps.now ? deps.now() : new Date());
   let currentWorkspace: string | null = null;
 
-  async function readInput(file: string): Promise<ReadFile> {
-    const text = await readTextFile(file, MAX_INPUT_BYTES);
+  async function readInput(file: string, kind?: InputFileKind): Promise<ReadFile> {
+    // A scenario is a document (settings and edits): the engine's document limit, not the CSV one.
+    const text = kind === 'scenario' ? await readTextFile(file, MAX_DOCUMENT_BYTES, 'scenario') : await readTextFile(file, MAX_INPUT_BYTES);
     return { path: file, name: path.basename(file), text };
   }
 
@@ -113,7 +115,7 @@ export function createHostService(deps: HostServiceDeps): Handlers {
     async 'file:pick-and-read'({ kind }) {
       const file = await deps.dialogs.chooseInputFile(kind);
       if (file === null) return null;
-      const read = await readInput(file);
+      const read = await readInput(file, kind);
       deps.grants.allowRead(file);
       return read;
     },

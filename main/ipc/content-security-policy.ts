@@ -6,8 +6,10 @@
 export const CSP_DIRECTIVES: ReadonlyArray<readonly [string, string]> = [
   ['default-src', "'self'"],
   ['script-src', "'self'"],
-  // Leaflet and React position map panes and markers through style attributes; scripts stay strict.
-  ['style-src', "'self' 'unsafe-inline'"],
+  // No 'unsafe-inline': Leaflet and React position panes and markers through the style property
+  // (CSSOM), which the policy allows; what it refuses is a style attribute or <style> element in
+  // markup, which is how injected HTML would restyle the page. Tooltips get DOM text nodes.
+  ['style-src', "'self'"],
   ['img-src', "'self' data: blob:"],
   ['font-src', "'self' data:"],
   ['connect-src', "'self'"],

@@ -15,11 +15,27 @@ export interface RunningServer {
   close(): Promise<void>;
 }
 
-/** Serves `root` on 127.0.0.1:`port` (0 = any free port). Paths outside `root` are refused. */
+/** Methods answered; every other one gets 405 (the server only hands out files). */
+const ALLOWED_METHODS = 'GET, HEAD';
+
+/**
+ * Serves `root` on 127.0.0.1:`port` (0 = any free port). Paths outside `root` are refused; methods
+ * other than GET and HEAD get 405; a Host header other than this server's loopback name and port
+ * gets 421, so a page on another site cannot reach it through a DNS name rebound to 127.0.0.1.
+ */
 export function serveStatic(root: string, port: number): Promise<RunningServer> {
   const base = resolve(root);
+  let hosts = new Set<string>();
   const server = createServer(async (request, response) => {
     try {
+      if (!hosts.has((request.headers.host ?? '').toLowerCase())) {
+        response.writeHead(421, { 'content-type': 'text/plain' }).end('misdirected request: this server answers only to its loopback address');
+        return;
+      }
+      if (request.method !== 'GET' && request.method !== 'HEAD') {
+        response.writeHead(405, { allow: ALLOWED_METHODS, 'content-type': 'text/plain' }).end('method not allowed');
+        return;
+      }
       const url = new URL(request.url ?? '/', 'http://localhost');
       const relative = normalize(decodeURIComponent(url.pathname)).replace(/^([/\\])+/, '');
       let file = join(base, relative === '' ? 'index.html' : relative);
@@ -42,6 +58,10 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
         'x-content-type-options': 'nosniff',
         'content-security-policy': CONTENT_SECURITY_POLICY,
       });
+      if (request.method === 'HEAD') {
+        response.end();
+        return;
+      }
       // A read error after the header went out (file removed meanwhile) ends this response only;
       // unhandled, it would stop the whole server.
       createReadStream(file)
@@ -56,6 +76,7 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
     server.listen(port, '127.0.0.1', () => {
       const address = server.address();
       const actual = typeof address === 'object' && address ? address.port : port;
+      hosts = new Set([`127.0.0.1:${actual}`, `localhost:${actual}`]);
       resolveStart({
         server,
         port: actual,

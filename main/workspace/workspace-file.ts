@@ -3,17 +3,17 @@
 
 import { readFile, stat } from 'node:fs/promises';
 import type { WorkspaceDocument } from '../../engine/index';
-import { parseWorkspace, serializeWorkspace } from '../../engine/index';
+import { documentSizeProblem, MAX_DOCUMENT_BYTES, parseWorkspace, serializeWorkspace } from '../../engine/index';
 import { writeFileAtomic, type AtomicWriteHooks } from './atomic-write';
 import { FileAccessError, fileAccessError } from './errors';
 import { withResolvedPaths, withStoredPaths } from './stored-paths';
 
-/** Largest workspace file read (a workspace holds settings and edits, never lane data). */
-export const MAX_WORKSPACE_BYTES = 64 * 1024 * 1024;
+/** Largest workspace file read (a workspace holds settings and edits, never lane data): the engine's document limit. */
+export const MAX_WORKSPACE_BYTES = MAX_DOCUMENT_BYTES;
 
 /** Reads, checks and migrates the workspace at `path`; input paths come back absolute. */
 export async function readWorkspaceFile(path: string): Promise<{ document: WorkspaceDocument; migratedFrom: number }> {
-  const text = await readTextFile(path, MAX_WORKSPACE_BYTES);
+  const text = await readTextFile(path, MAX_WORKSPACE_BYTES, 'workspace');
   const { document, migratedFrom } = parseWorkspace(text, path);
   return { document: withResolvedPaths(document, path), migratedFrom };
 }
@@ -32,13 +32,14 @@ export async function writeWorkspaceFile(
 }
 
 /** Reads a UTF-8 text file of at most `maxBytes`, without the byte-order mark. */
-export async function readTextFile(path: string, maxBytes: number): Promise<string> {
+export async function readTextFile(path: string, maxBytes: number, label?: 'scenario' | 'workspace'): Promise<string> {
   let text: string;
   try {
     const info = await stat(path);
     if (!info.isFile()) throw new FileAccessError(path, 'read', 'ENOTFILE', 'this is not a regular file');
     if (info.size > maxBytes) {
-      throw new FileAccessError(path, 'read', 'EFBIG', `the file is ${info.size} bytes; the limit is ${maxBytes}`);
+      const reason = (label && documentSizeProblem(info.size, label)) ?? `the file is ${info.size} bytes; the limit is ${maxBytes}`;
+      throw new FileAccessError(path, 'read', 'EFBIG', reason);
     }
     text = await readFile(path, 'utf8');
   } catch (error) {

@@ -3,7 +3,7 @@
 // kept in the browser's own storage (there are no paths to grant, so "path" is a file name).
 
 import type { AppInfo, ExportKind, HostResult, InputFileKind, LanewrightHost, MenuCommand, ReadFile, WorkspaceDocument } from '../../main/ipc/contract';
-import { checkWorkspace } from '../../engine/index';
+import { checkJsonDepth, checkWorkspace, documentSizeProblem } from '../../engine/index';
 import { loadFileText, storeFileText, WORKSPACE_KEY, WORKSPACE_SAVED_AT_KEY } from './browser-store';
 
 const WORKSPACE_NAME = 'browser workspace';
@@ -51,6 +51,17 @@ function download(name: string, text: string, mime: string): void {
   setTimeout(() => URL.revokeObjectURL(url), 10_000);
 }
 
+/**
+ * Reads a picked file. A scenario is a document (settings and edits): over the engine's document
+ * limit it is refused before reading, with the same reason the desktop host and the CLI give.
+ */
+export async function readPickedFile(file: Pick<File, 'name' | 'size' | 'text'>, kind: InputFileKind): Promise<HostResult<ReadFile | null>> {
+  const tooLarge = kind === 'scenario' ? documentSizeProblem(file.size, 'scenario') : null;
+  if (tooLarge !== null) return failed<ReadFile | null>('FileAccessError', `${file.name}: ${tooLarge}`, file.name);
+  const text = stripBom(await file.text());
+  return ok<ReadFile | null>({ path: file.name, name: file.name, text });
+}
+
 /** Creates the browser host. `version` is shown in the about box. */
 export function createBrowserHost(version: string): LanewrightHost {
   const listeners = new Set<(command: MenuCommand) => void>();
@@ -60,6 +71,7 @@ export function createBrowserHost(version: string): LanewrightHost {
     const text = localStorage.getItem(WORKSPACE_KEY);
     if (!text) return ok(null);
     try {
+      checkJsonDepth(text);
       return ok(checkWorkspace(JSON.parse(text), 'browser storage'));
     } catch (error) {
       return failed('WorkspaceFormatError', `the workspace kept in this browser cannot be used: ${(error as Error).message}`);
@@ -89,9 +101,9 @@ export function createBrowserHost(version: string): LanewrightHost {
     async pickFile(kind: InputFileKind) {
       const file = await chooseFile(kind === 'scenario' ? '.json,application/json' : '.csv,.txt,text/csv');
       if (!file) return ok<ReadFile | null>(null);
-      const text = stripBom(await file.text());
-      await storeFileText(file.name, text).catch(() => undefined); // storage full: the import still works this session
-      return ok<ReadFile | null>({ path: file.name, name: file.name, text });
+      const read = await readPickedFile(file, kind);
+      if (read.ok && read.value) await storeFileText(file.name, read.value.text).catch(() => undefined); // storage full: the import still works this session
+      return read;
     },
     async readFile(path) {
       const text = await loadFileText(path).catch(() => undefined);

@@ -1,6 +1,7 @@
 // What the Export menu offers: the worker's exports (tables and map layers computed from the plan)
 // plus the scenario file, which the UI writes itself from the scenario it holds.
 
+import { exportFileName } from '../../engine/index';
 import type { ExportKind } from '../worker/protocol';
 
 /** One entry of the Export menu. */
@@ -18,5 +19,6 @@ export function scenarioFileName(name: string): string {
     .replace(/[^a-z0-9._-]+/g, '-')
     .replace(/^[-.]+|[-.]+$/g, '')
     .slice(0, 80);
-  return `${stem === '' ? 'scenario' : stem}.json`;
+  // The stem is already plain; exportFileName adds the checks every export name gets (reserved names, length).
+  return exportFileName({ kind: stem === '' ? 'scenario' : stem }, 'json');
 }

@@ -4,6 +4,7 @@
 // routes are solved again on the result.
 
 import { findDistinctLoops } from '../../engine/index';
+import { exportFileName } from '../../engine/index';
 import { geoJsonText } from '../../engine/index';
 import { networkGeoJson } from '../../engine/index';
 import { lanesCsv, type LanesExportInput } from '../../engine/index';
@@ -56,13 +57,13 @@ export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
     case 'routes-csv': {
       const routes = report();
       if (!routes) throw new RangeError('export: choose an origin before exporting routes');
-      return { fileName: `routes-from-${routes.origin}${tag}.csv`, mime: 'text/csv', text: routesCsv(routes) };
+      return { fileName: exportFileName({ kind: `routes-from-${routes.origin}${tag}` }, 'csv'), mime: 'text/csv', text: routesCsv(routes) };
     }
     case 'lanes-csv':
-      return { fileName: `lanes${tag}.csv`, mime: 'text/csv', text: lanesCsv(lanes, loops()) };
+      return { fileName: exportFileName({ kind: `lanes${tag}` }, 'csv'), mime: 'text/csv', text: lanesCsv(lanes, loops()) };
     case 'loops-csv':
-      return { fileName: `rebate-loops${tag}.csv`, mime: 'text/csv', text: loopsCsv(network, loops()) };
+      return { fileName: exportFileName({ kind: `rebate-loops${tag}` }, 'csv'), mime: 'text/csv', text: loopsCsv(network, loops()) };
     case 'geojson':
-      return { fileName: `network${tag}.geojson`, mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
+      return { fileName: exportFileName({ kind: `network${tag}` }, 'geojson'), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
   }
 }

@@ -13,7 +13,7 @@ import { clauseTable, type ClauseRow } from './clause-table';
 import { daysInRange } from './days';
 import { headroomOverTime, type HeadroomWork, type RowHeadroom } from './headroom-over-time';
 import { laneFixPlan, verifyCuts, type CalendarFixPlan } from './lane-fix-plan';
-import { loopsOverTime, type CalendarLoop } from './loops-over-time';
+import { loopsOverTime, type CalendarLoop, type LoopsOverTime } from './loops-over-time';
 import { periodNetworks, type PeriodNetwork } from './period-networks';
 import { reviewPeriods, type ReviewPeriod } from './periods';
 import { reviewWindow, type ReviewWindow } from './review-window';
@@ -46,6 +46,8 @@ export interface CalendarReview {
   networks: PeriodNetwork[];
   loops: CalendarLoop[];
   loopCapReached: boolean;
+  /** What stopped the loop search (see loopSearchNote). */
+  loopSearch: LoopsOverTime['loopSearch'];
   /** Null when no period has a loop. */
   fixPlan: CalendarFixPlan | null;
   /** Empty when a fix plan was needed and could not be verified. */
@@ -96,6 +98,7 @@ export function reviewCalendar(result: ImportResult, options: CalendarReviewOpti
     networks,
     loops: found.loops,
     loopCapReached: found.capReached,
+    loopSearch: found.loopSearch,
     fixPlan,
     headroom: floors?.rows ?? [],
     headroomWork: floors?.work ?? null,

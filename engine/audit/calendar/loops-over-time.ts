@@ -3,7 +3,7 @@
 // class whose network plans all of its rows, with that network's net per lap. Loops are the same
 // loop when they are made of the same lane rows, whatever the period or class.
 
-import { findDistinctLoops } from '../distinct-loops';
+import { DEFAULT_LOOP_MEMORY_BOUND, DEFAULT_LOOP_WORK_BUDGET, findDistinctLoops, type LoopSearchStop } from '../distinct-loops';
 import type { PeriodNetwork } from './period-networks';
 import type { ReviewPeriod } from './periods';
 
@@ -27,6 +27,8 @@ export interface LoopsOverTime {
   loops: CalendarLoop[];
   /** True when a search stopped at its cap or budget: more loops may exist. */
   capReached: boolean;
+  /** What stopped the search over all networks, as NetworkAudit['loopSearch'] says it for one. */
+  loopSearch: { stoppedBy: LoopSearchStop; cap: number; searches: number; work: number; workBudget: number; memoryBound: number };
 }
 
 export interface LoopRange {
@@ -42,16 +44,27 @@ export function loopsOverTime(nets: readonly PeriodNetwork[], options: { cap?: n
   const cap = Math.max(1, options.cap ?? 100);
   const found = new Map<string, { rows: number[]; depots: number[] }>();
   let capReached = false;
+  // The budgets hold for the whole review, not per network: each search gets what is left.
+  const workBudget = DEFAULT_LOOP_WORK_BUDGET;
+  const memoryBound = DEFAULT_LOOP_MEMORY_BOUND;
+  let work = 0;
+  let searches = 0;
+  let budgetStop: LoopSearchStop | null = null;
+  let moreFound = false;
   const maximal = nets.filter((n) => n.maximal);
   maximal.forEach((net, i) => {
     options.onProgress?.(i, maximal.length);
     // Once the cap is full the search stops: where a loop exists is read off every network below,
     // and whether more loops exist is already answered (yes, or maybe).
-    if (found.size >= cap) {
+    if (found.size >= cap || budgetStop !== null) {
       capReached = true;
       return;
     }
-    const distinct = findDistinctLoops(net.network, { cap });
+    const distinct = findDistinctLoops(net.network, { cap, workBudget: Math.max(1, workBudget - work), memoryBound });
+    work += distinct.work;
+    searches += distinct.searches;
+    if (distinct.stoppedBy === 'cap') moreFound = true;
+    if (distinct.stoppedBy === 'work-budget' || distinct.stoppedBy === 'memory-bound') budgetStop = distinct.stoppedBy;
     if (distinct.capReached) capReached = true;
     for (const loop of distinct.loops) {
       const rows = loop.lanes.map((e) => net.record[e]);
@@ -67,9 +80,12 @@ export function loopsOverTime(nets: readonly PeriodNetwork[], options: { cap?: n
   if (loops.length > cap) {
     loops.length = cap;
     capReached = true;
+    moreFound = true;
   }
   loops.forEach((loop, i) => (loop.id = i + 1));
-  return { loops, capReached };
+  // "More loops exist" only when one more was found; a budget that stopped before the cap says so.
+  const stoppedBy: LoopSearchStop = moreFound ? 'cap' : budgetStop !== null && loops.length < cap ? budgetStop : capReached ? 'cap-unsettled' : 'complete';
+  return { loops, capReached, loopSearch: { stoppedBy, cap, searches, work, workBudget, memoryBound } };
 }
 
 function presenceOf(nets: readonly PeriodNetwork[], rows: readonly number[]): LoopPresence[] {

@@ -67,12 +67,13 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   }
 
   if (report.loops.length > 0) {
-    out.warn(`WARNING: ${report.loops.length}${report.loop_cap_reached ? '+' : ''} rebate loop(s) in the contract over the window: costs through them are unbounded and the contract terms need fixing`);
+    out.warn(`WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate loop(s) in the contract over the window: costs through them are unbounded and the contract terms need fixing`);
     for (const loop of report.loops) {
       const when = loop.ranges.map((r) => (r.from === null ? 'every date' : `${r.from} to ${r.to}`)).join(', ');
       out.warn(`  loop ${loop.id}: ${[...loop.depots, loop.depots[0]].join(' > ')}, clauses ${loop.clauses.join(', ') || 'none'}, ${when}`);
     }
-    if (report.loop_cap_reached) out.warn(`WARNING: more loops exist than the ${report.loops.length} reported (raise --loop-cap to see them)`);
+    // What stopped the search, truthfully: "more loops exist" only when one more was found.
+    if (report.loop_search_note !== null) out.warn(`WARNING: ${report.loop_search_note}`);
     if (report.fix_plan_verified) {
       out.warn(`fix plan by ${report.fix_by}: ${report.fix_plan.length} rebate cut(s) remove every loop in every period (checked by solving every period network); headroom is computed after the fix plan`);
     } else if (report.unfixable_loops.length > 0) {

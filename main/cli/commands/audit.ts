@@ -83,9 +83,10 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   if (report.loops.length > 0) {
     out.warn(
-      `WARNING: ${report.loops.length}${report.loop_cap_reached ? '+' : ''} rebate loop(s) in the network: costs through them are unbounded and the contract terms need fixing`,
+      `WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate loop(s) in the network: costs through them are unbounded and the contract terms need fixing`,
     );
-    if (report.loop_cap_reached) out.warn(`WARNING: more loops exist than the ${report.loops.length} reported (raise --loop-cap to see them)`);
+    // What stopped the search, truthfully: "more loops exist" only when one more was found.
+    if (report.loop_search_note !== null) out.warn(`WARNING: ${report.loop_search_note}`);
     if (report.fix_plan_verified) {
       out.warn(`fix plan: ${report.fix_plan.length} rebate cut(s) remove every loop (checked by solving the changed network); headroom is computed after the fix plan`);
     } else if (report.fix_plan_incomplete) {

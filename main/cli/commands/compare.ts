@@ -8,7 +8,7 @@ import { parseScenarioDocument } from '../../../engine/index';
 import { compareReport, compareReportRows } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { readTextFile } from '../files';
+import { readDocumentFile } from '../files';
 import { loadImport, planDateOf } from '../load-network';
 import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
@@ -37,7 +37,7 @@ function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const scenarioPath = required(args, 'scenario');
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
-  const scenario = parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
+  const scenario = parseScenarioDocument(readDocumentFile(scenarioPath, 'scenario'), scenarioPath);
   // The scenario is laid over every lane row of the file, then planned for --date and
   // --vehicle-class like the base, so a change names the same row whatever the date or class.
   const imported = loadImport(args);

@@ -70,8 +70,9 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>
         One-day review: rebate loops {day}{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
-        {review.loop_cap_reached ? ' (list capped)' : ''}
+        {review.loop_cap_reached ? ' (list incomplete)' : ''}
       </h3>
+      {review.loop_search_note !== null && <p className="lw-warn">Loop search: {review.loop_search_note}.</p>}
       {review.loops.length === 0 && (
         <p>
           No loop of lanes has a negative net cost {day}: every cheapest route is well defined

@@ -24,3 +24,19 @@ describe('exportFileName', () => {
     expect(exportFileName({ kind: 'a'.repeat(300) }, 'csv').length).toBeLessThanOrEqual(124);
   });
 });
+
+describe('exportFileName and the desktop host', () => {
+  it('any origin id (reserved characters, controls, device names, 400 characters) gives a name the host accepts', async () => {
+    const { validateRequest } = await import('../../../main/ipc/validate-request');
+    const fc = (await import('fast-check')).default;
+    const unit = fc.oneof(fc.constantFrom(':', '/', '\\', '*', '?', '"', '<', '>', '|', '.', ' ', '\u0000', '\u007f', 'CON', 'nul'), fc.string({ minLength: 1, maxLength: 1 }), fc.string({ unit: 'grapheme', minLength: 1, maxLength: 1 }));
+    fc.assert(
+      fc.property(fc.string({ unit, maxLength: 400 }), (origin) => {
+        const name = exportFileName({ kind: `routes-from-${origin}` }, 'csv');
+        expect(validateRequest('file:save-export', { suggestedName: name, text: 'x', kind: 'csv' }).suggestedName).toBe(name);
+        expect(name.length).toBeLessThanOrEqual(124);
+      }),
+      { numRuns: 1000, seed: 3 },
+    );
+  });
+});

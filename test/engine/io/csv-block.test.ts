@@ -22,7 +22,7 @@ describe('splitCsvBlock', () => {
       fc.property(
         fc.constantFrom(',', ';', '\t').chain((d) => fc.constantFrom('\n' as const, '\r\n' as const).chain((n) => wholeBlock(d, n).map((b) => [b, d, n] as const))),
         ([block, delimiter, newline]) => {
-          expect(splitCsvBlock(block, delimiter, newline)).toEqual(parseCsvBlock(block, delimiter, newline));
+          expect(splitCsvBlock(block, delimiter, newline)).toEqual({ ...parseCsvBlock(block, delimiter, newline), strayQuoteCells: [] });
         },
       ),
       { numRuns: 3000, seed: 20261203 },
@@ -32,7 +32,7 @@ describe('splitCsvBlock', () => {
   it('reads files that break lines with CR alone like papaparse', () => {
     fc.assert(
       fc.property(wholeBlock(',', '\r').filter((t) => !t.includes('\n')), (block) => {
-        expect(splitCsvBlock(block, ',', '\r')).toEqual(parseCsvBlock(block, ',', '\r'));
+        expect(splitCsvBlock(block, ',', '\r')).toEqual({ ...parseCsvBlock(block, ',', '\r'), strayQuoteCells: [] });
       }),
       { numRuns: 1000, seed: 7 },
     );
@@ -43,6 +43,7 @@ describe('splitCsvBlock', () => {
     expect(splitCsvBlock(block, ',', '\r\n')).toEqual({
       rows: [['a', 'b'], ['x,\ny', '2'], ['c', 'd'], ['q "1"', '3'], [''], ['e', 'f']],
       badQuoteRows: [],
+      strayQuoteCells: [],
     });
   });
 
@@ -53,5 +54,21 @@ describe('splitCsvBlock', () => {
     expect(rows[0]).toEqual(['a', 'b']);
     expect(rows[2]).toEqual(['e', 'f']);
     expect(rows).toHaveLength(3);
+  });
+
+  it('a quote inside an unquoted field is a literal, read as papaparse reads it, and its cell is named', () => {
+    // RFC 4180 section 2.5 quotes whole fields; a quote elsewhere (an inch mark) is read as itself.
+    const unquoted = fc.array(fc.constantFrom('a', '48', ' ', '"', 'x'), { minLength: 1, maxLength: 5 }).map((p) => p.join('')).filter((t) => !t.startsWith('"'));
+    const cell = fc.oneof(unquoted, field);
+    fc.assert(
+      fc.property(fc.array(fc.array(cell, { minLength: 1, maxLength: 4 }), { minLength: 1, maxLength: 6 }), (rows) => {
+        const block = rows.map((r) => r.join(',')).join('\n') + '\n';
+        const split = splitCsvBlock(block, ',', '\n');
+        expect(split.rows).toEqual(parseCsvBlock(block, ',', '\n').rows);
+        const expected = rows.flatMap((r, i) => r.flatMap((c, j) => (!c.startsWith('"') && c.includes('"') ? [{ row: i, column: j }] : [])));
+        expect(split.strayQuoteCells).toEqual(expected);
+      }),
+      { numRuns: 2000, seed: 8 },
+    );
   });
 });

@@ -155,3 +155,31 @@ describe('lanewright audit', () => {
     });
   });
 });
+
+describe('lanewright audit --loop-cap with a huge count', () => {
+  it('stops at its budget, says which, and does not claim more loops exist', async () => {
+    const ids = Array.from({ length: 12 }, (_, i) => `D${i}`);
+    const lanes = ids.flatMap((a) => ids.filter((b) => b !== a).map((b) => `${a},${b},1.00,0,0,2.00`));
+    const dir = tempFiles({ 'depots.csv': `id,name,lat,lon\n${ids.map((id, i) => `${id},${id},${50 + i / 10},4`).join('\n')}\n`, 'lanes.csv': `from,to,toll,fuel,fees,rebate\n${lanes.join('\n')}\n` });
+    const r = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--date', '2026-06-01', '--loop-cap', '1000000', '--json']);
+    expect(r.status).toBe(0);
+    const report = JSON.parse(r.stdout);
+    expect(['work-budget', 'memory-bound']).toContain(report.loop_search.stopped_by);
+    expect(report.loops.length).toBeLessThan(1_000_000);
+    expect(r.stderr).not.toMatch(/more loops exist than/);
+    expect(r.stderr).toMatch(/WARNING: the loop search stopped at its (work budget|memory bound)/);
+  });
+
+  it('the calendar review (no --date) says the same, truthfully', async () => {
+    const ids = Array.from({ length: 12 }, (_, i) => `D${i}`);
+    const lanes = ids.flatMap((a) => ids.filter((b) => b !== a).map((b) => `${a},${b},1.00,0,0,2.00`));
+    const dir = tempFiles({ 'depots.csv': `id,name,lat,lon\n${ids.map((id, i) => `${id},${id},${50 + i / 10},4`).join('\n')}\n`, 'lanes.csv': `from,to,toll,fuel,fees,rebate\n${lanes.join('\n')}\n` });
+    const r = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--loop-cap', '1000000', '--json']);
+    expect(r.status).toBe(0);
+    const report = JSON.parse(r.stdout);
+    expect(report.review).toBe('calendar');
+    expect(['work-budget', 'memory-bound']).toContain(report.loop_search.stopped_by);
+    expect(r.stderr).not.toMatch(/more loops exist than/);
+    expect(r.stderr).toMatch(/WARNING: the loop search stopped at its (work budget|memory bound)/);
+  });
+});

@@ -65,3 +65,41 @@ describe('static server', () => {
     expect((await get('/assets/app.js')).status).toBe(200);
   });
 });
+
+// A raw request with any method and Host header.
+function send(method: string, host: string, path = '/'): Promise<{ status: number; headers: Record<string, string | string[] | undefined>; body: string }> {
+  return new Promise((resolve, reject) => {
+    const req = request({ host: '127.0.0.1', port: server.port, path, method, headers: { host } }, (res) => {
+      let body = '';
+      res.on('data', (chunk) => (body += chunk));
+      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body }));
+    });
+    req.on('error', reject);
+    req.end();
+  });
+}
+
+describe('methods and Host (RFC 9110: 405 Method Not Allowed with Allow; 421 Misdirected Request)', () => {
+  it('answers GET and HEAD, and 405 with Allow to every other method', async () => {
+    const host = `127.0.0.1:${server.port}`;
+    expect((await send('GET', host)).status).toBe(200);
+    const head = await send('HEAD', host);
+    expect(head.status).toBe(200);
+    expect(head.body).toBe('');
+    expect(head.headers['content-security-policy']).toBe(CONTENT_SECURITY_POLICY);
+    for (const method of ['POST', 'PUT', 'DELETE', 'PATCH', 'OPTIONS']) {
+      const r = await send(method, host, '/index.html');
+      expect(r.status, method).toBe(405);
+      expect(r.headers.allow).toBe('GET, HEAD');
+      expect(r.body).not.toContain('<title>');
+    }
+  });
+  it('answers 421 to a Host other than its own loopback name and port', async () => {
+    expect((await send('GET', `localhost:${server.port}`)).status).toBe(200);
+    for (const host of ['evil.example', `evil.example:${server.port}`, '127.0.0.1', `127.0.0.1:${server.port + 1}`, `127.0.0.1.nip.io:${server.port}`]) {
+      const r = await send('GET', host, '/index.html');
+      expect(r.status, host).toBe(421);
+      expect(r.body).not.toContain('<title>');
+    }
+  });
+});
