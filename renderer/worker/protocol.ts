@@ -1,7 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { EstimateRules } from '../../engine/index';
+import type { CsvDialect, EstimateRules } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 
@@ -137,7 +137,8 @@ export type ToWorker =
   | { kind: 'solve'; id: number; settings: PlanSettings; scenario: Scenario | null }
   /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
   | { kind: 'route'; id: number; target: number; solveId: number }
-  | { kind: 'export'; id: number; what: ExportKind }
+  /** `dialect`: how CSV files are written (RFC 4180 when absent). */
+  | { kind: 'export'; id: number; what: ExportKind; dialect?: CsvDialect }
   | { kind: 'review'; id: number; scenario: Scenario | null }
   | { kind: 'dispatch'; id: number; request: DispatchRequest };
 

@@ -32,6 +32,8 @@ export class WorkerSession {
   /** Set when the last solve ran on a network the scenario rebuilt; its lanes map back through laneRefs. */
   private solvedOn: { network: Network; laneRefs: Int32Array } | null = null;
   private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
+  /** Names of the files the network was read from (depots, lanes), for the exports' settings. */
+  private files: string[] = [];
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
   constructor(private readonly post: Post) {}
@@ -65,8 +67,8 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null };
-        const file = exportText(ctx, message.what);
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files };
+        const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
       }
@@ -114,6 +116,7 @@ export class WorkerSession {
       return;
     }
     progress('Compiling the network', 0.95);
+    this.files = [message.depots.name, message.lanes.name];
     this.adopt(message.id, result, message.plan);
   }
 

@@ -6,6 +6,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
+import { csvDialect } from '../../app/csv-dialect-store';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { DEFAULT_LOADS_QUERY, loadCautions, queryLoads, toggleLoadSort, type LoadSortKey, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
@@ -13,7 +14,7 @@ import type { DispatchView } from '../../worker/dispatch-loads';
 import type { NamedText, NetworkView } from '../../worker/protocol';
 import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
-import { PRODUCT_NAME } from '../../../engine/index';
+import { applyCsvDialect, PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
 import './loads.css';
 
@@ -95,7 +96,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
   const money = (v: number | null) => (v === null ? '—' : formatMoney(v, network.exponent));
   const exportCsv = async () => {
     if (!view?.csv) return;
-    const saved = await host.saveExport(`dispatch-${date || 'loads'}.csv`, view.csv, 'csv');
+    const saved = await host.saveExport(`dispatch-${date || 'loads'}.csv`, applyCsvDialect(view.csv, csvDialect()), 'csv');
     if (!saved.ok) onMessage(`Dispatch sheet not saved: ${saved.failure.message}`);
     else if (saved.value) onMessage(`Saved the dispatch sheet: ${saved.value.path}`);
   };

@@ -121,6 +121,26 @@ describe('worker exports', () => {
   });
 });
 
+describe('export names, dialect and settings', () => {
+  it('names files by kind, origin, date and class, writes the chosen CSV dialect and puts the settings in the GeoJSON', () => {
+    const twoAxle = { ...load('lanes.csv'), plan: { date: DATE, vehicleClass: '2axle' } } as ToWorker;
+    const dialect = { separator: ';' as const, decimalMark: ',' as const, bom: true };
+    const out = drive([twoAxle, { kind: 'solve', id: 2, settings: { ...settings, vehicleClass: '2axle' }, scenario: null }, { kind: 'export', id: 3, what: 'routes-csv', dialect }, { kind: 'export', id: 4, what: 'geojson' }]);
+    const routes = out[2] as { fileName: string; text: string };
+    expect(routes.fileName).toBe(`routes-RTM-${DATE}-2axle.csv`);
+    expect(routes.text.charCodeAt(0)).toBe(0xfeff);
+    const { rows, delimiter } = parseCsvText(routes.text);
+    expect(delimiter).toBe(';');
+    const cost = rows[0].indexOf('cost');
+    expect(rows.slice(1).some((r) => /^\d+,\d\d$/.test(r[cost]))).toBe(true);
+    const geo = out[3] as { fileName: string; text: string };
+    expect(geo.fileName).toBe(`network-RTM-${DATE}-2axle.geojson`);
+    const json = JSON.parse(geo.text) as { caution: string; settings: unknown };
+    expect(json.caution).toMatch(/estimate/i);
+    expect(json.settings).toEqual({ date: DATE, vehicle_class: '2axle', files: ['depots.csv', 'lanes.csv'], scenario: null });
+  });
+});
+
 describe('scenarios that change the lane set', () => {
   it('solves an added lane through the engine and maps the answer back onto the drawn lanes', () => {
     const scenario = {
