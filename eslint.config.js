@@ -13,7 +13,9 @@ import { builtinModules } from 'node:module';
  * import each other. A new folder under engine/ must be added here, or every import in it fails.
  */
 const ENGINE_ORDER = [
-  ['errors', 'text'],
+  // text below errors: error messages show file values through text/shown-text.ts.
+  ['text'],
+  ['errors'],
   ['money', 'io', 'geo', 'json'],
   ['network'],
   ['import'],

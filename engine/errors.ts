@@ -1,6 +1,8 @@
 // Named error classes shared across the engine. Callers (CLI, main, worker) catch these by class and
 // print `message` as one line; tests check the class and its fields, never the wording.
 
+import { escapeControls, shownText } from './text/shown-text';
+
 /** Base of every error the engine raises on purpose. */
 export class LanewrightError extends Error {
   constructor(message: string) {
@@ -12,7 +14,7 @@ export class LanewrightError extends Error {
 /** A text that should hold an amount of money but does not. */
 export class MoneyFormatError extends LanewrightError {
   constructor(readonly value: string, readonly reason: string) {
-    super(`money: cannot read "${value}": ${reason}`);
+    super(`money: cannot read "${shownText(value)}": ${reason}`);
   }
 }
 
@@ -46,7 +48,8 @@ export class UnboundedPathError extends LanewrightError {
 
 /** Where a problem in an input file is, as one prints it: `file, row 3, column "toll", value "x"` (parts that are null left out). */
 export function fileLocationText(file: string, row: number | null, column: string | null, value: string | null): string {
-  return [file, row !== null ? `row ${row}` : null, column !== null ? `column "${column}"` : null, value !== null ? `value "${value}"` : null]
+  // Column names and values come from the file: shown escaped and shortened (engine/text/shown-text.ts).
+  return [escapeControls(file), row !== null ? `row ${row}` : null, column !== null ? `column "${shownText(column)}"` : null, value !== null ? `value "${shownText(value)}"` : null]
     .filter((part) => part !== null)
     .join(', ');
 }

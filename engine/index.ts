@@ -58,6 +58,7 @@ export * from './json/versioned';
 export * from './workspace/parse';
 export * from './workspace/dirty';
 export * from './text/cautions';
+export { escapeControls, shownText, SHOWN_VALUE_LIMIT } from './text/shown-text';
 export * from './import/adr-tunnels';
 export * from './dispatch/plan-loads';
 export * from './dispatch/day-pricing';

@@ -74,19 +74,29 @@ function numericColumns(rows: readonly (readonly (string | number | null)[])[]):
   return out;
 }
 
-/** Writes rows (header first) in `dialect`; formula-like text is neutralised as in RFC 4180 output. */
+/**
+ * Writes rows (header first) in `dialect`; formula-like text is guarded as in RFC 4180 output
+ * (a decimal comma such as "-12,50" is a number to the guard, not a formula).
+ */
 export function formatCsvDialect(rows: readonly (readonly (string | number | null)[])[], dialect: CsvDialect): string {
+  return writeDialect(rows, dialect, true);
+}
+
+function writeDialect(rows: readonly (readonly (string | number | null)[])[], dialect: CsvDialect, guard: boolean): string {
   let out = rows;
   if (dialect.decimalMark === ',') {
     const numeric = numericColumns(rows);
     out = rows.map((row, r) => (r === 0 ? row : row.map((v, c) => (numeric.has(c) && v !== null && v !== '' ? String(v).replace('.', ',') : v))));
   }
-  const text = formatCsvRows(out, { delimiter: dialect.separator, decimalComma: dialect.decimalMark === ',' });
+  const text = formatCsvRows(out, { delimiter: dialect.separator, escapeFormulae: guard });
   return dialect.bom ? `\uFEFF${text}` : text;
 }
 
-/** Re-writes an exporter's RFC 4180 text in `dialect` (unchanged for the RFC 4180 dialect). */
+/**
+ * Re-writes an exporter's RFC 4180 text in `dialect` (unchanged for the RFC 4180 dialect). Its cells
+ * are already guarded; guarding them again would add a second apostrophe the importer keeps.
+ */
 export function applyCsvDialect(text: string, dialect: CsvDialect): string {
   if (dialect.separator === ',' && dialect.decimalMark === '.' && !dialect.bom) return text;
-  return formatCsvDialect(parseCsvText(text).rows, dialect);
+  return writeDialect(parseCsvText(text).rows, dialect, false);
 }

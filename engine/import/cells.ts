@@ -1,16 +1,25 @@
 // Small readers shared by the depots and lanes readers: cell text, ISO 8601 dates and drive times.
 // Each returns a value or a reason; the row readers turn reasons into report items.
 
-/** Trimmed cell text; an apostrophe our own exporter put before a formula-like text is removed. */
+import { withoutFormulaGuard } from '../io/csv-cell-safety';
+
+/** Trimmed cell text; the apostrophes our own exporter put before formula-like text are removed. */
 export function cellText(cells: readonly string[], index: number | undefined): string {
   if (index === undefined) return '';
   const raw = cells[index];
   if (raw === undefined) return '';
-  const text = raw.trim();
-  return text.charCodeAt(0) === 39 && /^'[=+\-@\t\r]/.test(text) ? text.slice(1) : text;
+  return withoutFormulaGuard(raw.trim());
 }
 
 export { readIsoDate, isoDateText } from '../text/iso-date';
+
+/**
+ * A copy of text that is kept (refs, notes): V8 keeps a substring pointing into its parent, so
+ * copying lets each parsed block of the file go.
+ */
+export function ownText(text: string): string {
+  return text.length > 12 ? (' ' + text).slice(1) : text;
+}
 
 /**
  * A drive time in minutes from "h:mm", an ISO 8601 duration ("PT4H35M") or a plain number in

@@ -98,7 +98,11 @@ export function readNumber(text: string, style: DecimalStyle): { ok: true; value
   // Fast path for the plain form most files use. Not for "1.234" in a decimal-comma file where
   // grouping is allowed: that may mean 1234, and readDecimalText refuses it as ambiguous.
   const plain = style.decimalComma && style.allowGrouping ? /^-?\d+$/ : /^-?\d+(\.\d+)?$/;
-  if (plain.test(text)) return { ok: true, value: Number(text) };
+  if (plain.test(text)) {
+    // 400 digits read as Infinity: refused like "inf", never passed on.
+    const value = Number(text);
+    return Number.isFinite(value) ? { ok: true, value } : { ok: false, code: 'not-finite', reason: 'not a finite number' };
+  }
   const parsed = readDecimalText(text, style);
   if (!parsed.ok) return parsed;
   const value = Number(`${parsed.negative ? '-' : ''}${parsed.whole || '0'}.${parsed.fraction || '0'}`);

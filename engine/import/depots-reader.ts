@@ -1,6 +1,7 @@
 // Reads depot records (id, name, lat, lon, optional type and notes) as they stream in, checking
 // each row and keeping the accepted ones. Duplicate ids keep the first row and reject the others.
 
+import { textKeyedRecord } from '../text/lookup-table';
 import { cellText } from './cells';
 import { readNumber } from './decimal-text';
 import { matchDepotHeaders, type DepotField, type HeaderMatch } from './headers';
@@ -82,7 +83,7 @@ export class DepotsReader extends RecordFileReader {
     let extra: Record<string, string> | null = null;
     for (const u of this.header!.unknown) {
       const value = cellText(cells, u.index);
-      if (value !== '') (extra ??= {})[u.header] = value;
+      if (value !== '') (extra ??= textKeyedRecord<string>())[u.header] = value;
     }
     this.index.set(id, this.depots.length);
     this.depots.push({

@@ -1,13 +1,14 @@
 // Header names of the loads and vehicles files, matched like the lanes file's (case, spaces,
 // hyphens and underscores ignored; a unit may sit in brackets; common synonyms accepted).
 
+import { lookupTable } from '../text/lookup-table';
 import { match, type HeaderMatch } from './headers';
 
 export type VehicleField = 'vehicle' | 'vehicle_class' | 'height' | 'width' | 'length' | 'weight' | 'axle_load' | 'tunnel_code' | 'fuel' | 'carriage' | 'notes';
 export type LoadField = 'load' | 'from' | 'to' | 'date' | 'vehicle' | 'vehicle_class' | 'tunnel_code' | 'notes';
 
 // Null-prototype tables: a header such as "constructor" must not find Object.prototype's.
-const VEHICLE_NAMES: Record<string, string> = Object.assign(Object.create(null) as Record<string, string>, {
+const VEHICLE_NAMES: Readonly<Record<string, string>> = lookupTable({
   vehicle: 'vehicle', vehicle_id: 'vehicle', truck: 'vehicle', unit: 'vehicle', fleet_no: 'vehicle', fleet_number: 'vehicle', registration: 'vehicle',
   vehicle_class: 'vehicle_class', class: 'vehicle_class', toll_class: 'vehicle_class', axle_class: 'vehicle_class',
   height_m: 'height:m', height: 'height',
@@ -21,7 +22,7 @@ const VEHICLE_NAMES: Record<string, string> = Object.assign(Object.create(null) 
   notes: 'notes', note: 'notes', comment: 'notes', comments: 'notes', remarks: 'notes',
 });
 
-const LOAD_NAMES: Record<string, string> = Object.assign(Object.create(null) as Record<string, string>, {
+const LOAD_NAMES: Readonly<Record<string, string>> = lookupTable({
   load: 'load', load_id: 'load', id: 'load', order: 'load', order_id: 'load', job: 'load', shipment: 'load',
   from: 'from', origin: 'from', from_depot: 'from', origin_depot: 'from', orig: 'from',
   to: 'to', destination: 'to', dest: 'to', to_depot: 'to', destination_depot: 'to',

@@ -2,6 +2,7 @@
 // between spaces, hyphens and underscores are ignored; common synonyms are accepted; a unit may
 // sit in brackets ("Distance (mi)"). Unknown columns are kept and reported, never an error.
 
+import { lookupTable, ownEntry } from '../text/lookup-table';
 import { LANE_LIMIT_HEADER_NAMES, type LaneLimitField } from './lane-limits';
 
 export type DepotField = 'id' | 'name' | 'lat' | 'lon' | 'type' | 'notes';
@@ -20,17 +21,18 @@ export function classKey(text: string): string {
   return text.trim().toLowerCase().replace(/[\s_\-]+/g, '');
 }
 
-const DEPOT_NAMES: Record<string, DepotField> = {
+// Null-prototype tables: a header named "constructor" is an unknown column, not Object's constructor.
+const DEPOT_NAMES: Readonly<Record<string, DepotField>> = lookupTable({
   id: 'id', depot: 'id', depot_id: 'id', code: 'id', depot_code: 'id',
   name: 'name', depot_name: 'name',
   lat: 'lat', latitude: 'lat',
   lon: 'lon', lng: 'lon', long: 'lon', longitude: 'lon',
   type: 'type', depot_type: 'type', kind: 'type',
   notes: 'notes', note: 'notes', comment: 'notes', comments: 'notes', remarks: 'notes',
-};
+});
 
 // Lane header keys; a value "field:unit" also fixes the unit.
-const LANE_NAMES: Record<string, string> = {
+const LANE_NAMES: Readonly<Record<string, string>> = lookupTable({
   from: 'from', origin: 'from', from_depot: 'from', origin_depot: 'from', orig: 'from',
   to: 'to', destination: 'to', dest: 'to', to_depot: 'to', destination_depot: 'to',
   ref: 'ref', reference: 'ref', lane_ref: 'ref', lane_reference: 'ref', contract: 'ref', contract_ref: 'ref',
@@ -55,7 +57,7 @@ const LANE_NAMES: Record<string, string> = {
   drive_source: 'derived',
   // Vehicle limits (max_height_m, tunnel_category, ...): declared in lane-limits.ts.
   ...LANE_LIMIT_HEADER_NAMES,
-};
+});
 
 export interface MatchedColumn<F extends string> {
   index: number;
@@ -79,7 +81,7 @@ function split(header: string): { key: string; unit: string | null } {
   return { key: headerKey(header), unit: null };
 }
 
-export function match<F extends string>(headers: readonly string[], names: Record<string, string>, classes: boolean): HeaderMatch<F> {
+export function match<F extends string>(headers: readonly string[], names: Readonly<Record<string, string>>, classes: boolean): HeaderMatch<F> {
   const result: HeaderMatch<F> = { columns: new Map(), classTolls: [], unknown: [], duplicates: [] };
   const seenClass = new Map<string, string>();
   headers.forEach((raw, index) => {
@@ -90,7 +92,7 @@ export function match<F extends string>(headers: readonly string[], names: Recor
       return;
     }
     const { key, unit } = split(header);
-    const target = names[key];
+    const target = ownEntry(names, key);
     if (target !== undefined) {
       const [field, fixedUnit] = target.split(':') as [F, string | undefined];
       if (field === ('derived' as F)) return;

@@ -2,6 +2,7 @@
 // (one line per problem for InvalidInputError) without a stack trace.
 
 import { LanewrightError } from '../errors';
+import { shownText } from '../text/shown-text';
 import { formatReport } from './report-collector';
 import type { ValidationReport } from './types';
 
@@ -25,6 +26,6 @@ export class InvalidInputError extends LanewrightError {
 /** A plan request that cannot apply to this lanes file (unknown vehicle class, bad date, bad setting). */
 export class PlanRequestError extends LanewrightError {
   constructor(readonly option: string, readonly value: string, readonly reason: string) {
-    super(`plan: ${option} "${value}": ${reason}`);
+    super(`plan: ${option} "${shownText(value)}": ${reason}`);
   }
 }

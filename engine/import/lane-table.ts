@@ -2,9 +2,16 @@
 // lane rows cost about a hundred bytes each instead of an object per row.
 
 import { formatMinor, type Minor } from '../money/minor';
+import { textKeyedRecord } from '../text/lookup-table';
 import { isoDateText } from './cells';
 import type { LaneLimitsBuilder } from './lane-limits';
 import type { DepotRecord, LaneRecord, LaneTable } from './types';
+
+// The rows of a column: a view when the column is nearly full (no copy of a million-row column at
+// the end of a read), a trimmed copy otherwise.
+function rowsOf<T extends Float64Array | Int32Array | Int16Array>(array: T, n: number): T {
+  return (n >= array.length * 0.9 ? array.subarray(0, n) : array.slice(0, n)) as T;
+}
 
 function grow<T extends Float64Array | Int32Array | Int16Array>(array: T, size: number): T {
   const next = new (array.constructor as new (n: number) => T)(size);
@@ -36,26 +43,36 @@ export class LaneTableBuilder {
   /** Set by the lanes reader when the header has limit columns. */
   limits: LaneLimitsBuilder | null = null;
 
+  /** Most rows `reserve` will make room for at once (an estimate past this is not trusted). */
+  static readonly MAX_RESERVE = 50_000_000;
+
+  /** Makes room for about `rows` rows in one step (an estimate from the file's size; rows past it still fit). */
+  reserve(rows: number): void {
+    const size = Math.min(Math.ceil(rows), LaneTableBuilder.MAX_RESERVE);
+    if (size > this.capacity) this.resize(size);
+  }
+
   /** Makes room for one more row and returns its index; the caller fills every column. */
   add(): number {
-    if (this.count === this.capacity) {
-      const size = this.capacity * 2;
-      this.from = grow(this.from, size);
-      this.to = grow(this.to, size);
-      this.sourceRow = grow(this.sourceRow, size);
-      this.toll = grow(this.toll, size);
-      this.fuel = grow(this.fuel, size);
-      this.fees = grow(this.fees, size);
-      this.rebate = grow(this.rebate, size);
-      this.distanceKm = grow(this.distanceKm, size);
-      this.driveMinutes = grow(this.driveMinutes, size);
-      this.validFrom = grow(this.validFrom, size);
-      this.validTo = grow(this.validTo, size);
-      if (this.vehicleClass) this.vehicleClass = grow(this.vehicleClass, size);
-      for (const c of this.classTolls) c.toll = grow(c.toll, size);
-      this.capacity = size;
-    }
+    if (this.count === this.capacity) this.resize(this.capacity * 2);
     return this.count++;
+  }
+
+  private resize(size: number): void {
+    this.from = grow(this.from, size);
+    this.to = grow(this.to, size);
+    this.sourceRow = grow(this.sourceRow, size);
+    this.toll = grow(this.toll, size);
+    this.fuel = grow(this.fuel, size);
+    this.fees = grow(this.fees, size);
+    this.rebate = grow(this.rebate, size);
+    this.distanceKm = grow(this.distanceKm, size);
+    this.driveMinutes = grow(this.driveMinutes, size);
+    this.validFrom = grow(this.validFrom, size);
+    this.validTo = grow(this.validTo, size);
+    if (this.vehicleClass) this.vehicleClass = grow(this.vehicleClass, size);
+    for (const c of this.classTolls) c.toll = grow(c.toll, size);
+    this.capacity = size;
   }
 
   /** The finished table, trimmed to its rows. */
@@ -63,20 +80,20 @@ export class LaneTableBuilder {
     const n = this.count;
     return {
       count: n,
-      from: this.from.slice(0, n),
-      to: this.to.slice(0, n),
-      sourceRow: this.sourceRow.slice(0, n),
-      toll: this.toll.slice(0, n),
-      classTolls: this.classTolls.map((c) => ({ name: c.name, key: c.key, toll: c.toll.slice(0, n), header: c.header })),
-      vehicleClass: this.vehicleClass ? this.vehicleClass.slice(0, n) : null,
+      from: rowsOf(this.from, n),
+      to: rowsOf(this.to, n),
+      sourceRow: rowsOf(this.sourceRow, n),
+      toll: rowsOf(this.toll, n),
+      classTolls: this.classTolls.map((c) => ({ name: c.name, key: c.key, toll: rowsOf(c.toll, n), header: c.header })),
+      vehicleClass: this.vehicleClass ? rowsOf(this.vehicleClass, n) : null,
       classNames: this.classNames.slice(),
-      fuel: this.fuel.slice(0, n),
-      fees: this.fees.slice(0, n),
-      rebate: this.rebate.slice(0, n),
-      distanceKm: this.distanceKm.slice(0, n),
-      driveMinutes: this.driveMinutes.slice(0, n),
-      validFrom: this.validFrom.slice(0, n),
-      validTo: this.validTo.slice(0, n),
+      fuel: rowsOf(this.fuel, n),
+      fees: rowsOf(this.fees, n),
+      rebate: rowsOf(this.rebate, n),
+      distanceKm: rowsOf(this.distanceKm, n),
+      driveMinutes: rowsOf(this.driveMinutes, n),
+      validFrom: rowsOf(this.validFrom, n),
+      validTo: rowsOf(this.validTo, n),
       ref: this.ref,
       notes: this.notes,
       extra: this.extra,
@@ -90,9 +107,9 @@ export class LaneTableBuilder {
 export function laneRecordAt(table: LaneTable, depots: readonly DepotRecord[], exponent: number, i: number): LaneRecord {
   const money = (v: number) => (Number.isNaN(v) ? null : formatMinor(v as Minor, exponent));
   const num = (v: number) => (Number.isNaN(v) ? null : v);
-  const classTolls: Record<string, string | null> = {};
+  const classTolls = textKeyedRecord<string | null>();
   for (const c of table.classTolls) classTolls[c.name] = money(c.toll[i]);
-  const extra: Record<string, string> = {};
+  const extra = textKeyedRecord<string>();
   for (const e of table.extra) if (e.values[i] !== undefined) extra[e.column] = e.values[i]!;
   const cls = table.vehicleClass ? table.vehicleClass[i] : -1;
   return {

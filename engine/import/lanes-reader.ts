@@ -2,14 +2,18 @@
 // network currency (converted only with a user-given rate), distance with its unit, drive time,
 // validity, vehicle class (one toll column per class, or a vehicle_class column), reference, notes.
 
+import { MoneyOverflowError } from '../errors';
+import { formatMinor, laneNetMinor, type Minor } from '../money/minor';
 import { readAmount } from './amount-text';
-import { cellText, readIsoDate } from './cells';
+import { cellText, ownText, readIsoDate } from './cells';
 import { convertMinor, readRate } from './currency-convert';
 import { currencyExponent, lookupCurrency } from './currencies';
-import { readDistanceKm, readDriveTime } from './lane-cells';
+import { checkDriveMinutes, readDistanceKm, readDriveTime } from './lane-cells';
 import { classKey, matchLaneHeaders, type HeaderMatch, type LaneField } from './headers';
 import { LaneLimitsBuilder } from './lane-limits';
 import { LaneTableBuilder } from './lane-table';
+import { PlainLaneRows } from './lane-row-fast';
+import { DepotIdIndex } from './depot-id-index';
 import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { isBlankRecord, RecordFileReader } from './record-file-reader';
@@ -22,10 +26,7 @@ export interface LanesReaderOptions {
   exchangeRates?: Record<string, string>;
 }
 
-// V8 keeps a substring pointing into its parent; copying stored strings lets each parsed block go.
-function own(text: string): string {
-  return text.length > 12 ? (' ' + text).slice(1) : text;
-}
+const own = ownText;
 
 export class LanesReader extends RecordFileReader {
   readonly table = new LaneTableBuilder();
@@ -43,6 +44,8 @@ export class LanesReader extends RecordFileReader {
   private rowOk = true;
   private row = 0;
   private rowCurrency: string | null = null;
+  /** The plain-row fast path, made once the header and the currency are known (null = not for this file). */
+  private fast: PlainLaneRows | null | undefined;
 
   constructor(
     file: string,
@@ -154,6 +157,13 @@ export class LanesReader extends RecordFileReader {
     let fuel = this.amount(cells, col.fuel, 'fuel');
     let fees = this.amount(cells, col.fees, 'fees');
     let rebate = this.amount(cells, col.rebate, 'rebate');
+    this.warnNegative(cells, [
+      [col.toll, this.headerOf('toll'), 'toll', toll],
+      ...h.classTolls.map((c, k) => [c.index, c.header, 'toll', classTolls[k]] as const),
+      [col.fuel, this.headerOf('fuel'), 'fuel', fuel],
+      [col.fees, this.headerOf('fees'), 'fees', fees],
+      [col.rebate, this.headerOf('rebate'), 'rebate', rebate],
+    ]);
     const rowCurrency = this.rowCurrency ?? this.currency!;
     if (rowCurrency !== this.currency) {
       const rateText = this.options.exchangeRates?.[rowCurrency];
@@ -163,15 +173,21 @@ export class LanesReader extends RecordFileReader {
       } else {
         const fromExp = currencyExponent(rowCurrency) ?? 2;
         const conv = (v: number) => (Number.isNaN(v) ? v : convertMinor(v, fromExp, this.exponent, rate));
-        toll = conv(toll);
-        fuel = conv(fuel);
-        fees = conv(fees);
-        rebate = conv(rebate);
-        for (let k = 0; k < classTolls.length; k++) classTolls[k] = conv(classTolls[k]);
-        this.converted.set(rowCurrency, (this.converted.get(rowCurrency) ?? 0) + 1);
+        try {
+          toll = conv(toll);
+          fuel = conv(fuel);
+          fees = conv(fees);
+          rebate = conv(rebate);
+          for (let k = 0; k < classTolls.length; k++) classTolls[k] = conv(classTolls[k]);
+          this.converted.set(rowCurrency, (this.converted.get(rowCurrency) ?? 0) + 1);
+        } catch (error) {
+          if (!(error instanceof MoneyOverflowError)) throw error;
+          this.fail(this.headerOf('currency'), rowCurrency, 'amount-overflow', `an amount converted from ${rowCurrency} is outside the exact range (±${Number.MAX_SAFE_INTEGER} minor units)`);
+        }
       }
     }
 
+    if (this.rowOk) this.checkNet(cells, toll, classTolls, fuel, fees, rebate);
     const distanceKm = this.distance(cells);
     const driveMinutes = this.drive(cells);
     const validFrom = this.date(cells, 'valid_from');
@@ -198,16 +214,71 @@ export class LanesReader extends RecordFileReader {
     t.validFrom[i] = validFrom;
     t.validTo[i] = validTo;
     if (t.vehicleClass) t.vehicleClass[i] = this.vehicleClass(cells);
-    const ref = cellText(cells, col.ref);
-    t.ref.push(ref === '' ? undefined : own(ref));
-    const notes = cellText(cells, col.notes);
-    t.notes.push(notes === '' ? undefined : own(notes));
+    // Absent optional columns get no per-row entries (a lookup past the end reads undefined).
+    if (col.ref !== undefined) {
+      const ref = cellText(cells, col.ref);
+      t.ref.push(ref === '' ? undefined : own(ref));
+    }
+    if (col.notes !== undefined) {
+      const notes = cellText(cells, col.notes);
+      t.notes.push(notes === '' ? undefined : own(notes));
+    }
     for (let k = 0; k < h.unknown.length; k++) {
       const value = cellText(cells, h.unknown[k].index);
       t.extra[k].values.push(value === '' ? undefined : own(value));
     }
     if (from === to) this.report.warning(this.file, row, this.headerOf('to'), cellText(cells, col.to), 'self-lane', 'lane from a depot to itself; it never shortens a route');
     return true;
+  }
+
+  protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    if (this.fast === undefined) {
+      if (this.currency === null || this.header === null) return false;
+      this.fast = PlainLaneRows.forFile({
+        header: this.header,
+        columnCount: this.headerCells.length,
+        exponent: this.exponent,
+        decimalComma: this.decimalComma,
+        driveUnit: this.driveUnit,
+        depots: new DepotIdIndex(this.depotIndex),
+        table: this.table,
+      });
+    }
+    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
+  }
+
+  /**
+   * A negative amount is accepted (a credit can be real) but named: a negative rebate raises the
+   * lane's cost, which is seldom what was meant, and a negative toll, fuel or fee lowers it.
+   */
+  private warnNegative(cells: string[], amounts: readonly (readonly [number | undefined, string, 'toll' | 'fuel' | 'fees' | 'rebate', number])[]): void {
+    for (const [index, column, field, value] of amounts) {
+      if (!(value < 0) || index === undefined) continue;
+      const by = formatMinor(-value as Minor, this.rowDigits);
+      const effect =
+        field === 'rebate'
+          ? `a negative rebate raises the lane's cost by ${by} (a rebate is subtracted); write a credit as a positive rebate`
+          : `a negative ${field === 'fees' ? 'fee' : field === 'fuel' ? 'fuel cost' : 'toll'} lowers the lane's cost by ${by}, like a rebate; check the sign`;
+      this.report.warning(this.file, this.row, column, cellText(cells, index), 'negative-amount', effect);
+    }
+  }
+
+  /**
+   * The lane's net cost (toll + fuel + fees - rebate, with every toll it may be planned with) must be
+   * exact: past ±MAX_SAFE_INTEGER minor units it is a row error here, not an abort later.
+   */
+  private checkNet(cells: string[], toll: number, classTolls: readonly number[], fuel: number, fees: number, rebate: number): void {
+    const z = (v: number) => (Number.isNaN(v) ? 0 : v);
+    const h = this.header!;
+    const tolls: [number | undefined, string, number][] = [[this.col.toll, this.headerOf('toll'), z(toll)], ...h.classTolls.map((c, k): [number, string, number] => [c.index, c.header, z(classTolls[k])])];
+    for (const tollAmount of tolls) {
+      if (laneNetMinor(tollAmount[2], z(fuel), z(fees), z(rebate)) !== null) continue;
+      // Name the largest amount: it is the one to look at.
+      const parts: [number | undefined, string, number][] = [tollAmount, [this.col.fuel, this.headerOf('fuel'), z(fuel)], [this.col.fees, this.headerOf('fees'), z(fees)], [this.col.rebate, this.headerOf('rebate'), z(rebate)]];
+      const [index, column] = parts.reduce((a, b) => (Math.abs(b[2]) > Math.abs(a[2]) ? b : a));
+      this.fail(column, cellText(cells, index), 'amount-overflow', `the lane's net cost (toll + fuel + fees - rebate) is outside the exact range (±${Number.MAX_SAFE_INTEGER} minor units); it cannot be costed exactly`);
+      return;
+    }
   }
 
   private setRowCurrency(code: string): void {
@@ -273,8 +344,7 @@ export class LanesReader extends RecordFileReader {
     const text = cellText(cells, this.col.drive);
     if (text === '') return NaN;
     // Plain whole minutes, the common case, without the general reader.
-    if (this.driveUnit !== 'h' && /^\d+$/.test(text)) return Number(text);
-    const r = readDriveTime(text, this.driveUnit, this.decimalComma);
+    const r = this.driveUnit !== 'h' && /^\d+$/.test(text) ? checkDriveMinutes(Number(text)) : readDriveTime(text, this.driveUnit, this.decimalComma);
     if (typeof r === 'number') return r;
     this.fail(this.headerOf('drive'), text, r.code, r.reason);
     return NaN;

@@ -58,6 +58,14 @@ export abstract class RecordFileReader implements CsvRecordSink {
     }
   }
 
+  /** The CSV stream's fast path (CsvRecordSink.plainLine): true when the reader took the plain row. */
+  plainLine(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    if (!this.headerRead || this.unusable || !this.readPlainRow(text, start, end, row, delimiter)) return false;
+    this.counts.total++;
+    this.counts.accepted++;
+    return true;
+  }
+
   issue(issue: CsvStreamIssue): void {
     if (issue.code === 'not-text') this.notText = true;
     takeStreamIssue(this.report, this.file, this.counts, issue, this.headerRead, this.headerCells);
@@ -74,6 +82,10 @@ export abstract class RecordFileReader implements CsvRecordSink {
   protected abstract readRow(cells: string[], row: number): boolean;
   /** Reports a file that has a header but no data rows. */
   protected abstract noDataRows(): void;
+  /** Reads a plain row straight from the text, or returns false to get it as cells in readRow. */
+  protected readPlainRow(_text: string, _start: number, _end: number, _row: number, _delimiter: string): boolean {
+    return false;
+  }
   /** Called with each block before its data rows are read. */
   protected beforeRows(_records: string[][], _start: number): void {}
 }

@@ -42,13 +42,16 @@ export type IssueCode =
   | 'same-depot'
   | 'duplicate-load'
   | 'duplicate-vehicle'
+  | 'out-of-range'
+  | 'amount-overflow'
   // errors or warnings
   | 'no-data-rows' // an error for depots (nothing to plan), a warning for lanes
   // warnings
   | 'unknown-column'
   | 'duplicate-lane'
   | 'self-lane'
-  | 'net-negative-lane';
+  | 'net-negative-lane'
+  | 'negative-amount';
 
 /** One problem, located as a spreadsheet shows it. `row` 1 is the header; null = the whole file. */
 export interface ValidationItem {

@@ -3,6 +3,7 @@
 // string parser uses no DOM and no Node APIs, so this adapter runs in a worker, main and the CLI.
 
 import Papa from 'papaparse';
+import { guardFormulaCell, needsCsvQuotes } from './csv-cell-safety';
 
 export interface CsvParseIssue {
   /** Row as a spreadsheet numbers it (header = 1), when known. */
@@ -62,29 +63,28 @@ export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | 
   return { rows, badQuoteRows };
 }
 
-// A text cell a spreadsheet would run as a formula; plain numbers such as -12.50 or +3 are exempt,
-// because the exporters write amounts as text to keep their exact decimals.
-const FORMULA_LIKE = /^(?![-+]?(?:\d+(?:\.\d*)?|\.\d+)$)[=+\-@\t\r]/;
-// The same with a decimal comma: "-12,50" is a number in a decimal-comma file, not a formula.
-const FORMULA_LIKE_DECIMAL_COMMA = /^(?![-+]?(?:\d+(?:,\d*)?|,\d+)$)[=+\-@\t\r]/;
-
 export interface CsvWriteOptions {
-  /** Prefix formula-like text cells with an apostrophe (OWASP CSV-injection advice). Default true. */
+  /** Guard formula-like text (csv-cell-safety.ts, OWASP CSV-injection advice). Default true; tests only turn it off. */
   escapeFormulae?: boolean;
-  /** Field separator; default comma (RFC 4180). */
+  /** Field separator; default comma (RFC 4180). csv-dialect.ts chooses it. */
   delimiter?: ',' | ';';
-  /** Numbers in the rows are written with a decimal comma (so "-12,50" is not taken for a formula). */
-  decimalComma?: boolean;
 }
 
-/** Writes rows as RFC 4180 CSV (CRLF line ends, quotes only where needed). */
+/**
+ * Writes rows as RFC 4180 CSV (CRLF line ends, doubled quotes). Every CSV the project writes goes
+ * through here: text cells are guarded against formulas, and quoted when they hold a separator of
+ * any common dialect (`,`, `;`, tab, quote, line break), so a spreadsheet that splits on `;` still
+ * sees one cell. Numbers are written as numbers.
+ */
 export function formatCsvRows(rows: readonly (readonly (string | number | null)[])[], options: CsvWriteOptions = {}): string {
+  const guard = options.escapeFormulae !== false;
+  const cells = rows.map((row) => row.map((cell) => (typeof cell === 'string' && guard ? guardFormulaCell(cell) : cell)));
   return (
-    Papa.unparse(rows as unknown[][], {
+    Papa.unparse(cells as unknown[][], {
       newline: '\r\n',
-      quotes: false,
       delimiter: options.delimiter ?? ',',
-      escapeFormulae: options.escapeFormulae === false ? false : options.decimalComma ? FORMULA_LIKE_DECIMAL_COMMA : FORMULA_LIKE,
+      quotes: (value: unknown) => typeof value === 'string' && needsCsvQuotes(value),
+      escapeFormulae: false,
     }) + '\r\n'
   );
 }

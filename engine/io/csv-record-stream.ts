@@ -2,6 +2,7 @@
 // the last line break that lies outside quotes (quote parity is tracked across chunks), so papaparse
 // only ever sees whole records and a million-lane file never sits in memory as one string.
 
+import { splitCsvBlock, type PlainLineTaker } from './csv-block';
 import { parseCsvBlock } from './csv-papaparse';
 
 /** A problem with the file as a whole or with its quoting, before any column is looked at. */
@@ -24,6 +25,12 @@ export interface CsvRecordSink {
    */
   records(records: string[][], firstRow: number, badQuotes: readonly number[], badText: readonly number[]): void;
   issue(issue: CsvStreamIssue): void;
+  /**
+   * Optional fast path: offered each line without quotes (`text` from `start` to `end`, line break
+   * excluded) after the first block, so that a reader can take plain rows without cutting them into
+   * cell strings. True = read and counted by the sink; false = it arrives in `records` as usual.
+   */
+  plainLine?(text: string, start: number, end: number, row: number, delimiter: string): boolean;
 }
 
 // A quoted field longer than this is taken to be an unclosed quote rather than data, so a broken
@@ -142,12 +149,29 @@ export class CsvRecordStream {
       }
     }
     this.detectLayout(block);
-    const { rows, badQuoteRows } = parseCsvBlock(block, this.delimiter, this.newline);
+    // The first block stays on the general path: the header, the delimiter and the network's
+    // currency are settled there. Blocks with U+FFFD stay there too, so every such row is flagged.
+    const sink = this.sink;
+    const fast = sink.plainLine !== undefined && this.nextRow > 1 && !block.includes('\uFFFD');
+    const take: PlainLineTaker | undefined = fast
+      ? (text, start, end, before) => {
+          this.deliver(before.rows, before.badQuoteRows, false);
+          if (!sink.plainLine!(text, start, end, this.nextRow, this.delimiter)) return false;
+          this.nextRow++;
+          return true;
+        }
+      : undefined;
+    const { rows, badQuoteRows } = splitCsvBlock(block, this.delimiter, this.newline, take);
+    this.deliver(rows, badQuoteRows, block.includes('\uFFFD'));
+  }
+
+  // Hands records to the sink with their spreadsheet row numbers.
+  private deliver(rows: string[][], badQuoteRows: number[], mayHaveBadText: boolean): void {
     if (rows.length === 0) return;
     const first = this.nextRow;
     this.nextRow += rows.length;
     const badText: number[] = [];
-    if (block.includes('\uFFFD')) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD')) && badText.push(i));
+    if (mayHaveBadText) rows.forEach((cells, i) => cells.some((c) => c.includes('\uFFFD')) && badText.push(i));
     this.sink.records(rows, first, badQuoteRows, badText);
   }
 

@@ -41,7 +41,7 @@ declare module 'papaparse' {
     chunkSize?: number;
   }
   export interface UnparseConfig {
-    quotes?: boolean | boolean[];
+    quotes?: boolean | boolean[] | ((value: unknown, column: number) => boolean);
     quoteChar?: string;
     escapeChar?: string;
     delimiter?: string;

@@ -2,6 +2,7 @@
 // works on flat arrays, which keeps a million lanes in well under 100 MB.
 
 import { MoneyOverflowError, NetworkBuildError, UnknownDepotError } from '../errors';
+import { laneNetMinor } from '../money/minor';
 import { compressRows } from './compressed-rows';
 import type { DepotInput, LaneInput, Network } from './types';
 
@@ -40,9 +41,9 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
     if (from === undefined) throw new UnknownDepotError(lane.from, `lane from row ${lane.sourceRow}`);
     const to = depotIndex.get(lane.to);
     if (to === undefined) throw new UnknownDepotError(lane.to, `lane from row ${lane.sourceRow}`);
-    const net = lane.toll + lane.fuel + lane.fees - lane.rebate;
     // Each component is a safe integer; the sum of four can still leave the exact range.
-    if (!Number.isSafeInteger(net)) throw new MoneyOverflowError(`net cost of the lane from row ${lane.sourceRow}`);
+    const net = laneNetMinor(lane.toll, lane.fuel, lane.fees, lane.rebate);
+    if (net === null) throw new MoneyOverflowError(`net cost of the lane from row ${lane.sourceRow}`);
     laneFrom[e] = from;
     laneTo[e] = to;
     laneToll[e] = lane.toll;

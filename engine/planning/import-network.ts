@@ -47,6 +47,7 @@ export function startImport(options: ImportOptions = {}): ImportSession {
   let lanes: LanesReader | null = null;
   let laneStream: CsvRecordStream | null = null;
   let phase: 'depots' | 'lanes' | 'done' = 'depots';
+  let reserved = false;
 
   const check = (file: string, rows: number) => {
     if (options.signal?.aborted) throw new ImportCancelledError(file, rows);
@@ -64,6 +65,7 @@ export function startImport(options: ImportOptions = {}): ImportSession {
           reader.decimalComma = stream.delimiter === ';';
           reader.records(rows, first, bad, text);
         },
+        plainLine: (text, start, end, row, delimiter) => reader.plainLine(text, start, end, row, delimiter),
         issue: (issue) => reader.issue(issue),
       });
       laneStream = stream;
@@ -90,6 +92,11 @@ export function startImport(options: ImportOptions = {}): ImportSession {
       if (phase !== 'lanes') throw new Error('import: lanes are finished');
       check(lanesFile, reader.rows);
       stream.feed(chunk);
+      // Size the lane table once from the share of the file read so far, instead of doubling it.
+      if (!reserved && fraction !== undefined && fraction > 0 && fraction < 1 && reader.rows > 0) {
+        reader.table.reserve(Math.ceil((reader.rows / fraction) * 1.05));
+        reserved = true;
+      }
       progress('lanes', reader.rows, fraction);
     },
     finishLanes() {

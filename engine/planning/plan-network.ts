@@ -2,7 +2,7 @@
 // their validity or of another class are left out, the class's toll applies, blanks are filled from
 // the planning settings (great-circle distance x detour, fuel from consumption and price, drive time).
 
-import { greatCircleKm } from '../geo/turf';
+import { greatCircleOfRow } from './great-circle-cache';
 import { classKey } from '../import/headers';
 import { isoDateText, readIsoDate } from '../import/cells';
 import { PlanRequestError } from '../import/import-errors';
@@ -159,9 +159,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     let distanceKm = t.distanceKm[i];
     const distanceEstimated = Number.isNaN(distanceKm);
     if (distanceEstimated) {
-      const a = depots[from];
-      const b = depots[to];
-      distanceKm = Math.round(greatCircleKm(a.lat, a.lon, b.lat, b.lon) * settings.detourFactor * 10) / 10;
+      distanceKm = Math.round(greatCircleOfRow(t, depots, i) * settings.detourFactor * 10) / 10;
     }
     let driveMinutes = t.driveMinutes[i];
     const driveEstimated = Number.isNaN(driveMinutes);

@@ -5,7 +5,7 @@
 import { MoneyOverflowError } from '../errors';
 import { isoDateText } from '../import/cells';
 import type { DepotRecord, LaneTable } from '../import/types';
-import type { Minor } from '../money/minor';
+import { laneNetMinor, type Minor } from '../money/minor';
 import { depotColumns } from '../network/build';
 import { compressRows } from '../network/compressed-rows';
 import type { Network } from '../network/types';
@@ -39,8 +39,8 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
     laneTo[e] = table.to[r];
     laneFees[e] = table.fees[r];
     laneRebate[e] = table.rebate[r];
-    const net = c.toll[e] + c.fuel[e] + table.fees[r] - table.rebate[r];
-    if (!Number.isSafeInteger(net)) throw new MoneyOverflowError(`net cost of the lane from row ${table.sourceRow[r]}`);
+    const net = laneNetMinor(c.toll[e], c.fuel[e], table.fees[r], table.rebate[r]);
+    if (net === null) throw new MoneyOverflowError(`net cost of the lane from row ${table.sourceRow[r]}`);
     laneNet[e] = net;
     laneRow[e] = table.sourceRow[r];
     laneRef[e] = table.ref[r];

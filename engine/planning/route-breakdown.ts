@@ -1,14 +1,19 @@
 // A route's cost breakdown: tolls, fuel, fees and rebates summed exactly along the lanes used, with
 // distance and drive time, and whether the drive time passes the daily driving limit (an estimate).
 
-import { sumMinor, type Minor } from '../money/minor';
+import { sumMinorOrNull, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 
+/**
+ * The components are shown beside the route's cost, which the solver sums from the lanes' nets. A
+ * component's own sum can leave the exact range while the cost does not (a huge toll cancelled by an
+ * equal rebate); that figure alone is null ("out of range"), the route and its cost stand.
+ */
 export interface RouteBreakdown {
-  toll: Minor;
-  fuel: Minor;
-  fees: Minor;
-  rebate: Minor;
+  toll: Minor | null;
+  fuel: Minor | null;
+  fees: Minor | null;
+  rebate: Minor | null;
   /** Null when a lane on the route has no distance. */
   distanceKm: number | null;
   driveMinutes: number | null;
@@ -28,10 +33,10 @@ export function routeBreakdown(network: Network, lanes: readonly number[], drive
   const distanceKm = Number.isNaN(distance) ? null : Math.round(distance * 1000) / 1000;
   const driveMinutes = Number.isNaN(drive) ? null : Math.round(drive * 100) / 100;
   return {
-    toll: sumMinor(lanes.map((e) => network.laneToll[e]), 'route tolls'),
-    fuel: sumMinor(lanes.map((e) => network.laneFuel[e]), 'route fuel'),
-    fees: sumMinor(lanes.map((e) => network.laneFees[e]), 'route fees'),
-    rebate: sumMinor(lanes.map((e) => network.laneRebate[e]), 'route rebates'),
+    toll: sumMinorOrNull(lanes.map((e) => network.laneToll[e])),
+    fuel: sumMinorOrNull(lanes.map((e) => network.laneFuel[e])),
+    fees: sumMinorOrNull(lanes.map((e) => network.laneFees[e])),
+    rebate: sumMinorOrNull(lanes.map((e) => network.laneRebate[e])),
     distanceKm,
     driveMinutes,
     overDriveLimit: driveLimitMinutes !== null && driveMinutes !== null && driveMinutes > driveLimitMinutes,

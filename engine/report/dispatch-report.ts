@@ -21,7 +21,8 @@ export interface DispatchLoadRow {
   legs: number | null;
   path: string[];
   lanes: number[];
-  breakdown: { toll_minor: number; fuel_minor: number; fees_minor: number; rebate_minor: number; toll: string; fuel: string; fees: string; rebate: string; distance_km: number | null; drive_minutes: number | null } | null;
+  /** A component is null when its own sum is outside the exact range (the load's cost is not). */
+  breakdown: { toll_minor: number | null; fuel_minor: number | null; fees_minor: number | null; rebate_minor: number | null; toll: string | null; fuel: string | null; fees: string | null; rebate: string | null; distance_km: number | null; drive_minutes: number | null } | null;
   over_drive_limit: boolean;
   limits_extra_minor: number | null;
   limits_extra: string | null;
@@ -105,10 +106,10 @@ function loadRow(p: LoadPlan, money: (v: number) => string): DispatchLoadRow {
       fuel_minor: b.fuel,
       fees_minor: b.fees,
       rebate_minor: b.rebate,
-      toll: money(b.toll),
-      fuel: money(b.fuel),
-      fees: money(b.fees),
-      rebate: money(b.rebate),
+      toll: b.toll === null ? null : money(b.toll),
+      fuel: b.fuel === null ? null : money(b.fuel),
+      fees: b.fees === null ? null : money(b.fees),
+      rebate: b.rebate === null ? null : money(b.rebate),
       distance_km: b.distanceKm,
       drive_minutes: b.driveMinutes,
     },

@@ -26,15 +26,16 @@ export interface DepotRouteRow {
   breakdown: RouteBreakdownRow | null;
 }
 
+/** A component is null when its own sum is outside the exact range (the route's cost is not). */
 export interface RouteBreakdownRow {
-  toll: string;
-  fuel: string;
-  fees: string;
-  rebate: string;
-  toll_minor: number;
-  fuel_minor: number;
-  fees_minor: number;
-  rebate_minor: number;
+  toll: string | null;
+  fuel: string | null;
+  fees: string | null;
+  rebate: string | null;
+  toll_minor: number | null;
+  fuel_minor: number | null;
+  fees_minor: number | null;
+  rebate_minor: number | null;
   distance_km: number | null;
   drive_minutes: number | null;
   /** Drive time passes the daily driving limit: an estimate, see `caution`. */
@@ -68,6 +69,7 @@ export interface RoutesReport {
 export function routesReport(network: Network, solved: RouteTree | LegLimitedRoutes, options: RoutesReportOptions = {}): RoutesReport {
   const limit = options.driveLimitMinutes ?? null;
   const money = (v: number) => formatMinor(v as Minor, network.exponent);
+  const part = (v: Minor | null) => (v === null ? null : money(v));
   let over = 0;
   const limited = 'maxLegs' in solved;
   const pathOf = (d: number): RoutePath | null => (limited ? solved.path(d) : routePath(network, solved, d));
@@ -88,10 +90,10 @@ export function routesReport(network: Network, solved: RouteTree | LegLimitedRou
       lanes: path ? path.lanes.map((e) => network.laneRow[e]) : [],
       refs: path ? path.lanes.map((e) => network.laneRef[e] ?? '') : [],
       breakdown: b && {
-        toll: money(b.toll),
-        fuel: money(b.fuel),
-        fees: money(b.fees),
-        rebate: money(b.rebate),
+        toll: part(b.toll),
+        fuel: part(b.fuel),
+        fees: part(b.fees),
+        rebate: part(b.rebate),
         toll_minor: b.toll,
         fuel_minor: b.fuel,
         fees_minor: b.fees,

@@ -5,9 +5,11 @@
 export function readIsoDate(text: string): number | null {
   const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
   if (!m) return null;
-  const year = Number(m[1]);
-  const month = Number(m[2]);
-  const day = Number(m[3]);
+  return isoDateNumber(Number(m[1]), Number(m[2]), Number(m[3]));
+}
+
+/** The date year-month-day as yyyymmdd, or null when no such day exists (Gregorian calendar). */
+export function isoDateNumber(year: number, month: number, day: number): number | null {
   if (month < 1 || month > 12 || day < 1) return null;
   const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
   const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];

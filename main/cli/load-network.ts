@@ -11,20 +11,29 @@ import { drivingLimitOf } from '../../engine/index';
 import type { PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
 import { readTextChunks } from './read-chunks';
+import { printError } from './terminal-text';
 
-/** Boolean flags every command that loads a network accepts; list them among the command's flags. */
-export const LOAD_NETWORK_FLAGS = ['skip-invalid'];
+/** Today's calendar date in the local time zone, as ISO 8601 (YYYY-MM-DD). */
+export function todayIso(now: Date = new Date()): string {
+  return `${now.getFullYear()}-${String(now.getMonth() + 1).padStart(2, '0')}-${String(now.getDate()).padStart(2, '0')}`;
+}
 
-/** Usage text of the options read here, for the help screen. */
-export const LOAD_NETWORK_USAGE =
-  '[--date YYYY-MM-DD] [--vehicle-class C] [--skip-invalid] [--drive-limit eu|us|HOURS] [--detour-factor F]\n' +
-  '    [--fuel-consumption L_PER_100KM] [--fuel-price PRICE] [--average-speed KMH] [--default-toll AMOUNT]\n' +
-  '    [--currency CODE] [--rates CODE=RATE,...]';
+/**
+ * The day every command plans for: --date, or today in the local time zone. Without a date the
+ * planner would mix lanes of every validity window (an expired rebate beside its standard-rate twin),
+ * so there is always one, and `note` says so when the user did not choose it.
+ */
+export function planDateOf(args: ParsedArgs): { date: string; note: string | null } {
+  const given = args.values.get('date');
+  if (given !== undefined) return { date: given, note: null };
+  const date = todayIso(args.now);
+  return { date, note: `note: planning for ${date} (today); --date to choose` };
+}
 
 function positive(args: ParsedArgs, name: string): number | undefined {
   const text = args.values.get(name);
   if (text === undefined) return undefined;
-  if (!/^\d+(\.\d+)?$/.test(text) || Number(text) <= 0) throw new UsageError(`--${name} must be a positive number, got "${text}"`);
+  if (!/^\d+(\.\d+)?$/.test(text) || !(Number(text) > 0) || !Number.isFinite(Number(text))) throw new UsageError(`--${name} must be a positive number, got "${text}"`);
   return Number(text);
 }
 
@@ -60,7 +69,7 @@ export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
       exchangeRates[m[1].toUpperCase()] = m[2];
     }
   }
-  const date = args.values.get('date');
+  const { date } = planDateOf(args);
   const vehicleClass = args.values.get('vehicle-class');
   return {
     depotsFile: args.values.get('depots'),
@@ -93,6 +102,8 @@ export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
  */
 export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult & { network: Network } {
   const result = readImport(args, extra);
+  const { note } = planDateOf(args);
+  if (note !== null) printError(note);
   if (result.network === null) throw new InvalidInputError(result.report);
   const lines = [
     ...result.report.errors.map((e) => formatItem(e, 'error')),
@@ -104,7 +115,7 @@ export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
     for (const f of result.report.files) lines.push(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
     lines.push(`note: --skip-invalid: planning with the ${result.report.accepted} accepted row(s); ${result.report.rejected} rejected`);
   }
-  for (const line of lines) process.stderr.write(line + '\n');
+  for (const line of lines) printError(line);
   return result as ImportResult & { network: Network };
 }
 

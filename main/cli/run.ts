@@ -1,16 +1,20 @@
 // Command dispatch for `lanewright`. Known errors print as one line on stderr with a non-zero exit
 // status; only a genuine bug shows a stack trace.
 
+import { readFileSync } from 'node:fs';
 import { LanewrightError } from '../../engine/index';
-import { parseArgs, UsageError } from './args';
+import { parseCommandLine, UsageError } from './args';
 import { writeFileAtomic } from '../workspace/atomic-write';
-import { LOAD_NETWORK_USAGE } from './load-network';
-import { routesFlags, runRoutes } from './commands/routes';
-import { checkFlags, runCheck } from './commands/check';
-import { exportFlags, runExport } from './commands/export';
-import { auditFlags, runAudit } from './commands/audit';
-import { compareFlags, runCompare } from './commands/compare';
-import { dispatchFlags, runDispatch } from './commands/dispatch';
+import type { CommandSpec } from './options';
+import { commandHelp, overview } from './usage';
+import { closestName } from './closest-name';
+import { forStdout, printError } from './terminal-text';
+import { routesCommand } from './commands/routes';
+import { checkCommand } from './commands/check';
+import { exportCommand } from './commands/export';
+import { auditCommand } from './commands/audit';
+import { compareCommand } from './commands/compare';
+import { dispatchCommand } from './commands/dispatch';
 
 /** Where a command sends its results; --out redirects `write` to a file. */
 export interface CommandOutput {
@@ -25,48 +29,59 @@ export interface CommandOutput {
   timing(figures: Record<string, number>): void;
 }
 
-const USAGE = `usage:
-  lanewright routes --depots FILE --lanes FILE --from DEPOT_ID [--max-legs K] [--json] [--out FILE] [--timings]
-  lanewright check --depots FILE --lanes FILE [--json] [--date D] [--vehicle-class C]
-  lanewright export --depots FILE --lanes FILE [--from DEPOT_ID] [--lanes-out FILE] [--routes-out FILE]
-                    [--loops-out FILE] [--geojson-out FILE]
-  lanewright audit --depots FILE --lanes FILE [--date D] [--vehicle-class C] [--loop-cap N] [--negotiable REF,...]
-                   [--json] [--out FILE] [--loops-csv FILE] [--progress] [--timings]
-  lanewright compare --depots FILE --lanes FILE --scenario FILE --from DEPOT_ID [--date D] [--loop-cap N] [--json] [--out FILE]
-  lanewright dispatch --depots FILE --lanes FILE --loads FILE [--vehicles FILE] [--alternatives K] [--json] [--out FILE] [--timings]
-  Planning options (routes, check, export, audit, compare, dispatch):
-    ${LOAD_NETWORK_USAGE}
+/** Every command, in the order the overview lists them. */
+export const COMMANDS: readonly CommandSpec[] = [routesCommand, checkCommand, exportCommand, auditCommand, compareCommand, dispatchCommand];
 
-Results are cost estimates. Vehicle restrictions (height, weight, hazardous goods), driver hours and
-local regulations apply; defer to local codes and licensed practice.`;
+/** Option name -> the commands that take it, to say where a misplaced option belongs. */
+function optionOwners(): Map<string, string[]> {
+  const owners = new Map<string, string[]>();
+  for (const c of COMMANDS) for (const o of c.options) owners.set(o.name, [...(owners.get(o.name) ?? []), c.name]);
+  return owners;
+}
 
-const COMMANDS: Record<string, { flags: string[]; run: (args: ReturnType<typeof parseArgs>, out: CommandOutput) => number }> = {
-  routes: { flags: routesFlags, run: runRoutes },
-  check: { flags: checkFlags, run: runCheck },
-  export: { flags: exportFlags, run: runExport },
-  audit: { flags: auditFlags, run: runAudit },
-  compare: { flags: compareFlags, run: runCompare },
-  dispatch: { flags: dispatchFlags, run: runDispatch },
-};
+function version(): string {
+  const text = readFileSync(new URL('../../package.json', import.meta.url), 'utf8');
+  return (JSON.parse(text) as { version: string }).version;
+}
+
+function findCommand(word: string): CommandSpec {
+  const command = COMMANDS.find((c) => c.name === word);
+  if (command) return command;
+  const near = closestName(word, COMMANDS.map((c) => c.name));
+  throw new UsageError(`unknown command "${word}"${near ? `; did you mean ${near}?` : ''} (commands: ${COMMANDS.map((c) => c.name).join(', ')})`);
+}
 
 /** Runs the command line; returns the exit status. */
 export async function main(argv: readonly string[]): Promise<number> {
   try {
-    const word = argv.find((a) => !a.startsWith('--'));
-    if (argv.length === 0 || argv.includes('--help') || word === 'help') {
-      process.stdout.write(USAGE + '\n');
-      return argv.length === 0 ? 2 : 0;
+    const [word, ...rest] = argv;
+    if (word === undefined || word === '--help' || word === '-h' || word === 'help') {
+      // `lanewright help routes` is `lanewright routes --help`.
+      if (word === 'help' && rest.length > 0) {
+        process.stdout.write(commandHelp(findCommand(rest[0])));
+        return 0;
+      }
+      process.stdout.write(overview(COMMANDS));
+      return word === undefined ? 2 : 0;
     }
-    const command = word === undefined ? undefined : COMMANDS[word];
-    if (!command) throw new UsageError(`unknown command "${word ?? ''}" (try: ${Object.keys(COMMANDS).join(', ')})`);
-    const args = parseArgs(argv, new Set(command.flags));
+    if (word === '--version') {
+      process.stdout.write(`lanewright ${version()}\n`);
+      return 0;
+    }
+    if (word.startsWith('-')) throw new UsageError(`the command comes first: lanewright COMMAND [options], got "${word}" (commands: ${COMMANDS.map((c) => c.name).join(', ')})`);
+    const command = findCommand(word);
+    const args = parseCommandLine(command.name, rest, command.options, optionOwners());
+    if (args.flags.has('help')) {
+      process.stdout.write(commandHelp(command));
+      return 0;
+    }
     const outPath = args.values.get('out');
     const chunks: string[] = [];
     const files: [path: string, text: string, done?: string][] = [];
     const output: CommandOutput = {
-      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(text)),
+      write: (text) => (outPath ? chunks.push(text) : process.stdout.write(forStdout(text))),
       writeFile: (path, text, done) => files.push([path, text, done]),
-      warn: (line) => process.stderr.write(line + '\n'),
+      warn: printError,
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
     const status = command.run(args, output);
@@ -75,12 +90,12 @@ export async function main(argv: readonly string[]): Promise<number> {
     if (outPath) files.unshift([outPath, chunks.join('')]);
     for (const [path, text, done] of files) {
       await writeFileAtomic(path, text);
-      if (done) process.stdout.write(`wrote ${done}\n`);
+      if (done) process.stdout.write(forStdout(`wrote ${done}\n`));
     }
     return status;
   } catch (error) {
     if (error instanceof LanewrightError) {
-      process.stderr.write(`lanewright: ${error.message}\n`);
+      printError(`lanewright: ${error.message}`);
       return error instanceof UsageError ? 2 : 1;
     }
     throw error;

@@ -15,22 +15,23 @@ export const SAMPLE_ORIGIN = 'RTM';
  *  loop variant shows its loop (the volume refund it needs runs 2026-03-01 to 2026-09-30). */
 export const SAMPLE_DATE = '2026-08-15';
 
-const FILES: Record<string, string> = {
-  'depots.csv': depotsText,
-  'lanes.csv': lanesText,
-  'lanes-rebate-loop.csv': loopLanesText,
-};
+// A Map: a workspace may name "sample:constructor", which must find nothing.
+const FILES = new Map<string, string>([
+  ['depots.csv', depotsText],
+  ['lanes.csv', lanesText],
+  ['lanes-rebate-loop.csv', loopLanesText],
+]);
 
 /** The sample depots and lanes; `loop` picks the variant whose rebates form a loop. */
 export function sampleFiles(loop: boolean): { depots: NamedText; lanes: NamedText } {
   const lanes = loop ? 'lanes-rebate-loop.csv' : 'lanes.csv';
   return {
-    depots: { name: `${SAMPLE_PREFIX}depots.csv`, text: FILES['depots.csv'] },
-    lanes: { name: `${SAMPLE_PREFIX}${lanes}`, text: FILES[lanes] },
+    depots: { name: `${SAMPLE_PREFIX}depots.csv`, text: FILES.get('depots.csv')! },
+    lanes: { name: `${SAMPLE_PREFIX}${lanes}`, text: FILES.get(lanes)! },
   };
 }
 
 /** Text of a bundled file by its workspace path, or undefined when it is not a sample path. */
 export function sampleText(path: string): string | undefined {
-  return path.startsWith(SAMPLE_PREFIX) ? FILES[path.slice(SAMPLE_PREFIX.length)] : undefined;
+  return path.startsWith(SAMPLE_PREFIX) ? FILES.get(path.slice(SAMPLE_PREFIX.length)) : undefined;
 }

@@ -6,12 +6,33 @@ import { auditNetwork } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { wholeNumberOption, type ParsedArgs } from '../args';
-import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
+import { loadNetwork, planDateOf } from '../load-network';
+import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-export const auditFlags = ['json', 'progress', 'timings', ...LOAD_NETWORK_FLAGS];
+export const auditCommand: CommandSpec = {
+  name: 'audit',
+  summary: 'contract review of the whole network: rebate loops, a verified fix plan, rebate headroom per lane',
+  details:
+    'Finds the distinct rebate loops (up to --loop-cap), a set of rebate cuts that removes them all (checked by\n' +
+    'solving again) and how far each lane\'s rebate can grow before a loop appears. Prints one CSV row per lane,\n' +
+    'or one JSON object with --json; --loops-csv also writes one row per lane of each loop.',
+  example: 'lanewright audit --depots sample-data/depots.csv --lanes sample-data/lanes.csv --date 2026-06-01 --negotiable K-2',
+  options: [
+    ...NETWORK_FILES,
+    LOOP_CAP_OPTION,
+    { name: 'negotiable', value: 'REF,...', help: 'contract references or lane keys (FROM>TO|ref|n) whose rebates may change' },
+    { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
+    { name: 'progress', help: 'print progress by phase on stderr' },
+    JSON_OPTION,
+    OUT_OPTION,
+    TIMINGS_OPTION,
+    ...PLANNING_OPTIONS,
+  ],
+  run: runAudit,
+};
 
-export function runAudit(args: ParsedArgs, out: CommandOutput): number {
+function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
@@ -36,7 +57,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(auditLaneRows(network, report)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(auditLaneRows(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 

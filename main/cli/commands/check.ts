@@ -3,18 +3,32 @@
 
 import { formatReport } from '../../../engine/index';
 import type { ParsedArgs } from '../args';
-import { LOAD_NETWORK_FLAGS, readImport } from '../load-network';
+import { planDateOf, readImport } from '../load-network';
+import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-export const checkFlags = ['json', ...LOAD_NETWORK_FLAGS];
+export const checkCommand: CommandSpec = {
+  name: 'check',
+  summary: 'check the depots and lanes files and print every problem by file, row and column',
+  details:
+    'Reads both files and prints each error and warning (file, row, column, value, reason) and the row counts\n' +
+    '(accepted + rejected = total), as lines or one JSON object with --json. Exit status 0 without errors,\n' +
+    '1 with errors (warnings alone do not fail), 2 for a mistake on the command line.',
+  example: 'lanewright check --depots sample-data/depots.csv --lanes sample-data/lanes.csv',
+  options: [...NETWORK_FILES, JSON_OPTION, OUT_OPTION, ...PLANNING_OPTIONS],
+  run: runCheck,
+};
 
-export function runCheck(args: ParsedArgs, out: CommandOutput): number {
+function runCheck(args: ParsedArgs, out: CommandOutput): number {
   // Building the network is not needed to report on the files.
   const result = readImport(args, { skipInvalid: false });
   const { report } = result;
+  const { date, note } = planDateOf(args);
+  if (note !== null) out.warn(note);
   if (args.flags.has('json')) {
     out.write(
       JSON.stringify({
+        date,
         total: report.total,
         accepted: report.accepted,
         rejected: report.rejected,

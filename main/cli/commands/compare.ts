@@ -8,12 +8,31 @@ import { compareReport, compareReportRows } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
-import { loadNetwork, LOAD_NETWORK_FLAGS } from '../load-network';
+import { loadNetwork, planDateOf } from '../load-network';
+import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-export const compareFlags = ['json', ...LOAD_NETWORK_FLAGS];
+export const compareCommand: CommandSpec = {
+  name: 'compare',
+  summary: 'a what-if scenario file against the lanes as they are, from one origin',
+  details:
+    'Applies the scenario\'s changes (amounts, closed or added lanes, validity) and prints each depot\'s cost\n' +
+    'before and after and whether its route changed, as CSV or one JSON object with --json; rebate loops the\n' +
+    'scenario creates or removes are named on stderr. The scenario file is never rewritten.',
+  example: 'lanewright compare --depots sample-data/depots.csv --lanes sample-data/lanes.csv --scenario what-if.json --from RTM --date 2026-06-01',
+  options: [
+    ...NETWORK_FILES,
+    { name: 'scenario', value: 'FILE', help: 'scenario JSON file (lanewright-scenario)', required: true },
+    { name: 'from', value: 'DEPOT_ID', help: 'origin depot', required: true },
+    LOOP_CAP_OPTION,
+    JSON_OPTION,
+    OUT_OPTION,
+    ...PLANNING_OPTIONS,
+  ],
+  run: runCompare,
+};
 
-export function runCompare(args: ParsedArgs, out: CommandOutput): number {
+function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const scenarioPath = required(args, 'scenario');
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
@@ -21,11 +40,11 @@ export function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const network = loadNetwork(args);
 
   const comparison = compareScenario(network, scenario, originId, {
-    date: args.values.get('date') ?? null,
+    date: planDateOf(args).date,
     loopCap,
   });
   const report = compareReport(comparison);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));
 
   for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
   for (const loop of report.loops_appeared) {

@@ -4,19 +4,34 @@
 
 import { planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
-import { importOptionsFromArgs, LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
+import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
+import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { readTextChunks } from '../read-chunks';
 import type { CommandOutput } from '../run';
 
-export const dispatchFlags = ['json', 'timings', ...LOAD_NETWORK_FLAGS];
+export const dispatchCommand: CommandSpec = {
+  name: 'dispatch',
+  summary: 'the day\'s loads, each on its vehicle, over lanes within the vehicle\'s limits',
+  details:
+    'Plans every load (status, cost, what the vehicle\'s limits cost, what blocks it, alternatives) and the\n' +
+    'totals, as one CSV row per load or one JSON object with --json. Loads without a date are planned for\n' +
+    '--date (default today). Input problems stop it unless --skip-invalid.',
+  example: 'lanewright dispatch --depots sample-data/depots.csv --lanes sample-data/lanes.csv --loads sample-data/loads.csv --vehicles sample-data/vehicles.csv --date 2026-06-01',
+  options: [
+    ...NETWORK_FILES,
+    { name: 'loads', value: 'FILE', help: 'loads CSV (load, from, to, date, vehicle, ...)', required: true },
+    { name: 'vehicles', value: 'FILE', help: 'vehicles CSV (vehicle, vehicle_class, height_m, weight_t, ...)' },
+    { name: 'alternatives', value: 'K', help: 'up to K alternative routes per load (at most 20)' },
+    JSON_OPTION,
+    OUT_OPTION,
+    TIMINGS_OPTION,
+    ...PLANNING_OPTIONS,
+  ],
+  run: runDispatch,
+};
 
 /** Most alternatives per load the command computes (each costs up to a few hundred Dijkstra runs). */
 const MAX_ALTERNATIVES = 20;
-
-function todayIso(): string {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
-}
 
 function chunksOf(path: string): Iterable<string> {
   return { [Symbol.iterator]: function* () { for (const c of readTextChunks(path)) yield c.text; } };
@@ -31,7 +46,7 @@ function reportFile(report: ValidationReport, args: ParsedArgs, out: CommandOutp
   if (report.errors.length > 0) for (const f of report.files) out.warn(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
 }
 
-export function runDispatch(args: ParsedArgs, out: CommandOutput): number {
+function runDispatch(args: ParsedArgs, out: CommandOutput): number {
   const loadsPath = required(args, 'loads');
   const vehiclesPath = args.values.get('vehicles');
   const k = wholeNumberOption(args, 'alternatives', 0) ?? 0;
@@ -39,8 +54,8 @@ export function runDispatch(args: ParsedArgs, out: CommandOutput): number {
 
   const start = performance.now();
   const imported = loadImport(args);
-  const date = args.values.get('date') ?? todayIso();
-  if (!args.values.has('date')) out.warn(`note: no --date given: loads without a date are planned for today, ${date}`);
+  // loadImport has printed the note when the date is today's; loads without a date go on this day.
+  const { date } = planDateOf(args);
 
   let vehicles: VehiclesImport | null = null;
   if (vehiclesPath !== undefined) {

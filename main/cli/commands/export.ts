@@ -11,12 +11,31 @@ import { depotIndexOf } from '../../../engine/index';
 import { routesReport, type RoutesReport } from '../../../engine/index';
 import { cheapestRoutes } from '../../../engine/index';
 import { UsageError, type ParsedArgs } from '../args';
-import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
+import { loadImport } from '../load-network';
+import { NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-export const exportFlags = [...LOAD_NETWORK_FLAGS];
+export const exportCommand: CommandSpec = {
+  name: 'export',
+  summary: 'write the lanes, routes and loops as CSV and the network as GeoJSON',
+  details:
+    'Writes each file asked for, atomically (a failed run leaves the old file as it was): the planned lanes CSV,\n' +
+    'the routes from --from as CSV, the rebate loops CSV and a GeoJSON of depots, routes and loops (RFC 7946).\n' +
+    'CSV files are RFC 4180 UTF-8 and read back as the same network.',
+  example: 'lanewright export --depots sample-data/depots.csv --lanes sample-data/lanes.csv --from RTM --date 2026-06-01 --routes-out routes.csv --geojson-out network.geojson',
+  options: [
+    ...NETWORK_FILES,
+    { name: 'from', value: 'DEPOT_ID', help: 'origin of the routes (needed by --routes-out)' },
+    { name: 'lanes-out', value: 'FILE', help: 'write the planned lanes CSV' },
+    { name: 'routes-out', value: 'FILE', help: 'write the routes from --from as CSV' },
+    { name: 'loops-out', value: 'FILE', help: 'write the rebate loops CSV' },
+    { name: 'geojson-out', value: 'FILE', help: 'write depots, routes and loops as GeoJSON' },
+    ...PLANNING_OPTIONS,
+  ],
+  run: runExport,
+};
 
-export function runExport(args: ParsedArgs, out: CommandOutput): number {
+function runExport(args: ParsedArgs, out: CommandOutput): number {
   const lanesOut = args.values.get('lanes-out');
   const routesOut = args.values.get('routes-out');
   const loopsOut = args.values.get('loops-out');

@@ -7,12 +7,31 @@ import { legLimitedRoutes } from '../../../engine/index';
 import { routesReport } from '../../../engine/index';
 import { routesCsv } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { LOAD_NETWORK_FLAGS, loadImport } from '../load-network';
+import { loadImport, planDateOf } from '../load-network';
+import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import type { CommandOutput } from '../run';
 
-export const routesFlags = ['json', 'timings', ...LOAD_NETWORK_FLAGS];
+export const routesCommand: CommandSpec = {
+  name: 'routes',
+  summary: 'cheapest routes from one depot to every other, with each route\'s cost breakdown',
+  details:
+    'Prints one CSV row per depot (status reachable, unreachable or unbounded; cost, legs, path, tolls, fuel,\n' +
+    'fees, rebates, distance, drive time), or one JSON object with --json. Rebate loops that make costs\n' +
+    'unbounded are named on stderr. Exit status 0, 1 for bad input, 2 for a mistake on the command line.',
+  example: 'lanewright routes --depots sample-data/depots.csv --lanes sample-data/lanes.csv --from RTM --date 2026-06-01',
+  options: [
+    ...NETWORK_FILES,
+    { name: 'from', value: 'DEPOT_ID', help: 'origin depot', required: true },
+    { name: 'max-legs', value: 'K', help: 'routes of at most K lanes' },
+    JSON_OPTION,
+    OUT_OPTION,
+    TIMINGS_OPTION,
+    ...PLANNING_OPTIONS,
+  ],
+  run: runRoutes,
+};
 
-export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
+function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const maxLegs = wholeNumberOption(args, 'max-legs', 0);
 
@@ -27,7 +46,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const solveMs = performance.now() - solveStart;
 
   const report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : routesCsv(report));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : routesCsv(report));
   if (args.flags.has('timings')) {
     out.timing({ read_ms: readMs, solve_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
   }

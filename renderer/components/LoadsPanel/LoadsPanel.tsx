@@ -18,6 +18,9 @@ import { applyCsvDialect, PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
 import './loads.css';
 
+/** A component whose own sum is outside the exact range (engine RouteBreakdown); the cost stands. */
+const OUT_OF_RANGE = 'out of range';
+
 export interface LoadsPanelProps {
   engine: Engine;
   host: LanewrightHost;
@@ -233,7 +236,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
               )}
               {current.breakdown && (
                 <p>
-                  Cost {network.currency} {money(current.cost_minor)}: tolls {current.breakdown.toll}, fuel {current.breakdown.fuel}, fees {current.breakdown.fees}, rebates {current.breakdown.rebate}; {current.breakdown.distance_km ?? '—'} km,{' '}
+                  Cost {network.currency} {money(current.cost_minor)}: tolls {current.breakdown.toll ?? OUT_OF_RANGE}, fuel {current.breakdown.fuel ?? OUT_OF_RANGE}, fees {current.breakdown.fees ?? OUT_OF_RANGE}, rebates {current.breakdown.rebate ?? OUT_OF_RANGE}; {current.breakdown.distance_km ?? '—'} km,{' '}
                   {formatDriveMinutes(current.breakdown.drive_minutes ?? NaN)}{current.over_drive_limit ? ' (over the daily driving limit)' : ''}. Route {current.path.join(' › ')} (lane rows {current.lanes.join(', ')}).
                 </p>
               )}

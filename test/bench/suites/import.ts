@@ -19,7 +19,8 @@ function memoryMb(): number {
 const DEPOTS = 2_000;
 const LANES = 1_000_000;
 
-function writeFiles(folder: string): { depots: string; lanes: string } {
+/** Writes the seeded depots and 1,000,000-lane files into `folder` (shared with the check-command suite). */
+export function writeFiles(folder: string): { depots: string; lanes: string } {
   const random = seeded(20260301);
   const depots = join(folder, 'depots.csv');
   const rows = ['id,name,lat,lon'];

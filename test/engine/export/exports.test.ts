@@ -87,7 +87,7 @@ describe('routes and loops CSV', () => {
     for (const c of ['id', 'status', 'cost', 'legs', 'path', 'toll', 'fuel', 'fees', 'rebate', 'distance_km', 'drive_minutes', 'over_drive_limit']) expect(header).toContain(c);
     for (const d of report.depots.filter((x) => x.breakdown)) {
       const b = d.breakdown!;
-      expect(b.toll_minor + b.fuel_minor + b.fees_minor - b.rebate_minor).toBe(d.cost_minor);
+      expect(b.toll_minor! + b.fuel_minor! + b.fees_minor! - b.rebate_minor!).toBe(d.cost_minor);
       expect(b.over_drive_limit).toBe((b.drive_minutes ?? 0) > 540);
     }
     expect(rows).toHaveLength(report.depots.length);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { addMinor, formatMinor, parseMinor, sumMinor, type Minor } from '../../../engine/money/minor';
+import { addMinor, formatMinor, laneNetMinor, parseMinor, sumMinor, sumMinorOrNull, type Minor } from '../../../engine/money/minor';
 import { MoneyFormatError, MoneyOverflowError } from '../../../engine/errors';
 
 describe('parseMinor', () => {
@@ -75,5 +75,28 @@ describe('sums', () => {
     expect(() => addMinor(big, 1 as Minor)).toThrow(MoneyOverflowError);
     expect(() => sumMinor([big, -1, 2])).toThrow(MoneyOverflowError);
     expect(addMinor(big, -1 as Minor)).toBe(Number.MAX_SAFE_INTEGER - 1);
+  });
+});
+
+describe('laneNetMinor and sumMinorOrNull against BigInt', () => {
+  const MAX = Number.MAX_SAFE_INTEGER;
+  const amount = fc.oneof(fc.integer({ min: -1000, max: 1000 }), fc.constantFrom(MAX, -MAX, MAX - 1, MAX - 100), fc.maxSafeInteger().map((v) => v));
+  const exact = (big: bigint) => (big > BigInt(MAX) || big < -BigInt(MAX) ? null : Number(big));
+  it('the net is exact whenever it is in range, and null exactly when it is not', () => {
+    fc.assert(
+      fc.property(amount, amount, amount, amount, (toll, fuel, fees, rebate) => {
+        expect(laneNetMinor(toll, fuel, fees, rebate)).toBe(exact(BigInt(toll) + BigInt(fuel) + BigInt(fees) - BigInt(rebate)));
+      }),
+      { numRuns: 3000 },
+    );
+  });
+  it('a sum is null only when the whole sum is out of range, not a partial one', () => {
+    fc.assert(
+      fc.property(fc.array(amount, { maxLength: 8 }), (values) => {
+        expect(sumMinorOrNull(values)).toBe(exact(values.reduce((s, v) => s + BigInt(v), 0n)));
+      }),
+      { numRuns: 3000 },
+    );
+    expect(sumMinorOrNull([MAX, MAX, -MAX])).toBe(MAX);
   });
 });

@@ -11,7 +11,7 @@ const lanes = ['from,to,toll,fuel,fees,rebate', 'A,B,4.00,5.00,1.00,0', 'B,A,3.0
 describe('lanewright audit', () => {
   it('prints the JSON the contract review asks for, with a verified fix plan and headroom after it', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
-    const { status, stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+    const { status, stdout, stderr } = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
     expect(status).toBe(0);
     const report = JSON.parse(stdout);
     for (const k of ['loops', 'fix_plan', 'headroom', 'headroom_after_fix_plan', 'loop_cap_reached']) expect(report).toHaveProperty(k);
@@ -49,7 +49,7 @@ describe('lanewright audit', () => {
 
   it('a loop-free network: no loops, no plan, headroom on the network as is', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes.replace('20.00', '5.00') });
-    const { stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+    const { stdout, stderr } = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
     const report = JSON.parse(stdout);
     expect([report.loops, report.fix_plan, report.headroom_after_fix_plan]).toEqual([[], [], false]);
     expect(stderr).toBe('');
@@ -60,7 +60,7 @@ describe('lanewright audit', () => {
     // smaller share (2 of 12 on K-1, not 2 of 10 on K-2) is chosen.
     const withRefs = ['from,to,ref,toll,fuel,fees,rebate', 'A,B,K-1,10.00,0,0,12.00', 'B,A,K-2,10.00,0,0,10.00'].join('\n');
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': withRefs });
-    const args = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json'];
+    const args = ['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json'];
     const plain = JSON.parse((await runCli(args)).stdout);
     expect(plain.fix_plan.map((f: { ref: string; new_rebate_minor: number }) => [f.ref, f.new_rebate_minor])).toEqual([['K-1', 1000]]);
     const chosen = JSON.parse((await runCli([...args, '--negotiable', 'K-2'])).stdout);
@@ -73,16 +73,16 @@ describe('lanewright audit', () => {
 
   it('reports progress on stderr with --progress', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
-    const { stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress']);
+    const { stderr } = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress']);
     expect(stderr).toMatch(/audit: headroom 100%/);
   });
 
   it('refuses a bad --loop-cap and a missing file with one line each', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
-    const bad = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--loop-cap', '0']);
+    const bad = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--loop-cap', '0']);
     expect(bad.status).toBe(2);
     expect(bad.stderr.trim().split('\n')).toHaveLength(1);
-    const missing = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'nope.csv')]);
+    const missing = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'nope.csv')]);
     expect(missing.status).toBe(1);
     expect(missing.stderr).toMatch(/nope\.csv/);
     expect(existsSync(join(dir, 'nope.csv'))).toBe(false);

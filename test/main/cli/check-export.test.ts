@@ -21,8 +21,8 @@ const D = 'sample-data/depots.csv';
 
 describe('lanewright check', () => {
   it('exits 0 on the clean sample and 1 on the broken one, with the documented JSON', () => {
-    expect(run('check', '--depots', D, '--lanes', 'sample-data/lanes.csv').status).toBe(0);
-    const bad = run('check', '--depots', D, '--lanes', 'sample-data/broken/lanes-broken.csv', '--json');
+    expect(run('check', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/lanes.csv').status).toBe(0);
+    const bad = run('check', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/broken/lanes-broken.csv', '--json');
     expect(bad.status).toBe(1);
     const report = JSON.parse(bad.stdout);
     for (const key of ['total', 'accepted', 'rejected', 'errors', 'warnings']) expect(report).toHaveProperty(key);
@@ -32,7 +32,7 @@ describe('lanewright check', () => {
     }
     const codes = new Set(report.errors.map((e: { code: string }) => e.code));
     for (const c of ['unknown-depot', 'not-a-number', 'not-finite', 'negative-value', 'bad-date', 'mixed-currency', 'unbalanced-quotes']) expect(codes).toContain(c);
-    const depotErrors = JSON.parse(run('check', '--depots', 'sample-data/broken/depots-broken.csv', '--lanes', 'sample-data/lanes.csv', '--json').stdout);
+    const depotErrors = JSON.parse(run('check', '--date', '2026-06-01', '--depots', 'sample-data/broken/depots-broken.csv', '--lanes', 'sample-data/lanes.csv', '--json').stdout);
     const depotCodes = new Set(depotErrors.errors.map((e: { code: string }) => e.code));
     for (const c of ['latitude-range', 'longitude-range', 'duplicate-depot']) expect(depotCodes).toContain(c);
   });
@@ -40,25 +40,25 @@ describe('lanewright check', () => {
 
 describe('routes with a broken lanes file', () => {
   it('refuses with one line per problem and no stack trace, or plans the accepted rows with --skip-invalid', () => {
-    const refused = run('routes', '--depots', D, '--lanes', 'sample-data/broken/lanes-broken.csv', '--from', 'RTM');
+    const refused = run('routes', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/broken/lanes-broken.csv', '--from', 'RTM');
     expect(refused.status).toBe(1);
     expect(refused.stdout).toBe('');
     expect(refused.stderr).not.toMatch(/^\s+at /m);
     expect(refused.stderr.split('\n').filter((l) => l.startsWith('error: ')).length).toBeGreaterThanOrEqual(10);
-    const skipped = run('routes', '--depots', D, '--lanes', 'sample-data/broken/lanes-broken.csv', '--from', 'RTM', '--skip-invalid');
+    const skipped = run('routes', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/broken/lanes-broken.csv', '--from', 'RTM', '--skip-invalid');
     expect(skipped.status).toBe(0);
     expect(skipped.stdout.split('\r\n')[0]).toMatch(/^id,name,status,cost/);
     expect(skipped.stderr).toMatch(/error: .*row 3/);
   });
 
   it('--vehicle-class and --date change the plan; an unknown class is refused in one line', () => {
-    const five = run('routes', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--vehicle-class', '5axle', '--json');
+    const five = run('routes', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--vehicle-class', '5axle', '--json');
     const two = run('routes', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--vehicle-class', '2axle', '--date', '2026-08-15', '--json');
     expect(five.status).toBe(0);
     expect(two.status).toBe(0);
     const cost = (out: string, id: string) => JSON.parse(out).depots.find((d: { id: string }) => d.id === id).cost_minor;
     expect(cost(two.stdout, 'PAR')).toBeLessThan(cost(five.stdout, 'PAR'));
-    const bad = run('routes', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--vehicle-class', '9axle');
+    const bad = run('routes', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--vehicle-class', '9axle');
     expect(bad.status).toBe(1);
     expect(bad.stderr.trim().split('\n')).toHaveLength(1);
   });
@@ -70,14 +70,14 @@ describe('lanewright export', () => {
     const routes = join(work, 'routes.csv');
     const loops = join(work, 'loops.csv');
     const geo = join(work, 'net.geojson');
-    const result = run('export', '--depots', D, '--lanes', 'sample-data/lanes-rebate-loop.csv', '--from', 'RTM', '--lanes-out', lanes, '--routes-out', routes, '--loops-out', loops, '--geojson-out', geo);
+    const result = run('export', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/lanes-rebate-loop.csv', '--from', 'RTM', '--lanes-out', lanes, '--routes-out', routes, '--loops-out', loops, '--geojson-out', geo);
     expect(result.status, result.stderr).toBe(0);
     for (const f of [lanes, routes, loops, geo]) expect(existsSync(f)).toBe(true);
     expect(JSON.parse(readFileSync(geo, 'utf8')).type).toBe('FeatureCollection');
     expect(readFileSync(loops, 'utf8')).toMatch(/FRA,SXB,20/);
     expect(result.stderr).toMatch(/rebate loop/i);
     // The exported lanes re-import cleanly.
-    expect(run('check', '--depots', D, '--lanes', lanes).status).toBe(0);
-    expect(run('export', '--depots', D, '--lanes', 'sample-data/lanes.csv').status).toBe(2);
+    expect(run('check', '--date', '2026-06-01', '--depots', D, '--lanes', lanes).status).toBe(0);
+    expect(run('export', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/lanes.csv').status).toBe(2);
   });
 });

@@ -20,7 +20,7 @@ const scenario = JSON.stringify({
 describe('lanewright compare', () => {
   it('prints per-depot changes, changed routes, appearing loops and problems', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes, 'what-if.json': scenario });
-    const args = ['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'A'];
+    const args = ['compare', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'A'];
     const { status, stdout, stderr } = await runCli([...args, '--json']);
     expect(status).toBe(0);
     const report = JSON.parse(stdout);
@@ -44,7 +44,7 @@ describe('lanewright compare', () => {
   it('names the scenario file and field when the scenario is malformed', async () => {
     const broken = scenario.replace('"amountMinor":2000', '"amountMinor":"20.00"');
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes, 'what-if.json': broken });
-    const { status, stderr } = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'A']);
+    const { status, stderr } = await runCli(['compare', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'A']);
     expect(status).toBe(1);
     expect(stderr).toMatch(/what-if\.json/);
     expect(stderr).toMatch(/changes\[0\]\.amountMinor/);
@@ -52,10 +52,10 @@ describe('lanewright compare', () => {
 
   it('refuses an unknown origin and a missing --scenario', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes, 'what-if.json': scenario });
-    const unknown = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'ZZ']);
+    const unknown = await runCli(['compare', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, 'what-if.json'), '--from', 'ZZ']);
     expect(unknown.status).toBe(1);
     expect(unknown.stderr).toMatch(/ZZ/);
-    const missing = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--from', 'A']);
+    const missing = await runCli(['compare', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--from', 'A']);
     expect(missing.status).toBe(2);
   });
 });

@@ -34,8 +34,8 @@ const messy = file('messy.csv', '\ufeffOrigin;Destination;Toll;Fuel;Fees;Rebate;
 
 describe('routes with the importer', () => {
   it('a messy export gives the same routes as its clean twin', () => {
-    const a = run('routes', '--depots', depots, '--lanes', clean, '--from', 'A');
-    const b = run('routes', '--depots', depots, '--lanes', messy, '--from', 'A');
+    const a = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', clean, '--from', 'A');
+    const b = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', messy, '--from', 'A');
     expect(a.status, a.stderr).toBe(0);
     expect(b.stdout).toBe(a.stdout);
     const c = rows(a.stdout).find((r) => r.id === 'C')!;
@@ -45,16 +45,16 @@ describe('routes with the importer', () => {
 
   it('--out writes the routes CSV; --drive-limit changes the flag', () => {
     const out = join(work, 'routes.csv');
-    expect(run('routes', '--depots', depots, '--lanes', clean, '--from', 'A', '--out', out, '--drive-limit', '3').status).toBe(0);
+    expect(run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', clean, '--from', 'A', '--out', out, '--drive-limit', '3').status).toBe(0);
     const c = rows(readFileSync(out, 'utf8')).find((r) => r.id === 'C')!;
     expect(c.over_drive_limit).toBe('yes');
-    const bad = run('routes', '--depots', depots, '--lanes', clean, '--from', 'A', '--drive-limit', 'moon');
+    const bad = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', clean, '--from', 'A', '--drive-limit', 'moon');
     expect(bad.status).toBe(2);
   });
 
   it('names a Latin-1 file instead of reading it wrongly', () => {
     const latin1 = file('latin1.csv', Buffer.from('id,name,lat,lon\nA,K\xf6ln,50.9,6.9\n', 'latin1'));
-    const result = run('check', '--depots', latin1, '--lanes', clean, '--json');
+    const result = run('check', '--date', '2026-06-01', '--depots', latin1, '--lanes', clean, '--json');
     expect(result.status).toBe(1);
     expect(JSON.parse(result.stdout).errors[0]).toMatchObject({ row: 2, column: 'name' });
   });
@@ -63,12 +63,12 @@ describe('routes with the importer', () => {
 describe('currency options', () => {
   it('--rates converts a second currency; --currency must be a supported ISO 4217 code', () => {
     const mixed = file('mixed.csv', 'from,to,toll,currency\nA,B,10.00,EUR\nB,C,10.00,USD\n');
-    expect(run('routes', '--depots', depots, '--lanes', mixed, '--from', 'A').status).toBe(1);
-    const converted = run('routes', '--depots', depots, '--lanes', mixed, '--from', 'A', '--rates', 'USD=0.9', '--json', '--fuel-price', '0');
+    expect(run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', mixed, '--from', 'A').status).toBe(1);
+    const converted = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', mixed, '--from', 'A', '--rates', 'USD=0.9', '--json', '--fuel-price', '0');
     expect(converted.status, converted.stderr).toBe(0);
     // 10.00 EUR + 10.00 USD x 0.9 = 19.00 EUR (fuel priced at 0 so only tolls count).
     expect(JSON.parse(converted.stdout).depots.find((d: { id: string }) => d.id === 'C').cost).toBe('19.00');
-    const bad = run('check', '--depots', depots, '--lanes', clean, '--currency', 'ABC');
+    const bad = run('check', '--date', '2026-06-01', '--depots', depots, '--lanes', clean, '--currency', 'ABC');
     expect(bad.status).toBe(1);
     expect(bad.stderr.trim().split('\n')).toHaveLength(1);
   });

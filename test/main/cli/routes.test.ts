@@ -47,7 +47,7 @@ const lanes = file('lanes.csv', 'from,to,toll,fuel,fees,rebate\nA,B,2.00,7.00,1.
 
 describe('lanewright routes', () => {
   it('prints CSV by default: one row per depot with id, name, status, cost, legs and path', () => {
-    const result = run('routes', '--depots', 'sample-data/depots.csv', '--lanes', 'sample-data/lanes.csv', '--from', 'RTM');
+    const result = run('routes', '--date', '2026-06-01', '--depots', 'sample-data/depots.csv', '--lanes', 'sample-data/lanes.csv', '--from', 'RTM');
     expect(result.status).toBe(0);
     const rows = csvObjects(result.stdout);
     const sampleDepots = csvObjects(readFileSync(join(root, 'sample-data/depots.csv'), 'utf8'));
@@ -60,7 +60,7 @@ describe('lanewright routes', () => {
   });
 
   it('--json prints one object with depots and loops in the documented shape', () => {
-    const result = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--json');
+    const result = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--json');
     expect(result.status).toBe(0);
     expect(result.stdout.trim().split('\n')).toHaveLength(1);
     const report = JSON.parse(result.stdout);
@@ -79,7 +79,7 @@ describe('lanewright routes', () => {
   });
 
   it('--json reports rebate loops and unbounded depots, and warns on stderr', () => {
-    const result = run('routes', '--depots', 'sample-data/depots.csv', '--lanes', 'sample-data/lanes-rebate-loop.csv', '--from', 'RTM', '--json');
+    const result = run('routes', '--date', '2026-06-01', '--depots', 'sample-data/depots.csv', '--lanes', 'sample-data/lanes-rebate-loop.csv', '--from', 'RTM', '--json');
     expect(result.status).toBe(0);
     const report = JSON.parse(result.stdout);
     expect(report.loops.length).toBeGreaterThan(0);
@@ -96,7 +96,7 @@ describe('lanewright routes', () => {
 
   it('--out writes the output to a file instead of stdout', () => {
     const out = join(work, 'routes-out.csv');
-    const result = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--out', out);
+    const result = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--out', out);
     expect(result.status).toBe(0);
     expect(result.stdout).toBe('');
     expect(existsSync(out)).toBe(true);
@@ -107,13 +107,13 @@ describe('lanewright routes', () => {
     const folder = mkdtempSync(join(work, 'out-'));
     const blocked = join(folder, 'routes.csv');
     mkdirSync(blocked); // a folder where the file should go: the final rename fails
-    const result = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--out', blocked);
+    const result = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--out', blocked);
     expectOneLineError(result, blocked);
     expect(readdirSync(folder)).toEqual(['routes.csv']);
   });
 
   it('--timings prints one JSON line on stderr with read_ms and solve_ms', () => {
-    const result = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--timings');
+    const result = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--timings');
     expect(result.status).toBe(0);
     const lines = result.stderr.trim().split('\n').filter((line) => line.startsWith('{'));
     expect(lines).toHaveLength(1);
@@ -124,7 +124,7 @@ describe('lanewright routes', () => {
   });
 
   it('--max-legs gives the cheapest cost within the limit', () => {
-    const result = run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--max-legs', '1', '--json');
+    const result = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--max-legs', '1', '--json');
     expect(result.status).toBe(0);
     const report = JSON.parse(result.stdout);
     const c = report.depots.find((d: { id: string }) => d.id === 'C');
@@ -132,23 +132,23 @@ describe('lanewright routes', () => {
   });
 
   it('an unknown origin is one line on stderr naming it, non-zero exit', () => {
-    expectOneLineError(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'NOWHERE'), 'NOWHERE');
+    expectOneLineError(run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'NOWHERE'), 'NOWHERE');
   });
 
   it('a missing file is one line on stderr naming the file, non-zero exit', () => {
     const missing = join(work, 'no-such-lanes.csv');
-    expectOneLineError(run('routes', '--depots', depots, '--lanes', missing, '--from', 'A'), missing);
+    expectOneLineError(run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', missing, '--from', 'A'), missing);
   });
 
   it('a folder given as a file is one line on stderr naming it, non-zero exit', () => {
-    expectOneLineError(run('routes', '--depots', work, '--lanes', lanes, '--from', 'A'), work);
+    expectOneLineError(run('routes', '--date', '2026-06-01', '--depots', work, '--lanes', lanes, '--from', 'A'), work);
   });
 
   it('an unreadable CSV is refused with the file and row named, non-zero exit, no stack trace', () => {
     // The importer lists every bad row and the accepted/rejected counts, so this may be more than
     // one line; the line naming the problem must name the file and the row.
     const broken = file('broken.csv', 'from,to,toll\nA,"B,1.00\nB,C,2.00\n');
-    const result = run('routes', '--depots', depots, '--lanes', broken, '--from', 'A');
+    const result = run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', broken, '--from', 'A');
     expect(result.status).not.toBe(0);
     expect(result.stdout).toBe('');
     expect(result.stderr).not.toMatch(/^\s+at /m);
@@ -166,6 +166,6 @@ describe('lanewright routes', () => {
   });
 
   it('a bad --max-legs is refused in one line', () => {
-    expectOneLineError(run('routes', '--depots', depots, '--lanes', lanes, '--from', 'A', '--max-legs', 'two'), 'max-legs');
+    expectOneLineError(run('routes', '--date', '2026-06-01', '--depots', depots, '--lanes', lanes, '--from', 'A', '--max-legs', 'two'), 'max-legs');
   });
 });
