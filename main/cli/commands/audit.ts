@@ -7,7 +7,8 @@ import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index
 import { formatCsvRows } from '../../../engine/index';
 import { wholeNumberOption, type ParsedArgs } from '../args';
 import { loadNetwork, planDateOf } from '../load-network';
-import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const auditCommand: CommandSpec = {
@@ -25,6 +26,7 @@ export const auditCommand: CommandSpec = {
     { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
     { name: 'progress', help: 'print progress by phase on stderr' },
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
@@ -36,6 +38,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
+  csvDialectOption(args);
 
   const readStart = performance.now();
   const network = loadNetwork(args);
@@ -57,8 +60,8 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(auditLaneRows(network, report)));
-  if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
+  if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 
   if (report.loops.length > 0) {

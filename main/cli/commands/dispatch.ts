@@ -5,7 +5,8 @@
 import { planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
-import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { inCsvDialect } from '../csv-dialect-option';
 import { readTextChunks } from '../read-chunks';
 import type { CommandOutput } from '../run';
 
@@ -23,6 +24,7 @@ export const dispatchCommand: CommandSpec = {
     { name: 'vehicles', value: 'FILE', help: 'vehicles CSV (vehicle, vehicle_class, height_m, weight_t, ...)' },
     { name: 'alternatives', value: 'K', help: 'up to K alternative routes per load (at most 20)' },
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
@@ -84,7 +86,7 @@ function runDispatch(args: ParsedArgs, out: CommandOutput): number {
   });
   const solveMs = performance.now() - solveStart;
   const report = dispatchReport(plan);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : dispatchCsv(report));
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : inCsvDialect(args, dispatchCsv(report)));
   for (const w of report.warnings) out.warn(`warning: ${w}`);
   for (const n of report.notes) out.warn(`note: ${n}`);
   const t = report.totals.all;

@@ -12,7 +12,8 @@ import { routesReport, type RoutesReport } from '../../../engine/index';
 import { cheapestRoutes } from '../../../engine/index';
 import { UsageError, type ParsedArgs } from '../args';
 import { loadImport } from '../load-network';
-import { NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
+import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const exportCommand: CommandSpec = {
@@ -30,6 +31,7 @@ export const exportCommand: CommandSpec = {
     { name: 'routes-out', value: 'FILE', help: 'write the routes from --from as CSV' },
     { name: 'loops-out', value: 'FILE', help: 'write the rebate loops CSV' },
     { name: 'geojson-out', value: 'FILE', help: 'write depots, routes and loops as GeoJSON' },
+    CSV_DIALECT_OPTION,
     ...PLANNING_OPTIONS,
   ],
   run: runExport,
@@ -54,9 +56,9 @@ function runExport(args: ParsedArgs, out: CommandOutput): number {
     report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
   }
   const loops = findDistinctLoops(network).loops;
-  if (lanesOut) out.writeFile(lanesOut, lanesCsv(imported, loops), `lanes: ${lanesOut} (${network.laneCount} lane(s))`);
-  if (routesOut && report) out.writeFile(routesOut, routesCsv(report), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
-  if (loopsOut) out.writeFile(loopsOut, loopsCsv(network, loops), `loops: ${loopsOut} (${loops.length} loop(s))`);
+  if (lanesOut) out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(imported, loops)), `lanes: ${lanesOut} (${network.laneCount} lane(s))`);
+  if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
   return 0;

@@ -8,7 +8,8 @@ import { routesReport } from '../../../engine/index';
 import { routesCsv } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport, planDateOf } from '../load-network';
-import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const routesCommand: CommandSpec = {
@@ -24,6 +25,7 @@ export const routesCommand: CommandSpec = {
     { name: 'from', value: 'DEPOT_ID', help: 'origin depot', required: true },
     { name: 'max-legs', value: 'K', help: 'routes of at most K lanes' },
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
@@ -34,6 +36,7 @@ export const routesCommand: CommandSpec = {
 function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const maxLegs = wholeNumberOption(args, 'max-legs', 0);
+  csvDialectOption(args); // a wrong name is refused before any file is read
 
   const readStart = performance.now();
   const imported = loadImport(args);
@@ -46,7 +49,7 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const solveMs = performance.now() - solveStart;
 
   const report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : routesCsv(report));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, routesCsv(report)));
   if (args.flags.has('timings')) {
     out.timing({ read_ms: readMs, solve_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
   }
