@@ -2,7 +2,7 @@
 // null = the default. `readPlanningChoices` turns them into the importer's settings, currency and
 // exchange rates, and lists every value it cannot use with the reason, so the panel can mark it.
 
-import { drivingLimitOf } from './settings';
+import { DEFAULT_PLANNING_SETTINGS, drivingLimitOf, PLANNING_DEFAULT_SOURCES } from './settings';
 import type { PlanningSettings } from './types';
 
 export interface PlanningChoices {
@@ -113,3 +113,15 @@ export function samePlanningChoices(a: PlanningChoices | undefined, b: PlanningC
   const y = b ?? EMPTY_PLANNING_CHOICES;
   return PLANNING_CHOICE_FIELDS.every((f) => (x[f] ?? null) === (y[f] ?? null));
 }
+
+/** Each choice's default as shown beside its field, and where that default comes from. */
+export const PLANNING_CHOICE_DEFAULTS: Readonly<Record<keyof PlanningChoices, { value: string; source: string }>> = {
+  fuelPrice: { value: `${DEFAULT_PLANNING_SETTINGS.fuelPriceCurrency} ${DEFAULT_PLANNING_SETTINGS.fuelPricePerLitre}/l`, source: PLANNING_DEFAULT_SOURCES.fuelPricePerLitre },
+  fuelConsumption: { value: `${DEFAULT_PLANNING_SETTINGS.fuelLitresPer100Km} l/100 km`, source: PLANNING_DEFAULT_SOURCES.fuelLitresPer100Km },
+  drivingLimit: { value: `${DEFAULT_PLANNING_SETTINGS.drivingLimit.rule.toUpperCase()}, ${DEFAULT_PLANNING_SETTINGS.drivingLimit.dailyDrivingMinutes / 60} h a day`, source: PLANNING_DEFAULT_SOURCES.drivingLimit },
+  detourFactor: { value: String(DEFAULT_PLANNING_SETTINGS.detourFactor), source: PLANNING_DEFAULT_SOURCES.detourFactor },
+  averageSpeed: { value: `${DEFAULT_PLANNING_SETTINGS.averageSpeedKmh} km/h`, source: PLANNING_DEFAULT_SOURCES.averageSpeedKmh },
+  defaultToll: { value: 'none', source: PLANNING_DEFAULT_SOURCES.defaultToll },
+  currency: { value: "the lanes file's", source: "The lanes file's currency column (ISO 4217); one currency per network unless exchange rates convert the others." },
+  exchangeRates: { value: 'none', source: 'None: a lane in another currency than the network\'s is an error unless its rate is given (1 unit = RATE of the network currency).' },
+};

@@ -1,7 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { CsvDialect, EstimateRules } from '../../engine/index';
+import type { CsvDialect, EstimateRules, PlanningChoices } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 
@@ -42,6 +42,8 @@ export interface ImportReport {
 export interface PlanChoice {
   date: string;
   vehicleClass: string;
+  /** The planning settings panel's choices; absent = every default. */
+  planning?: PlanningChoices;
 }
 
 /** The network as the UI draws and edits it; one entry per depot / lane, lanes in input order. */
@@ -76,6 +78,8 @@ export interface PlanSettings {
   vehicleClass: string;
   /** ISO 8601 date (YYYY-MM-DD). */
   dispatchDate: string;
+  /** Planning settings (fuel, speed, driving limit, currency, ...); absent = every default. */
+  planning?: PlanningChoices;
 }
 
 export interface LoopView {

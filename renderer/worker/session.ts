@@ -9,9 +9,9 @@ import { laneKeyIndex, laneKeysOf, type LaneKey } from '../../engine/index';
 import { applyScenario } from '../../engine/index';
 import { hasChanges, needsRebuild, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
-import { importTexts, replanImport, reportOf } from './import-texts';
+import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
 import { networkView, transferablesOf } from './network-view';
-import type { FromWorker, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
+import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
@@ -34,6 +34,8 @@ export class WorkerSession {
   private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
   /** Names of the files the network was read from (depots, lanes), for the exports' settings. */
   private files: string[] = [];
+  /** The texts of the last accepted import: a new currency or rates means reading them again. */
+  private texts: { depots: NamedText; lanes: NamedText } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
 
   constructor(private readonly post: Post) {}
@@ -117,13 +119,15 @@ export class WorkerSession {
     }
     progress('Compiling the network', 0.95);
     this.files = [message.depots.name, message.lanes.name];
+    this.texts = { depots: message.depots, lanes: message.lanes };
     this.adopt(message.id, result, message.plan);
   }
 
   private replan(id: number, plan: PlanChoice): void {
     if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
     this.post({ kind: 'progress', id, phase: 'Planning for the day and vehicle class', fraction: 0.2 });
-    const result = replanImport(this.imported, plan);
+    const reread = this.texts !== null && currencyKey(plan) !== currencyKey(this.plan);
+    const result = reread ? importTexts(this.texts!.depots, this.texts!.lanes, plan) : replanImport(this.imported, plan);
     if (!result.network) {
       this.post({ kind: 'loaded', id, network: null, report: reportOf(result) });
       return;

@@ -121,6 +121,31 @@ describe('worker exports', () => {
   });
 });
 
+describe('planning settings', () => {
+  it('re-plans with a fuel price, and reads the files again for exchange rates', () => {
+    const planning = { fuelPrice: '2.00', fuelConsumption: null, drivingLimit: null, detourFactor: null, averageSpeed: null, defaultToll: null, currency: null, exchangeRates: null };
+    const out = drive([load('lanes.csv'), { kind: 'replan', id: 2, plan: { date: DATE, vehicleClass: '', planning } }]);
+    const before = (out[0] as { network: NetworkView }).network;
+    const after = (out[1] as { network: NetworkView }).network;
+    const engine = importNetwork(text('depots.csv'), text('lanes.csv'), { plan: { date: DATE, settings: { fuelPricePerLitre: '2.00' } } }).network!;
+    expect(Array.from(after.laneFuel)).toEqual(Array.from(engine.laneFuel));
+    expect(Array.from(after.laneFuel)).not.toEqual(Array.from(before.laneFuel));
+    expect(after.plan.planning).toEqual(planning);
+
+    // A USD lane is refused without a rate; with one the files are read again and it is converted.
+    const depots = 'id,name,lat,lon\nA,a,50,4\nB,b,51,5\n';
+    const lanes = 'from,to,toll,fuel,fees,rebate,currency\nA,B,10.00,0,0,0,EUR\nB,A,10.00,0,0,0,USD\n';
+    const usd = drive([
+      { kind: 'load', id: 1, depots: { name: 'd.csv', text: depots }, lanes: { name: 'l.csv', text: lanes }, acceptPartial: true, plan: { date: DATE, vehicleClass: '' } },
+      { kind: 'replan', id: 2, plan: { date: DATE, vehicleClass: '', planning: { ...planning, fuelPrice: null, exchangeRates: 'USD=0.50' } } },
+    ]);
+    expect((usd[0] as { network: NetworkView }).network.laneFrom.length).toBe(1);
+    const converted = (usd[1] as { network: NetworkView }).network;
+    expect(converted.laneFrom.length).toBe(2);
+    expect(Array.from(converted.laneToll)).toEqual([1000, 500]);
+  });
+});
+
 describe('export names, dialect and settings', () => {
   it('names files by kind, origin, date and class, writes the chosen CSV dialect and puts the settings in the GeoJSON', () => {
     const twoAxle = { ...load('lanes.csv'), plan: { date: DATE, vehicleClass: '2axle' } } as ToWorker;
