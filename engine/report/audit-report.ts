@@ -2,6 +2,7 @@
 // plus lane details), and its two flat tables for spreadsheets: one row per lane, one row per lane
 // of each loop. Rows are source rows of the lanes file (header = row 1).
 
+import { REVIEW_CAUTION } from '../text/cautions';
 import type { NetworkAudit } from '../audit/network-audit';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
@@ -68,6 +69,8 @@ export interface AuditReport {
   headroom: HeadroomRow[];
   headroom_after_fix_plan: boolean;
   loop_cap_reached: boolean;
+  /** Always REVIEW_CAUTION: the review's figures are estimates. */
+  caution: string;
 }
 
 /** Builds the report object. */
@@ -111,6 +114,7 @@ export function auditReport(network: Network, audit: NetworkAudit): AuditReport 
     headroom: audit.headroom ? headroomRows(network, audit.headroom.floor, audit.headroom.net, end, ref) : [],
     headroom_after_fix_plan: audit.headroomAfterFixPlan,
     loop_cap_reached: audit.loopCapReached,
+    caution: REVIEW_CAUTION,
   };
 }
 

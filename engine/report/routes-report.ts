@@ -6,6 +6,7 @@ import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 import { routeBreakdown } from '../planning/route-breakdown';
 import { DRIVING_LIMIT_CAUTION } from '../planning/settings';
+import { ROUTE_CAUTION } from '../text/cautions';
 import { statusName, STATUS_REACHABLE, type DepotStatus, type RouteTree } from '../routes/cheapest-routes';
 import type { LegLimitedRoutes } from '../routes/leg-limited';
 import { routePath, type RoutePath } from '../routes/route-path';
@@ -62,7 +63,9 @@ export interface RoutesReport {
   drive_limit_minutes: number | null;
   /** Routes over the driving limit, and the caution that goes with the flag (null when none is over). */
   over_drive_limit: number;
-  caution: string | null;
+  drive_limit_caution: string | null;
+  /** Always the route caution (estimates; restrictions, hours and regulations apply), never null. */
+  caution: string;
 }
 
 /** Builds the report from an unlimited or a leg-limited solve. */
@@ -116,7 +119,8 @@ export function routesReport(network: Network, solved: RouteTree | LegLimitedRou
     })),
     drive_limit_minutes: limit,
     over_drive_limit: over,
-    caution: over > 0 ? DRIVING_LIMIT_CAUTION : null,
+    drive_limit_caution: over > 0 ? DRIVING_LIMIT_CAUTION : null,
+    caution: ROUTE_CAUTION,
   };
 }
 

@@ -25,6 +25,8 @@ export interface CommandOutput {
    */
   writeFile(path: string, text: string, done?: string): void;
   warn(line: string): void;
+  /** Printed on stderr after the output is written (the caution that goes with it); never with a failure. */
+  afterOutput(line: string): void;
   /** Prints figures as one JSON line; times are rounded to 0.01 ms here, once for every command. */
   timing(figures: Record<string, number>): void;
 }
@@ -78,10 +80,12 @@ export async function main(argv: readonly string[]): Promise<number> {
     const outPath = args.values.get('out');
     const chunks: string[] = [];
     const files: [path: string, text: string, done?: string][] = [];
+    const after: string[] = [];
     const output: CommandOutput = {
       write: (text) => (outPath ? chunks.push(text) : process.stdout.write(forStdout(text))),
       writeFile: (path, text, done) => files.push([path, text, done]),
       warn: printError,
+      afterOutput: (line) => after.push(line),
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
     const status = command.run(args, output);
@@ -92,6 +96,7 @@ export async function main(argv: readonly string[]): Promise<number> {
       await writeFileAtomic(path, text);
       if (done) process.stdout.write(forStdout(`wrote ${done}\n`));
     }
+    for (const line of after) printError(line);
     return status;
   } catch (error) {
     if (error instanceof LanewrightError) {

@@ -58,6 +58,7 @@ function runExport(args: ParsedArgs, out: CommandOutput): number {
   const loops = findDistinctLoops(network).loops;
   if (lanesOut) out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(imported, loops)), `lanes: ${lanesOut} (${network.laneCount} lane(s))`);
   if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  if ((routesOut || lanesOut || geojsonOut) && report) out.afterOutput(`CAUTION: ${report.caution}`);
   if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);

@@ -55,8 +55,10 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   }
   if (report.over_drive_limit > 0) {
     const limit = imported.plan.settings.drivingLimit;
-    out.warn(`CAUTION: ${report.over_drive_limit} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.caution}`);
+    out.warn(`CAUTION: ${report.over_drive_limit} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.drive_limit_caution}`);
   }
+  // The CSV's companion text: the caution goes with every output, on stderr beside the CSV.
+  out.afterOutput(`CAUTION: ${report.caution}`);
   if (report.loops.length > 0) {
     out.warn(`WARNING: ${report.loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
   }

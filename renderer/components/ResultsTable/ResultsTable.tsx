@@ -4,6 +4,7 @@
 // Long tables are windowed: only rows near the view are in the DOM.
 
 import { useEffect, useMemo, useRef, useState } from 'react';
+import { CautionLine } from '../CautionLine/CautionLine';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { ALL_FLAG_LABELS, flagExplanations } from '../../model/flags';
@@ -90,6 +91,7 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
           Export routes CSV
         </button>
       </div>
+      <CautionLine testId="results-caution" />
       <table className="lw-table" aria-label={`Routes from ${network.depotIds[solve.origin]}`} aria-rowcount={visible.length + 1} data-testid="results-table">
         <thead>
           <tr aria-rowindex={1}>

@@ -1,6 +1,7 @@
 // What the active scenario moved: its changes lane by lane, then every depot whose status or cost
 // differs from the base contract, largest change first. Each change can be undone on its own.
 
+import { CautionLine } from '../CautionLine/CautionLine';
 import { useMemo } from 'react';
 import { withoutChange } from '../../../engine/index';
 import { laneKeyText } from '../../../engine/index';
@@ -61,6 +62,7 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
   };
   return (
     <div className="lw-compare" data-testid="scenario-compare">
+      <CautionLine testId="compare-caution" />
       <h3>Changes in “{scenario.name}”</h3>
       <ul>
         {scenario.changes.map((c, i) => (

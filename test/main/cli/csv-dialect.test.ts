@@ -47,4 +47,15 @@ describe('--csv-dialect', () => {
     expect(plain.stdout.charCodeAt(0)).not.toBe(0xfeff);
     expect(plain.stdout).toContain('43.65');
   });
+
+  it('prints the caution beside every routes CSV on stderr, and puts it in the JSON even with a rebate loop', async () => {
+    const plain = await runCli(['routes', ...base, '--from', 'AAC']);
+    expect(plain.stderr).toMatch(/^CAUTION: Cost estimate only\./m);
+    const loopLanes = 'from,to,toll,fuel,fees,rebate,currency\nLGG,AAC,1.00,0,0,5.00,EUR\nAAC,LGG,1.00,0,0,0,EUR\n';
+    const loopDir = tempFiles({ 'depots.csv': depots, 'lanes.csv': loopLanes });
+    const json = await runCli(['routes', '--depots', join(loopDir, 'depots.csv'), '--lanes', join(loopDir, 'lanes.csv'), '--date', '2026-08-15', '--from', 'AAC', '--json']);
+    const report = JSON.parse(json.stdout) as { loops: unknown[]; caution: string | null };
+    expect(report.loops.length).toBeGreaterThan(0);
+    expect(report.caution).toMatch(/estimate/i);
+  });
 });
