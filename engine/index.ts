@@ -2,6 +2,7 @@
 
 export * from './errors';
 export * from './money/minor';
+export * from './money/net-cost';
 export * from './network/types';
 export * from './network/build';
 export * from './routes/label-correcting';
@@ -23,10 +24,15 @@ export * from './audit/headroom';
 export * from './audit/network-audit';
 export * from './report/audit-report';
 export * from './import/lane-key';
+export { isoDateText } from './import/cells';
+export { readEnteredAmount } from './import/amount-text';
 export * from './scenario/types';
 export * from './scenario/edit';
 export * from './scenario/document';
 export * from './scenario/apply';
+export * from './scenario/overlay';
+export * from './scenario/overlay-network';
+export * from './scenario/overlay-rows';
 export * from './scenario/compare';
 export * from './report/compare-report';
 export * from './import/types';

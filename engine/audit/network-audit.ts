@@ -3,7 +3,7 @@
 // plan, and rebate headroom for every lane (on the fixed network when there were loops).
 
 import type { Network } from '../network/types';
-import { laneKeysOf, laneKeyText } from '../import/lane-key';
+import { laneKeysOf, laneKeyText, type LaneKey } from '../import/lane-key';
 import { findDistinctLoops } from './distinct-loops';
 import { buildFixPlan, type FixPlan } from './fix-plan';
 import { laneFloors, type LaneFloors } from './headroom';
@@ -18,6 +18,11 @@ export interface AuditOptions {
   loopCap?: number;
   /** Contract references or lane key texts ("FROM>TO|ref|n") the user marks as negotiable. */
   negotiable?: Iterable<string>;
+  /**
+   * Key of each lane as a scenario names it (occurrences counted over the lanes file's rows, e.g.
+   * `overlayKeys(imported)[plan.laneRecord[e]]`); default: counted over the network's own lanes.
+   */
+  laneKeys?: readonly LaneKey[];
   onProgress?: (progress: { phase: AuditPhase; done: number; total: number }) => void;
 }
 
@@ -45,7 +50,7 @@ export interface NetworkAudit {
 /** Runs the whole audit. */
 export function auditNetwork(network: Network, options: AuditOptions = {}): NetworkAudit {
   const report = options.onProgress;
-  const { marks: negotiable, unmatched } = markNegotiable(network, options.negotiable);
+  const { marks: negotiable, unmatched } = markNegotiable(network, options.negotiable, options.laneKeys);
 
   const distinct = findDistinctLoops(network, {
     cap: options.loopCap,
@@ -73,13 +78,13 @@ export function auditNetwork(network: Network, options: AuditOptions = {}): Netw
   return { loops, loopCapReached: distinct.capReached, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable, negotiableUnmatched: unmatched };
 }
 
-function markNegotiable(network: Network, names: Iterable<string> | undefined): { marks: Uint8Array; unmatched: string[] } {
+function markNegotiable(network: Network, names: Iterable<string> | undefined, laneKeys: readonly LaneKey[] | undefined): { marks: Uint8Array; unmatched: string[] } {
   const marks = new Uint8Array(network.laneCount);
   if (!names) return { marks, unmatched: [] };
   const wanted = new Set([...names].map((s) => s.trim()).filter((s) => s !== ''));
   if (wanted.size === 0) return { marks, unmatched: [] };
   const matched = new Set<string>();
-  const keys = laneKeysOf(network);
+  const keys = laneKeys ?? laneKeysOf(network);
   for (let e = 0; e < network.laneCount; e++) {
     const ref = network.laneRef[e];
     const keyText = laneKeyText(keys[e]);

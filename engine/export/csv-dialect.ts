@@ -3,6 +3,7 @@
 // spreadsheet set to a decimal-comma locale splits on semicolons and needs the BOM to read UTF-8).
 // Exporters write RFC 4180 rows; this module alone turns them into the chosen dialect.
 
+import { withoutFormulaGuard } from '../io/csv-cell-safety';
 import { formatCsvRows, parseCsvText } from '../io/csv-papaparse';
 
 export interface CsvDialect {
@@ -74,29 +75,21 @@ function numericColumns(rows: readonly (readonly (string | number | null)[])[]):
   return out;
 }
 
-/**
- * Writes rows (header first) in `dialect`; formula-like text is guarded as in RFC 4180 output
- * (a decimal comma such as "-12,50" is a number to the guard, not a formula).
- */
+/** Writes rows (header first) in `dialect`; formula-like text is neutralised as in RFC 4180 output. */
 export function formatCsvDialect(rows: readonly (readonly (string | number | null)[])[], dialect: CsvDialect): string {
-  return writeDialect(rows, dialect, true);
-}
-
-function writeDialect(rows: readonly (readonly (string | number | null)[])[], dialect: CsvDialect, guard: boolean): string {
   let out = rows;
   if (dialect.decimalMark === ',') {
     const numeric = numericColumns(rows);
     out = rows.map((row, r) => (r === 0 ? row : row.map((v, c) => (numeric.has(c) && v !== null && v !== '' ? String(v).replace('.', ',') : v))));
   }
-  const text = formatCsvRows(out, { delimiter: dialect.separator, escapeFormulae: guard });
+  const text = formatCsvRows(out, { delimiter: dialect.separator });
   return dialect.bom ? `\uFEFF${text}` : text;
 }
 
-/**
- * Re-writes an exporter's RFC 4180 text in `dialect` (unchanged for the RFC 4180 dialect). Its cells
- * are already guarded; guarding them again would add a second apostrophe the importer keeps.
- */
+/** Re-writes an exporter's RFC 4180 text in `dialect` (unchanged for the RFC 4180 dialect). */
 export function applyCsvDialect(text: string, dialect: CsvDialect): string {
   if (dialect.separator === ',' && dialect.decimalMark === '.' && !dialect.bom) return text;
-  return writeDialect(parseCsvText(text).rows, dialect, false);
+  // The exporter's cells are already guarded against formulas; take the guard off before writing them
+  // again, or a cell would leave with two apostrophes and come back with one.
+  return formatCsvDialect(parseCsvText(text).rows.map((row) => row.map(withoutFormulaGuard)), dialect);
 }

@@ -2,7 +2,7 @@
 // mark is split off and named, the number goes through decimal-text and then parseMinor, so an
 // amount is exact or refused with a reason; nothing passes through floating point.
 
-import { LanewrightError } from '../errors';
+import { LanewrightError, MoneyFormatError } from '../errors';
 import { parseMinor } from '../money/minor';
 import { lookupCurrency } from './currencies';
 import { readDecimalText } from './decimal-text';
@@ -99,4 +99,18 @@ function fastMinor(text: string, exponent: number): number | null {
   for (; fraction < exponent; fraction++) value *= 10;
   if (!Number.isSafeInteger(value)) return null;
   return negative ? (value === 0 ? 0 : -value) : value;
+}
+
+/**
+ * An amount a person types into the app's lane table, read by the importer's rules ("12.50",
+ * "12,50", "1.234,56", "12,50 €"): exact minor units, or MoneyFormatError with the importer's
+ * reason. A currency mark must be the network's own (`currency`); amounts are never converted here.
+ */
+export function readEnteredAmount(text: string, exponent: number, currency: string): number {
+  // With no file to say which mark is decimal, a lone mark followed by two digits is decimal
+  // either way; "1,234" is refused as ambiguous, as in a file.
+  const read = readAmount(text, exponent, false);
+  if (!read.ok) throw new MoneyFormatError(text, read.reason);
+  if (read.currency !== null && read.currency !== currency) throw new MoneyFormatError(text, `amounts here are in ${currency}, not ${read.currency}`);
+  return read.minor;
 }

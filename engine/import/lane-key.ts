@@ -3,6 +3,7 @@
 // the same three are told apart by their occurrence, counted in file order from 1.
 
 import type { LaneInput, Network } from '../network/types';
+import type { LaneTable } from './types';
 
 /** A lane named by what it is, not where it sits in the file. */
 export interface LaneKey {
@@ -41,6 +42,25 @@ export function laneKeysOf(source: readonly LaneLike[] | Network): LaneKey[] {
     const occurrence = (seen.get(group) ?? 0) + 1;
     seen.set(group, occurrence);
     keys.push({ from, to, ref, occurrence });
+  }
+  return keys;
+}
+
+/**
+ * One key per row of the importer's lane table, occurrences counted over the whole file (every
+ * date and class), which is what a scenario names: never over a date- or class-filtered network.
+ */
+export function laneKeysOfTable(table: LaneTable, depots: readonly { id: string }[]): LaneKey[] {
+  const seen = new Map<string, number>();
+  const keys: LaneKey[] = new Array(table.count);
+  for (let i = 0; i < table.count; i++) {
+    const from = depots[table.from[i]].id;
+    const to = depots[table.to[i]].id;
+    const ref = table.ref[i] || null;
+    const group = laneGroupText(from, to, ref);
+    const occurrence = (seen.get(group) ?? 0) + 1;
+    seen.set(group, occurrence);
+    keys[i] = { from, to, ref, occurrence };
   }
   return keys;
 }

@@ -3,7 +3,8 @@
 // validity, vehicle class (one toll column per class, or a vehicle_class column), reference, notes.
 
 import { MoneyOverflowError } from '../errors';
-import { formatMinor, laneNetMinor, type Minor } from '../money/minor';
+import { formatMinor, type Minor } from '../money/minor';
+import { netCostOrNull } from '../money/net-cost';
 import { readAmount } from './amount-text';
 import { cellText, ownText, readIsoDate } from './cells';
 import { convertMinor, readRate } from './currency-convert';
@@ -272,7 +273,7 @@ export class LanesReader extends RecordFileReader {
     const h = this.header!;
     const tolls: [number | undefined, string, number][] = [[this.col.toll, this.headerOf('toll'), z(toll)], ...h.classTolls.map((c, k): [number, string, number] => [c.index, c.header, z(classTolls[k])])];
     for (const tollAmount of tolls) {
-      if (laneNetMinor(tollAmount[2], z(fuel), z(fees), z(rebate)) !== null) continue;
+      if (netCostOrNull(tollAmount[2], z(fuel), z(fees), z(rebate)) !== null) continue;
       // Name the largest amount: it is the one to look at.
       const parts: [number | undefined, string, number][] = [tollAmount, [this.col.fuel, this.headerOf('fuel'), z(fuel)], [this.col.fees, this.headerOf('fees'), z(fees)], [this.col.rebate, this.headerOf('rebate'), z(rebate)]];
       const [index, column] = parts.reduce((a, b) => (Math.abs(b[2]) > Math.abs(a[2]) ? b : a));

@@ -66,7 +66,7 @@ export function parseCsvBlock(block: string, delimiter: string, newline: '\n' | 
 export interface CsvWriteOptions {
   /** Guard formula-like text (csv-cell-safety.ts, OWASP CSV-injection advice). Default true; tests only turn it off. */
   escapeFormulae?: boolean;
-  /** Field separator; default comma (RFC 4180). csv-dialect.ts chooses it. */
+  /** Field separator; default comma (RFC 4180). */
   delimiter?: ',' | ';';
 }
 
@@ -82,8 +82,8 @@ export function formatCsvRows(rows: readonly (readonly (string | number | null)[
   return (
     Papa.unparse(cells as unknown[][], {
       newline: '\r\n',
-      delimiter: options.delimiter ?? ',',
       quotes: (value: unknown) => typeof value === 'string' && needsCsvQuotes(value),
+      delimiter: options.delimiter ?? ',',
       escapeFormulae: false,
     }) + '\r\n'
   );

@@ -83,22 +83,6 @@ export function isExact(value: number): boolean {
   return value <= MAX && value >= -MAX;
 }
 
-/**
- * A lane's net cost, toll + fuel + fees - rebate, exact; null when it is outside the exact range.
- * Rebate and toll are paired first, so a large toll and a large rebate that cancel give their small
- * net; only when a partial sum leaves the range is the sum redone in BigInt. NaN parts must be
- * replaced by the caller (a missing amount is 0 here).
- */
-export function laneNetMinor(toll: number, fuel: number, fees: number, rebate: number): Minor | null {
-  const a = toll - rebate;
-  const b = a + fuel;
-  const c = b + fees;
-  // Each step adds two integers; a float result within ±MAX means the step was exact.
-  if (Math.abs(a) <= MAX && Math.abs(b) <= MAX && Math.abs(c) <= MAX) return (c === 0 ? 0 : c) as Minor;
-  const exact = BigInt(toll) - BigInt(rebate) + BigInt(fuel) + BigInt(fees);
-  return exact > BigInt(MAX) || exact < -BigInt(MAX) ? null : (Number(exact) as Minor);
-}
-
 /** Sum of many amounts, or null when the sum (not just a partial sum) is outside the exact range. */
 export function sumMinorOrNull(values: Iterable<number>): Minor | null {
   let total = 0;

@@ -1,8 +1,8 @@
 // Compiles depots and lanes into the typed-array Network. Runs once per import; every solver then
 // works on flat arrays, which keeps a million lanes in well under 100 MB.
 
-import { MoneyOverflowError, NetworkBuildError, UnknownDepotError } from '../errors';
-import { laneNetMinor } from '../money/minor';
+import { NetworkBuildError, UnknownDepotError } from '../errors';
+import { netCost } from '../money/net-cost';
 import { compressRows } from './compressed-rows';
 import type { DepotInput, LaneInput, Network } from './types';
 
@@ -41,9 +41,7 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
     if (from === undefined) throw new UnknownDepotError(lane.from, `lane from row ${lane.sourceRow}`);
     const to = depotIndex.get(lane.to);
     if (to === undefined) throw new UnknownDepotError(lane.to, `lane from row ${lane.sourceRow}`);
-    // Each component is a safe integer; the sum of four can still leave the exact range.
-    const net = laneNetMinor(lane.toll, lane.fuel, lane.fees, lane.rebate);
-    if (net === null) throw new MoneyOverflowError(`net cost of the lane from row ${lane.sourceRow}`);
+    const net = netCost(lane.toll, lane.fuel, lane.fees, lane.rebate, () => `net cost of the lane from row ${lane.sourceRow}`);
     laneFrom[e] = from;
     laneTo[e] = to;
     laneToll[e] = lane.toll;

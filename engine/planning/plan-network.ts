@@ -8,6 +8,7 @@ import { isoDateText, readIsoDate } from '../import/cells';
 import { PlanRequestError } from '../import/import-errors';
 import type { DepotRecord, IssueCode, LaneTable, ValidationItem } from '../import/types';
 import { formatMinor, parseMinor, type Minor } from '../money/minor';
+import { netCostOrNull } from '../money/net-cost';
 import { buildPlannedNetwork, plannedLanes, type PlannedColumns } from './planned-columns';
 import { planningSettings } from './settings';
 import type { PlannedLane, PlannedNetwork, PlanRequest } from './types';
@@ -21,6 +22,11 @@ export interface PlanInput {
   currency: string;
   exponent: number;
   lanesFile: string;
+  /**
+   * Rows planned like any other (they still decide which row of a lane applies) but left out of the
+   * network: the rows a what-if scenario closes. Absent = none.
+   */
+  leaveOut?: Uint8Array;
 }
 
 export interface PlanOutcome {
@@ -31,6 +37,8 @@ export interface PlanOutcome {
   rejected: number;
   /** Warnings counted but not made into items (past a cap). */
   dropped: number;
+  /** The planned lanes in columns (lane e of the network is entry e). */
+  columns: PlannedColumns;
 }
 
 function money(text: string | null, digits: number, option: string): number {
@@ -40,6 +48,54 @@ function money(text: string | null, digits: number, option: string): number {
   } catch {
     throw new PlanRequestError(option, text, 'not a decimal amount');
   }
+}
+
+/**
+ * Which class's tolls a request plans with (`chosen`: index into the toll columns in the wide
+ * layout, into classNames in the long one; -1 = the toll column) and the default toll (NaN = none).
+ * No class asked: the first class, unless the wide layout has a toll column with values.
+ */
+export function tollChoice(t: LaneTable, request: PlanRequest, exponent: number): { chosen: number; defaultToll: number } {
+  const settings = planningSettings(request.settings);
+  const wide = t.classTolls.length > 0;
+  const classes = wide ? t.classTolls.map((c) => c.name) : t.classNames;
+  let hasDefaultToll = false;
+  for (let i = 0; i < t.count && !hasDefaultToll; i++) if (!Number.isNaN(t.toll[i])) hasDefaultToll = true;
+  let chosen = -1;
+  if (request.vehicleClass !== undefined && request.vehicleClass.trim() !== '') {
+    const key = classKey(request.vehicleClass);
+    chosen = wide ? t.classTolls.findIndex((c) => c.key === key) : t.classNames.findIndex((n) => classKey(n) === key);
+    if (chosen === -1) {
+      throw new PlanRequestError('vehicle class', request.vehicleClass, classes.length === 0 ? 'the lanes file has no tolls per vehicle class' : `not in the lanes file (classes: ${classes.join(', ')})`);
+    }
+  } else if (classes.length > 0 && !(wide && hasDefaultToll)) {
+    chosen = 0;
+  }
+  return { chosen, defaultToll: money(settings.defaultToll, exponent, 'default toll') };
+}
+
+/**
+ * The toll row `i` is planned with, for a row the plan keeps: wide layout, the chosen class's
+ * column, else the toll column, else the default toll; long layout, the row's own toll, or the
+ * default toll for a row standing in for a class it has no row for; no classes, the toll column
+ * (blank = 0). NaN = no toll (an error of the plan). The one rule, for the planner and the overlay.
+ */
+export function plannedRowToll(t: LaneTable, i: number, chosen: number, defaultToll: number): number {
+  const long = t.vehicleClass;
+  const wide = t.classTolls.length > 0;
+  if (long) {
+    const c = long[i];
+    if (chosen !== -1 && c !== -1 && c !== chosen) return defaultToll;
+    const toll = t.toll[i];
+    return Number.isNaN(toll) ? (t.classNames.length > 0 ? defaultToll : 0) : toll;
+  }
+  if (wide && chosen !== -1) {
+    const toll = t.classTolls[chosen].toll[i];
+    if (!Number.isNaN(toll)) return toll;
+    return Number.isNaN(t.toll[i]) ? defaultToll : t.toll[i];
+  }
+  const toll = t.toll[i];
+  return Number.isNaN(toll) ? (wide ? defaultToll : 0) : toll;
 }
 
 /** Plans the lanes; builds the network only when `build` says so, given this plan's error count. */
@@ -62,23 +118,11 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   // Which class's tolls apply.
   const wide = t.classTolls.length > 0;
   const classes = wide ? t.classTolls.map((c) => c.name) : t.classNames;
-  let hasDefaultToll = false;
-  for (let i = 0; i < t.count && !hasDefaultToll; i++) if (!Number.isNaN(t.toll[i])) hasDefaultToll = true;
-  let chosen = -1;
-  if (request.vehicleClass !== undefined && request.vehicleClass.trim() !== '') {
-    const key = classKey(request.vehicleClass);
-    chosen = wide ? t.classTolls.findIndex((c) => c.key === key) : t.classNames.findIndex((n) => classKey(n) === key);
-    if (chosen === -1) {
-      throw new PlanRequestError('vehicle class', request.vehicleClass, classes.length === 0 ? 'the lanes file has no tolls per vehicle class' : `not in the lanes file (classes: ${classes.join(', ')})`);
-    }
-  } else if (classes.length > 0 && !(wide && hasDefaultToll)) {
-    chosen = 0;
-    notes.push(`No vehicle class chosen: planning for "${classes[0]}", the first class in the lanes file (classes: ${classes.join(', ')}).`);
-  } else if (classes.length > 0) {
-    notes.push(`No vehicle class chosen: the default toll column applies (classes in the file: ${classes.join(', ')}).`);
-  }
+  const { chosen, defaultToll } = tollChoice(t, request, exponent);
+  const asked = request.vehicleClass !== undefined && request.vehicleClass.trim() !== '';
+  if (!asked && chosen !== -1) notes.push(`No vehicle class chosen: planning for "${classes[0]}", the first class in the lanes file (classes: ${classes.join(', ')}).`);
+  else if (!asked && classes.length > 0) notes.push(`No vehicle class chosen: the default toll column applies (classes in the file: ${classes.join(', ')}).`);
   const className = chosen === -1 ? null : classes[chosen];
-  const defaultToll = money(settings.defaultToll, exponent, 'default toll');
 
   // Fuel price in minor units x 1000, so prices such as 1.659 per litre stay exact.
   const priceCurrency = request.settings?.fuelPricePerLitre !== undefined && request.settings?.fuelPriceCurrency === undefined ? currency : settings.fuelPriceCurrency;
@@ -110,13 +154,13 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   let excluded = 0;
   let rejected = 0;
   let dropped = 0;
+  let closedRows = 0;
   const missingReported = new Set<string>();
   for (let i = 0; i < t.count; i++) {
     if (!validOn(i)) {
       excluded++;
       continue;
     }
-    let toll: number;
     if (long) {
       const c = long[i];
       if (chosen !== -1 && c !== -1 && c !== chosen) {
@@ -132,22 +176,12 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
           }
           continue;
         }
-        toll = defaultToll;
       } else if (c === -1 && chosen !== -1 && withClass.has(groupKey(i))) {
         excluded++; // the class's own row overrides the all-classes row
         continue;
-      } else {
-        toll = t.toll[i];
-        if (Number.isNaN(toll)) toll = classes.length > 0 ? defaultToll : 0;
       }
-    } else if (wide && chosen !== -1) {
-      toll = t.classTolls[chosen].toll[i];
-      if (Number.isNaN(toll)) toll = t.toll[i];
-      if (Number.isNaN(toll)) toll = defaultToll;
-    } else {
-      toll = t.toll[i];
-      if (Number.isNaN(toll)) toll = wide ? defaultToll : 0;
     }
+    const toll = plannedRowToll(t, i, chosen, defaultToll);
     if (Number.isNaN(toll)) {
       errors.push(item(t.sourceRow[i], wide && chosen !== -1 ? (t.classTolls[chosen].header ?? `toll_${className}`) : header('toll'), '', 'no-toll-for-class', `no toll for vehicle class "${className ?? '(default)'}" and no default toll is set`));
       rejected++;
@@ -176,13 +210,18 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     }
     const fees = t.fees[i];
     const rebate = t.rebate[i];
-    const net = toll + fuel + fees - rebate;
+    // Out of the exact range is refused when the network is built; here only the sign matters.
+    const net = netCostOrNull(toll, fuel, fees, rebate) ?? 0;
     if (net < 0 && warnings.length >= MAX_PLAN_ITEMS) dropped++;
     else if (net < 0) {
       const f = (v: number) => formatMinor(v as Minor, exponent);
       warnings.push(
-        item(t.sourceRow[i], header('rebate'), f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(toll + fuel + fees)}): net ${f(net)} per trip; a contract item to look at`),
+        item(t.sourceRow[i], header('rebate'), f(rebate), 'net-negative-lane', `rebate is larger than the lane's costs (${f(net + rebate)}): net ${f(net)} per trip; a contract item to look at`),
       );
+    }
+    if (input.leaveOut && input.leaveOut[i]) {
+      closedRows++;
+      continue;
     }
     record[n] = i;
     tolls[n] = toll;
@@ -192,6 +231,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     estimated[n] = (distanceEstimated ? 1 : 0) | (fuelEstimated ? 2 : 0) | (driveEstimated ? 4 : 0);
     n++;
   }
+  if (closedRows > 0) notes.push(`${closedRows} lane row(s) closed by the scenario.`);
   if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
 
   const columns: PlannedColumns = {
@@ -223,5 +263,6 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     warnings,
     rejected,
     dropped,
+    columns,
   };
 }

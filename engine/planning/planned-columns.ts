@@ -2,10 +2,10 @@
 // network/build.ts makes from LaneInput objects), and turns them into PlannedLane objects only
 // when a caller asks, so planning a million lanes allocates no object per lane.
 
-import { MoneyOverflowError } from '../errors';
 import { isoDateText } from '../import/cells';
 import type { DepotRecord, LaneTable } from '../import/types';
-import { laneNetMinor, type Minor } from '../money/minor';
+import type { Minor } from '../money/minor';
+import { netCost } from '../money/net-cost';
 import { depotColumns } from '../network/build';
 import { compressRows } from '../network/compressed-rows';
 import type { Network } from '../network/types';
@@ -39,9 +39,7 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
     laneTo[e] = table.to[r];
     laneFees[e] = table.fees[r];
     laneRebate[e] = table.rebate[r];
-    const net = laneNetMinor(c.toll[e], c.fuel[e], table.fees[r], table.rebate[r]);
-    if (net === null) throw new MoneyOverflowError(`net cost of the lane from row ${table.sourceRow[r]}`);
-    laneNet[e] = net;
+    laneNet[e] = netCost(c.toll[e], c.fuel[e], table.fees[r], table.rebate[r], () => `net cost of the lane from row ${table.sourceRow[r]}`);
     laneRow[e] = table.sourceRow[r];
     laneRef[e] = table.ref[r];
   }

@@ -10,6 +10,8 @@ import { cheapestRoutes, statusName, STATUS_REACHABLE, STATUS_UNBOUNDED, type De
 import { routePath } from '../routes/route-path';
 import { applyScenario, type AppliedScenario, type ApplyOptions, type ScenarioBase, type ScenarioProblem } from './apply';
 import { laneKeyId, type LaneKey } from '../import/lane-key';
+import { buildOverlay } from './overlay';
+import { overlayNetwork, planRequestOf, type PlannedImport } from './overlay-network';
 import type { Scenario } from './types';
 
 export interface DepotComparison {
@@ -49,7 +51,8 @@ export interface ScenarioComparison {
   /** True when either side has more distinct loops than the cap. */
   loopCapReached: boolean;
   baseNetwork: Network;
-  applied: AppliedScenario;
+  /** The scenario's network, its lane keys and the base lane (or row) of each lane (-1 = added). */
+  applied: Pick<AppliedScenario, 'network' | 'laneKeys' | 'baseLaneOf'>;
 }
 
 export interface CompareOptions extends ApplyOptions {
@@ -62,6 +65,31 @@ export function compareScenario(base: ScenarioBase, scenario: Scenario, originId
   const applied = applyScenario(base, scenario, options);
   // The base goes through the same date filter, so only the scenario's changes differ.
   const unchanged = applyScenario(base, { name: 'base', description: null, changes: [] }, options);
+  return compareSides(unchanged, applied, scenario.name, applied.problems, originId, options.loopCap);
+}
+
+/**
+ * Compares a scenario laid over an import's whole lane table (overlay.ts) with the base, both
+ * planned for the import's date and vehicle class: the CLI's `compare`.
+ */
+export function compareImport(imported: PlannedImport, scenario: Scenario, originId: string, options: { loopCap?: number } = {}): ScenarioComparison {
+  const request = planRequestOf(imported);
+  const overlay = buildOverlay(imported, scenario);
+  const after = overlayNetwork(overlay, imported, request);
+  const before = overlayNetwork(buildOverlay(imported, null), imported, request);
+  return compareSides(
+    { network: before.network, laneKeys: before.keys, baseLaneOf: before.baseRow },
+    { network: after.network, laneKeys: after.keys, baseLaneOf: after.baseRow },
+    scenario.name,
+    overlay.problems,
+    originId,
+    options.loopCap,
+  );
+}
+
+type Side = Pick<AppliedScenario, 'network' | 'laneKeys' | 'baseLaneOf'>;
+
+function compareSides(unchanged: Side, applied: Side, scenarioName: string, problems: ScenarioProblem[], originId: string, cap: number | undefined): ScenarioComparison {
   const baseNetwork = unchanged.network;
   const baseKeys = unchanged.laneKeys;
   const scenarioNetwork = applied.network;
@@ -94,7 +122,6 @@ export function compareScenario(base: ScenarioBase, scenario: Scenario, originId
     });
   }
 
-  const cap = options.loopCap;
   const loopsOf = (net: Network, keys: LaneKey[], tree: RouteTree) => {
     const found = findDistinctLoops(net, { cap });
     const byId = new Map<string, ComparedLoop>();
@@ -114,10 +141,10 @@ export function compareScenario(base: ScenarioBase, scenario: Scenario, originId
   const was = loopsOf(baseNetwork, baseKeys, before);
   const now = loopsOf(scenarioNetwork, applied.laneKeys, after);
   return {
-    scenario: scenario.name,
+    scenario: scenarioName,
     origin: originId,
     currency: baseNetwork.currency,
-    problems: applied.problems,
+    problems,
     depots,
     loopsAppeared: [...now.byId].filter(([id]) => !was.byId.has(id)).map(([, loop]) => loop),
     loopsDisappeared: [...was.byId].filter(([id]) => !now.byId.has(id)).map(([, loop]) => loop),

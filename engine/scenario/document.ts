@@ -8,7 +8,7 @@ import type { LaneKey } from '../import/lane-key';
 import { SCENARIO_AMOUNT_FIELDS, SCENARIO_CHANGE_KINDS, type NewLane, type Scenario, type ScenarioAmountField, type ScenarioChange } from './types';
 
 export const SCENARIO_FORMAT = 'lanewright-scenario';
-export const SCENARIO_VERSION = 1;
+export const SCENARIO_VERSION = 2;
 
 /** The document as stored: format tag, version, then the scenario's own fields. */
 export interface ScenarioDocument extends Scenario {
@@ -17,10 +17,12 @@ export interface ScenarioDocument extends Scenario {
 }
 
 /**
- * Upgrades from version k to k + 1, indexed by k. Version 1 is the first released shape, so the
- * list is empty; a future shape change adds one function here and bumps SCENARIO_VERSION.
+ * Upgrades from version k to k + 1, indexed by k. Version 2 gave a toll change its vehicle class;
+ * a version 1 toll change meant "the toll", which every class then got, so it reads as every class.
  */
-const MIGRATIONS: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {};
+const MIGRATIONS: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {
+  1: (doc) => ({ ...doc, changes: withTollClasses(doc.changes) }),
+};
 
 /** Reads a scenario file's text. Throws ScenarioFormatError naming `source` and the field. */
 export function parseScenarioDocument(text: string, source = 'scenario'): Scenario {
@@ -40,8 +42,17 @@ export function serializeScenarioDocument(scenario: Scenario): string {
 
 /** The JSON object for a scenario embedded in another document; validates it first. */
 export function scenarioToJson(scenario: Scenario): ScenarioDocument {
-  const checked = readScenario({ format: SCENARIO_FORMAT, version: SCENARIO_VERSION, ...scenario }, 'scenario');
+  const checked = readScenario({ format: SCENARIO_FORMAT, version: SCENARIO_VERSION, ...scenario, changes: withTollClasses(scenario.changes) }, 'scenario');
   return { format: SCENARIO_FORMAT, version: SCENARIO_VERSION, ...checked };
+}
+
+/**
+ * In memory a toll change may leave its class out (= every class, as `Scenario` allows); a document
+ * always says so. Anything that is not a list of such changes is returned as it is, for the reader to refuse.
+ */
+export function withTollClasses(changes: unknown): unknown {
+  if (!Array.isArray(changes)) return changes;
+  return changes.map((c: unknown) => (isObject(c) && c.kind === 'set-amount' && c.field === 'toll' && c.vehicleClass === undefined ? { ...c, vehicleClass: null } : c));
 }
 
 /** Reads a scenario from parsed JSON (a file or a workspace entry), migrating older versions. */
@@ -111,7 +122,16 @@ function readScenario(doc: Record<string, unknown>, source: string): Scenario {
     switch (c.kind) {
       case 'set-amount': {
         if (!SCENARIO_AMOUNT_FIELDS.includes(c.field as never)) fail(`${path}.field`, c.field, `must be one of ${SCENARIO_AMOUNT_FIELDS.join(', ')}`);
-        return { kind: 'set-amount', lane: laneKey(c.lane, `${path}.lane`), field: c.field as ScenarioAmountField, amountMinor: amount(c.amountMinor, `${path}.amountMinor`), note };
+        const field = c.field as ScenarioAmountField;
+        const lane = laneKey(c.lane, `${path}.lane`);
+        const amountMinor = amount(c.amountMinor, `${path}.amountMinor`);
+        if (field !== 'toll') {
+          if (c.vehicleClass !== undefined && c.vehicleClass !== null) fail(`${path}.vehicleClass`, c.vehicleClass, 'only a toll change names a vehicle class');
+          return { kind: 'set-amount', lane, field, amountMinor, note };
+        }
+        if (c.vehicleClass === undefined) fail(`${path}.vehicleClass`, c.vehicleClass, 'a toll change names its vehicle class, or null for every class');
+        const vehicleClass = text(c.vehicleClass, `${path}.vehicleClass`, true);
+        return { kind: 'set-amount', lane, field, amountMinor, vehicleClass: vehicleClass === '' ? null : vehicleClass, note };
       }
       case 'close-lane':
         return { kind: 'close-lane', lane: laneKey(c.lane, `${path}.lane`), note };

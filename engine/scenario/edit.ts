@@ -8,7 +8,8 @@ import type { Scenario, ScenarioChange } from './types';
 function slotOf(change: ScenarioChange): string | null {
   switch (change.kind) {
     case 'set-amount':
-      return `amount:${change.field}:${laneKeyId(change.lane)}`;
+      // A toll for one class and the toll for every class are separate edits, each replaced by its own next edit.
+      return `amount:${change.field}:${change.field === 'toll' ? JSON.stringify(change.vehicleClass ?? null) : ''}:${laneKeyId(change.lane)}`;
     case 'close-lane':
       return `close:${laneKeyId(change.lane)}`;
     case 'set-validity':

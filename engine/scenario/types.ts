@@ -6,7 +6,7 @@ import type { LaneKey } from '../import/lane-key';
 
 export type { LaneKey } from '../import/lane-key';
 
-/** A lane amount a scenario may set; `toll` is the toll of the vehicle class the network is planned for. */
+/** A lane amount a scenario may set; a toll change names its vehicle class (`vehicleClass`, null = every class). */
 export type ScenarioAmountField = 'toll' | 'fuel' | 'fees' | 'rebate';
 
 export const SCENARIO_AMOUNT_FIELDS: readonly ScenarioAmountField[] = ['toll', 'fuel', 'fees', 'rebate'];
@@ -28,7 +28,18 @@ export interface NewLane {
 
 /** One change; changes apply in list order. */
 export type ScenarioChange =
-  | { kind: 'set-amount'; lane: LaneKey; field: ScenarioAmountField; amountMinor: number; note: string | null }
+  | {
+      kind: 'set-amount';
+      lane: LaneKey;
+      field: ScenarioAmountField;
+      amountMinor: number;
+      /**
+       * For `toll`: the vehicle class whose toll this is (as the lanes file names it), or null for
+       * every class, explicitly. Absent reads as null (a version 1 document). Ignored for other fields.
+       */
+      vehicleClass?: string | null;
+      note: string | null;
+    }
   | { kind: 'close-lane'; lane: LaneKey; note: string | null }
   | { kind: 'set-validity'; lane: LaneKey; validFrom: string | null; validTo: string | null; note: string | null }
   | { kind: 'add-lane'; lane: NewLane; note: string | null };

@@ -5,7 +5,7 @@ import { WORKSPACE_FORMAT, WORKSPACE_VERSION, type WorkspaceDocument } from './d
 import { WorkspaceFormatError, WorkspaceVersionError } from './errors';
 import { checkJson, json, JsonCheckFailure, parseJsonText, showValue } from '../json/zod-checker';
 import { NewerVersionFailure, upgradeDocument, type UpgradeStep, type VersionedKind } from '../json/versioned';
-import { SCENARIO_FORMAT, SCENARIO_VERSION, scenarioFromJson, scenarioToJson } from '../scenario/document';
+import { SCENARIO_FORMAT, SCENARIO_VERSION, scenarioFromJson, scenarioToJson, withTollClasses } from '../scenario/document';
 import { ScenarioFormatError } from '../errors';
 import type { Scenario } from '../scenario/types';
 import { EMPTY_PLANNING_CHOICES } from '../planning/planning-choices';
@@ -81,7 +81,7 @@ function readScenario(value: unknown, field: string, form: ScenarioForm): Scenar
     if (form === 'stored') return scenarioFromJson(value, field);
     if (typeof value !== 'object' || value === null || Array.isArray(value)) throw new JsonCheckFailure(field, showValue(value), 'must be an object');
     const { format: _format, version: _version, ...scenario } = value as Record<string, unknown>;
-    return scenarioFromJson({ ...scenario, format: SCENARIO_FORMAT, version: SCENARIO_VERSION }, field);
+    return scenarioFromJson({ ...scenario, changes: withTollClasses(scenario.changes), format: SCENARIO_FORMAT, version: SCENARIO_VERSION }, field);
   } catch (error) {
     if (error instanceof ScenarioFormatError) throw new JsonCheckFailure(`${field}${pointerOf(error.path)}`, error.value, error.reason);
     throw error;

@@ -3,7 +3,6 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { laneKeyIndex, laneKeysOf } from '../../engine/index';
 import { ErrorBoundary } from '../components/ErrorBoundary/ErrorBoundary';
 import { AboutDialog } from '../components/AboutDialog/AboutDialog';
 import { FirstRunNotice } from '../components/FirstRunNotice/FirstRunNotice';
@@ -20,7 +19,7 @@ import { StatusBar } from '../components/StatusBar/StatusBar';
 import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
 import { addedLanes, sameAddedLanes, type AddedLane } from '../model/added-lanes';
-import { applyScenarioAmounts, hasChanges } from '../model/scenario-edits';
+import { hasChanges } from '../model/scenario-edits';
 import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
@@ -42,12 +41,6 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const { exportFile } = useCommands(bench, ui);
   const { layout, limits, setLowerPx, setSidePx } = useLayout();
 
-  const keys = useMemo(() => (network ? laneKeysOf(Array.from(network.laneFrom, (a, e) => ({ from: network.depotIds[a], to: network.depotIds[network.laneTo[e]], ref: network.laneRef[e] }))) : []), [network]);
-  const keyIndex = useMemo(() => laneKeyIndex(keys), [keys]);
-  const amounts = useMemo(
-    () => (network ? applyScenarioAmounts({ toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate }, keys, scenario, keyIndex) : null),
-    [network, keys, scenario, keyIndex],
-  );
   // An edit elsewhere in the scenario keeps the same list, so the map does not redraw layers built on it.
   const addedRef = useRef<AddedLane[]>([]);
   const added = useMemo(() => {
@@ -68,6 +61,8 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   };
   const solve = plan.solve && network && plan.solvedFor === network ? plan.solve : null;
   const route = solve ? plan.route : null;
+  // Amounts under the scenario and lane keys come from the engine's overlay in the worker.
+  const amounts = solve?.overlay ?? null;
   // The import dialog shows the progress bar itself (inside the modal, in its keyboard cycle).
   const importShown = importOpen || dataset.pending !== null;
   const datasetName = dataset.files ? `${dataset.files.depots.name} + ${dataset.files.lanes.name}` : 'nothing loaded';
@@ -108,7 +103,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
       <Splitter orientation="horizontal" label="Height of the results panel" controls="lw-lower" value={layout.lowerPx} min={limits.lower.min} max={limits.lower.max} grows={-1} onChange={setLowerPx} />
       <section id="lw-lower" className="lw-lower" aria-label="Results and contract">
         <ErrorBoundary what="results panel">
-          {network && solve && amounts && <LowerPanel bench={bench} network={network} solve={solve} amounts={amounts} added={added} keys={keys} tab={tab} onTab={setTab} onExport={exportFile} onDrawLoad={setLoadRoutes} />}
+          {network && solve && <LowerPanel bench={bench} network={network} solve={solve} amounts={solve.overlay} added={added} tab={tab} onTab={setTab} onExport={exportFile} onDrawLoad={setLoadRoutes} />}
         </ErrorBoundary>
       </section>
       <StatusBar network={network} solve={solve} roundTripMs={plan.roundTripMs} solving={plan.solving} message={bench.message} />

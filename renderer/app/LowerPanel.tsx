@@ -4,7 +4,7 @@
 import { parseScenarioDocument } from '../../engine/index';
 import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
-import type { LaneAmounts, LaneKey } from '../model/scenario-edits';
+import type { OverlayView } from '../worker/protocol';
 import type { ExportChoice } from '../model/export-file';
 import type { NetworkView, SolveView } from '../worker/protocol';
 import { ContractReview } from '../components/ContractReview/ContractReview';
@@ -21,9 +21,8 @@ export interface LowerPanelProps {
   bench: Workbench;
   network: NetworkView;
   solve: SolveView;
-  amounts: LaneAmounts;
+  amounts: OverlayView;
   added: readonly AddedLane[];
-  keys: readonly LaneKey[];
   tab: string;
   onTab(tab: string): void;
   onExport(kind: ExportChoice): void;
@@ -31,7 +30,7 @@ export interface LowerPanelProps {
   onDrawLoad(routes: LoadRouteDrawing[] | null): void;
 }
 
-export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, onTab, onExport, onDrawLoad }: LowerPanelProps) {
+export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, onExport, onDrawLoad }: LowerPanelProps) {
   const { scenario, setScenario, selected, setSelected, dataset } = bench;
   const onScenario = (next: Scenario) => setScenario(next);
   const loadScenarioFile = async () => {
@@ -58,11 +57,11 @@ export function LowerPanel({ bench, network, solve, amounts, added, keys, tab, o
       {tab === 'results' && <ResultsTable network={network} solve={solve} selected={selected} onSelect={setSelected} onExport={() => onExport('routes-csv')} />}
       {tab === 'lanes' && (
         <div className="lw-split">
-          <LaneTable network={network} keys={keys} amounts={amounts} added={added} scenario={scenario} onScenario={onScenario} />
+          <LaneTable network={network} amounts={amounts} added={added} scenario={scenario} onScenario={onScenario} />
           <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} />
         </div>
       )}
-      {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={keys} scenario={scenario} onScenario={onScenario} />}
+      {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={network.laneKeys} scenario={scenario} onScenario={onScenario} />}
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
       {/* Kept mounted while other tabs show, so the loads and their plan stay. */}
       <div hidden={tab !== 'loads'}>

@@ -3,7 +3,7 @@
 // replaces the network already on screen.
 
 import { useCallback, useRef, useState } from 'react';
-import type { ImportReport, NamedText, NetworkView, PlanChoice } from '../worker/protocol';
+import type { ImportReport, LoadRequest, NamedText, NetworkView, PlanChoice } from '../worker/protocol';
 import { WorkCancelledError, type Engine } from './use-engine';
 
 export interface DatasetFiles {
@@ -51,8 +51,8 @@ export function useDataset(engine: Engine): Dataset {
       running.current++;
       setImporting(true);
       try {
-        const request = { kind: 'load' as const, depots: next.depots, lanes: next.lanes, acceptPartial, plan };
-        const answer = await engine.track((onProgress) => engine.client.request<'loaded'>(request, onProgress), 'Importing');
+        const request: LoadRequest = { depots: next.depots, lanes: next.lanes, acceptPartial, plan };
+        const answer = await engine.track((onProgress) => engine.client.request('load', request, onProgress), 'Importing');
         if (!answer.network) {
           setPending({ files: next, plan, report: answer.report });
           return false;
@@ -80,7 +80,7 @@ export function useDataset(engine: Engine): Dataset {
   const replan = useCallback(
     async (plan: PlanChoice): Promise<boolean> => {
       try {
-        const answer = await engine.track((onProgress) => engine.client.request<'loaded'>({ kind: 'replan', plan }, onProgress), 'Planning');
+        const answer = await engine.track((onProgress) => engine.client.request('replan', { plan }, onProgress), 'Planning');
         if (!answer.network) {
           setError(`The plan for ${plan.date}${plan.vehicleClass ? `, class ${plan.vehicleClass}` : ''} has errors: ${answer.report.issues[0]?.reason ?? 'no usable lanes'}`);
           return false;

@@ -47,7 +47,7 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
     const timer = setTimeout(async () => {
       const started = performance.now();
       try {
-        const answer = await engine.track((onProgress) => engine.client.request<'solved'>({ kind: 'solve', settings, scenario }, onProgress), 'Solving');
+        const answer = await engine.track((onProgress) => engine.client.request('solve', { settings, scenario }, onProgress), 'Solving');
         if (ticket !== latest.current) return;
         setShown({ view: answer.result, network, id: answer.id });
         setSolveCount((n) => n + 1);
@@ -71,7 +71,7 @@ export function usePlan(engine: Engine, network: NetworkView | null, settings: P
     }
     let live = true;
     engine.client
-      .request<'route'>({ kind: 'route', target: selected, solveId })
+      .request('route', { target: selected, solveId })
       .then((answer) => live && setRoute({ route: answer.route, solve }))
       .catch(() => live && setRoute({ route: null, solve }));
     return () => {

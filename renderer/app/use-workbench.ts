@@ -1,10 +1,13 @@
 // The window's state in one place for the shell to hand out: host, engine, loaded data, planning
-// controls, the active scenario, the selection, and opening / saving the workspace.
+// controls, the active scenario, the selection, and opening / saving the workspace. Whether the
+// workspace is clean, dirty, saving, importing or being replaced is one state machine
+// (model/workspace-lifecycle.ts); callbacks read it from its store, not from refs that mirror it.
 
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
 import { samePlanningChoices, workspaceFingerprint } from '../../engine/index';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
+import { isDirty, LifecycleStore } from '../model/workspace-lifecycle';
 import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
 import type { PlanChoice, PlanSettings } from '../worker/protocol';
 import { useDataset, type DatasetFiles } from './use-dataset';
@@ -26,10 +29,11 @@ export function useWorkbench(host: LanewrightHost) {
   const [scenario, setScenario] = useState<Scenario>(() => emptyScenario());
   const [selected, setSelected] = useState<number | null>(null);
   const [message, setMessage] = useState<string | null>(null);
-  const [savedPath, setSavedPath] = useState<string | null>(null);
-  const [dirty, setDirty] = useState(false);
-  const restored = useRef(false);
-  const cleanKey = useRef<string | null>('pending');
+  const lifecycle = useMemo(() => new LifecycleStore(), []);
+  const life = useSyncExternalStore(lifecycle.subscribe, lifecycle.snapshot);
+  // Browser mode keeps the workspace as it changes (below), so it is never dirty and never asks.
+  const dirty = host.kind !== 'web' && isDirty(life);
+  const savedPath = life.savedPath;
   const settingsRef = useRef(settings);
   settingsRef.current = settings;
   const plan = usePlan(engine, dataset.network, settings, scenario, selected, generation);
@@ -37,41 +41,42 @@ export function useWorkbench(host: LanewrightHost) {
   const loadSample = useCallback(
     async (loop: boolean) => {
       const next = { ...settingsRef.current, origin: SAMPLE_ORIGIN, dispatchDate: SAMPLE_DATE };
-      const ok = await load(sampleFiles(loop), planOf(next));
+      const files = sampleFiles(loop);
+      const ok = await load(files, planOf(next));
       if (ok) {
+        const fresh = emptyScenario();
         setSettings(next);
-        setScenario(emptyScenario());
+        setScenario(fresh);
         setSelected(null);
         // A new workspace: Save must ask where, not overwrite the workspace opened before.
-        setSavedPath(null);
-        cleanKey.current = 'pending';
+        lifecycle.dispatch({ type: 'opened', savedPath: null, key: workspaceFingerprint(documentOf(files, next, fresh)) });
         setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');
       }
     },
-    [load],
+    [load, lifecycle],
   );
 
   const openDocument = useCallback(
-    async (doc: Parameters<typeof stateOf>[0]) => {
+    async (doc: Parameters<typeof stateOf>[0], path: string | null) => {
       const state = stateOf(doc);
       const files = await filesOf(host, doc);
       if (files && (await load(files, planOf(state.settings)))) {
         setSettings(state.settings);
         setScenario(state.scenario);
         setSelected(null);
-        cleanKey.current = 'pending';
+        lifecycle.dispatch({ type: 'opened', savedPath: path, key: workspaceFingerprint(documentOf(files, state.settings, state.scenario)) });
         return true;
       }
       return false;
     },
-    [host, load],
+    [host, load, lifecycle],
   );
 
   // First show: the last workspace when there is one, otherwise the sample so a plan is on screen.
   // Why the last workspace did not open is said after the sample's own message.
   useEffect(() => {
-    if (restored.current) return;
-    restored.current = true;
+    if (lifecycle.state.phase !== 'starting') return;
+    lifecycle.dispatch({ type: 'restore-started' });
     void (async () => {
       let problem: string | null = null;
       try {
@@ -80,18 +85,15 @@ export function useWorkbench(host: LanewrightHost) {
         if (host.kind === 'web' || path) {
           const opened = await host.openWorkspace(path);
           if (!opened.ok) problem = opened.failure.message;
-          else if (opened.value && (await openDocument(opened.value.document))) {
-            setSavedPath(opened.value.path);
-            return;
-          }
+          else if (opened.value && (await openDocument(opened.value.document, opened.value.path))) return;
         }
       } catch (error) {
         problem = (error as Error).message;
       }
       await loadSample(false);
       if (problem !== null) setMessage(`Could not reopen the last workspace: ${problem}. Showing the sample instead.`);
-    })();
-  }, [host, openDocument, loadSample]);
+    })().finally(() => lifecycle.dispatch({ type: 'replace-ended' }));
+  }, [host, openDocument, loadSample, lifecycle]);
 
   // A new day, vehicle class or planning setting re-plans the import (lanes valid that day, that
   // class's tolls, estimates by the settings). When
@@ -114,58 +116,60 @@ export function useWorkbench(host: LanewrightHost) {
 
   const document = useMemo(() => documentOf(dataset.files, settings, scenario), [dataset.files, settings, scenario]);
 
-  // What was last opened or saved, so "unsaved" means the document really differs from it. An open
-  // sets 'pending': the first document after it (files and settings together) is the clean one.
+  // The lifecycle compares this fingerprint with the one last opened or saved ("unsaved" means the
+  // document really differs); the first document after an open is the clean one.
   const docKey = useMemo(() => workspaceFingerprint(document), [document]);
-  const docKeyRef = useRef(docKey);
-  docKeyRef.current = docKey;
+  useEffect(() => {
+    if (dataset.files) lifecycle.dispatch({ type: 'document', key: docKey });
+  }, [lifecycle, docKey, dataset.files]);
+  useEffect(() => lifecycle.dispatch({ type: dataset.importing ? 'import-started' : 'import-ended' }), [lifecycle, dataset.importing]);
 
   // Browser mode keeps the workspace as it changes; the desktop tracks unsaved changes for the quit prompt.
   useEffect(() => {
     if (!dataset.files) return;
-    if (cleanKey.current === 'pending') {
-      cleanKey.current = docKey;
-      setDirty(false);
-      void host.setDirty(false);
-      return;
-    }
-    if (host.kind === 'web') {
-      void host.saveWorkspace(document, null, false);
-      return;
-    }
-    const changed = docKey !== cleanKey.current;
-    setDirty(changed);
-    void host.setDirty(changed);
-  }, [host, document, docKey, dataset.files]);
+    if (host.kind === 'web') void host.saveWorkspace(document, null, false);
+  }, [host, document, dataset.files]);
+  useEffect(() => {
+    if (host.kind !== 'web') void host.setDirty(dirty);
+  }, [host, dirty]);
 
   const save = useCallback(
     async (saveAs: boolean) => {
-      const result = await host.saveWorkspace(document, savedPath, saveAs);
-      if (!result.ok) setMessage(`Not saved: ${result.failure.message}`);
-      else if (result.value) {
-        setSavedPath(result.value.path);
-        cleanKey.current = docKeyRef.current;
-        setDirty(false);
-        void host.setDirty(false);
-        setMessage(`Workspace saved to ${result.value.path}.`);
-        return true;
+      // The document as it is when the save starts is the one that becomes clean.
+      const key = docKey;
+      lifecycle.dispatch({ type: 'save-started' });
+      try {
+        const result = await host.saveWorkspace(document, lifecycle.state.savedPath, saveAs);
+        if (result.ok && result.value) {
+          lifecycle.dispatch({ type: 'saved', path: result.value.path, key });
+          setMessage(`Workspace saved to ${result.value.path}.`);
+          return true;
+        }
+        if (!result.ok) setMessage(`Not saved: ${result.failure.message}`);
+        lifecycle.dispatch({ type: 'save-failed' });
+        return false;
+      } catch (error) {
+        lifecycle.dispatch({ type: 'save-failed' });
+        throw error;
       }
-      return false;
     },
-    [host, document, savedPath],
+    [host, document, docKey, lifecycle],
   );
 
   // Every action that replaces the workspace goes through `replaceWith`: none starts while an
   // import runs (a second one would race the first), and unsaved changes are asked about first.
   const { discardPrompt, confirmDiscard, answerDiscard } = useDiscardGuard(dirty, () => save(false));
-  const importingRef = useRef(dataset.importing);
-  importingRef.current = dataset.importing;
   const replaceWith = useCallback(
     async (action: string, run: () => void | Promise<void>): Promise<void> => {
-      if (importingRef.current) return setMessage(`${action} must wait: an import is running (cancel it or let it finish).`);
-      if (await confirmDiscard(action)) await run();
+      if (lifecycle.state.phase === 'importing') return setMessage(`${action} must wait: an import is running (cancel it or let it finish).`);
+      lifecycle.dispatch({ type: 'replace-started' });
+      try {
+        if (await confirmDiscard(action)) await run();
+      } finally {
+        lifecycle.dispatch({ type: 'replace-ended' });
+      }
     },
-    [confirmDiscard],
+    [confirmDiscard, lifecycle],
   );
 
   const openSample = useCallback(
@@ -176,25 +180,21 @@ export function useWorkbench(host: LanewrightHost) {
   const openWorkspace = useCallback(
     async (path: string | null) => {
       // An import in the engine would race the one this starts; asked before the file dialog opens.
-      if (importingRef.current) return setMessage('Opening a workspace must wait: an import is running (cancel it or let it finish).');
+      if (lifecycle.state.phase === 'importing') return setMessage('Opening a workspace must wait: an import is running (cancel it or let it finish).');
       const opened = await host.openWorkspace(path);
       if (!opened.ok) return setMessage(`Could not open the workspace: ${opened.failure.message}`);
       if (!opened.value) return;
       const chosen = opened.value;
       await replaceWith(`Opening ${chosen.path}`, async () => {
         try {
-          if (await openDocument(chosen.document)) {
-            setSavedPath(chosen.path);
-            setDirty(false);
-            setMessage(`Opened ${chosen.path}.`);
-          }
+          if (await openDocument(chosen.document, chosen.path)) setMessage(`Opened ${chosen.path}.`);
         } catch (error) {
           // A file the workspace names could not be read: the workspace on screen stays as it was.
           setMessage(`Could not open the workspace: ${(error as Error).message}`);
         }
       });
     },
-    [host, openDocument, replaceWith],
+    [host, openDocument, replaceWith, lifecycle],
   );
 
   const importFiles = useCallback(

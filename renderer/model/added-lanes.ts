@@ -1,7 +1,7 @@
 // Lanes the active scenario adds ("add-lane" changes). They are not in the imported network, so the
 // map and the lane table read them from the scenario itself; an edit rewrites the change in place.
 
-import type { NewLane } from '../../engine/index';
+import { netCostOrNull, type NewLane } from '../../engine/index';
 import type { EditableField, Scenario } from './scenario-edits';
 
 /** One lane the scenario adds, as the map and the lane table show it. */
@@ -30,7 +30,7 @@ export function addedLanes(depotIds: readonly string[], scenario: Scenario | nul
   scenario.changes.forEach((change, changeIndex) => {
     if (change.kind !== 'add-lane') return;
     const l = change.lane;
-    out.push({ changeIndex, lane: l, from: index.get(l.from) ?? -1, to: index.get(l.to) ?? -1, netMinor: l.tollMinor + l.fuelMinor + l.feesMinor - l.rebateMinor });
+    out.push({ changeIndex, lane: l, from: index.get(l.from) ?? -1, to: index.get(l.to) ?? -1, netMinor: netCostOrNull(l.tollMinor, l.fuelMinor, l.feesMinor, l.rebateMinor) ?? NaN });
   });
   return out;
 }

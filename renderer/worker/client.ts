@@ -2,9 +2,9 @@
 // terminates the worker (a running solve cannot be interrupted otherwise), starts a fresh one and
 // replays the last accepted import so the workspace stays usable.
 
-import type { FromWorker, ToWorker } from './protocol';
+import { ANSWER_KIND, type Answer, type FromWorker, type LoadRequest, type PlanChoice, type RequestKind, type RequestOf, type ToWorker } from './protocol';
 
-type Pending = { resolve: (m: FromWorker) => void; reject: (e: Error) => void; onProgress?: (phase: string, fraction: number) => void };
+type Pending = { expects: string; resolve: (m: FromWorker) => void; reject: (e: Error) => void; onProgress?: (phase: string, fraction: number) => void };
 
 /** Raised to callers whose request was cancelled. */
 export class WorkCancelledError extends Error {
@@ -22,13 +22,11 @@ export class EngineRequestError extends Error {
   }
 }
 
-type Request = ToWorker extends infer T ? (T extends { id: number } ? Omit<T, 'id'> : never) : never;
-
 export class EngineClient {
   private worker: Worker;
   private nextId = 1;
   private pending = new Map<number, Pending>();
-  private lastLoad: Extract<Request, { kind: 'load' }> | null = null;
+  private lastLoad: LoadRequest | null = null;
 
   constructor(private readonly create: () => Worker) {
     this.worker = this.start();
@@ -54,25 +52,32 @@ export class EngineClient {
     }
     this.pending.delete(message.id);
     if (message.kind === 'error') pending.reject(new EngineRequestError(message.error.name, message.error.message));
+    else if (message.kind !== pending.expects) pending.reject(new EngineRequestError('ProtocolError', `worker: answered "${message.kind}" where "${pending.expects}" was due`));
     else pending.resolve(message);
   }
 
-  /** Sends a request; resolves with the worker's answer (never a progress message). */
-  request<K extends FromWorker['kind']>(request: Request, onProgress?: (phase: string, fraction: number) => void): Promise<Extract<FromWorker, { kind: K }>> {
+  /**
+   * Sends a request of `kind`; resolves with its answer, whose type the protocol fixes
+   * (WorkerRequests, ANSWER_KIND): the caller cannot pick another. Progress goes to `onProgress`.
+   */
+  request<K extends RequestKind>(kind: K, payload: RequestOf<K>, onProgress?: (phase: string, fraction: number) => void): Promise<Answer<K>> {
     const id = this.nextId++;
-    return new Promise((resolve, reject) => {
-      this.pending.set(id, { resolve: resolve as (m: FromWorker) => void, reject, onProgress });
-      this.worker.postMessage({ ...request, id } as ToWorker);
+    return new Promise<Answer<K>>((resolve, reject) => {
+      // receive() resolves only with a message of kind ANSWER_KIND[kind], which is an Answer<K>;
+      // TypeScript cannot follow that check through the map, hence the one narrowing here.
+      const settle = (m: FromWorker) => resolve(m as unknown as Answer<K>);
+      this.pending.set(id, { expects: ANSWER_KIND[kind], resolve: settle, reject, onProgress });
+      this.worker.postMessage({ ...payload, kind, id } as ToWorker);
     });
   }
 
   /** Remembers a load that was accepted, to replay after a cancel. */
-  rememberLoad(load: Extract<Request, { kind: 'load' }>): void {
+  rememberLoad(load: LoadRequest): void {
     this.lastLoad = load;
   }
 
   /** Keeps the remembered load in step with a re-plan for another day or vehicle class. */
-  rememberPlan(plan: Extract<Request, { kind: 'load' }>['plan']): void {
+  rememberPlan(plan: PlanChoice): void {
     if (this.lastLoad) this.lastLoad = { ...this.lastLoad, plan };
   }
 
@@ -88,7 +93,7 @@ export class EngineClient {
     for (const p of this.pending.values()) p.reject(cancelled);
     this.pending.clear();
     this.worker = this.start();
-    if (this.lastLoad) await this.request({ ...this.lastLoad });
+    if (this.lastLoad) await this.request('load', this.lastLoad);
   }
 
   dispose(): void {

@@ -1,18 +1,18 @@
 // Export files the UI offers, made in the worker with the engine's exporters (the same files the
-// command line writes). With an active scenario they describe the changed contract: the scenario
-// is applied by the engine and the routes are solved again on the result.
+// command line writes). With an active scenario they describe the changed contract: the engine's
+// overlay lays the scenario over every lane row (as `lanewright export --scenario` does) and the
+// routes are solved again on the result.
 
 import { findDistinctLoops } from '../../engine/index';
 import { geoJsonText } from '../../engine/index';
 import { networkGeoJson } from '../../engine/index';
-import { lanesCsv } from '../../engine/index';
+import { lanesCsv, type LanesExportInput } from '../../engine/index';
 import { loopsCsv } from '../../engine/index';
 import { routesCsv } from '../../engine/index';
 import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
-import type { PlannedLane, PlannedNetwork } from '../../engine/index';
 import { routesReport } from '../../engine/index';
-import { applyScenario } from '../../engine/index';
+import { scenarioImport } from '../../engine/index';
 import { applyCsvDialect, exportFileName, RFC4180_DIALECT, type CsvDialect, type ExportSettings } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import type { ExportKind, PlanSettings } from './protocol';
@@ -36,18 +36,12 @@ export interface ExportContext {
   files?: string[];
 }
 
-/** The network and plan the exports describe: the import's, or the scenario's when it changes anything. */
-function target(ctx: ExportContext): { network: Network; plan: PlannedNetwork } {
+/** The network and lane rows the exports describe: the import's, or the scenario's when it changes anything. */
+function target(ctx: ExportContext): { network: Network; lanes: LanesExportInput } {
   const { imported, network, scenario } = ctx;
-  if (!scenario || !hasChanges(scenario)) return { network, plan: imported.plan };
-  const applied = applyScenario(network, scenario, { date: ctx.date });
-  const lanes: PlannedLane[] = applied.lanes.map((lane, i) => {
-    const b = applied.baseLaneOf[i];
-    const base = b >= 0 ? imported.plan.lanes[b] : { vehicleClass: null, distanceEstimated: false, fuelEstimated: false, driveEstimated: false };
-    return { ...base, ...lane, validFrom: lane.validFrom ?? null, validTo: lane.validTo ?? null };
-  });
-  const laneRecord = Int32Array.from(applied.baseLaneOf, (b) => (b >= 0 ? imported.plan.laneRecord[b] : -1));
-  return { network: applied.network, plan: { ...imported.plan, network: applied.network, lanes, laneRecord } };
+  if (!scenario || !hasChanges(scenario)) return { network, lanes: imported };
+  const what = scenarioImport(imported, scenario);
+  return { network: what.network, lanes: what };
 }
 
 const scenarioName = (ctx: ExportContext) => (ctx.scenario && hasChanges(ctx.scenario) ? ctx.scenario.name : null);
@@ -62,7 +56,8 @@ export function exportSettings(ctx: ExportContext): ExportSettings {
  * Names carry what is inside (kind, origin, date, class, scenario); CSV is written in `dialect`.
  */
 export function exportText(ctx: ExportContext, what: ExportKind, dialect: CsvDialect = RFC4180_DIALECT): ExportFile {
-  const { network, plan } = target(ctx);
+  const { network, lanes } = target(ctx);
+  const plan = ctx.imported.plan;
   const name = (kind: string, extension: string, origin: string | null = null) =>
     exportFileName({ kind, origin, date: ctx.date, vehicleClass: ctx.vehicleClass ?? null, scenario: scenarioName(ctx) }, extension);
   const csv = (text: string) => applyCsvDialect(text, dialect);
@@ -79,7 +74,7 @@ export function exportText(ctx: ExportContext, what: ExportKind, dialect: CsvDia
       return { fileName: name('routes', 'csv', routes.origin), mime: 'text/csv', text: csv(routesCsv(routes)) };
     }
     case 'lanes-csv':
-      return { fileName: name('lanes', 'csv'), mime: 'text/csv', text: csv(lanesCsv({ plan, lanes: ctx.imported.lanes, currency: network.currency, exponent: network.exponent }, loops())) };
+      return { fileName: name('lanes', 'csv'), mime: 'text/csv', text: csv(lanesCsv(lanes, loops())) };
     case 'loops-csv':
       return { fileName: name('rebate-loops', 'csv'), mime: 'text/csv', text: csv(loopsCsv(network, loops())) };
     case 'geojson': {

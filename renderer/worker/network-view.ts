@@ -1,11 +1,40 @@
-// Copies what the UI needs out of the compiled network. The copies travel to the UI thread as
-// transferables, so the worker keeps its own arrays intact.
+// Copies what the UI needs out of the compiled network and the import's lane table. The copies
+// travel to the UI thread as transferables, so the worker keeps its own arrays intact. Lane keys
+// come from the engine (counted over the file's rows), so the UI never counts them itself.
 
-import type { Network } from '../../engine/index';
-import type { NetworkView, PlanChoice } from './protocol';
+import { isoDateText, overlayKeys } from '../../engine/index';
+import type { ImportResult, LaneKey, Network } from '../../engine/index';
+import type { LaneRowsView, NetworkView, PlanChoice } from './protocol';
 
-/** The UI's view of a planned network; `vehicleClasses` lists the classes the lanes file prices. */
-export function networkView(network: Network, vehicleClasses: string[], plan: PlanChoice, driveLimitMinutes: number): NetworkView {
+/** Base network lane of each lanes-file row, -1 for a row the plan leaves out. */
+export function laneOfRows(result: ImportResult): Int32Array {
+  const lane = new Int32Array(result.lanes.count).fill(-1);
+  result.plan.laneRecord.forEach((row, e) => (lane[row] = e));
+  return lane;
+}
+
+function rowsView(result: ImportResult, lane: Int32Array, keys: readonly LaneKey[]): LaneRowsView {
+  const t = result.lanes;
+  const n = t.count;
+  const cls = t.vehicleClass;
+  return {
+    from: t.from.slice(0, n),
+    to: t.to.slice(0, n),
+    sourceRow: t.sourceRow.slice(0, n),
+    ref: t.ref.slice(0, n),
+    validFrom: Array.from(t.validFrom.subarray(0, n), isoDateText),
+    validTo: Array.from(t.validTo.subarray(0, n), isoDateText),
+    vehicleClass: Array.from({ length: n }, (_, r) => (cls && cls[r] >= 0 ? t.classNames[cls[r]] : null)),
+    keys: keys.slice(),
+    lane: lane.slice(),
+  };
+}
+
+/** The UI's view of a planned import: the network, its lane keys and every row of the lanes file. */
+export function networkView(result: ImportResult, plan: PlanChoice, keys: readonly LaneKey[] = overlayKeys(result)): NetworkView {
+  const network: Network = result.network!;
+  const lane = laneOfRows(result);
+  const rows = rowsView(result, lane, keys);
   return {
     currency: network.currency,
     exponent: network.exponent,
@@ -23,15 +52,19 @@ export function networkView(network: Network, vehicleClasses: string[], plan: Pl
     laneRef: network.laneRef.slice(),
     laneDistanceKm: network.laneDistanceKm.slice(),
     laneDriveMinutes: network.laneDriveMinutes.slice(),
-    vehicleClasses,
+    laneKeys: Array.from(result.plan.laneRecord, (r) => rows.keys[r]),
+    rows,
+    vehicleClasses: result.vehicleClasses,
+    plannedClass: result.plan.vehicleClass,
     plan,
-    driveLimitMinutes,
+    driveLimitMinutes: result.plan.settings.drivingLimit.dailyDrivingMinutes,
   };
 }
 
 /** The typed arrays of a view, for postMessage's transfer list. */
 export function transferablesOf(view: NetworkView): ArrayBuffer[] {
-  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes].map(
+  const r = view.rows;
+  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, r.from, r.to, r.sourceRow, r.lane].map(
     (a) => a.buffer as ArrayBuffer,
   );
 }

@@ -1,9 +1,12 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { CsvDialect, EstimateRules, PlanningChoices } from '../../engine/index';
+import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
+import type { ContractReviewView } from './review';
+
+export type { ContractReviewView } from './review';
 
 /** A CSV file as text, with the name shown in reports. */
 export interface NamedText {
@@ -64,11 +67,42 @@ export interface NetworkView {
   laneRef: (string | undefined)[];
   laneDistanceKm: Float64Array;
   laneDriveMinutes: Float64Array;
+  /** Key of each lane (its row's key, occurrences counted over the whole file), for scenario changes. */
+  laneKeys: LaneKey[];
+  /** Every row of the lanes file (every date and class), for the lane table's "every row" view. */
+  rows: LaneRowsView;
   /** Vehicle classes the lanes file prices (empty when tolls do not depend on the class). */
   vehicleClasses: string[];
+  /** The class whose tolls the plan uses (the file's first class when none was chosen); null = the toll column. */
+  plannedClass: string | null;
   /** The plan this view was built for, and its daily driving limit (minutes) for the long-drive caution. */
   plan: PlanChoice;
   driveLimitMinutes: number;
+}
+
+/** Every accepted row of the lanes file, in file order. */
+export interface LaneRowsView {
+  from: Int32Array;
+  to: Int32Array;
+  sourceRow: Int32Array;
+  ref: (string | undefined)[];
+  validFrom: (string | null)[];
+  validTo: (string | null)[];
+  /** Long layout: the row's class (null = every class); always null in the wide layout. */
+  vehicleClass: (string | null)[];
+  keys: LaneKey[];
+  /** The network lane the plan made of the row, -1 when the plan leaves it out (another date or class). */
+  lane: Int32Array;
+}
+
+/**
+ * The engine overlay's figures for a solve (engine/scenario/overlay.ts), so the UI computes none:
+ * per network lane the amounts under the scenario for the planned class, per lanes-file row the
+ * same for the "every row" view, and each change as text with whether it applied.
+ */
+export interface OverlayView extends Omit<PlanAmounts, 'weights'> {
+  rows: { toll: Float64Array; fuel: Float64Array; fees: Float64Array; rebate: Float64Array; closed: Uint8Array; changed: Uint8Array };
+  changes: ChangeView[];
 }
 
 export interface PlanSettings {
@@ -109,6 +143,8 @@ export interface SolveView {
   loops: LoopView[];
   /** Same arrays for the scenario's base (no edits), when the scenario has edits. */
   base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null;
+  /** The lane amounts and changes the solve was made with. */
+  overlay: OverlayView;
   solveMs: number;
 }
 
@@ -135,28 +171,62 @@ export interface RouteView {
 
 export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
 
-export type ToWorker =
-  | { kind: 'load'; id: number; depots: NamedText; lanes: NamedText; acceptPartial: boolean; plan: PlanChoice }
-  | { kind: 'replan'; id: number; plan: PlanChoice }
-  | { kind: 'solve'; id: number; settings: PlanSettings; scenario: Scenario | null }
-  /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
-  | { kind: 'route'; id: number; target: number; solveId: number }
-  /** `dialect`: how CSV files are written (RFC 4180 when absent). */
-  | { kind: 'export'; id: number; what: ExportKind; dialect?: CsvDialect }
-  | { kind: 'review'; id: number; scenario: Scenario | null }
-  | { kind: 'dispatch'; id: number; request: DispatchRequest };
-
 export interface WorkerErrorView {
   name: string;
   message: string;
 }
 
+/** The import: the pair of files, whether rejected rows may be left out, and the day and class to plan. */
+export interface LoadRequest {
+  depots: NamedText;
+  lanes: NamedText;
+  acceptPartial: boolean;
+  plan: PlanChoice;
+}
+
+/** The answer to an import or a re-plan: the network (null when it is held back or refused) and the report. */
+export interface LoadedAnswer {
+  network: NetworkView | null;
+  report: ImportReport;
+}
+
+/**
+ * Every request the worker answers, by kind: what the UI sends and the one answer it gets, like
+ * the IPC contract's `Channels`. A caller names the request; the answer's type follows from it.
+ */
+export interface WorkerRequests {
+  load: { request: LoadRequest; answer: LoadedAnswer };
+  replan: { request: { plan: PlanChoice }; answer: LoadedAnswer };
+  solve: { request: { settings: PlanSettings; scenario: Scenario | null }; answer: { result: SolveView } };
+  /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
+  route: { request: { target: number; solveId: number }; answer: { route: RouteView | null } };
+  /** `dialect`: how CSV files are written (RFC 4180 when absent). */
+  export: { request: { what: ExportKind; dialect?: CsvDialect }; answer: { fileName: string; mime: string; text: string } };
+  review: { request: { scenario: Scenario | null }; answer: { review: ContractReviewView } };
+  dispatch: { request: { request: DispatchRequest }; answer: { result: DispatchView } };
+}
+
+export type RequestKind = keyof WorkerRequests;
+
+/** The message kind of each request's answer; the client refuses an answer of another kind. */
+export const ANSWER_KIND = {
+  load: 'loaded',
+  replan: 'loaded',
+  solve: 'solved',
+  route: 'route',
+  export: 'exported',
+  review: 'reviewed',
+  dispatch: 'dispatched',
+} as const satisfies Record<RequestKind, string>;
+
+export type RequestOf<K extends RequestKind> = WorkerRequests[K]['request'];
+
+/** The answer message to a request of kind K. */
+export type Answer<K extends RequestKind> = { kind: (typeof ANSWER_KIND)[K]; id: number } & WorkerRequests[K]['answer'];
+
+export type ToWorker = { [K in RequestKind]: { kind: K; id: number } & RequestOf<K> }[RequestKind];
+
 export type FromWorker =
   | { kind: 'progress'; id: number; phase: string; fraction: number }
-  | { kind: 'loaded'; id: number; network: NetworkView | null; report: ImportReport }
-  | { kind: 'solved'; id: number; result: SolveView }
-  | { kind: 'route'; id: number; route: RouteView | null }
-  | { kind: 'exported'; id: number; fileName: string; mime: string; text: string }
-  | { kind: 'reviewed'; id: number; review: unknown }
-  | { kind: 'dispatched'; id: number; result: DispatchView }
+  | { [K in RequestKind]: Answer<K> }[RequestKind]
   | { kind: 'error'; id: number; error: WorkerErrorView };

@@ -5,17 +5,16 @@
 import { LanewrightError } from '../../engine/index';
 import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
-import { laneKeyIndex, laneKeysOf, type LaneKey } from '../../engine/index';
-import { applyScenario } from '../../engine/index';
-import { hasChanges, needsRebuild, type Scenario } from '../model/scenario-edits';
+import { overlayIndex, type OverlayIndex } from '../../engine/index';
+import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
-import { networkView, transferablesOf } from './network-view';
+import { laneOfRows, networkView, transferablesOf } from './network-view';
 import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
-import { laneRefsOf, onBaseLanes, pathOf, scenarioWeights, solveFor, solveView, type Solved } from './solve-plan';
+import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -31,7 +30,10 @@ export class WorkerSession {
   private scenario: Scenario | null = null;
   /** Set when the last solve ran on a network the scenario rebuilt; its lanes map back through laneRefs. */
   private solvedOn: { network: Network; laneRefs: Int32Array } | null = null;
-  private keys: { keys: LaneKey[]; index: ReadonlyMap<string, number> } | null = null;
+  /** Base network lane of each lanes-file row (-1 = not planned), to map a rebuilt network back. */
+  private laneOfRow: Int32Array = new Int32Array(0);
+  /** Keys of the import's lane rows, counted once per import (occurrences over the whole file). */
+  private rowIndex: OverlayIndex | null = null;
   /** Names of the files the network was read from (depots, lanes), for the exports' settings. */
   private files: string[] = [];
   /** The texts of the last accepted import: a new currency or rates means reading them again. */
@@ -82,8 +84,14 @@ export class WorkerSession {
       }
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.need(), message.scenario, this.plan.date || null, progress) });
+        if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
+        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress) });
         return;
+      }
+      default: {
+        // Every request kind of WorkerRequests is handled above: a new kind fails to compile here.
+        const unhandled: never = message;
+        throw new LanewrightError(`worker: unknown request ${JSON.stringify(unhandled)}`);
       }
     }
   }
@@ -97,13 +105,13 @@ export class WorkerSession {
     this.imported = result;
     this.network = result.network;
     this.plan = plan;
-    const keys = laneKeysOf(result.network!);
-    this.keys = { keys, index: laneKeyIndex(keys) };
+    this.laneOfRow = laneOfRows(result);
+    this.rowIndex = overlayIndex(result);
     this.solved = null;
     this.solvedId = null;
     this.base = null;
     this.baseKey = '';
-    const view = networkView(result.network!, result.vehicleClasses, plan, result.plan.settings.drivingLimit.dailyDrivingMinutes);
+    const view = networkView(result, plan, this.rowIndex!.keys);
     this.post({ kind: 'loaded', id, network: view, report: reportOf(result) }, transferablesOf(view));
   }
 
@@ -144,19 +152,18 @@ export class WorkerSession {
     this.scenario = scenario;
     this.solvedId = id;
     let view: SolveView;
-    if (needsRebuild(scenario)) {
-      // Added lanes and validity changes alter the lane set: the engine applies the scenario and the
-      // answer is mapped back onto the base lanes the UI draws.
-      const applied = applyScenario(network, scenario!, { date: this.plan.date || null });
-      const laneRefs = laneRefsOf(applied, scenario!, this.keys?.keys ?? laneKeysOf(network));
-      this.solved = solveFor(applied.network, settings);
-      this.solvedOn = { network: applied.network, laneRefs };
-      view = onBaseLanes(solveView(applied.network, settings, this.solved, performance.now() - started, driveLimit), laneRefs);
+    const input = scenarioSolveInput(this.imported!, network, scenario, this.rowIndex ?? undefined);
+    if (input.rebuilt) {
+      // The scenario changes which rows are planned (added lanes, validity, a class copy): the
+      // engine plans the overlay's network, and the answer is mapped back onto the base lanes.
+      const laneRefs = laneRefsOf(input.rebuilt, this.laneOfRow);
+      this.solved = solveFor(input.rebuilt.network, settings);
+      this.solvedOn = { network: input.rebuilt.network, laneRefs };
+      view = onBaseLanes(solveView(input.rebuilt.network, settings, this.solved, performance.now() - started, driveLimit, input.overlay), laneRefs);
     } else {
-      const weights = scenarioWeights(network, scenario, this.keys ?? undefined);
-      this.solved = solveFor(network, settings, weights);
+      this.solved = solveFor(network, settings, input.weights);
       this.solvedOn = null;
-      view = solveView(network, settings, this.solved, performance.now() - started, driveLimit);
+      view = solveView(network, settings, this.solved, performance.now() - started, driveLimit, input.overlay);
     }
     if (hasChanges(scenario)) {
       const key = JSON.stringify(settings);
@@ -167,6 +174,6 @@ export class WorkerSession {
       }
       view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice() };
     }
-    this.post({ kind: 'solved', id, result: view });
+    this.post({ kind: 'solved', id, result: view }, overlayTransferables(view.overlay));
   }
 }

@@ -1,34 +1,59 @@
-// One planning solve as the UI shows it: scenario edits become a weight per lane position (the
-// network is never rebuilt for a what-if), then the engine solves from the origin with or without
-// a leg limit, and each depot gets its drive time and caution flags.
+// One planning solve as the UI shows it: the engine's overlay gives the scenario's amounts as a
+// weight per lane position (the network is rebuilt only when the scenario changes which rows are
+// planned), then the engine solves from the origin with or without a leg limit, and each depot
+// gets its drive time and caution flags. The overlay's figures travel with the answer.
 
 import { depotIndexOf } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED, type RouteTree } from '../../engine/index';
 import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/index';
 import { routePath } from '../../engine/index';
-import { laneKeysOf, type LaneKey } from '../../engine/index';
-import type { AppliedScenario } from '../../engine/index';
+import type { ImportResult, OverlayIndex, OverlayNetwork } from '../../engine/index';
+import { buildOverlay, describeChanges, overlayNetwork, overlayPlanAmounts, overlayRowAmounts, planRequestOf } from '../../engine/index';
 import { addedLaneRef } from '../model/added-lanes';
-import { applyScenarioAmounts, hasChanges, laneNetMinor, type Scenario } from '../model/scenario-edits';
+import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
-import type { PlanSettings, RouteView, SolveView } from './protocol';
+import type { OverlayView, PlanSettings, RouteView, SolveView } from './protocol';
 
 export type Solved = RouteTree | LegLimitedRoutes;
 
-/** Net cost per CSR position after the scenario's changes; closed lanes get +Infinity. Undefined when nothing is edited. */
-export function scenarioWeights(network: Network, scenario: Scenario | null, keys?: { keys: LaneKey[]; index: ReadonlyMap<string, number> }): Float64Array | undefined {
-  if (!hasChanges(scenario)) return undefined;
-  const base = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
-  const amounts = keys ? applyScenarioAmounts(base, keys.keys, scenario, keys.index) : applyScenarioAmounts(base, laneKeysOf(network), scenario);
-  const weights = new Float64Array(network.laneCount);
-  for (let p = 0; p < network.laneCount; p++) {
-    const e = network.outLane[p];
-    const net = laneNetMinor(amounts, e);
-    if (!Number.isSafeInteger(net)) throw new RangeError(`scenario: net cost of the lane from row ${network.laneRow[e]} is out of the exact range`);
-    weights[p] = amounts.closed[e] ? Infinity : net;
-  }
-  return weights;
+/** The scenario over the import for its planned date and class: amounts, weights, and the network to solve when rebuilt. */
+export interface ScenarioSolveInput {
+  overlay: OverlayView;
+  /** Per CSR position of the base network; undefined without changes. */
+  weights: Float64Array | undefined;
+  /** Set when the scenario changes which rows are planned: solve this network instead. */
+  rebuilt: OverlayNetwork | null;
+}
+
+/** Lays the scenario over the import with the engine's overlay; see the file header. */
+export function scenarioSolveInput(imported: ImportResult, network: Network, scenario: Scenario | null, index?: OverlayIndex): ScenarioSolveInput {
+  const changed = hasChanges(scenario);
+  const request = planRequestOf(imported);
+  const overlay = buildOverlay(imported, changed ? scenario : null, index);
+  const amounts = overlayPlanAmounts(overlay, imported, request, network, imported.plan.laneRecord);
+  const rows = overlayRowAmounts(overlay, imported.plan.vehicleClass);
+  const base = overlay.baseCount;
+  const view: OverlayView = {
+    toll: amounts.toll,
+    fuel: amounts.fuel,
+    fees: amounts.fees,
+    rebate: amounts.rebate,
+    closed: amounts.closed,
+    changed: amounts.changed,
+    notPlanned: amounts.notPlanned,
+    rows: { toll: rows.toll.slice(0, base), fuel: rows.fuel.slice(0, base), fees: rows.fees.slice(0, base), rebate: rows.rebate.slice(0, base), closed: overlay.closed.slice(0, base), changed: overlay.changed.slice(0, base) },
+    changes: changed ? describeChanges(imported, overlay, scenario!, network.exponent) : [],
+  };
+  if (!changed) return { overlay: view, weights: undefined, rebuilt: null };
+  if (amounts.weights) return { overlay: view, weights: amounts.weights, rebuilt: null };
+  return { overlay: view, weights: undefined, rebuilt: overlayNetwork(overlay, imported, request) };
+}
+
+/** The typed arrays of an overlay view, for postMessage's transfer list. */
+export function overlayTransferables(view: OverlayView): ArrayBuffer[] {
+  const r = view.rows;
+  return [view.toll, view.fuel, view.fees, view.rebate, view.closed, view.changed, view.notPlanned, r.toll, r.fuel, r.fees, r.rebate, r.closed, r.changed].map((a) => a.buffer as ArrayBuffer);
 }
 
 /** Runs the engine solve for the settings. */
@@ -45,7 +70,7 @@ export function pathOf(network: Network, solved: Solved, target: number): RouteV
 }
 
 /** The solve's per-depot view: drive time, flags and the tree to draw. */
-export function solveView(network: Network, settings: PlanSettings, solved: Solved, solveMs: number, driveLimitMinutes: number): SolveView {
+export function solveView(network: Network, settings: PlanSettings, solved: Solved, solveMs: number, driveLimitMinutes: number, overlay: OverlayView): SolveView {
   const n = network.depotCount;
   const driveMinutes = new Float64Array(n).fill(NaN);
   const flags = new Uint8Array(n);
@@ -80,33 +105,18 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     treeLanes: Int32Array.from(treeLaneList),
     loops: solved.loops.map((loop) => ({ depots: loop.depots, lanes: loop.lanes, netPerLap: loop.netPerLap })),
     base: null,
+    overlay,
     solveMs,
   };
 }
 
 /**
- * How the UI names each lane of a network the scenario rebuilt: its base lane index, or for a lane
- * the scenario added `addedLaneRef(change index)`. applyScenario keys the k-th successful add-lane
- * change of a from/to/ref group with occurrence (base lanes in that group) + k, which traces it back.
+ * How the UI names each lane of a network the scenario rebuilt: the base network lane of its row
+ * (`laneOfRow`), or for a lane the scenario added `addedLaneRef(change index)`; -1 for a row the
+ * base plan does not have (e.g. one a validity change brings into the date).
  */
-export function laneRefsOf(applied: AppliedScenario, scenario: Scenario, baseKeys: readonly LaneKey[]): Int32Array {
-  const group = (from: string, to: string, ref: string | null) => JSON.stringify([from, to, ref]);
-  const baseCount = new Map<string, number>();
-  for (const k of baseKeys) baseCount.set(group(k.from, k.to, k.ref), k.occurrence);
-  const failed = new Set(applied.problems.map((p) => p.changeIndex));
-  const addsByGroup = new Map<string, number[]>();
-  scenario.changes.forEach((c, i) => {
-    if (c.kind !== 'add-lane' || failed.has(i)) return;
-    const g = group(c.lane.from, c.lane.to, c.lane.ref);
-    addsByGroup.set(g, [...(addsByGroup.get(g) ?? []), i]);
-  });
-  return Int32Array.from(applied.baseLaneOf, (b, e) => {
-    if (b >= 0) return b;
-    const k = applied.laneKeys[e];
-    const g = group(k.from, k.to, k.ref);
-    const change = addsByGroup.get(g)?.[k.occurrence - (baseCount.get(g) ?? 0) - 1];
-    return change === undefined ? -1 : addedLaneRef(change);
-  });
+export function laneRefsOf(rebuilt: OverlayNetwork, laneOfRow: Int32Array): Int32Array {
+  return Int32Array.from(rebuilt.baseRow, (row, e) => (row >= 0 ? laneOfRow[row] : rebuilt.addedBy[e] >= 0 ? addedLaneRef(rebuilt.addedBy[e]) : -1));
 }
 
 /**

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { formatMinor, type Minor } from '../../engine/money/minor';
 import { importNetwork } from '../../engine/planning/import-network';
-import { parseScenarioDocument, serializeScenarioDocument } from '../../engine/scenario/document';
+import { parseScenarioDocument, SCENARIO_VERSION, serializeScenarioDocument } from '../../engine/scenario/document';
 import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { expectedPlan, sample } from './support/expected';
 
@@ -178,9 +178,10 @@ describe('workspace in the browser', () => {
     expect(expected.unbounded.size).toBe(0);
     expect(await page.getByRole('alert').filter({ hasText: 'Rebate loop' }).count()).toBe(0);
     const compare = page.locator('[data-testid="scenario-compare"]');
-    expect(await compare.innerText()).toContain('rebate set to 0.00');
+    // The change is worded by the engine's overlay: the amount before and after.
+    expect(await compare.innerText()).toMatch(/rebate \d+\.\d\d → 0\.00/);
     // Each Undo names the change it undoes, so a screen reader tells them apart.
-    expect(await compare.getByRole('button', { name: /^Undo change 1: .*rebate set to 0\.00$/ }).count()).toBe(1);
+    expect(await compare.getByRole('button', { name: /^Undo change 1: .*rebate \d+\.\d\d → 0\.00$/ }).count()).toBe(1);
     expect(await compare.locator('[data-moved-depot]').count()).toBeGreaterThan(0);
     expect(await compare.innerText()).toMatch(/unbounded → reachable/);
     await snap(page, 'scenario-edit');
@@ -244,7 +245,7 @@ describe('workspace in the browser', () => {
     const [saved] = await Promise.all([page.waitForEvent('download'), page.getByLabel('Export', { exact: true }).selectOption('scenario-json')]);
     expect(saved.suggestedFilename()).toBe('direct-milan-run.json');
     const savedText = readFileSync(await saved.path(), 'utf8');
-    expect(JSON.parse(savedText)).toMatchObject({ format: 'lanewright-scenario', version: 1 });
+    expect(JSON.parse(savedText)).toMatchObject({ format: 'lanewright-scenario', version: SCENARIO_VERSION });
     expect(parseScenarioDocument(savedText, 'direct-milan-run.json')).toEqual(edited);
 
     // Removing it takes it off the table and the map.
@@ -320,6 +321,34 @@ describe('workspace in the browser', () => {
     expect(id).toBe(await rows.nth(2).getAttribute('data-depot'));
     await page.keyboard.press('Enter');
     await expect.poll(() => page.locator('#lw-route-title').innerText()).toContain(`Route to ${id}`);
+  });
+
+  it('edits a toll for the vehicle class on screen and lists every row of the file', async () => {
+    let before = await solveCount(page);
+    await page.getByLabel('Vehicle class').selectOption('2axle');
+    await waitForPlan(page, before);
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    await page.getByLabel('Filter lanes by depot or contract ref').fill('BFH-L-014');
+    // sample-data/lanes.csv row 15: LUX > SXB, toll 18.20, 2axle 8.19, 5axle 18.20.
+    const cell = page.locator('tr[data-lane-row="15"] input[aria-label^="toll of lane"]');
+    expect(await cell.getAttribute('aria-label')).toMatch(/\(2axle\)$/);
+    expect(await cell.inputValue()).toBe('8.19');
+    before = await solveCount(page);
+    await cell.fill('9,00'); // read by the importer's rules: a decimal comma
+    await cell.press('Enter');
+    await waitForPlan(page, before);
+    const compare = page.locator('[data-testid="scenario-compare"]');
+    await expect.poll(() => compare.innerText()).toContain('toll 2axle 8.19 → 9.00');
+    await page.getByLabel('Filter lanes by depot or contract ref').fill('');
+    await page.getByLabel(/Every row of the file/).check();
+    await expect.poll(() => page.locator('.lw-lanes [aria-live="polite"]').innerText()).toMatch(/^147 lanes/);
+    await page.getByLabel(/Every row of the file/).uncheck();
+    before = await solveCount(page);
+    await compare.getByRole('button', { name: 'Back to the base contract' }).click();
+    await waitForPlan(page, before);
+    before = await solveCount(page);
+    await page.getByLabel('Vehicle class').selectOption('');
+    await waitForPlan(page, before);
   });
 
   it('opens the about box with the cautions from the keyboard', async () => {

@@ -2,11 +2,11 @@
 // distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one row per
 // lane) or JSON; --loops-csv also writes one row per lane of each loop.
 
-import { auditNetwork } from '../../../engine/index';
+import { auditNetwork, overlayKeys } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { wholeNumberOption, type ParsedArgs } from '../args';
-import { loadNetwork, planDateOf } from '../load-network';
+import { loadImport, planDateOf } from '../load-network';
 import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
@@ -41,7 +41,11 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   csvDialectOption(args);
 
   const readStart = performance.now();
-  const network = loadNetwork(args);
+  const imported = loadImport(args);
+  const network = imported.network;
+  // Lane keys as scenarios name them: counted over the file's rows, not the day's network.
+  const rowKeys = overlayKeys(imported);
+  const laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
   const readMs = performance.now() - readStart;
 
   let lastLine = '';
@@ -49,6 +53,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const audit = auditNetwork(network, {
     loopCap,
     negotiable,
+    laneKeys,
     onProgress: args.flags.has('progress')
       ? ({ phase, done, total }) => {
           const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;

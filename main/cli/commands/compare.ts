@@ -1,14 +1,15 @@
 // `lanewright compare`: a what-if scenario against the base from one origin: each depot's cost
 // before and after, the routes that changed and the rebate loops that appear or disappear.
 // Changes that no longer fit the lanes file are printed as warnings; the scenario file is never rewritten.
+// The scenario goes through the engine's overlay (engine/scenario/overlay.ts), as in the app.
 
-import { compareScenario } from '../../../engine/index';
+import { compareImport } from '../../../engine/index';
 import { parseScenarioDocument } from '../../../engine/index';
 import { compareReport, compareReportRows } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
-import { loadNetwork, planDateOf } from '../load-network';
+import { loadImport, planDateOf } from '../load-network';
 import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
@@ -39,12 +40,11 @@ function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const scenarioPath = required(args, 'scenario');
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const scenario = parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
-  const network = loadNetwork(args);
-
-  const comparison = compareScenario(network, scenario, originId, {
-    date: planDateOf(args).date,
-    loopCap,
-  });
+  // The scenario is laid over every lane row of the file, then planned for --date and
+  // --vehicle-class like the base, so a change names the same row whatever the date or class.
+  const imported = loadImport(args);
+  const network = imported.network;
+  const comparison = compareImport(imported, scenario, originId, { loopCap });
   const report = compareReport(comparison);
   out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, formatCsvRows(compareReportRows(report, network.exponent))));
 

@@ -1,16 +1,21 @@
-// `lanewright export`: writes the lanes CSV, the routes CSV from an origin, the loops CSV and a
-// GeoJSON of depots, routes and loops; options choose which. Every file is written atomically.
+// `lanewright export`: writes the lanes CSV (every row, class and validity window of the file), the
+// routes CSV from an origin, the loops CSV and a GeoJSON of depots, routes and loops; options choose
+// which. With --scenario every file describes the contract as the scenario changes it, through the
+// engine's overlay (engine/scenario/overlay.ts) as in the app. Every file is written atomically.
 
 import { findDistinctLoops } from '../../../engine/index';
 import { geoJsonText } from '../../../engine/index';
-import { lanesCsv } from '../../../engine/index';
+import { lanesCsv, type LanesExportInput } from '../../../engine/index';
 import { loopsCsv } from '../../../engine/index';
 import { routesCsv } from '../../../engine/index';
 import { networkGeoJson } from '../../../engine/index';
 import { depotIndexOf } from '../../../engine/index';
 import { routesReport, type RoutesReport } from '../../../engine/index';
 import { cheapestRoutes } from '../../../engine/index';
+import { parseScenarioDocument, scenarioImport } from '../../../engine/index';
+import type { Network } from '../../../engine/index';
 import { UsageError, type ParsedArgs } from '../args';
+import { readTextFile } from '../files';
 import { loadImport } from '../load-network';
 import { CSV_DIALECT_OPTION, NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import { inCsvDialect } from '../csv-dialect-option';
@@ -32,6 +37,7 @@ export const exportCommand: CommandSpec = {
     { name: 'loops-out', value: 'FILE', help: 'write the rebate loops CSV' },
     { name: 'geojson-out', value: 'FILE', help: 'write depots, routes and loops as GeoJSON' },
     CSV_DIALECT_OPTION,
+    { name: 'scenario', value: 'FILE', help: 'lay this scenario file over the lanes before exporting' },
     ...PLANNING_OPTIONS,
   ],
   run: runExport,
@@ -47,16 +53,28 @@ function runExport(args: ParsedArgs, out: CommandOutput): number {
   }
   const originId = args.values.get('from');
   if (routesOut && !originId) throw new UsageError('--routes-out needs --from DEPOT_ID');
+  const scenarioPath = args.values.get('scenario');
+  const scenario = scenarioPath === undefined ? null : parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
 
   const imported = loadImport(args);
-  const network = imported.network;
+  let network: Network = imported.network;
+  let lanes: LanesExportInput = imported;
+  if (scenario) {
+    const what = scenarioImport(imported, scenario);
+    for (const p of what.overlay.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
+    network = what.network;
+    lanes = what;
+  }
   let report: RoutesReport | undefined;
   if (originId) {
     const solved = cheapestRoutes(network, depotIndexOf(network, originId, '--from'));
     report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
   }
   const loops = findDistinctLoops(network).loops;
-  if (lanesOut) out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(imported, loops)), `lanes: ${lanesOut} (${network.laneCount} lane(s))`);
+  if (lanesOut) {
+    const rows = lanes.lanes.count - (lanes.leaveOut ? lanes.leaveOut.reduce((n, x) => n + x, 0) : 0);
+    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
+  }
   if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
   if ((routesOut || lanesOut || geojsonOut) && report) out.afterOutput(`CAUTION: ${report.caution}`);
   if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);

@@ -2,6 +2,7 @@
 // drawn as plain SVG. Bars carry their value as text and rebates are hatched, so colour is never
 // the only cue.
 
+import { netCost } from '../../../engine/index';
 import { formatMoney } from '../../model/format';
 
 export interface BreakdownChartProps {
@@ -20,7 +21,7 @@ const LABEL = 58;
 const VALUE = 78;
 
 export function BreakdownChart({ tollMinor, fuelMinor, feesMinor, rebateMinor, exponent, currency }: BreakdownChartProps) {
-  const net = tollMinor + fuelMinor + feesMinor - rebateMinor;
+  const net = netCost(tollMinor, fuelMinor, feesMinor, rebateMinor, 'net cost of the route');
   const bars = [
     { label: 'Tolls', value: tollMinor, cls: 'lw-bar-toll' },
     { label: 'Fuel', value: fuelMinor, cls: 'lw-bar-fuel' },

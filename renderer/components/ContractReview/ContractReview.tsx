@@ -8,7 +8,7 @@ import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import { formatMoney, formatMoneyWithCode } from '../../model/format';
 import { fixPlanScenario, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
-import type { ContractReviewView } from '../../worker/review';
+import type { ContractReviewView } from '../../worker/protocol';
 import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
 
 export interface ContractReviewProps {
@@ -31,8 +31,8 @@ export function ContractReview({ engine, network, keys, scenario, onScenario }: 
     setProblem(null);
     setStopped(false);
     engine
-      .track((onProgress) => engine.client.request<'reviewed'>({ kind: 'review', scenario }, onProgress), 'Reviewing the contract')
-      .then((answer) => live && setReview(answer.review as ContractReviewView))
+      .track((onProgress) => engine.client.request('review', { scenario }, onProgress), 'Reviewing the contract')
+      .then((answer) => live && setReview(answer.review))
       .catch((error: Error) => live && (error instanceof WorkCancelledError ? setStopped(true) : setProblem(error.message)));
     return () => {
       live = false;

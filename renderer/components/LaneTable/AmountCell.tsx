@@ -1,29 +1,32 @@
-// One editable amount in the lane table. The text is checked with the engine's exact money parser
-// when the cell is committed (Enter or leaving it); a bad value stays in the cell, marked invalid,
-// and its reason is the input's description (announced once, since a tooltip reaches no screen reader).
+// One editable amount in the lane table. The text is read by the importer's rules (the engine's
+// readEnteredAmount: "12,50", "1.234,56" and "12.50 EUR" read as in a lanes file) when the cell is
+// committed (Enter or leaving it); a bad value stays in the cell, marked invalid, and its reason is
+// the input's description (announced once, since a tooltip reaches no screen reader).
 
 import { useId, useState } from 'react';
 import { LanewrightError } from '../../../engine/index';
-import { parseMinor } from '../../../engine/index';
+import { readEnteredAmount } from '../../../engine/index';
 import { formatMinor, type Minor } from '../../../engine/index';
 
 export interface AmountCellProps {
+  /** NaN for a blank cell of the file (e.g. fuel that planning estimates). */
   valueMinor: number;
   exponent: number;
+  currency: string;
   label: string;
   changed: boolean;
   onCommit(valueMinor: number): void;
 }
 
-export function AmountCell({ valueMinor, exponent, label, changed, onCommit }: AmountCellProps) {
-  const shown = formatMinor(valueMinor as Minor, exponent);
+export function AmountCell({ valueMinor, exponent, currency, label, changed, onCommit }: AmountCellProps) {
+  const shown = Number.isNaN(valueMinor) ? '' : formatMinor(valueMinor as Minor, exponent);
   const [draft, setDraft] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const problemId = `${useId()}-problem`;
   const commit = () => {
     if (draft === null) return;
     try {
-      const value = parseMinor(draft, exponent);
+      const value = readEnteredAmount(draft, exponent, currency);
       if (value < 0) throw new LanewrightError('amounts are entered as positive numbers; a rebate reduces the cost by itself');
       setDraft(null);
       setProblem(null);

@@ -1,21 +1,22 @@
-// The lane table: every lane of the contract with its amounts under the active scenario. Editing an
-// amount or closing a lane adds a change to the scenario (never to the imported file); the plan
-// recomputes at once. Lanes the scenario adds are listed first, marked as such, editable and
-// removable. Filtered and paged so 50,000 lanes stay responsive.
+// The lane table: the lanes of the contract with their amounts under the active scenario, as the
+// engine's overlay computes them in the worker (this component computes no amount). Editing an
+// amount or closing a lane adds a change to the scenario (never to the imported file). A toll edit
+// is for the vehicle class being viewed; "every class" is a separate, explicit choice. Every row
+// of the file can be shown, rows not planned for the date or class marked and still editable.
+// Lanes the scenario adds are listed first. Filtered and paged so 50,000 lanes stay responsive.
 
 import { useMemo, useState } from 'react';
+import { netCost, withoutChange } from '../../../engine/index';
 import { addedAmount, addedLaneName, setAddedLaneAmount, type AddedLane } from '../../model/added-lanes';
-import { EDITABLE_FIELDS, laneNetMinor, setLaneAmount, setLaneClosed, type LaneAmounts, type LaneKey, type Scenario } from '../../model/scenario-edits';
+import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type EditableField, type Scenario } from '../../model/scenario-edits';
 import { formatMoney } from '../../model/format';
-import { withoutChange } from '../../../engine/index';
-import type { NetworkView } from '../../worker/protocol';
+import type { NetworkView, OverlayView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
 import { AmountCell } from './AmountCell';
 
 export interface LaneTableProps {
   network: NetworkView;
-  keys: readonly LaneKey[];
-  amounts: LaneAmounts;
+  amounts: OverlayView;
   /** Lanes the scenario adds (not in the network). */
   added: readonly AddedLane[];
   scenario: Scenario;
@@ -26,31 +27,52 @@ const PAGE = 100;
 const NUM = (label: string) => ({ label, numeric: true });
 const LANE_TABLE_HEADS = ['Row', 'Lane', 'Ref', NUM('Tolls'), NUM('Fuel'), NUM('Fees'), NUM('Rebate'), NUM('Net'), 'Open'];
 
-export function LaneTable({ network, keys, amounts, added, scenario, onScenario }: LaneTableProps) {
+/** Why a row of the file is not in the plan on screen. */
+function notPlannedReason(network: NetworkView, r: number): string {
+  const rows = network.rows;
+  const date = network.plan.date;
+  const from = rows.validFrom[r];
+  const to = rows.validTo[r];
+  if (date && ((from && date < from) || (to && date > to))) return `not valid on ${date} (valid ${from ?? '…'} to ${to ?? '…'})`;
+  const cls = rows.vehicleClass[r];
+  if (cls !== null && cls !== network.plannedClass) return `for vehicle class ${cls}`;
+  return 'not in the plan on screen';
+}
+
+export function LaneTable({ network, amounts, added, scenario, onScenario }: LaneTableProps) {
   const [text, setText] = useState('');
   const [changedOnly, setChangedOnly] = useState(false);
+  const [everyRow, setEveryRow] = useState(false);
+  const [tollForEveryClass, setTollForEveryClass] = useState(false);
   const [page, setPage] = useState(0);
-  const lanes = useMemo(() => {
+  const rows = network.rows;
+  const viewedClass = network.plannedClass;
+  // Without a class (no class tolls, or the toll column on screen) a toll edit is for every class.
+  const tollClass = viewedClass === null || tollForEveryClass ? null : viewedClass;
+  const shown = useMemo(() => {
     const needle = text.trim().toLowerCase();
     const out: number[] = [];
-    for (let e = 0; e < network.laneFrom.length; e++) {
-      if (changedOnly && !amounts.changed[e]) continue;
+    for (let r = 0; r < rows.lane.length; r++) {
+      const e = rows.lane[r];
+      if (e === -1 && !everyRow) continue;
+      if (changedOnly && !(e >= 0 ? amounts.changed[e] : amounts.rows.changed[r])) continue;
       if (needle !== '') {
-        const hay = `${network.depotIds[network.laneFrom[e]]} ${network.depotIds[network.laneTo[e]]} ${network.laneRef[e] ?? ''}`.toLowerCase();
+        const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rows.ref[r] ?? ''}`.toLowerCase();
         if (!hay.includes(needle)) continue;
       }
-      out.push(e);
+      out.push(r);
     }
     return out;
-  }, [network, amounts, text, changedOnly]);
+  }, [network, rows, amounts, text, changedOnly, everyRow]);
   const addedShown = useMemo(() => {
     const needle = text.trim().toLowerCase();
     return added.filter((a) => needle === '' || `${a.lane.from} ${a.lane.to} ${a.lane.ref ?? ''}`.toLowerCase().includes(needle));
   }, [added, text]);
-  const pages = Math.max(1, Math.ceil(lanes.length / PAGE));
+  const pages = Math.max(1, Math.ceil(shown.length / PAGE));
   const current = Math.min(page, pages - 1);
   const id = (d: number) => network.depotIds[d];
-  const base = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
+  const base: Record<EditableField, Float64Array> = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
+  const planned = rows.lane.reduce((n, e) => n + (e >= 0 ? 1 : 0), 0);
   return (
     <div className="lw-lanes">
       <div className="lw-table-tools" role="group" aria-label="Filter lanes">
@@ -58,8 +80,17 @@ export function LaneTable({ network, keys, amounts, added, scenario, onScenario 
         <label className="lw-check">
           <input type="checkbox" checked={changedOnly} onChange={(e) => (setChangedOnly(e.target.checked), setPage(0))} /> Changed in scenario only
         </label>
+        <label className="lw-check">
+          <input type="checkbox" checked={everyRow} onChange={(e) => (setEveryRow(e.target.checked), setPage(0))} /> Every row of the file ({rows.lane.length - planned} not planned for {network.plan.date || 'this plan'}
+          {viewedClass ? `, ${viewedClass}` : ''})
+        </label>
+        {viewedClass !== null && (
+          <label className="lw-check">
+            <input type="checkbox" checked={tollForEveryClass} onChange={(e) => setTollForEveryClass(e.target.checked)} /> Toll edits for every class (not only {viewedClass})
+          </label>
+        )}
         <span className="lw-muted" aria-live="polite">
-          {lanes.length} lanes{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages}
+          {shown.length} lanes{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
         </span>
         <button type="button" disabled={current === 0} onClick={() => setPage(current - 1)}>
           Previous page
@@ -90,6 +121,7 @@ export function LaneTable({ network, keys, amounts, added, scenario, onScenario 
                       key={`added-${a.changeIndex}-${field}-${addedAmount(a.lane, field)}`}
                       valueMinor={addedAmount(a.lane, field)}
                       exponent={network.exponent}
+                      currency={network.currency}
                       label={`${field} of added lane ${name}`}
                       changed
                       onCommit={(value) => onScenario(setAddedLaneAmount(scenario, a.changeIndex, field, value))}
@@ -105,29 +137,46 @@ export function LaneTable({ network, keys, amounts, added, scenario, onScenario 
               </tr>
             );
           })}
-          {lanes.slice(current * PAGE, current * PAGE + PAGE).map((e) => {
-            const name = `${id(network.laneFrom[e])} → ${id(network.laneTo[e])}`;
-            const net = laneNetMinor(amounts, e);
+          {shown.slice(current * PAGE, current * PAGE + PAGE).map((r) => {
+            const e = rows.lane[r];
+            const name = `${id(rows.from[r])} → ${id(rows.to[r])}`;
+            const key = rows.keys[r];
+            const inPlan = e >= 0;
+            const value = (field: EditableField) => (inPlan ? amounts[field][e] : amounts.rows[field][r]);
+            const closed = inPlan ? amounts.closed[e] === 1 : amounts.rows.closed[r] === 1;
+            const changed = inPlan ? amounts.changed[e] === 1 : amounts.rows.changed[r] === 1;
+            const away = inPlan && amounts.notPlanned[e] === 1;
+            const rowLabel = `lane ${name}, row ${rows.sourceRow[r]}`;
+            const fieldLabel = (field: EditableField) => (field === 'toll' ? ` (${tollClass ?? 'every class'})` : '');
             return (
-              <tr key={e} data-lane-row={network.laneRow[e]} className={amounts.changed[e] ? 'lw-changed-row' : undefined}>
-                <td>{network.laneRow[e]}</td>
+              <tr key={r} data-lane-row={rows.sourceRow[r]} data-planned={inPlan ? 'yes' : 'no'} className={[changed ? 'lw-changed-row' : '', inPlan ? '' : 'lw-unplanned-row'].join(' ').trim() || undefined}>
+                <td>
+                  {rows.sourceRow[r]}
+                  {!inPlan && (
+                    <span className="lw-badge" title="This row of the file is not part of the plan on screen; edits to it are kept in the scenario">
+                      {' '}
+                      {notPlannedReason(network, r)}
+                    </span>
+                  )}
+                </td>
                 <th scope="row">{name}</th>
-                <td>{network.laneRef[e] ?? '—'}</td>
+                <td>{rows.ref[r] ?? '—'}</td>
                 {EDITABLE_FIELDS.map((field) => (
                   <td key={field} className="lw-num">
                     <AmountCell
-                      key={`${e}-${field}-${amounts[field][e]}`}
-                      valueMinor={amounts[field][e]}
+                      key={`${r}-${field}-${value(field)}-${tollClass ?? ''}`}
+                      valueMinor={value(field)}
                       exponent={network.exponent}
-                      label={`${field} of lane ${name}, row ${network.laneRow[e]}`}
-                      changed={amounts[field][e] !== base[field][e]}
-                      onCommit={(value) => onScenario(setLaneAmount(scenario, keys[e], field, value, base[field][e]))}
+                      currency={network.currency}
+                      label={`${field} of ${rowLabel}${fieldLabel(field)}`}
+                      changed={inPlan ? value(field) !== base[field][e] : changed}
+                      onCommit={(next) => onScenario(setLaneAmount(scenario, key, field, next, inPlan && !(field === 'toll' && tollClass === null && network.vehicleClasses.length > 0) ? base[field][e] : NaN, field === 'toll' ? tollClass : null))}
                     />
                   </td>
                 ))}
-                <td className="lw-num">{amounts.closed[e] ? 'closed' : formatMoney(net, network.exponent)}</td>
+                <td className="lw-num">{closed ? (away ? 'not planned' : 'closed') : inPlan ? formatMoney(netCost(value('toll'), value('fuel'), value('fees'), value('rebate')), network.exponent) : '—'}</td>
                 <td>
-                  <input type="checkbox" aria-label={`Lane ${name}, row ${network.laneRow[e]} open`} checked={!amounts.closed[e]} onChange={(ev) => onScenario(setLaneClosed(scenario, keys[e], !ev.target.checked))} />
+                  <input type="checkbox" aria-label={`${rowLabel[0].toUpperCase()}${rowLabel.slice(1)} open`} checked={!(inPlan ? amounts.closed[e] && !away : amounts.rows.closed[r])} onChange={(ev) => onScenario(setLaneClosed(scenario, key, !ev.target.checked))} />
                 </td>
               </tr>
             );

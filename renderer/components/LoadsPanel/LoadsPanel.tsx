@@ -60,7 +60,7 @@ export function LoadsPanel({ engine, host, network, date, onDraw, onMessage }: L
     setBusy(true);
     setProblem(null);
     engine
-      .track((onProgress) => engine.client.request<'dispatched'>({ kind: 'dispatch', request: { ...next, date, alternatives: ALTERNATIVES, acceptPartial } }, onProgress), 'Planning the loads')
+      .track((onProgress) => engine.client.request('dispatch', { request: { ...next, date, alternatives: ALTERNATIVES, acceptPartial } }, onProgress), 'Planning the loads')
       .then((answer) => {
         setView(answer.result);
         const t = answer.result.report?.totals.all;

@@ -7,7 +7,8 @@ import { useEffect, useRef, useState } from 'react';
 import { FLAG_LIMIT_HIDES_LOOP } from '../../model/flags';
 import { formatMoneyWithCode } from '../../model/format';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
-import { laneNetMinor, type LaneAmounts } from '../../model/scenario-edits';
+import { netCost } from '../../../engine/index';
+import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
 
@@ -125,7 +126,7 @@ function LoopBanner({ network, solve, amounts, added, onReview }: LoopAlertProps
                       <td colSpan={5}>a lane the scenario adds (see the scenario’s changes)</td>
                     </tr>
                   );
-                const net = laneNetMinor(amounts, e);
+                const net = netCost(amounts.toll[e], amounts.fuel[e], amounts.fees[e], amounts.rebate[e]);
                 return (
                   <tr key={e}>
                     <td>

@@ -3,7 +3,7 @@
 // own as CSV or as a printed sheet, and a button to plan from this depot instead.
 
 import type { LanewrightHost } from '../../../main/ipc/contract';
-import { applyCsvDialect, exportFileName, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
+import { applyCsvDialect, exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
 import { csvDialect } from '../../app/csv-dialect-store';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
@@ -125,7 +125,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
                     <td className="lw-num">{money(leg.fuel)}</td>
                     <td className="lw-num">{money(leg.fees)}</td>
                     <td className="lw-num">{leg.rebate ? `-${money(leg.rebate)}` : money(0)}</td>
-                    <td className="lw-num">{money(leg.toll + leg.fuel + leg.fees - leg.rebate)}</td>
+                    <td className="lw-num">{money(netCost(leg.toll, leg.fuel, leg.fees, leg.rebate))}</td>
                   </tr>
                 ),
               )}

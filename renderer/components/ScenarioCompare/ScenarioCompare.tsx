@@ -1,5 +1,7 @@
-// What the active scenario moved: its changes lane by lane, then every depot whose status or cost
-// differs from the base contract, largest change first. Each change can be undone on its own.
+// What the active scenario moved: its changes lane by lane (as the engine's overlay words them,
+// "toll 2axle 8.19 → 9.00"; a change that could not be applied is marked with the reason and kept),
+// then every depot whose status or cost differs from the base contract, largest change first. Each
+// change can be undone on its own.
 
 import { CautionLine } from '../CautionLine/CautionLine';
 import { useMemo } from 'react';
@@ -54,8 +56,12 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       </div>
     );
   }
-  const describe = (c: Scenario['changes'][number]) => {
-    if (c.kind === 'set-amount') return `${laneKeyText(c.lane)}: ${c.field} set to ${money(c.amountMinor)}`;
+  // The worker's words for the changes of the scenario it solved; while a newer edit is being
+  // solved the list can be shorter, and those changes are named plainly until the answer comes.
+  const views = solve.overlay.changes;
+  const describe = (c: Scenario['changes'][number], i: number) => {
+    if (views.length === scenario.changes.length && views[i]) return views[i].text;
+    if (c.kind === 'set-amount') return `${laneKeyText(c.lane)}: ${c.field === 'toll' ? `toll ${c.vehicleClass ?? 'every class'}` : c.field} → ${money(c.amountMinor)}`;
     if (c.kind === 'close-lane') return `${laneKeyText(c.lane)}: closed`;
     if (c.kind === 'set-validity') return `${laneKeyText(c.lane)}: valid ${c.validFrom ?? '…'} to ${c.validTo ?? '…'}`;
     return `new lane ${c.lane.from} → ${c.lane.to}`;
@@ -65,14 +71,22 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       <CautionLine testId="compare-caution" />
       <h3>Changes in “{scenario.name}”</h3>
       <ul>
-        {scenario.changes.map((c, i) => (
-          <li key={i}>
-            {describe(c)}{' '}
-            <button type="button" aria-label={`Undo change ${i + 1}: ${describe(c)}`} onClick={() => onScenario(withoutChange(scenario, i))}>
-              Undo
-            </button>
-          </li>
-        ))}
+        {scenario.changes.map((c, i) => {
+          const view = views.length === scenario.changes.length ? views[i] : undefined;
+          return (
+            <li key={i} data-change-applied={view ? (view.applied ? 'yes' : 'no') : undefined}>
+              {describe(c, i)}{' '}
+              {view && !view.applied && (
+                <span className="lw-badge lw-badge-problem" role="note">
+                  not applied: {view.problem}
+                </span>
+              )}{' '}
+              <button type="button" aria-label={`Undo change ${i + 1}: ${describe(c, i)}`} onClick={() => onScenario(withoutChange(scenario, i))}>
+                Undo
+              </button>
+            </li>
+          );
+        })}
       </ul>
       <button type="button" onClick={() => onScenario({ ...scenario, changes: [] })}>
         Back to the base contract

@@ -5,7 +5,7 @@ import { readFileSync } from 'node:fs';
 import { importNetwork } from '../../../engine/planning/import-network';
 import { cheapestRoutes, STATUS_REACHABLE, STATUS_UNBOUNDED } from '../../../engine/routes/cheapest-routes';
 import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
-import { applyScenario } from '../../../engine/scenario/apply';
+import { scenarioImport } from '../../../engine/scenario/overlay-network';
 import type { Scenario } from '../../../engine/scenario/types';
 
 export const sample = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
@@ -24,7 +24,8 @@ export interface ExpectedPlan {
 export function expectedPlan(depotsText: string, lanesText: string, origin: string, date: string, scenario?: Scenario, options: { vehicleClass?: string; maxLegs?: number } = {}): ExpectedPlan {
   const imported = importNetwork(depotsText, lanesText, { plan: { date, vehicleClass: options.vehicleClass }, skipInvalid: true });
   if (!imported.network) throw new Error('expected: the files do not import');
-  const network = scenario ? applyScenario(imported.network, scenario, { date }).network : imported.network;
+  // The scenario goes through the engine's overlay, over every row of the file, as in the app.
+  const network = scenario ? scenarioImport(imported, scenario).network : imported.network;
   const from = network.depotIndex.get(origin)!;
   const tree = options.maxLegs === undefined ? cheapestRoutes(network, from) : legLimitedRoutes(network, from, options.maxLegs);
   const cost = new Map<string, number>();

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { addMinor, formatMinor, laneNetMinor, parseMinor, sumMinor, sumMinorOrNull, type Minor } from '../../../engine/money/minor';
+import { addMinor, formatMinor, parseMinor, sumMinor, sumMinorOrNull, type Minor } from '../../../engine/money/minor';
+import { netCostOrNull } from '../../../engine/money/net-cost';
 import { MoneyFormatError, MoneyOverflowError } from '../../../engine/errors';
 
 describe('parseMinor', () => {
@@ -78,14 +79,14 @@ describe('sums', () => {
   });
 });
 
-describe('laneNetMinor and sumMinorOrNull against BigInt', () => {
+describe('netCostOrNull and sumMinorOrNull against BigInt', () => {
   const MAX = Number.MAX_SAFE_INTEGER;
   const amount = fc.oneof(fc.integer({ min: -1000, max: 1000 }), fc.constantFrom(MAX, -MAX, MAX - 1, MAX - 100), fc.maxSafeInteger().map((v) => v));
   const exact = (big: bigint) => (big > BigInt(MAX) || big < -BigInt(MAX) ? null : Number(big));
   it('the net is exact whenever it is in range, and null exactly when it is not', () => {
     fc.assert(
       fc.property(amount, amount, amount, amount, (toll, fuel, fees, rebate) => {
-        expect(laneNetMinor(toll, fuel, fees, rebate)).toBe(exact(BigInt(toll) + BigInt(fuel) + BigInt(fees) - BigInt(rebate)));
+        expect(netCostOrNull(toll, fuel, fees, rebate)).toBe(exact(BigInt(toll) + BigInt(fuel) + BigInt(fees) - BigInt(rebate)));
       }),
       { numRuns: 3000 },
     );

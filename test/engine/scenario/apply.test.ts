@@ -90,7 +90,7 @@ describe('scenario changes survive a save, a reload and a re-import', () => {
       description: null,
       changes: [
         { kind: 'set-amount', lane: key('B', 'C', 'K-2'), field: 'rebate', amountMinor: 100, note: 'halve it' },
-        { kind: 'set-amount', lane: key('C', 'A', null, 2), field: 'toll', amountMinor: 650, note: null },
+        { kind: 'set-amount', lane: key('C', 'A', null, 2), field: 'toll', amountMinor: 650, vehicleClass: null, note: null },
         { kind: 'set-validity', lane: key('A', 'B', 'K-1'), validFrom: '2026-04-01', validTo: null, note: null },
         { kind: 'close-lane', lane: key('C', 'D', 'K-9'), note: null },
       ],

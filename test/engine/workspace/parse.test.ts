@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { emptyWorkspace, WORKSPACE_VERSION, type WorkspaceDocument } from '../../../engine/workspace/document';
 import { parseWorkspace, serializeWorkspace, checkWorkspace } from '../../../engine/workspace/parse';
 import { WorkspaceFormatError, WorkspaceVersionError } from '../../../engine/workspace/errors';
+import { SCENARIO_VERSION } from '../../../engine/scenario/document';
 
 function sampleWorkspace(): WorkspaceDocument {
   return {
@@ -147,8 +148,16 @@ describe('parseWorkspace', () => {
 
   it('stores each scenario as a scenario document with its own format and version', () => {
     const stored = JSON.parse(serializeWorkspace(sampleWorkspace()));
-    expect(stored.scenarios[0]).toMatchObject({ format: 'lanewright-scenario', version: 1, name: 'Cap the backhaul credit' });
+    expect(stored.scenarios[0]).toMatchObject({ format: 'lanewright-scenario', version: SCENARIO_VERSION, name: 'Cap the backhaul credit' });
     expect(failure(withField((d) => (d.scenarios[0].version = 99)))).toMatchObject({ field: '/scenarios/0/version' });
+  });
+
+  it('an in-memory toll change without a class reads as every class (the file then says null)', () => {
+    const doc = sampleWorkspace() as any;
+    doc.scenarios[0].changes.push({ kind: 'set-amount', lane: { from: 'A', to: 'B', ref: null, occurrence: 1 }, field: 'toll', amountMinor: 5, note: null });
+    const checked = checkWorkspace(doc, 'ipc');
+    expect(checked.scenarios[0].changes.at(-1)).toMatchObject({ field: 'toll', vehicleClass: null });
+    expect(JSON.parse(serializeWorkspace(checked)).scenarios[0].changes.at(-1)).toMatchObject({ vehicleClass: null });
   });
 
   it('keeps unknown fields of an in-memory scenario out of the checked copy', () => {

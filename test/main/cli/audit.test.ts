@@ -87,4 +87,14 @@ describe('lanewright audit', () => {
     expect(missing.stderr).toMatch(/nope\.csv/);
     expect(existsSync(join(dir, 'nope.csv'))).toBe(false);
   });
+
+  it('--negotiable lane keys count occurrences over the file, whatever --date plans', async () => {
+    const halves = ['from,to,ref,toll,fuel,fees,rebate,valid_from,valid_to', 'A,B,R1,10.00,0,0,0,2026-01-01,2026-06-30', 'A,B,R1,20.00,0,0,0,2026-07-01,2026-12-31', 'B,A,R2,5.00,0,0,30.00,,'].join('\n');
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': halves });
+    const { status, stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--date', '2026-08-15', '--negotiable', 'A>B|R1|2', '--json']);
+    expect(status).toBe(0);
+    expect(stderr).not.toMatch(/--negotiable: no lane/);
+    // The second-half row (A>B|R1|2, file row 3) is the lane planned on 2026-08-15.
+    expect(JSON.parse(stdout).loops[0].lanes).toContain(3);
+  });
 });

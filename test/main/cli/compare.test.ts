@@ -58,4 +58,31 @@ describe('lanewright compare', () => {
     const missing = await runCli(['compare', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--from', 'A']);
     expect(missing.status).toBe(2);
   });
+
+  // Two rows A>B with ref R1, valid in the first and the second half of 2026: occurrences are
+  // counted over the file, so on 2026-08-15 occurrence 2 (the second-half row) is the one planned.
+  it('a change names a row of the file whatever --date and --vehicle-class plan', async () => {
+    const halves = ['from,to,ref,toll,fuel,fees,rebate,valid_from,valid_to', 'A,B,R1,10.00,0,0,0,2026-01-01,2026-06-30', 'A,B,R1,20.00,0,0,0,2026-07-01,2026-12-31'].join('\n');
+    const set = (occurrence: number, amountMinor: number, vehicleClass: string | null = null) =>
+      JSON.stringify({ format: 'lanewright-scenario', version: 2, name: 'x', description: null, changes: [{ kind: 'set-amount', lane: { from: 'A', to: 'B', ref: 'R1', occurrence }, field: 'toll', amountMinor, vehicleClass, note: null }] });
+    const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': halves, 'first.json': set(1, 100), 'second.json': set(2, 2500) });
+    const compare = async (file: string, ...more: string[]) => {
+      const { status, stdout } = await runCli(['compare', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--scenario', join(dir, file), '--from', 'A', '--json', ...more]);
+      expect(status).toBe(0);
+      return JSON.parse(stdout) as { problems: unknown[]; depots: { id: string; scenario_cost_minor: number | null }[] };
+    };
+    const first = await compare('first.json', '--date', '2026-08-15');
+    expect(first.problems).toEqual([]);
+    expect(first.depots.find((d) => d.id === 'B')!.scenario_cost_minor).toBe(2000); // the first-half row is not planned
+    const second = await compare('second.json', '--date', '2026-08-15');
+    expect(second.problems).toEqual([]);
+    expect(second.depots.find((d) => d.id === 'B')!.scenario_cost_minor).toBe(2500);
+
+    const perClass = ['from,to,ref,vehicle_class,toll,fuel,fees,rebate', 'A,B,R1,2axle,8.19,0,0,0', 'A,B,R1,5axle,18.20,0,0,0'].join('\n');
+    const dir2 = tempFiles({ 'depots.csv': depots, 'lanes.csv': perClass, 's.json': set(2, 1900, '5axle') });
+    const { stdout } = await runCli(['compare', '--depots', join(dir2, 'depots.csv'), '--lanes', join(dir2, 'lanes.csv'), '--scenario', join(dir2, 's.json'), '--from', 'A', '--json', '--vehicle-class', '5axle']);
+    const report = JSON.parse(stdout) as { problems: unknown[]; depots: { id: string; scenario_cost_minor: number }[] };
+    expect(report.problems).toEqual([]);
+    expect(report.depots.find((d) => d.id === 'B')!.scenario_cost_minor).toBe(1900);
+  });
 });

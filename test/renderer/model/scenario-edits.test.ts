@@ -1,9 +1,9 @@
 // The lane-table edit model: one edit = one scenario change (a second edit of the same field
-// replaces it, an edit back to the contract's value removes it), amounts found by lane key.
+// replaces it, an edit back to the contract's value removes it); a toll edit names its class.
 
 import { describe, expect, it } from 'vitest';
 import { laneKeysOf } from '../../../engine/import/lane-key';
-import { applyScenarioAmounts, emptyScenario, fixPlanScenario, setLaneAmount, setLaneClosed } from '../../../renderer/model/scenario-edits';
+import { emptyScenario, fixPlanScenario, setLaneAmount, setLaneClosed } from '../../../renderer/model/scenario-edits';
 
 const lanes = [
   { from: 'A', to: 'B', ref: 'C-1' },
@@ -30,22 +30,20 @@ describe('scenario edits', () => {
     expect(s.changes.map((c) => c.kind === 'set-amount' && c.field)).toEqual(['toll']);
   });
 
-  it('applies amounts and closures to the right one of two parallel lanes', () => {
-    let s = setLaneAmount(emptyScenario(), keys[2], 'toll', 1, 100);
-    s = setLaneClosed(s, keys[0], true);
-    const out = applyScenarioAmounts(base, keys, s);
-    expect(Array.from(out.toll)).toEqual([100, 0, 1]);
-    expect(Array.from(out.closed)).toEqual([1, 0, 0]);
-    expect(Array.from(out.changed)).toEqual([1, 0, 1]);
-    expect(Array.from(base.toll)).toEqual([100, 0, 100]); // the base is never modified
-    expect(setLaneClosed(s, keys[0], false).changes).toHaveLength(1);
+  it('a toll edit names the class viewed; an every-class edit is a separate change', () => {
+    let s = setLaneAmount(emptyScenario(), keys[0], 'toll', 900, 100, '2axle');
+    expect(s.changes[0]).toMatchObject({ field: 'toll', vehicleClass: '2axle', amountMinor: 900 });
+    s = setLaneAmount(s, keys[0], 'toll', 950, 100, null);
+    expect(s.changes.map((c) => c.kind === 'set-amount' && [c.vehicleClass, c.amountMinor])).toEqual([['2axle', 900], [null, 950]]);
+    s = setLaneAmount(s, keys[0], 'toll', 990, 100, '2axle');
+    expect(s.changes.map((c) => c.kind === 'set-amount' && [c.vehicleClass, c.amountMinor])).toEqual([['2axle', 990], [null, 950]]);
+    expect(setLaneAmount(emptyScenario(), keys[0], 'fees', 5, 10, '2axle').changes[0]).not.toHaveProperty('vehicleClass');
   });
 
-  it('keeps a change whose lane is gone and reports it as unresolved', () => {
-    const s = setLaneAmount(emptyScenario(), { from: 'A', to: 'Z', ref: null, occurrence: 1 }, 'fees', 1, 0);
-    const out = applyScenarioAmounts(base, keys, s);
-    expect(out.unresolved).toEqual([0]);
-    expect(s.changes).toHaveLength(1);
+  it('closes and reopens one of two parallel lanes by its key', () => {
+    const s = setLaneClosed(emptyScenario(), keys[0], true);
+    expect(s.changes).toEqual([{ kind: 'close-lane', lane: keys[0], note: null }]);
+    expect(setLaneClosed(s, keys[0], false).changes).toHaveLength(0);
   });
 
   it('turns fix-plan rows (lanes file rows) into rebate changes', () => {
