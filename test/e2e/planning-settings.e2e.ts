@@ -91,6 +91,25 @@ describe('planning settings', () => {
     await expect.poll(async () => (await shownCosts(page)).get('PAR')).toBe(engineCosts(date, '2.40').get('PAR'));
   });
 
+  it('refuses 0, -2 and 2.5 as maximum legs with a message, keeping the limit in force', async () => {
+    const legs = page.getByLabel('Maximum legs');
+    let before = await solveCount(page);
+    await legs.fill('3');
+    await waitForPlan(page, before);
+    for (const bad of ['0', '-2', '2.5']) {
+      before = await solveCount(page);
+      await legs.fill(bad);
+      expect(await legs.getAttribute('aria-invalid'), bad).toBe('true');
+      expect(await legs.inputValue()).toBe(bad); // not silently cleared
+      expect(await page.getByRole('alert').filter({ hasText: 'Maximum legs' }).innerText()).toContain(`"${bad}" is not a whole number from 1; the limit stays 3`);
+      expect(await solveCount(page)).toBe(before);
+    }
+    before = await solveCount(page);
+    await legs.fill('');
+    await waitForPlan(page, before);
+    expect(await legs.getAttribute('aria-invalid')).toBeNull();
+  });
+
   it('made no request outside localhost and logged no errors', () => {
     expect(offsiteRequests(session)).toEqual([]);
     expect(session.errors).toEqual([]);
