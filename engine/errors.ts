@@ -85,3 +85,6 @@ export class RebateLoopPresentError extends LanewrightError {
     super(`${context}: the network has a rebate loop through ${depotIds.join(' > ')}; fix it first (see the audit's fix plan)`);
   }
 }
+
+/** A review whose work would pass its budget (e.g. too many periods in a calendar window); the message says how to narrow it. */
+export class ReviewBudgetError extends LanewrightError {}

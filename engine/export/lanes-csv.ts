@@ -37,9 +37,11 @@ export function lanesCsvRows(input: LanesExportInput, loops: readonly RebateLoop
   const onLoop = new Set<number>();
   for (const loop of loops) for (const e of loop.lanes) onLoop.add(e);
   const limits = t.limits ?? null;
+  // The clause column only when the file had one, so a file without it exports as before.
+  const clauses = t.clause ?? null;
 
   const header = [
-    'from', 'to', 'ref',
+    'from', 'to', 'ref', ...(clauses ? ['clause'] : []),
     ...(t.vehicleClass ? ['vehicle_class'] : []),
     'toll', ...t.classTolls.map((c) => `toll_${c.name}`),
     'fuel', 'fees', 'rebate', 'currency', 'distance_km', 'drive_minutes', 'valid_from', 'valid_to', 'notes',
@@ -59,6 +61,7 @@ export function lanesCsvRows(input: LanesExportInput, loops: readonly RebateLoop
       input.depots[t.from[r]].id,
       input.depots[t.to[r]].id,
       t.ref[r] ?? '',
+      ...(clauses ? [clauses[r] ?? ''] : []),
       ...(t.vehicleClass ? [cls >= 0 ? t.classNames[cls] : ''] : []),
       money(t.toll[r]),
       ...t.classTolls.map((c) => money(c.toll[r])),

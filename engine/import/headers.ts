@@ -8,7 +8,7 @@ import { LANE_LIMIT_HEADER_NAMES, type LaneLimitField } from './lane-limits';
 export type DepotField = 'id' | 'name' | 'lat' | 'lon' | 'type' | 'notes';
 export type LaneField =
   | 'from' | 'to' | 'ref' | 'distance' | 'distance_unit' | 'drive' | 'toll' | 'vehicle_class'
-  | 'fuel' | 'fees' | 'rebate' | 'currency' | 'valid_from' | 'valid_to' | 'notes' | 'derived'
+  | 'fuel' | 'fees' | 'rebate' | 'currency' | 'valid_from' | 'valid_to' | 'notes' | 'clause' | 'derived'
   | LaneLimitField;
 
 // Key a header is matched by: lower case, spaces/hyphens/underscores as one "_".
@@ -36,7 +36,10 @@ const LANE_NAMES: Readonly<Record<string, string>> = lookupTable({
   from: 'from', origin: 'from', from_depot: 'from', origin_depot: 'from', orig: 'from',
   to: 'to', destination: 'to', dest: 'to', to_depot: 'to', destination_depot: 'to',
   ref: 'ref', reference: 'ref', lane_ref: 'ref', lane_reference: 'ref', contract: 'ref', contract_ref: 'ref',
-  contract_reference: 'ref', lane_id: 'ref', clause: 'ref',
+  contract_reference: 'ref', lane_id: 'ref',
+  // The contract clause a row's rebate comes from ("7.2"); the calendar review groups loops by it.
+  clause: 'clause', contract_clause: 'clause', clause_id: 'clause', clause_ref: 'clause', clause_no: 'clause',
+  clause_number: 'clause', rebate_clause: 'clause',
   distance: 'distance', dist: 'distance', distance_km: 'distance:km', km: 'distance:km',
   distance_mi: 'distance:mi', distance_miles: 'distance:mi', miles: 'distance:mi', mi: 'distance:mi',
   distance_unit: 'distance_unit', unit: 'distance_unit', units: 'distance_unit',

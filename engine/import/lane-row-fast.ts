@@ -14,7 +14,7 @@ import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-
 import type { LaneTableBuilder } from './lane-table';
 
 /** Columns the fast path reads itself; a file with any other matched column uses the general path. */
-const FAST_FIELDS = new Set<LaneField>(['from', 'to', 'ref', 'distance', 'drive', 'toll', 'fuel', 'fees', 'rebate', 'valid_from', 'valid_to', 'notes']);
+const FAST_FIELDS = new Set<LaneField>(['from', 'to', 'ref', 'clause', 'distance', 'drive', 'toll', 'fuel', 'fees', 'rebate', 'valid_from', 'valid_to', 'notes']);
 
 const SLOW = -1;
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
@@ -114,6 +114,7 @@ export class PlainLaneRows {
     t.validTo[i] = validTo;
     if (col.ref !== undefined) t.ref.push(this.kept(text, col.ref));
     if (col.notes !== undefined) t.notes.push(this.kept(text, col.notes));
+    if (t.clause) t.clause.push(this.kept(text, col.clause));
     for (let k = 0; k < this.unknownColumns.length; k++) t.extra[k].values.push(this.kept(text, this.unknownColumns[k]));
     return true;
   }

@@ -37,6 +37,8 @@ export class LaneTableBuilder {
   classTolls: { name: string; key: string; toll: Float64Array; header?: string }[] = [];
   classNames: string[] = [];
   ref: (string | undefined)[] = [];
+  /** Null until the header has a clause column. */
+  clause: (string | undefined)[] | null = null;
   notes: (string | undefined)[] = [];
   extra: { column: string; values: (string | undefined)[] }[] = [];
   columnHeaders: NonNullable<LaneTable['columnHeaders']> = {};
@@ -95,6 +97,7 @@ export class LaneTableBuilder {
       validFrom: rowsOf(this.validFrom, n),
       validTo: rowsOf(this.validTo, n),
       ref: this.ref,
+      ...(this.clause ? { clause: this.clause } : {}),
       notes: this.notes,
       extra: this.extra,
       columnHeaders: this.columnHeaders,
@@ -118,6 +121,7 @@ export function laneRecordAt(table: LaneTable, depots: readonly DepotRecord[], e
     from: depots[table.from[i]].id,
     to: depots[table.to[i]].id,
     ref: table.ref[i] ?? null,
+    clause: table.clause?.[i] ?? null,
     vehicleClass: cls >= 0 ? table.classNames[cls] : null,
     toll: money(table.toll[i]),
     classTolls,

@@ -100,6 +100,7 @@ export class LanesReader extends RecordFileReader {
     for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length), header: c.header });
     for (const field of ['toll', 'fuel', 'rebate', 'vehicle_class'] as const) if (this.name[field] !== undefined) this.table.columnHeaders[field] = this.name[field];
     this.moneyColumns = [this.col.toll, ...h.classTolls.map((c) => c.index), this.col.fuel, this.col.fees, this.col.rebate].filter((c): c is number => c !== undefined);
+    if (h.columns.has('clause')) this.table.clause = [];
     if (h.columns.has('vehicle_class')) this.table.vehicleClass = new Int16Array(this.table.from.length);
     this.table.limits = LaneLimitsBuilder.forHeader(h.columns, (header, unit, message) => {
       this.report.error(this.file, this.headerRow, header, unit, 'bad-unit', message);
@@ -223,6 +224,10 @@ export class LanesReader extends RecordFileReader {
     if (col.notes !== undefined) {
       const notes = cellText(cells, col.notes);
       t.notes.push(notes === '' ? undefined : own(notes));
+    }
+    if (t.clause) {
+      const clause = cellText(cells, col.clause);
+      t.clause.push(clause === '' ? undefined : own(clause));
     }
     for (let k = 0; k < h.unknown.length; k++) {
       const value = cellText(cells, h.unknown[k].index);

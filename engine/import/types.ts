@@ -135,6 +135,11 @@ export interface LaneTable {
   validFrom: Int32Array;
   validTo: Int32Array;
   ref: (string | undefined)[];
+  /**
+   * Contract clause of each row's rebate (the optional `clause` column); absent when the file has
+   * none. A row without one is its own clause, named by its ref (see `clauseOf`).
+   */
+  clause?: (string | undefined)[];
   notes: (string | undefined)[];
   /** Columns the importer does not know, kept with their values. */
   extra: { column: string; values: (string | undefined)[] }[];
@@ -151,6 +156,8 @@ export interface LaneRecord {
   from: string;
   to: string;
   ref: string | null;
+  /** The `clause` cell; null when blank (the row is then its own clause, named by its ref). */
+  clause: string | null;
   vehicleClass: string | null;
   /** Formatted amounts ("12.50"), null when blank. */
   toll: string | null;

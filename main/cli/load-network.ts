@@ -37,8 +37,9 @@ function positive(args: ParsedArgs, name: string): number | undefined {
   return Number(text);
 }
 
-// The importer options the command line asks for.
-export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
+// The importer options the command line asks for. `dated` false plans with no date (every validity
+// window at once): only for reviews that split the calendar themselves (audit without --date).
+export function importOptionsFromArgs(args: ParsedArgs, dated = true): ImportOptions {
   const settings: Partial<PlanningSettings> = {};
   settings.detourFactor = positive(args, 'detour-factor');
   settings.fuelLitresPer100Km = positive(args, 'fuel-consumption');
@@ -69,7 +70,7 @@ export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
       exchangeRates[m[1].toUpperCase()] = m[2];
     }
   }
-  const { date } = planDateOf(args);
+  const date = dated ? planDateOf(args).date : undefined;
   const vehicleClass = args.values.get('vehicle-class');
   return {
     depotsFile: args.values.get('depots'),
@@ -85,10 +86,10 @@ export function importOptionsFromArgs(args: ParsedArgs): ImportOptions {
  * Reads --depots and --lanes and plans the network. The report is always returned; nothing is
  * printed and nothing is thrown for problems in the files (the `check` command wants them all).
  */
-export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult {
+export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}, dated = true): ImportResult {
   const depotsPath = required(args, 'depots');
   const lanesPath = required(args, 'lanes');
-  const session = startImport({ ...importOptionsFromArgs(args), ...extra });
+  const session = startImport({ ...importOptionsFromArgs(args, dated), ...extra });
   for (const chunk of readTextChunks(depotsPath)) session.feedDepots(chunk.text, chunk.fraction);
   session.finishDepots();
   for (const chunk of readTextChunks(lanesPath)) session.feedLanes(chunk.text, chunk.fraction);
@@ -97,12 +98,12 @@ export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {})
 }
 
 /**
- * Reads and plans; prints warnings and notes to stderr (and the errors, with --skip-invalid);
+ * Reads and plans (for --date or today, unless `dated` is false); prints warnings and notes to stderr (and the errors, with --skip-invalid);
  * throws InvalidInputError, one line per problem, when there are errors and no --skip-invalid.
  */
-export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}): ImportResult & { network: Network } {
-  const result = readImport(args, extra);
-  const { note } = planDateOf(args);
+export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}, dated = true): ImportResult & { network: Network } {
+  const result = readImport(args, extra, dated);
+  const note = dated ? planDateOf(args).note : null;
   if (note !== null) printError(note);
   if (result.network === null) throw new InvalidInputError(result.report);
   const lines = [

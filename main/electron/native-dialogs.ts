@@ -26,9 +26,10 @@ const EXPORT_FILTERS: Record<ExportKind, Electron.FileFilter> = {
   csv: { name: 'CSV (RFC 4180)', extensions: ['csv'] },
   geojson: { name: 'GeoJSON (RFC 7946)', extensions: ['geojson', 'json'] },
   scenario: { name: 'Lanewright scenario (JSON)', extensions: ['json'] },
+  html: { name: 'Printable report (HTML)', extensions: ['html', 'htm'] },
 };
 
-const EXPORT_TITLES: Record<ExportKind, string> = { csv: 'Export CSV', geojson: 'Export GeoJSON', scenario: 'Save scenario file' };
+const EXPORT_TITLES: Record<ExportKind, string> = { csv: 'Export CSV', geojson: 'Export GeoJSON', scenario: 'Save scenario file', html: 'Save report' };
 
 const WORKSPACE_FILTER: Electron.FileFilter = { name: 'Lanewright workspace', extensions: ['json'] };
 

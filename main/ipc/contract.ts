@@ -12,9 +12,10 @@ export type InputFileKind = 'depots' | 'lanes' | 'scenario' | 'loads' | 'vehicle
 
 /**
  * Kinds of export; they decide the file filter and extension of the save dialog. 'scenario' is the
- * versioned scenario document (engine/scenario/document.ts) that `lanewright compare --scenario` reads.
+ * versioned scenario document (engine/scenario/document.ts) that `lanewright compare --scenario` reads;
+ * 'html' a printable, self-contained report (the contract review).
  */
-export type ExportKind = 'csv' | 'geojson' | 'scenario';
+export type ExportKind = 'csv' | 'geojson' | 'scenario' | 'html';
 
 /** A text file read by the host on the renderer's behalf. */
 export interface ReadFile {

@@ -31,7 +31,7 @@ const SCHEMAS = {
   'file:save-export': json.object({
     suggestedName: fileName,
     text: json.anyText(MAX_EXPORT_CHARS),
-    kind: json.choice(['csv', 'geojson', 'scenario']),
+    kind: json.choice(['csv', 'geojson', 'scenario', 'html']),
   }),
   'app:set-dirty': json.object({ dirty: json.boolean() }),
   'app:info': NO_FIELDS,

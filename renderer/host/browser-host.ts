@@ -99,7 +99,7 @@ export function createBrowserHost(version: string): LanewrightHost {
       return ok({ path, name: path, text });
     },
     async saveExport(suggestedName: string, text: string, kind: ExportKind) {
-      download(suggestedName, text, kind === 'geojson' ? 'application/geo+json' : kind === 'scenario' ? 'application/json' : 'text/csv');
+      download(suggestedName, text, kind === 'geojson' ? 'application/geo+json' : kind === 'scenario' ? 'application/json' : kind === 'html' ? 'text/html' : 'text/csv');
       return ok({ path: suggestedName });
     },
     async setDirty() {

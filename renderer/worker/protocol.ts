@@ -202,7 +202,7 @@ export interface WorkerRequests {
   route: { request: { target: number; solveId: number }; answer: { route: RouteView | null } };
   /** `dialect`: how CSV files are written (RFC 4180 when absent). */
   export: { request: { what: ExportKind; dialect?: CsvDialect }; answer: { fileName: string; mime: string; text: string } };
-  review: { request: { scenario: Scenario | null }; answer: { review: ContractReviewView } };
+  review: { request: { scenario: Scenario | null; fixBy?: 'lane' | 'clause' }; answer: { review: ContractReviewView } };
   dispatch: { request: { request: DispatchRequest }; answer: { result: DispatchView } };
 }
 

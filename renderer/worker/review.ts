@@ -2,16 +2,34 @@
 // not only those reachable from the origin; the fix plan; rebate headroom per lane) of the network
 // under the active scenario.
 
-import { auditNetwork } from '../../engine/index';
-import type { ImportResult, Network } from '../../engine/index';
+import { auditNetwork, calendarReport, calendarReviewHtml, reviewCalendar, type CalendarReport, type ImportResult, type ReviewedFile } from '../../engine/index';
+import type { Network } from '../../engine/index';
 import { auditReport, type AuditReport } from '../../engine/index';
 import { overlayKeys, scenarioImport } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 
-export type ContractReviewView = AuditReport & { scenarioProblems: string[] };
+export type ContractReviewView = AuditReport & {
+  scenarioProblems: string[];
+  /** The review across the whole calendar of the files as loaded (the scenario is not applied to it). */
+  calendar: CalendarReport | null;
+  /** The printable report of `calendar` (self-contained HTML). */
+  calendarHtml: string | null;
+};
+
+export interface CalendarContext {
+  imported: ImportResult;
+  files: readonly ReviewedFile[];
+  fixBy: 'lane' | 'clause';
+}
 
 /** Audits the planned network, with the scenario laid over the import's lane rows first when it has changes. */
-export function reviewContract(imported: ImportResult, network: Network, scenario: Scenario | null, onProgress?: (phase: string, fraction: number) => void): ContractReviewView {
+export function reviewContract(
+  imported: ImportResult,
+  network: Network,
+  scenario: Scenario | null,
+  onProgress?: (phase: string, fraction: number) => void,
+  context?: CalendarContext,
+): ContractReviewView {
   let target = network;
   let scenarioProblems: string[] = [];
   // Lane keys as scenarios name them (counted over the file's rows), for the fix plan's changes.
@@ -27,7 +45,18 @@ export function reviewContract(imported: ImportResult, network: Network, scenari
   const order = { loops: 0, 'fix-plan': 1, headroom: 2 } as const;
   const audit = auditNetwork(target, {
     laneKeys,
-    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / 3),
+    onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / (context ? 6 : 3)),
   });
-  return { ...auditReport(target, audit), scenarioProblems };
+  let calendar: CalendarReport | null = null;
+  let calendarHtml: string | null = null;
+  if (context) {
+    const calendarPhases = { periods: 'Planning every period', loops: 'Rebate loops over the calendar', 'fix-plan': 'A fix plan for the whole calendar', verify: 'Checking the plan in every period', headroom: 'Headroom over the calendar' } as const;
+    const review = reviewCalendar(context.imported, {
+      fixBy: context.fixBy,
+      onProgress: (p) => onProgress?.(calendarPhases[p.phase], 0.5 + (p.total > 0 ? p.done / p.total : 0) / 2),
+    });
+    calendar = calendarReport(context.imported, review, context.fixBy);
+    calendarHtml = calendarReviewHtml(calendar, { files: context.files, exponent: context.imported.exponent });
+  }
+  return { ...auditReport(target, audit), scenarioProblems, calendar, calendarHtml };
 }

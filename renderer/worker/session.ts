@@ -3,7 +3,7 @@
 // (for routes and exports) and the base solve of the active scenario (for the comparison).
 
 import { LanewrightError } from '../../engine/index';
-import type { ImportResult } from '../../engine/index';
+import type { ImportResult, ReviewedFile } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { overlayIndex, type OverlayIndex } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
@@ -34,11 +34,12 @@ export class WorkerSession {
   private laneOfRow: Int32Array = new Int32Array(0);
   /** Keys of the import's lane rows, counted once per import (occurrences over the whole file). */
   private rowIndex: OverlayIndex | null = null;
-  /** Names of the files the network was read from (depots, lanes), for the exports' settings. */
-  private files: string[] = [];
   /** The texts of the last accepted import: a new currency or rates means reading them again. */
   private texts: { depots: NamedText; lanes: NamedText } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
+  /** Names and SHA-256 of the texts last loaded, for the printable review (hashed as they arrive). */
+  private files: ReviewedFile[] = [];
+  private loads = 0;
 
   constructor(private readonly post: Post) {}
 
@@ -71,7 +72,7 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files };
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name) };
         const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
@@ -85,7 +86,8 @@ export class WorkerSession {
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress) });
+        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
+        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
         return;
       }
       default: {
@@ -126,7 +128,9 @@ export class WorkerSession {
       return;
     }
     progress('Compiling the network', 0.95);
-    this.files = [message.depots.name, message.lanes.name];
+    this.files = [message.depots, message.lanes].map((f) => ({ name: f.name, sha256: 'computing…' }));
+    const load = ++this.loads;
+    void hashTexts([message.depots, message.lanes]).then((files) => load === this.loads && (this.files = files));
     this.texts = { depots: message.depots, lanes: message.lanes };
     this.adopt(message.id, result, message.plan);
   }
@@ -176,4 +180,14 @@ export class WorkerSession {
     }
     this.post({ kind: 'solved', id, result: view }, overlayTransferables(view.overlay));
   }
+}
+
+/** SHA-256 of each text as UTF-8 (the bytes of a UTF-8 file without a byte-order mark). */
+async function hashTexts(texts: readonly { name: string; text: string }[]): Promise<ReviewedFile[]> {
+  return Promise.all(
+    texts.map(async ({ name, text }) => {
+      const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text)));
+      return { name, sha256: Array.from(digest, (b) => b.toString(16).padStart(2, '0')).join('') };
+    }),
+  );
 }

@@ -1,11 +1,13 @@
-// `lanewright audit`: the contract review of the whole network, independent of any origin: every
-// distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one row per
-// lane) or JSON; --loops-csv also writes one row per lane of each loop.
+// `lanewright audit --date D`: the contract review of one day's network, independent of any origin:
+// every distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one
+// row per lane) or JSON; --loops-csv also writes one row per lane of each loop. Without --date the
+// command reviews the whole calendar (audit-calendar.ts).
 
 import { auditNetwork, overlayKeys } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
-import { wholeNumberOption, type ParsedArgs } from '../args';
+import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
+import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadImport, planDateOf } from '../load-network';
 import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
@@ -13,11 +15,14 @@ import type { CommandOutput } from '../run';
 
 export const auditCommand: CommandSpec = {
   name: 'audit',
-  summary: 'contract review of the whole network: rebate loops, a verified fix plan, rebate headroom per lane',
+  summary: 'contract review: rebate loops, a verified fix plan and rebate headroom, over the whole calendar or one day',
   details:
-    'Finds the distinct rebate loops (up to --loop-cap), a set of rebate cuts that removes them all (checked by\n' +
-    'solving again) and how far each lane\'s rebate can grow before a loop appears. Prints one CSV row per lane,\n' +
-    'or one JSON object with --json; --loops-csv also writes one row per lane of each loop.',
+    'Without --date, reviews the whole calendar: the periods in which the set of valid lanes is the same, each\n' +
+    'loop with the date ranges it exists in and the clauses it combines, one fix plan verified on every period\n' +
+    '(--fix-by lane or clause) and headroom per lane; --report writes a printable HTML report. With --date,\n' +
+    'reviews that day\'s network. Finds the distinct rebate loops (up to --loop-cap), a set of rebate cuts that\n' +
+    'removes them all (checked by solving again) and how far each lane\'s rebate can grow before a loop appears.\n' +
+    'Prints one CSV row per lane, or one JSON object with --json; --loops-csv also writes one row per lane of each loop.',
   example: 'lanewright audit --depots sample-data/depots.csv --lanes sample-data/lanes.csv --date 2026-06-01 --negotiable K-2',
   options: [
     ...NETWORK_FILES,
@@ -25,6 +30,10 @@ export const auditCommand: CommandSpec = {
     { name: 'negotiable', value: 'REF,...', help: 'contract references or lane keys (FROM>TO|ref|n) whose rebates may change' },
     { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
     { name: 'progress', help: 'print progress by phase on stderr' },
+    { name: 'from-date', value: 'YYYY-MM-DD', help: 'calendar review: first day reviewed (default: the earliest date the file names)' },
+    { name: 'to-date', value: 'YYYY-MM-DD', help: 'calendar review: last day reviewed (default: the latest date the file names)' },
+    { name: 'fix-by', value: 'lane|clause', help: 'calendar review: one cut per lane (default) or one percentage cut per clause' },
+    { name: 'report', value: 'FILE', help: 'calendar review: also write a printable HTML report to FILE' },
     JSON_OPTION,
     CSV_DIALECT_OPTION,
     OUT_OPTION,
@@ -35,6 +44,10 @@ export const auditCommand: CommandSpec = {
 };
 
 function runAudit(args: ParsedArgs, out: CommandOutput): number {
+  if (!args.values.has('date')) return runCalendarAudit(args, out);
+  for (const name of CALENDAR_AUDIT_OPTIONS) {
+    if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
+  }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
@@ -65,7 +78,9 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
+  // Which review this is: one day, named.
+  const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
+  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 

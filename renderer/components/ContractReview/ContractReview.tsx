@@ -9,6 +9,8 @@ import { formatMoney, formatMoneyWithCode } from '../../model/format';
 import { fixPlanScenario, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
+import type { LanewrightHost } from '../../../main/ipc/contract';
+import { CalendarReview } from './CalendarReview';
 import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
 
 export interface ContractReviewProps {
@@ -17,9 +19,12 @@ export interface ContractReviewProps {
   keys: readonly LaneKey[];
   scenario: Scenario;
   onScenario(next: Scenario): void;
+  host: LanewrightHost;
+  onMessage(text: string): void;
 }
 
-export function ContractReview({ engine, network, keys, scenario, onScenario }: ContractReviewProps) {
+export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage }: ContractReviewProps) {
+  const [fixBy, setFixBy] = useState<'lane' | 'clause'>('lane');
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   // A cancelled review is not a problem of the contract: it says so and can be run again.
@@ -31,13 +36,13 @@ export function ContractReview({ engine, network, keys, scenario, onScenario }: 
     setProblem(null);
     setStopped(false);
     engine
-      .track((onProgress) => engine.client.request('review', { scenario }, onProgress), 'Reviewing the contract')
+      .track((onProgress) => engine.client.request('review', { scenario, fixBy }, onProgress), 'Reviewing the contract')
       .then((answer) => live && setReview(answer.review))
       .catch((error: Error) => live && (error instanceof WorkCancelledError ? setStopped(true) : setProblem(error.message)));
     return () => {
       live = false;
     };
-  }, [engine, network, scenario, attempt]);
+  }, [engine, network, scenario, attempt, fixBy]);
   if (stopped) {
     return (
       <p>
@@ -51,15 +56,30 @@ export function ContractReview({ engine, network, keys, scenario, onScenario }: 
   if (problem) return <p className="lw-warn">{problem}</p>;
   if (!review) return <p aria-busy="true">Reviewing the contract…</p>;
   const money = (v: number) => formatMoney(v, network.exponent);
+  const saveReport = async () => {
+    if (!review.calendarHtml || !review.calendar) return;
+    const window = review.calendar.window;
+    const saved = await host.saveExport(`contract-review-${window.from ?? 'undated'}-${window.to ?? ''}.html`.replace('-.html', '.html'), review.calendarHtml, 'html');
+    if (!saved.ok) onMessage(`Report not saved: ${saved.failure.message}`);
+    else if (saved.value) onMessage(`Saved the contract review report: ${saved.value.path}`);
+  };
+  // "Whole contract" is said only of the calendar review; the one-day review names its date.
+  const day = network.plan.date ? `on ${network.plan.date}` : 'with every row valid at once (no date chosen)';
   return (
     <div className="lw-review" data-testid="contract-review">
       <CautionLine kind="review" testId="review-caution" />
+      {review.calendar && <CalendarReview calendar={review.calendar} exponent={network.exponent} fixBy={fixBy} onFixBy={setFixBy} onSaveReport={() => void saveReport()} />}
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>
-        Rebate loops in the whole contract{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
+        One-day review: rebate loops {day}{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
         {review.loop_cap_reached ? ' (list capped)' : ''}
       </h3>
-      {review.loops.length === 0 && <p>No loop of lanes has a negative net cost: every cheapest route is well defined.</p>}
+      {review.loops.length === 0 && (
+        <p>
+          No loop of lanes has a negative net cost {day}: every cheapest route is well defined
+          {review.calendar && review.calendar.loops.length > 0 ? ` that day, but the contract has ${review.calendar.loops.length} loop(s) on other dates (above)` : ''}.
+        </p>
+      )}
       {review.loops.map((loop, i) => (
         <section key={i} className="lw-review-loop" aria-label={`Loop ${i + 1}`}>
           <h4>

@@ -43,6 +43,8 @@ describe('lanes CSV round trip', () => {
     // Every row and class is exported, so the same plan is asked of the re-import.
     const second = roundTrip(first, depots, plan);
     expect(laneTuples(second.network!)).toEqual(laneTuples(first.network!));
+    const clauses = (r: ImportResult) => Array.from(r.plan.laneRecord, (i) => r.lanes.clause?.[i]);
+    expect(clauses(second)).toEqual(clauses(first));
     const origin = first.network!.depotIndex.get('RTM')!;
     const a = routesReport(first.network!, cheapestRoutes(first.network!, origin));
     const b = routesReport(second.network!, cheapestRoutes(second.network!, origin));

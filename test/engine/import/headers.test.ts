@@ -28,6 +28,15 @@ describe('header matching', () => {
     expect(classKey(' 5 axle ')).toBe(classKey('5_Axle'));
   });
 
+  it('reads a clause column under its synonyms, apart from the ref (it used to be taken for the ref)', () => {
+    for (const header of ['clause', 'Contract Clause', 'clause-no', 'Rebate clause', 'CLAUSE_ID']) {
+      const m = matchLaneHeaders(['from', 'to', 'ref', header]);
+      expect(m.columns.get('clause')!.index).toBe(3);
+      expect(m.columns.get('ref')!.index).toBe(2);
+      expect(m.duplicates).toEqual([]);
+    }
+  });
+
   it('names an unnamed column by its position (a trailing delimiter on every line)', () => {
     expect(matchLaneHeaders(['from', 'to', '']).unknown).toEqual([{ index: 2, header: '(column 3)' }]);
   });

@@ -34,6 +34,7 @@ function readLanes(text: string, fast: boolean, chunk: number) {
     classTolls: t.classTolls.map((c) => column(c.toll)),
     ref: t.ref.slice(0, n),
     notes: t.notes.slice(0, n),
+    clause: t.clause?.slice(0, n),
     extra: t.extra.map((x) => x.values.slice(0, n)),
     currency: reader.currency,
     report: report.report(),
@@ -58,7 +59,7 @@ const messy = {
   text: ["'=x", '=cmd', ' padded ', '@x'],
 };
 type Kind = keyof typeof plain;
-const KINDS: Kind[] = ['depot', 'depot', 'text', 'amount', 'amount', 'amount', 'amount', 'distance', 'drive', 'date', 'date', 'text', 'text', 'amount'];
+const KINDS: Kind[] = ['depot', 'depot', 'text', 'amount', 'amount', 'amount', 'amount', 'distance', 'drive', 'date', 'date', 'text', 'text', 'amount', 'text'];
 
 const rowArb = fc
   .tuple(
@@ -81,7 +82,7 @@ const fileArb = fc
   })
   .map(({ semicolon, rows, extraField, chunk }) => {
     const d = semicolon ? ';' : ',';
-    const header = ['from', 'to', 'ref', 'toll', 'fuel', 'fees', 'rebate', 'distance_km', 'drive_minutes', 'valid_from', 'valid_to', 'notes', 'extra column', 'toll_2axle'].join(d);
+    const header = ['from', 'to', 'ref', 'toll', 'fuel', 'fees', 'rebate', 'distance_km', 'drive_minutes', 'valid_from', 'valid_to', 'notes', 'extra column', 'toll_2axle', 'clause'].join(d);
     const lines = rows.map((r, i) => {
       // Semicolon files use a decimal comma; the plain values are written that way there.
       const cells = semicolon ? r.map((c) => c.replace(/^(\d+)\.(\d+)$/, '$1,$2')) : [...r];

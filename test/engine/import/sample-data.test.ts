@@ -1,6 +1,7 @@
 // The demo scenario stays what sample-data/README.md says it is: the clean lanes file has no errors,
-// warnings or rebate loop; the loop variant has exactly the FRA/SXB loop (-1.40 per lap), and only on
-// dates when both rebate clauses are valid; RTM plans as an origin for both vehicle classes.
+// warnings or rebate loop; the loop variant has the FRA/SXB loop (-1.40 per lap) only on dates when
+// both rebate clauses are valid, and the seasonal MHG/KRL loop (clause 8.1) only for the 2-axle class
+// from June to August; RTM plans as an origin for both vehicle classes.
 
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -37,6 +38,26 @@ describe('sample data', () => {
     expect(findDistinctLoops(summer.network!).loops).toHaveLength(1);
     const november = importNetwork(depots, sample('lanes-rebate-loop.csv'), { plan: { date: '2026-11-01' } });
     expect(findDistinctLoops(november.network!).loops).toEqual([]);
+  });
+
+  it.each([
+    ['2026-05-31', '2axle', []],
+    ['2026-06-01', '2axle', ['KRL>MHG -582']],
+    ['2026-08-31', '2axle', ['KRL>MHG -582']],
+    ['2026-09-01', '2axle', []],
+    ['2026-07-15', '5axle', []],
+  ])('lanes-rebate-loop.csv: the seasonal clause 8.1 loop on %s for %s: %o', (date, vehicleClass, expected) => {
+    const r = importNetwork(depots, sample('lanes-rebate-loop.csv'), { plan: { date, vehicleClass } });
+    const ids = r.network!.depotIds;
+    const seasonal = findDistinctLoops(r.network!).loops.filter((l) => !l.depots.some((d) => ids[d] === 'FRA'));
+    expect(seasonal.map((l) => `${l.depots.map((d) => ids[d]).sort().join('>')} ${l.netPerLap}`)).toEqual(expected);
+  });
+
+  it('every rebate row names its clause; rows without a rebate name none', () => {
+    for (const file of ['lanes.csv', 'lanes-rebate-loop.csv']) {
+      const t = importNetwork(depots, sample(file)).lanes;
+      for (let i = 0; i < t.count; i++) expect(t.clause![i] !== undefined).toBe(t.rebate[i] > 0);
+    }
   });
 
   it('some lanes rely on the great-circle fallback and on estimated fuel', () => {

@@ -287,7 +287,18 @@ describe('importer extras', () => {
     expect(r.network!.laneCount).toBe(0);
     expect(laneRecordAt(r.lanes, r.depots, r.exponent, 0)).toMatchObject({
       from: 'A', to: 'B', ref: 'R-1', toll: '9.00', classTolls: { '2axle': '2.00' }, validFrom: '2026-01-01', validTo: '2026-06-30', notes: 'Backhaul, clause 4', sourceRow: 2,
+      clause: null,
     });
+    expect(r.lanes.clause).toBeUndefined();
+  });
+
+  it('carries the clause column on lane rows; a blank cell is no clause', async () => {
+    const { laneRecordAt } = await import('../../../engine/import/lane-table');
+    const r = importNetwork(DEPOTS, 'from,to,ref,toll,rebate,Contract clause\nA,B,R-1,9.00,2.00,7.2\nB,A,R-2,9.00,0.00,\n');
+    expect(r.report.warnings).toEqual([]);
+    expect(r.lanes.clause).toEqual(['7.2', undefined]);
+    expect(laneRecordAt(r.lanes, r.depots, r.exponent, 0).clause).toBe('7.2');
+    expect(laneRecordAt(r.lanes, r.depots, r.exponent, 1).clause).toBeNull();
   });
 });
 

@@ -11,9 +11,10 @@ const lanes = ['from,to,toll,fuel,fees,rebate', 'A,B,4.00,5.00,1.00,0', 'B,A,3.0
 describe('lanewright audit', () => {
   it('prints the JSON the contract review asks for, with a verified fix plan and headroom after it', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
-    const { status, stdout, stderr } = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+    const { status, stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json', '--date', '2026-01-01']);
     expect(status).toBe(0);
     const report = JSON.parse(stdout);
+    expect([report.review, report.date]).toEqual(['day', '2026-01-01']);
     for (const k of ['loops', 'fix_plan', 'headroom', 'headroom_after_fix_plan', 'loop_cap_reached']) expect(report).toHaveProperty(k);
     expect(report.loops).toHaveLength(1);
     expect(report.loops[0]).toMatchObject({ depots: ['A', 'B'], lanes: [2, 3], net_per_lap_minor: -250, unbounded_depots: ['A', 'B', 'C', 'D'] });
@@ -34,7 +35,7 @@ describe('lanewright audit', () => {
   it('writes the lane table with --out and the loop table with --loops-csv, leaving no temporary files', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
     const { status } = await runCli([
-      'audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--out', join(dir, 'audit.csv'), '--loops-csv', join(dir, 'loops.csv'),
+      'audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--out', join(dir, 'audit.csv'), '--loops-csv', join(dir, 'loops.csv'), '--date', '2026-01-01',
     ]);
     expect(status).toBe(0);
     const laneRows = readFileSync(join(dir, 'audit.csv'), 'utf8').trim().split('\r\n');
@@ -49,7 +50,7 @@ describe('lanewright audit', () => {
 
   it('a loop-free network: no loops, no plan, headroom on the network as is', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes.replace('20.00', '5.00') });
-    const { stdout, stderr } = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+    const { stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json', '--date', '2026-01-01']);
     const report = JSON.parse(stdout);
     expect([report.loops, report.fix_plan, report.headroom_after_fix_plan]).toEqual([[], [], false]);
     expect(stderr).toBe('');
@@ -60,7 +61,7 @@ describe('lanewright audit', () => {
     // smaller share (2 of 12 on K-1, not 2 of 10 on K-2) is chosen.
     const withRefs = ['from,to,ref,toll,fuel,fees,rebate', 'A,B,K-1,10.00,0,0,12.00', 'B,A,K-2,10.00,0,0,10.00'].join('\n');
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': withRefs });
-    const args = ['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json'];
+    const args = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json', '--date', '2026-01-01'];
     const plain = JSON.parse((await runCli(args)).stdout);
     expect(plain.fix_plan.map((f: { ref: string; new_rebate_minor: number }) => [f.ref, f.new_rebate_minor])).toEqual([['K-1', 1000]]);
     const chosen = JSON.parse((await runCli([...args, '--negotiable', 'K-2'])).stdout);
@@ -73,8 +74,10 @@ describe('lanewright audit', () => {
 
   it('reports progress on stderr with --progress', async () => {
     const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': lanes });
-    const { stderr } = await runCli(['audit', '--date', '2026-06-01', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress']);
+    const { stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress', '--date', '2026-01-01']);
     expect(stderr).toMatch(/audit: headroom 100%/);
+    const calendar = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--progress']);
+    expect(calendar.stderr).toMatch(/audit: periods 100%[\s\S]*audit: headroom 100%/);
   });
 
   it('refuses a bad --loop-cap and a missing file with one line each', async () => {
@@ -96,5 +99,59 @@ describe('lanewright audit', () => {
     expect(stderr).not.toMatch(/--negotiable: no lane/);
     // The second-half row (A>B|R1|2, file row 3) is the lane planned on 2026-08-15.
     expect(JSON.parse(stdout).loops[0].lanes).toContain(3);
+  });
+
+  describe('without --date: the whole calendar', () => {
+    // Rows 2-3 loop (A>B>A -2.50) only while row 3's rebate holds (March to September); row 5 is a
+    // rebate in another clause that never meets it. A ref with markup checks the report escapes it.
+    const dated = ['from,to,ref,toll,fuel,fees,rebate,valid_from,valid_to,clause', 'A,B,<b>K-1</b>,4.00,5.00,1.00,0,,,', 'B,A,K-2,3.00,4.00,0.50,20.00,2026-03-01,2026-09-30,7.2',
+      'B,A,K-2-BASE,3.00,4.00,0.50,0,,,', 'B,C,K-3,2.00,3.00,0,0,,,', 'C,B,K-4,6.00,0,0,3.00,2026-01-01,2026-12-31,7.2'].join('\n');
+
+    it('prints the calendar JSON: window, periods with their loops, loop ranges, clauses and a verified plan', async () => {
+      const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': dated });
+      const { status, stdout, stderr } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json']);
+      expect(status).toBe(0);
+      const report = JSON.parse(stdout);
+      expect(report.review).toBe('calendar');
+      expect(report.window).toEqual({ from: '2026-01-01', to: '2026-12-31' });
+      expect(report.periods.map((p: { from: string; loops: number[] }) => [p.from, p.loops])).toEqual([['2026-01-01', []], ['2026-03-01', [1]], ['2026-10-01', []]]);
+      expect(report.loops[0]).toMatchObject({ id: 1, depots: ['A', 'B'], lanes: [2, 3], clauses: ['7.2'], ranges: [{ from: '2026-03-01', to: '2026-09-30', net_per_lap_minor: -250 }] });
+      expect(report.clauses[0]).toMatchObject({ clause: '7.2', lanes: [3, 6], rebate_minor: 2300, loops: [1], ranges: [{ from: '2026-03-01', to: '2026-09-30' }] });
+      expect(report.fix_plan).toEqual([expect.objectContaining({ row: 3, cut_minor: 250, new_net_minor: -1000, clause: '7.2' })]);
+      expect(report.fix_plan_verified).toBe(true);
+      const head = report.headroom.find((h: { row: number }) => h.row === 2);
+      expect(head).toMatchObject({ floor_minor: 1000, set_by: { from: '2026-03-01', to: '2026-09-30' } });
+      expect(stderr).toMatch(/calendar review: 2026-01-01 to 2026-12-31, 3 period\(s\)/);
+      expect(stderr).toMatch(/loop 1: A > B > A, clauses 7.2, 2026-03-01 to 2026-09-30/);
+    });
+
+    it('--fix-by clause cuts one percentage per clause; --report writes a self-contained, escaped HTML file', async () => {
+      const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': dated });
+      const html = join(dir, 'review.html');
+      const { status, stdout } = await runCli(['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json', '--fix-by', 'clause', '--report', html]);
+      expect(status).toBe(0);
+      const report = JSON.parse(stdout);
+      // 13% of 20.00 = 2.60 >= 2.50 (12% = 2.40 is not enough); the clause's other row is cut 13% too, rounded up.
+      expect(report.fix_plan.map((f: { row: number; clause_percent: number; cut_minor: number }) => [f.row, f.clause_percent, f.cut_minor])).toEqual([[3, 13, 260], [6, 13, 39]]);
+      const text = readFileSync(html, 'utf8');
+      expect(text).toContain('&lt;b&gt;K-1&lt;/b&gt;');
+      expect(text).not.toContain('<b>K-1</b>');
+      expect(text).not.toMatch(/<script|src=|href=/i);
+      expect(text).toMatch(/2026-01-01 to 2026-12-31/);
+      expect(text).toMatch(/[0-9a-f]{64}/);
+      expect(text).toContain('Defer to local codes');
+    });
+
+    it('refuses calendar options with --date and an unknown --fix-by', async () => {
+      const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': dated });
+      const base = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv')];
+      const both = await runCli([...base, '--date', '2026-05-01', '--from-date', '2026-01-01']);
+      expect([both.status, both.stderr]).toEqual([2, expect.stringMatching(/--from-date belongs to the calendar review/)]);
+      const bad = await runCli([...base, '--fix-by', 'row']);
+      expect([bad.status, bad.stderr]).toEqual([2, expect.stringMatching(/--fix-by must be lane or clause/)]);
+      const backwards = await runCli([...base, '--from-date', '2026-05-01', '--to-date', '2026-04-01']);
+      expect(backwards.status).toBe(1);
+      expect(backwards.stderr).toMatch(/^lanewright: plan: to date "2026-04-01": the review window would end .* before it starts/m);
+    });
   });
 });

@@ -46,17 +46,19 @@ describe('the date planned for', () => {
     expect(report.depots.find((d: { id: string }) => d.id === 'RTM').cost).toBe('40.54');
   });
 
-  it('check, audit, compare, export and dispatch plan for today too, with one note each', async () => {
+  it('check, compare, export and dispatch plan for today too, with one note each; audit reviews the whole calendar instead', async () => {
     const dir = tempFiles({ 'what-if.json': JSON.stringify({ format: 'lanewright-scenario', version: 1, name: 'none', description: null, changes: [] }) });
     const check = await runCli(['check', ...SAMPLE, '--json']);
     expect(JSON.parse(check.stdout).date).toBe('2026-12-02');
+    // Without --date, audit is the review of the contract's whole calendar: no day is chosen for it.
     const audit = await runCli(['audit', ...SAMPLE, '--json']);
-    expect(JSON.parse(audit.stdout).date).toBe('2026-12-02');
+    expect(JSON.parse(audit.stdout).review).toBe('calendar');
+    expect(noteCount(audit.stderr)).toBe(0);
     const compare = await runCli(['compare', ...SAMPLE, '--scenario', join(dir, 'what-if.json'), '--from', 'AMS', '--json']);
     expect(JSON.parse(compare.stdout).date).toBe('2026-12-02');
     const exported = await runCli(['export', ...SAMPLE, '--lanes-out', join(dir, 'lanes.csv')]);
     const dispatch = await runCli(['dispatch', ...SAMPLE, '--loads', 'sample-data/loads.csv', '--vehicles', 'sample-data/vehicles.csv', '--json']);
-    for (const r of [check, audit, compare, exported, dispatch]) {
+    for (const r of [check, compare, exported, dispatch]) {
       expect(r.stderr.split('\n')).toContain(NOTE);
       expect(noteCount(r.stderr)).toBe(1);
     }

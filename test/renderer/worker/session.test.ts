@@ -15,6 +15,8 @@ import { addedLaneRef } from '../../../renderer/model/added-lanes';
 import { emptyScenario, setLaneAmount } from '../../../renderer/model/scenario-edits';
 import type { FromWorker, NetworkView, PlanSettings, SolveView, ToWorker } from '../../../renderer/worker/protocol';
 import { WorkerSession } from '../../../renderer/worker/session';
+import type { ContractReviewView } from '../../../renderer/worker/review';
+import { createHash } from 'node:crypto';
 
 const text = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
 const DATE = '2026-08-15';
@@ -118,6 +120,21 @@ describe('worker exports', () => {
     expect(geo.features.filter((f) => f.geometry.type === 'Point')).toHaveLength(original.depotCount);
     const loops = parseCsvText((out[4] as { text: string }).text).rows;
     expect(loops.length).toBeGreaterThan(1); // header + the loop's lanes
+  });
+});
+
+describe('route details', () => {
+  it('answers a route with each lane\'s clause, validity and estimate flags', () => {
+    const depots = 'id,name,lat,lon\nA,a,50,4\nB,b,51,5\n';
+    const lanes = 'from,to,ref,toll,fuel,fees,rebate,clause,valid_from,valid_to\nA,B,R-1,1.00,,0,0,Clause 4.2 volume credit,2026-01-01,2026-12-31\n';
+    const out = drive([
+      { kind: 'load', id: 1, depots: { name: 'd.csv', text: depots }, lanes: { name: 'l.csv', text: lanes }, acceptPartial: false, plan: { date: DATE, vehicleClass: '' } },
+      { kind: 'solve', id: 2, settings: { ...settings, origin: 'A' }, scenario: null },
+      { kind: 'route', id: 3, target: 1, solveId: 2 },
+    ]);
+    const route = (out[2] as { route: { details: unknown[]; estimateRules: { distance: string } } }).route;
+    expect(route.details).toEqual([{ validFrom: '2026-01-01', validTo: '2026-12-31', distanceEstimated: true, fuelEstimated: true, driveEstimated: true, notes: null, clause: 'Clause 4.2 volume credit' }]);
+    expect(route.estimateRules.distance).toMatch(/detour factor 1\.3/);
   });
 });
 
@@ -229,5 +246,22 @@ describe('scenarios that change the lane set', () => {
     expect(routes[0].route).toBeNull();
     expect(routes[1].route?.lanes.length).toBeGreaterThan(0);
     expect(routes[1].route?.lanes).not.toContain(addedLaneRef(0));
+  });
+
+  it('the review carries the whole calendar: a day without a loop does not hide the loops of other dates', async () => {
+    const out: FromWorker[] = [];
+    const session = new WorkerSession((m) => out.push(m));
+    session.handle({ ...load('lanes-rebate-loop.csv'), plan: { date: '2026-11-01', vehicleClass: '' } } as ToWorker);
+    await new Promise((resolve) => setTimeout(resolve, 50)); // the files' SHA-256 are computed as they arrive
+    session.handle({ kind: 'review', id: 2, scenario: null, fixBy: 'clause' });
+    const reviewed = out.find((m) => m.kind === 'reviewed') as { review: ContractReviewView };
+    expect(reviewed.review.loops).toEqual([]);
+    expect(reviewed.review.calendar!.loops.map((l) => [l.depots, l.ranges.map((r) => [r.from, r.to])])).toEqual([
+      [['FRA', 'SXB'], [['2026-03-01', '2026-09-30']]],
+      [['MHG', 'KRL'], [['2026-06-01', '2026-08-31']]],
+    ]);
+    expect(reviewed.review.calendar!.fix_by).toBe('clause');
+    const expectedHash = createHash('sha256').update(readFileSync('sample-data/lanes-rebate-loop.csv')).digest('hex');
+    expect(reviewed.review.calendarHtml).toContain(expectedHash);
   });
 });

@@ -1,0 +1,85 @@
+// `lanewright audit` without --date: the contract review across the whole calendar (every period
+// of the window, every vehicle class), with one fix plan by lane or by clause, as CSV (one row per
+// lane row and class) or JSON; --loops-csv writes one row per loop range, --report a printable HTML.
+
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { calendarLaneRows, calendarLoopRows, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
+import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
+import { loadImport } from '../load-network';
+import type { CommandOutput } from '../run';
+
+/** Value options only the calendar review reads (kept together so the option table can take them as they are). */
+export const CALENDAR_AUDIT_OPTIONS = ['from-date', 'to-date', 'fix-by', 'report'] as const;
+
+function fixByOption(args: ParsedArgs): 'lane' | 'clause' {
+  const value = args.values.get('fix-by') ?? 'lane';
+  if (value !== 'lane' && value !== 'clause') throw new UsageError(`--fix-by must be lane or clause, got "${value}"`);
+  return value;
+}
+
+const sha256 = (path: string) => createHash('sha256').update(readFileSync(path)).digest('hex');
+
+export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
+  const loopCap = wholeNumberOption(args, 'loop-cap', 1);
+  const fixBy = fixByOption(args);
+  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const loopsCsv = args.values.get('loops-csv');
+  const reportPath = args.values.get('report');
+
+  const readStart = performance.now();
+  // The calendar review splits the contract into periods itself: the rows are read undated.
+  const imported = loadImport(args, {}, false);
+  const readMs = performance.now() - readStart;
+
+  let lastLine = '';
+  const solveStart = performance.now();
+  const review = reviewCalendar(imported, {
+    fromDate: args.values.get('from-date'),
+    toDate: args.values.get('to-date'),
+    vehicleClasses: args.values.has('vehicle-class') ? [imported.plan.vehicleClass] : undefined,
+    loopCap,
+    negotiable,
+    fixBy,
+    skipInvalid: args.flags.has('skip-invalid'),
+    onProgress: args.flags.has('progress')
+      ? ({ phase, done, total }) => {
+          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+          if (line !== lastLine) out.warn((lastLine = line));
+        }
+      : undefined,
+  });
+  const solveMs = performance.now() - solveStart;
+
+  const report = calendarReport(imported, review, fixBy);
+  const exponent = imported.exponent;
+  const window = report.window.from === null ? 'every date (the lanes file names none)' : `${report.window.from} to ${report.window.to}`;
+  out.warn(`calendar review: ${window}, ${report.periods.length} period(s), vehicle class(es) ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
+  for (const name of review.negotiableUnmatched) out.warn(`--negotiable: no lane has the contract reference, clause or lane key "${name}"; it marks nothing`);
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(calendarLaneRows(report, exponent)));
+  if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(calendarLoopRows(report, exponent)));
+  if (reportPath) {
+    const files = ['depots', 'lanes'].map((k) => args.values.get(k)!).map((path) => ({ name: path, sha256: sha256(path) }));
+    out.writeFile(reportPath, calendarReviewHtml(report, { files, exponent, madeAt: new Date().toISOString().slice(0, 16) + 'Z' }));
+  }
+  if (args.flags.has('timings')) {
+    out.timing({ read_ms: readMs, audit_ms: solveMs, periods: report.work.periods, networks: report.work.networks, maximal_networks: report.work.maximal_networks, lanes: imported.lanes.count });
+  }
+
+  if (report.loops.length > 0) {
+    out.warn(`WARNING: ${report.loops.length}${report.loop_cap_reached ? '+' : ''} rebate loop(s) in the contract over the window: costs through them are unbounded and the contract terms need fixing`);
+    for (const loop of report.loops) {
+      const when = loop.ranges.map((r) => (r.from === null ? 'every date' : `${r.from} to ${r.to}`)).join(', ');
+      out.warn(`  loop ${loop.id}: ${[...loop.depots, loop.depots[0]].join(' > ')}, clauses ${loop.clauses.join(', ') || 'none'}, ${when}`);
+    }
+    if (report.loop_cap_reached) out.warn(`WARNING: more loops exist than the ${report.loops.length} reported (raise --loop-cap to see them)`);
+    if (report.fix_plan_verified) {
+      out.warn(`fix plan by ${report.fix_by}: ${report.fix_plan.length} rebate cut(s) remove every loop in every period (checked by solving every period network); headroom is computed after the fix plan`);
+    } else if (report.unfixable_loops.length > 0) {
+      out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
+    } else {
+      out.warn(`WARNING: the fix plan stopped with loops left${report.fix_plan_method ? ` (${report.fix_plan_method})` : ''}; headroom is not available`);
+    }
+  }
+  return 0;
+}
