@@ -53,6 +53,7 @@ export * from './planning/plan-network';
 export * from './geo/turf';
 export * from './planning/route-breakdown';
 export * from './planning/estimate-rules';
+export * from './planning/planning-choices';
 export * from './report/route-sheet';
 export * from './export/route-sheet-csv';
 export * from './export/file-name';

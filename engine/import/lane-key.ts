@@ -70,6 +70,21 @@ export function laneKeyText(key: LaneKey): string {
   return `${key.from}>${key.to}|${key.ref ?? ''}|${key.occurrence}`;
 }
 
+/** 1st, 2nd, 3rd, 4th, 11th, 12th, 13th, 21st, ... (English ordinals). */
+export function ordinal(n: number): string {
+  const tens = n % 100;
+  const suffix = tens >= 11 && tens <= 13 ? 'th' : n % 10 === 1 ? 'st' : n % 10 === 2 ? 'nd' : n % 10 === 3 ? 'rd' : 'th';
+  return `${n}${suffix}`;
+}
+
+/**
+ * A lane named in words for people: "FRA → SXB, ref BFH-L-019", with ", 2nd row" when more than
+ * one row has that origin, destination and ref. The key text ("FRA>SXB|BFH-L-019|2") stays for files.
+ */
+export function laneKeyWords(key: LaneKey): string {
+  return `${key.from} → ${key.to}${key.ref ? `, ref ${key.ref}` : ', no ref'}${key.occurrence > 1 ? `, ${ordinal(key.occurrence)} row` : ''}`;
+}
+
 /** Reads "FROM>TO|ref|n" back; null when the text is not in that form. */
 export function parseLaneKeyText(text: string): LaneKey | null {
   const match = /^([^>|]+)>([^>|]+)\|([^|]*)\|(\d+)$/.exec(text.trim());

@@ -2,6 +2,7 @@
 // plus lane details), and its two flat tables for spreadsheets: one row per lane, one row per lane
 // of each loop. Rows are source rows of the lanes file (header = row 1).
 
+import { REVIEW_CAUTION } from '../text/cautions';
 import type { NetworkAudit } from '../audit/network-audit';
 import type { LoopSearchStop } from '../audit/distinct-loops';
 import { formatMinor, type Minor } from '../money/minor';
@@ -73,6 +74,8 @@ export interface AuditReport {
   loop_search: { stopped_by: LoopSearchStop; cap: number; searches: number; work: number; work_budget: number; memory_bound: number };
   /** One sentence saying truthfully what stopped the loop search; null when it was complete. */
   loop_search_note: string | null;
+  /** Always REVIEW_CAUTION: the review's figures are estimates. */
+  caution: string;
 }
 
 /**
@@ -146,6 +149,7 @@ export function auditReport(network: Network, audit: NetworkAudit): AuditReport 
       memory_bound: audit.loopSearch.memoryBound,
     },
     loop_search_note: loopSearchNote(audit.loops.length, audit.loopSearch),
+    caution: REVIEW_CAUTION,
   };
 }
 

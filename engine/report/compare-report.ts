@@ -2,6 +2,7 @@
 // depot) for spreadsheets. Lanes are shown by source row and by lane key ("FROM>TO|ref|n"); a lane
 // the scenario added has row null.
 
+import { ROUTE_CAUTION } from '../text/cautions';
 import { formatMinor, type Minor } from '../money/minor';
 import { laneKeyText, type LaneKey } from '../import/lane-key';
 import type { ComparedLoop, ScenarioComparison } from '../scenario/compare';
@@ -39,6 +40,8 @@ export interface CompareReport {
   loops_appeared: CompareLoopRow[];
   loops_disappeared: CompareLoopRow[];
   loop_cap_reached: boolean;
+  /** Always the route caution: the compared costs are estimates. */
+  caution: string;
 }
 
 const keysText = (keys: LaneKey[] | null) => (keys ?? []).map(laneKeyText);
@@ -72,6 +75,7 @@ export function compareReport(comparison: ScenarioComparison): CompareReport {
     loops_appeared: comparison.loopsAppeared.map(loopRow),
     loops_disappeared: comparison.loopsDisappeared.map(loopRow),
     loop_cap_reached: comparison.loopCapReached,
+    caution: ROUTE_CAUTION,
   };
 }
 

@@ -8,6 +8,7 @@ import { formatMinor, type Minor } from '../money/minor';
 import { roundedKm, roundedMinutes, routeBreakdown } from '../planning/route-breakdown';
 import type { Network } from '../network/types';
 import { DRIVING_LIMIT_CAUTION } from '../planning/settings';
+import { ROUTE_CAUTION } from '../text/cautions';
 import { statusName, STATUS_REACHABLE, type DepotStatus, type RouteTree } from '../routes/cheapest-routes';
 import type { LegLimitedRoutes } from '../routes/leg-limited';
 import { routePath, type RoutePath } from '../routes/route-path';
@@ -80,13 +81,15 @@ export interface RoutesReport {
   drive_limit_minutes: number | null;
   /** Routes over the driving limit, and the caution that goes with the flag (null when none is over). */
   over_drive_limit: number;
-  caution: string | null;
+  drive_limit_caution: string | null;
+  /** Always the route caution (estimates; restrictions, hours and regulations apply), never null. */
+  caution: string;
 }
 
 /** The report's fields before its rows, in output order. */
 export type RoutesReportHead = Pick<RoutesReport, 'origin' | 'currency' | 'max_legs'>;
 /** The report's fields after its rows, in output order. */
-export type RoutesReportTail = Pick<RoutesReport, 'loops' | 'drive_limit_minutes' | 'over_drive_limit' | 'caution'>;
+export type RoutesReportTail = Pick<RoutesReport, 'loops' | 'drive_limit_minutes' | 'over_drive_limit' | 'drive_limit_caution' | 'caution'>;
 
 /** The report with its rows made on demand; memory O(depots) whatever the paths add up to. */
 export interface RoutesReportStream {
@@ -262,7 +265,8 @@ export function routesReportStream(network: Network, solved: RouteTree | LegLimi
       })),
       drive_limit_minutes: limit,
       over_drive_limit: over,
-      caution: over > 0 ? DRIVING_LIMIT_CAUTION : null,
+      drive_limit_caution: over > 0 ? DRIVING_LIMIT_CAUTION : null,
+      caution: ROUTE_CAUTION,
     },
     paths,
     depots,

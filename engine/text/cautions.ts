@@ -19,6 +19,11 @@ export const CAUTIONS: readonly string[] = [
 export const ROUTE_CAUTION =
   'Cost estimate only. Vehicle restrictions (height, weight, axle load, hazardous goods), driver hours and local regulations apply: check them before dispatching.';
 
+/** With every contract review (audit, fix plan, headroom): the figures are estimates, not terms. */
+export const REVIEW_CAUTION =
+  'Fix plans and headroom are estimates from the loaded lane costs; any change to contract terms still needs the usual commercial and legal review. ' +
+  ROUTE_CAUTION;
+
 /** One line in the map's attribution corner (kept short: the corner shares the map with the key). */
 export const MAP_CAUTION = 'Costs are estimates; vehicle restrictions, driver hours and local regulations apply.';
 

@@ -2,13 +2,14 @@
 // settings and the what-if scenarios). Shared by the Electron main process (reads and writes the file)
 // and the renderer (edits it). Plain JSON data only, so it crosses IPC and storage unchanged.
 
+import { EMPTY_PLANNING_CHOICES, type PlanningChoices } from '../planning/planning-choices';
 import type { Scenario } from '../scenario/types';
 
 /** Value of the `format` field; a file without it is not a workspace. */
 export const WORKSPACE_FORMAT = 'lanewright-workspace';
 
 /** Version written by this build. Older versions are migrated on read; newer ones are refused. */
-export const WORKSPACE_VERSION = 1;
+export const WORKSPACE_VERSION = 2;
 
 /** File name extension used by the save dialog. */
 export const WORKSPACE_EXTENSION = 'lwspace.json';
@@ -48,7 +49,14 @@ export interface WorkspaceSettings {
  */
 export type WorkspaceScenario = Scenario;
 
-/** The whole workspace as it is saved (version 1). */
+/**
+ * The planning settings as typed in the settings panel (fuel price, consumption, driving limit,
+ * detour factor, average speed, default toll, currency, exchange rates); null = the default.
+ * Added in version 2.
+ */
+export type WorkspacePlanning = PlanningChoices;
+
+/** The whole workspace as it is saved (version 2; version 1 had no `planning`). */
 export interface WorkspaceDocument {
   format: typeof WORKSPACE_FORMAT;
   version: typeof WORKSPACE_VERSION;
@@ -56,6 +64,7 @@ export interface WorkspaceDocument {
   savedAt: string | null;
   files: WorkspaceFiles;
   settings: WorkspaceSettings;
+  planning: WorkspacePlanning;
   scenarios: WorkspaceScenario[];
   /** Name of the scenario being viewed, or null for the base contract. */
   activeScenario: string | null;
@@ -69,6 +78,7 @@ export function emptyWorkspace(): WorkspaceDocument {
     savedAt: null,
     files: { depots: null, lanes: null },
     settings: { origin: null, dispatchDate: null, vehicleClass: null, maxLegs: null },
+    planning: { ...EMPTY_PLANNING_CHOICES },
     scenarios: [],
     activeScenario: null,
   };

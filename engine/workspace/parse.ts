@@ -8,6 +8,7 @@ import { NewerVersionFailure, upgradeDocument, type UpgradeStep, type VersionedK
 import { SCENARIO_FORMAT, SCENARIO_VERSION, scenarioFromJson, scenarioToJson, withTollClasses } from '../scenario/document';
 import { ScenarioFormatError } from '../errors';
 import type { Scenario } from '../scenario/types';
+import { EMPTY_PLANNING_CHOICES } from '../planning/planning-choices';
 
 /** Longest file path accepted (Windows long paths reach 32,767). */
 export const MAX_PATH_LENGTH = 32_767;
@@ -17,10 +18,13 @@ export const MAX_SCENARIOS = 500;
 export const MAX_LEGS_LIMIT = 100_000;
 
 /**
- * Upgrade steps keyed by the version they upgrade from. Version 1 is the first released format, so
- * the table is empty; a format change adds `[n]: step` here and bumps WORKSPACE_VERSION.
+ * Upgrade steps keyed by the version they upgrade from; a format change adds `[n]: step` here and
+ * bumps WORKSPACE_VERSION. 1 -> 2: the planning settings arrived; a version 1 file planned with the
+ * defaults, so every choice is null (= default).
  */
-export const WORKSPACE_UPGRADES: Readonly<Record<number, UpgradeStep>> = {};
+export const WORKSPACE_UPGRADES: Readonly<Record<number, UpgradeStep>> = {
+  1: (raw) => ({ ...raw, planning: { ...EMPTY_PLANNING_CHOICES } }),
+};
 
 const WORKSPACE_KIND: VersionedKind = { format: WORKSPACE_FORMAT, label: 'workspace', current: WORKSPACE_VERSION, steps: WORKSPACE_UPGRADES };
 
@@ -40,6 +44,19 @@ const settingsSchema = json.object({
   maxLegs: json.nullable(json.integer(1, MAX_LEGS_LIMIT)),
 });
 
+// Planning choices are kept as typed; readPlanningChoices says which ones it cannot use.
+const choice = () => json.nullable(json.text(200));
+const planningSchema = json.object({
+  fuelPrice: choice(),
+  fuelConsumption: choice(),
+  drivingLimit: choice(),
+  detourFactor: choice(),
+  averageSpeed: choice(),
+  defaultToll: choice(),
+  currency: choice(),
+  exchangeRates: choice(),
+});
+
 // Scenarios are checked by the scenario reader (their own format and version), then for unique names.
 const workspaceSchema = json.object({
   format: json.exactly(WORKSPACE_FORMAT, `must be "${WORKSPACE_FORMAT}"; this is not a Lanewright workspace`),
@@ -47,6 +64,7 @@ const workspaceSchema = json.object({
   savedAt: json.nullable(json.isoTimestamp()),
   files: filesSchema,
   settings: settingsSchema,
+  planning: planningSchema,
   scenarios: json.list(json.anything(), MAX_SCENARIOS),
   activeScenario: json.nullable(json.text(200)),
 });

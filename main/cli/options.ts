@@ -56,6 +56,12 @@ export const PLANNING_OPTIONS: readonly OptionSpec[] = [
 /** The output options most commands share. */
 export const JSON_OPTION: OptionSpec = { name: 'json', help: 'print one JSON object instead of CSV' };
 export const OUT_OPTION: OptionSpec = { name: 'out', value: 'FILE', help: 'write the output to FILE (atomically) instead of standard output' };
+/** How CSV output is written (engine/export/csv-dialect.ts); read by csv-dialect-option.ts. */
+export const CSV_DIALECT_OPTION: OptionSpec = {
+  name: 'csv-dialect',
+  value: 'comma|semicolon|SEP,DECIMAL,BOM',
+  help: 'CSV output: comma (RFC 4180, default), semicolon (decimal comma and byte-order mark, for decimal-comma spreadsheets), or e.g. semicolon,comma,no-bom',
+};
 export const TIMINGS_OPTION: OptionSpec = { name: 'timings', help: 'print read and solve times as one JSON line on stderr' };
 
 /** Accepted by every command and never listed among its options. */

@@ -30,6 +30,8 @@ export interface CommandOutput {
    */
   writeFile(path: string, text: string, done?: string): void;
   warn(line: string): void;
+  /** Printed on stderr after the output is written (the caution that goes with it); never with a failure. */
+  afterOutput(line: string): void;
   /** Prints figures as one JSON line; times are rounded to 0.01 ms here, once for every command. */
   timing(figures: Record<string, number>): void;
 }
@@ -86,6 +88,7 @@ export async function main(argv: readonly string[]): Promise<number> {
     // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
     const opened: { file: AtomicFileStream | null } = { file: null };
     const files: [path: string, text: string, done?: string][] = [];
+    const after: string[] = [];
     const output: CommandOutput = {
       write: (text) => {
         if (!outPath) {
@@ -97,6 +100,7 @@ export async function main(argv: readonly string[]): Promise<number> {
       },
       writeFile: (path, text, done) => files.push([path, text, done]),
       warn: printError,
+      afterOutput: (line) => after.push(line),
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
     let status: number;
@@ -113,6 +117,7 @@ export async function main(argv: readonly string[]): Promise<number> {
       await writeFileAtomic(path, text);
       if (done) process.stdout.write(forStdout(`wrote ${done}\n`));
     }
+    for (const line of after) printError(line);
     return status;
   } catch (error) {
     if (error instanceof LanewrightError) {

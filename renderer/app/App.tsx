@@ -11,6 +11,7 @@ import { ImportDialog } from '../components/ImportPanel/ImportDialog';
 import { LoopAlert } from '../components/LoopAlert/LoopAlert';
 import { MapLegend } from '../components/MapLegend/MapLegend';
 import { PlanControls } from '../components/PlanControls/PlanControls';
+import { PlanningSettings } from '../components/PlanningSettings/PlanningSettings';
 import { ProgressBar } from '../components/ProgressBar/ProgressBar';
 import { RouteDetail } from '../components/RouteDetail/RouteDetail';
 import { Splitter } from '../components/Splitter/Splitter';
@@ -86,6 +87,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
       <main className="lw-body">
         <aside className="lw-side" id="lw-side" aria-label="Plan and route">
           {network && <PlanControls network={network} settings={settings} onChange={setSettings} />}
+          {network && <PlanningSettings choices={settings.planning} onChange={(planning) => setSettings({ ...settings, planning })} />}
           {network && solve && amounts && selected !== null && selected < network.depotIds.length && (
             <RouteDetail network={network} solve={solve} amounts={amounts} depot={selected} route={route} added={added} onPlanFrom={planFrom} scenarioName={hasChanges(scenario) ? scenario.name : null} host={host} onMessage={bench.setMessage} />
           )}

@@ -5,6 +5,7 @@ import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
 import { serializeScenarioDocument } from '../../engine/index';
 import { scenarioFileName, type ExportChoice } from '../model/export-file';
+import { csvDialect } from './csv-dialect-store';
 import type { Workbench } from './use-workbench';
 
 export interface CommandHandlers {
@@ -23,7 +24,7 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
         const file =
           what === 'scenario-json'
             ? { fileName: scenarioFileName(scenario.name), text: serializeScenarioDocument(scenario) }
-            : await engine.client.request('export', { what });
+            : await engine.client.request('export', { what, dialect: csvDialect() });
         const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : 'csv');
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);

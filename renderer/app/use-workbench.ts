@@ -5,7 +5,7 @@
 
 import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { workspaceFingerprint } from '../../engine/index';
+import { samePlanningChoices, workspaceFingerprint } from '../../engine/index';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { isDirty, LifecycleStore } from '../model/workspace-lifecycle';
 import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
@@ -17,7 +17,7 @@ import { usePlan } from './use-plan';
 import { defaultSettings, documentOf, filesOf, loadFilesOf, stateOf, type LoadFiles } from './workspace-doc';
 
 function planOf(settings: PlanSettings): PlanChoice {
-  return { date: settings.dispatchDate, vehicleClass: settings.vehicleClass };
+  return { date: settings.dispatchDate, vehicleClass: settings.vehicleClass, planning: settings.planning };
 }
 
 export function useWorkbench(host: LanewrightHost) {
@@ -106,17 +106,22 @@ export function useWorkbench(host: LanewrightHost) {
     })().finally(() => lifecycle.dispatch({ type: 'replace-ended' }));
   }, [host, openDocument, loadSample, lifecycle]);
 
-  // A new day or vehicle class re-plans the import (lanes valid that day, that class's tolls). When
+  // A new day, vehicle class or planning setting re-plans the import (lanes valid that day, that
+  // class's tolls, estimates by the settings). When
   // the re-plan is cancelled or refused the network stays on its plan, so the controls go back to it:
   // otherwise they would name a day or class the results on screen were not planned for.
   const { network } = dataset;
   useEffect(() => {
     if (!network) return;
     const wanted = planOf(settings);
-    if (wanted.date === network.plan.date && wanted.vehicleClass === network.plan.vehicleClass) return;
+    if (wanted.date === network.plan.date && wanted.vehicleClass === network.plan.vehicleClass && samePlanningChoices(wanted.planning, network.plan.planning)) return;
     void replan(wanted).then((ok) => {
       if (ok) return;
-      setSettings((now) => (now.dispatchDate === wanted.date && now.vehicleClass === wanted.vehicleClass ? { ...now, dispatchDate: network.plan.date, vehicleClass: network.plan.vehicleClass } : now));
+      setSettings((now) =>
+        now.dispatchDate === wanted.date && now.vehicleClass === wanted.vehicleClass && samePlanningChoices(now.planning, wanted.planning)
+          ? { ...now, dispatchDate: network.plan.date, vehicleClass: network.plan.vehicleClass, planning: network.plan.planning }
+          : now,
+      );
     });
   }, [network, settings, replan]);
 

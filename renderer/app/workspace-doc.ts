@@ -45,6 +45,7 @@ export function documentOf(files: DatasetFiles | null, settings: PlanSettings, s
     vehicleClass: settings.vehicleClass === NO_CLASS ? null : settings.vehicleClass,
     maxLegs: settings.maxLegs,
   };
+  if (settings.planning) doc.planning = { ...settings.planning };
   doc.scenarios = [scenario];
   doc.activeScenario = scenario.changes.length > 0 ? scenario.name : null;
   return doc;
@@ -55,7 +56,7 @@ export function stateOf(doc: WorkspaceDocument): { settings: PlanSettings; scena
   const s = doc.settings;
   const scenario = doc.scenarios.find((x) => x.name === doc.activeScenario) ?? doc.scenarios[0] ?? emptyScenario();
   return {
-    settings: { origin: s.origin ?? '', maxLegs: s.maxLegs, vehicleClass: s.vehicleClass ?? NO_CLASS, dispatchDate: s.dispatchDate ?? todayIso() },
+    settings: { origin: s.origin ?? '', maxLegs: s.maxLegs, vehicleClass: s.vehicleClass ?? NO_CLASS, dispatchDate: s.dispatchDate ?? todayIso(), planning: { ...doc.planning } },
     scenario,
   };
 }

@@ -4,7 +4,6 @@
 // routes are solved again on the result.
 
 import { findDistinctLoops } from '../../engine/index';
-import { exportFileName } from '../../engine/index';
 import { geoJsonText } from '../../engine/index';
 import { networkGeoJson } from '../../engine/index';
 import { lanesCsv, type LanesExportInput } from '../../engine/index';
@@ -14,6 +13,7 @@ import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { routesReport } from '../../engine/index';
 import { scenarioImport } from '../../engine/index';
+import { applyCsvDialect, exportFileName, RFC4180_DIALECT, type CsvDialect, type ExportSettings } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import type { ExportKind, PlanSettings } from './protocol';
 import { solveFor } from './solve-plan';
@@ -30,6 +30,10 @@ export interface ExportContext {
   settings: PlanSettings | null;
   scenario: Scenario | null;
   date: string | null;
+  /** Vehicle class planned for; null = the file's default. */
+  vehicleClass?: string | null;
+  /** Input file names (depots, lanes). */
+  files?: string[];
 }
 
 /** The network and lane rows the exports describe: the import's, or the scenario's when it changes anything. */
@@ -40,13 +44,23 @@ function target(ctx: ExportContext): { network: Network; lanes: LanesExportInput
   return { network: what.network, lanes: what };
 }
 
-const suffix = (ctx: ExportContext) => (ctx.scenario && hasChanges(ctx.scenario) ? `-${ctx.scenario.name.replace(/[^\w-]+/g, '-').toLowerCase()}` : '');
+const scenarioName = (ctx: ExportContext) => (ctx.scenario && hasChanges(ctx.scenario) ? ctx.scenario.name : null);
 
-/** Builds one export file. Routes need a chosen origin; the others describe the whole contract. */
-export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
+/** What the file was made from; JSON and GeoJSON exports carry it. */
+export function exportSettings(ctx: ExportContext): ExportSettings {
+  return { date: ctx.date, vehicle_class: ctx.vehicleClass ?? null, files: ctx.files ?? [], scenario: scenarioName(ctx) };
+}
+
+/**
+ * Builds one export file. Routes need a chosen origin; the others describe the whole contract.
+ * Names carry what is inside (kind, origin, date, class, scenario); CSV is written in `dialect`.
+ */
+export function exportText(ctx: ExportContext, what: ExportKind, dialect: CsvDialect = RFC4180_DIALECT): ExportFile {
   const { network, lanes } = target(ctx);
   const plan = ctx.imported.plan;
-  const tag = suffix(ctx);
+  const name = (kind: string, extension: string, origin: string | null = null) =>
+    exportFileName({ kind, origin, date: ctx.date, vehicleClass: ctx.vehicleClass ?? null, scenario: scenarioName(ctx) }, extension);
+  const csv = (text: string) => applyCsvDialect(text, dialect);
   const loops = () => findDistinctLoops(network).loops;
   const report = () => {
     if (!ctx.settings) return undefined;
@@ -57,13 +71,15 @@ export function exportText(ctx: ExportContext, what: ExportKind): ExportFile {
     case 'routes-csv': {
       const routes = report();
       if (!routes) throw new RangeError('export: choose an origin before exporting routes');
-      return { fileName: exportFileName({ kind: `routes-from-${routes.origin}${tag}` }, 'csv'), mime: 'text/csv', text: routesCsv(routes) };
+      return { fileName: name('routes', 'csv', routes.origin), mime: 'text/csv', text: csv(routesCsv(routes)) };
     }
     case 'lanes-csv':
-      return { fileName: exportFileName({ kind: `lanes${tag}` }, 'csv'), mime: 'text/csv', text: lanesCsv(lanes, loops()) };
+      return { fileName: name('lanes', 'csv'), mime: 'text/csv', text: csv(lanesCsv(lanes, loops())) };
     case 'loops-csv':
-      return { fileName: exportFileName({ kind: `rebate-loops${tag}` }, 'csv'), mime: 'text/csv', text: loopsCsv(network, loops()) };
-    case 'geojson':
-      return { fileName: exportFileName({ kind: `network${tag}` }, 'geojson'), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: report(), loops: loops() })) };
+      return { fileName: name('rebate-loops', 'csv'), mime: 'text/csv', text: csv(loopsCsv(network, loops())) };
+    case 'geojson': {
+      const routes = report();
+      return { fileName: name('network', 'geojson', routes?.origin ?? null), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: routes, loops: loops(), settings: exportSettings(ctx) })) };
+    }
   }
 }

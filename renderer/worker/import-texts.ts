@@ -1,7 +1,7 @@
 // Turns the two CSV texts into an import result and the UI's report, and re-plans an import for
 // another day or vehicle class. The one place the worker reaches the engine's importer.
 
-import { importNetwork, planNetwork } from '../../engine/index';
+import { importNetwork, planNetwork, readPlanningChoices, EMPTY_PLANNING_CHOICES } from '../../engine/index';
 import type { ImportResult, ValidationItem } from '../../engine/index';
 import type { ImportIssue, ImportReport, NamedText, PlanChoice } from './protocol';
 
@@ -23,8 +23,15 @@ export function reportOf(result: ImportResult): ImportReport {
   };
 }
 
+// Choices the settings panel could not use were marked there; here they fall back to the defaults.
 function request(plan: PlanChoice) {
-  return { date: plan.date || undefined, vehicleClass: plan.vehicleClass || undefined };
+  return { date: plan.date || undefined, vehicleClass: plan.vehicleClass || undefined, settings: readPlanningChoices(plan.planning ?? EMPTY_PLANNING_CHOICES).settings };
+}
+
+/** Currency and exchange rates are read with the files: changing them means reading the files again. */
+export function currencyKey(plan: PlanChoice): string {
+  const read = readPlanningChoices(plan.planning ?? EMPTY_PLANNING_CHOICES);
+  return JSON.stringify([read.currency ?? null, read.exchangeRates ? Object.entries(read.exchangeRates).sort() : null]);
 }
 
 /**
@@ -32,7 +39,10 @@ function request(plan: PlanChoice) {
  * can offer "continue with the accepted rows"; whether to use it is the caller's choice.
  */
 export function importTexts(depots: NamedText, lanes: NamedText, plan: PlanChoice, onProgress?: (phase: string, fraction: number) => void): ImportResult {
+  const read = readPlanningChoices(plan.planning ?? EMPTY_PLANNING_CHOICES);
   return importNetwork(depots.text, lanes.text, {
+    currency: read.currency,
+    exchangeRates: read.exchangeRates,
     depotsFile: depots.name,
     lanesFile: lanes.name,
     plan: request(plan),

@@ -5,13 +5,9 @@
 import { estimateRules, type ImportResult, type LaneTable } from '../../engine/index';
 import type { LaneDetailView, RouteView } from './protocol';
 
-// The clause text: a `clause` column of the lanes file. Until the importer reads it as its own
-// column, it is kept among the file's extra columns under its header as written.
+// The clause text: the lanes file's `clause` column (null when the row or the file has none).
 function clauseOf(table: LaneTable, row: number): string | null {
-  const own = (table as LaneTable & { clause?: (string | undefined)[] }).clause;
-  if (own) return own[row] ?? null;
-  const column = table.extra.find((e) => e.column.trim().toLowerCase() === 'clause');
-  return column?.values[row] ?? null;
+  return table.clause?.[row] ?? null;
 }
 
 /** Details of each lane of `lanes` (base network lane indices); null for a lane a scenario adds. */

@@ -1,7 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { ChangeView, EstimateRules, LaneKey, PlanAmounts } from '../../engine/index';
+import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
@@ -45,6 +45,8 @@ export interface ImportReport {
 export interface PlanChoice {
   date: string;
   vehicleClass: string;
+  /** The planning settings panel's choices; absent = every default. */
+  planning?: PlanningChoices;
 }
 
 /** The network as the UI draws and edits it; one entry per depot / lane, lanes in input order. */
@@ -110,6 +112,8 @@ export interface PlanSettings {
   vehicleClass: string;
   /** ISO 8601 date (YYYY-MM-DD). */
   dispatchDate: string;
+  /** Planning settings (fuel, speed, driving limit, currency, ...); absent = every default. */
+  planning?: PlanningChoices;
 }
 
 export interface LoopView {
@@ -196,7 +200,8 @@ export interface WorkerRequests {
   solve: { request: { settings: PlanSettings; scenario: Scenario | null }; answer: { result: SolveView } };
   /** `solveId`: the id of the solve request whose answer the route goes with (see session.ts). */
   route: { request: { target: number; solveId: number }; answer: { route: RouteView | null } };
-  export: { request: { what: ExportKind }; answer: { fileName: string; mime: string; text: string } };
+  /** `dialect`: how CSV files are written (RFC 4180 when absent). */
+  export: { request: { what: ExportKind; dialect?: CsvDialect }; answer: { fileName: string; mime: string; text: string } };
   review: { request: { scenario: Scenario | null; fixBy?: 'lane' | 'clause' }; answer: { review: ContractReviewView } };
   dispatch: { request: { request: DispatchRequest }; answer: { result: DispatchView } };
 }

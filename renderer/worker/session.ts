@@ -8,9 +8,9 @@ import type { Network } from '../../engine/index';
 import { overlayIndex, type OverlayIndex } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
-import { importTexts, replanImport, reportOf } from './import-texts';
+import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
 import { laneOfRows, networkView, transferablesOf } from './network-view';
-import type { FromWorker, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
+import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
@@ -34,6 +34,8 @@ export class WorkerSession {
   private laneOfRow: Int32Array = new Int32Array(0);
   /** Keys of the import's lane rows, counted once per import (occurrences over the whole file). */
   private rowIndex: OverlayIndex | null = null;
+  /** The texts of the last accepted import: a new currency or rates means reading them again. */
+  private texts: { depots: NamedText; lanes: NamedText } | null = null;
   private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
   /** Names and SHA-256 of the texts last loaded, for the printable review (hashed as they arrive). */
   private files: ReviewedFile[] = [];
@@ -72,8 +74,8 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null };
-        const file = exportText(ctx, message.what);
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name) };
+        const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
       }
@@ -133,13 +135,15 @@ export class WorkerSession {
     this.filesHashed = hashTexts([message.depots, message.lanes]).then((files) => {
       if (load === this.loads) this.files = files;
     });
+    this.texts = { depots: message.depots, lanes: message.lanes };
     this.adopt(message.id, result, message.plan);
   }
 
   private replan(id: number, plan: PlanChoice): void {
     if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
     this.post({ kind: 'progress', id, phase: 'Planning for the day and vehicle class', fraction: 0.2 });
-    const result = replanImport(this.imported, plan);
+    const reread = this.texts !== null && currencyKey(plan) !== currencyKey(this.plan);
+    const result = reread ? importTexts(this.texts!.depots, this.texts!.lanes, plan) : replanImport(this.imported, plan);
     if (!result.network) {
       this.post({ kind: 'loaded', id, network: null, report: reportOf(result) });
       return;

@@ -9,7 +9,8 @@ import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadImport, planDateOf } from '../load-network';
-import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const auditCommand: CommandSpec = {
@@ -34,6 +35,7 @@ export const auditCommand: CommandSpec = {
     { name: 'fix-by', value: 'lane|clause', help: 'calendar review: one cut per lane (default) or one percentage cut per clause' },
     { name: 'report', value: 'FILE', help: 'calendar review: also write a printable HTML report to FILE' },
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
@@ -49,6 +51,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
+  csvDialectOption(args);
 
   const readStart = performance.now();
   const imported = loadImport(args);
@@ -77,8 +80,8 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
   const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
-  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : formatCsvRows(auditLaneRows(network, report)));
-  if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(auditLoopRows(network, report)));
+  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
+  if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 
   if (report.loops.length > 0) {

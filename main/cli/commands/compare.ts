@@ -10,7 +10,8 @@ import { formatCsvRows } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readDocumentFile } from '../files';
 import { loadImport, planDateOf } from '../load-network';
-import { JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
+import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const compareCommand: CommandSpec = {
@@ -27,6 +28,7 @@ export const compareCommand: CommandSpec = {
     { name: 'from', value: 'DEPOT_ID', help: 'origin depot', required: true },
     LOOP_CAP_OPTION,
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     ...PLANNING_OPTIONS,
   ],
@@ -44,7 +46,7 @@ function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const network = imported.network;
   const comparison = compareImport(imported, scenario, originId, { loopCap });
   const report = compareReport(comparison);
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : formatCsvRows(compareReportRows(report, network.exponent)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, formatCsvRows(compareReportRows(report, network.exponent))));
 
   for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
   for (const loop of report.loops_appeared) {

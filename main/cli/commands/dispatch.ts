@@ -7,7 +7,8 @@ import { parseScenarioDocument, planLoads, dispatchCsv, InvalidInputError, impor
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
 import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
-import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { inCsvDialect } from '../csv-dialect-option';
 import { readTextChunks } from '../read-chunks';
 import type { CommandOutput } from '../run';
 
@@ -26,6 +27,7 @@ export const dispatchCommand: CommandSpec = {
     { name: 'scenario', value: 'FILE', help: 'plan the loads under this what-if scenario file (lanewright-scenario)' },
     { name: 'alternatives', value: 'K', help: 'up to K alternative routes per load (at most 20)' },
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
@@ -91,7 +93,7 @@ function runDispatch(args: ParsedArgs, out: CommandOutput): number {
   });
   const solveMs = performance.now() - solveStart;
   const report = dispatchReport(plan);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : dispatchCsv(report));
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : inCsvDialect(args, dispatchCsv(report)));
   if (scenario) out.warn(`note: loads planned under the what-if scenario "${scenario.name}" (${scenarioPath}), not the lanes as the file has them`);
   for (const w of report.warnings) out.warn(`warning: ${w}`);
   for (const n of report.notes) out.warn(`note: ${n}`);

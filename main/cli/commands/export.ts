@@ -17,7 +17,8 @@ import type { Network } from '../../../engine/index';
 import { UsageError, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
 import { loadImport } from '../load-network';
-import { NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
+import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const exportCommand: CommandSpec = {
@@ -35,6 +36,7 @@ export const exportCommand: CommandSpec = {
     { name: 'routes-out', value: 'FILE', help: 'write the routes from --from as CSV' },
     { name: 'loops-out', value: 'FILE', help: 'write the rebate loops CSV' },
     { name: 'geojson-out', value: 'FILE', help: 'write depots, routes and loops as GeoJSON' },
+    CSV_DIALECT_OPTION,
     { name: 'scenario', value: 'FILE', help: 'lay this scenario file over the lanes before exporting' },
     ...PLANNING_OPTIONS,
   ],
@@ -71,10 +73,11 @@ function runExport(args: ParsedArgs, out: CommandOutput): number {
   const loops = findDistinctLoops(network).loops;
   if (lanesOut) {
     const rows = lanes.lanes.count - (lanes.leaveOut ? lanes.leaveOut.reduce((n, x) => n + x, 0) : 0);
-    out.writeFile(lanesOut, lanesCsv(lanes, loops), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
+    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
   }
-  if (routesOut && report) out.writeFile(routesOut, routesCsv(report), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
-  if (loopsOut) out.writeFile(loopsOut, loopsCsv(network, loops), `loops: ${loopsOut} (${loops.length} loop(s))`);
+  if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  if ((routesOut || lanesOut || geojsonOut) && report) out.afterOutput(`CAUTION: ${report.caution}`);
+  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
   return 0;

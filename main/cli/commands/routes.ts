@@ -11,7 +11,8 @@ import { routesCsvChunks, routesJsonChunks } from '../../../engine/index';
 import type { Network } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport, planDateOf } from '../load-network';
-import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { CSV_DIALECT_OPTION, JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
+import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
 export const routesCommand: CommandSpec = {
@@ -29,6 +30,7 @@ export const routesCommand: CommandSpec = {
     { name: 'to', value: 'ID,...', help: 'only these destination depots (comma-separated ids)' },
     { name: 'no-paths', help: 'leave out each route\'s path, lane rows and refs (via and via_lane still give the whole tree)' },
     JSON_OPTION,
+    CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
@@ -48,6 +50,7 @@ function targetDepots(network: Network, args: ParsedArgs): number[] | undefined 
 function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const maxLegs = wholeNumberOption(args, 'max-legs', 0);
+  csvDialectOption(args); // a wrong name is refused before any file is read
 
   const readStart = performance.now();
   const imported = loadImport(args);
@@ -69,7 +72,11 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const reportMs = performance.now() - reportStart;
 
   const writeStart = performance.now();
-  for (const chunk of args.flags.has('json') ? routesJsonChunks(report, undefined, { date: planDateOf(args).date }) : routesCsvChunks(report)) out.write(chunk);
+  if (args.flags.has('json')) for (const chunk of routesJsonChunks(report, undefined, { date: planDateOf(args).date })) out.write(chunk);
+  else if (!args.values.has('csv-dialect')) for (const chunk of routesCsvChunks(report)) out.write(chunk);
+  // Another dialect re-writes the whole table (its numeric columns are judged over every row), so
+  // only then is the CSV held in memory at once.
+  else out.write(inCsvDialect(args, [...routesCsvChunks(report)].join('')));
   const writeMs = performance.now() - writeStart;
   if (args.flags.has('timings')) {
     out.timing({ read_ms: readMs, solve_ms: solveMs, report_ms: reportMs, write_ms: writeMs, depots: network.depotCount, lanes: network.laneCount, rows: report.depots.length });
@@ -77,8 +84,10 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const { over_drive_limit: over, caution, loops } = report.tail;
   if (over > 0) {
     const limit = imported.plan.settings.drivingLimit;
-    out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${caution}`);
+    out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
   }
+  // The CSV's companion text: the caution goes with every output, on stderr beside the CSV.
+  out.afterOutput(`CAUTION: ${caution}`);
   if (loops.length > 0) {
     out.warn(`WARNING: ${loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
   }

@@ -2,6 +2,7 @@
 // every rebate loop with the lanes and references that form it, a fix plan (which rebates to cut,
 // and by how much) that can be tried as a scenario, and rebate headroom per lane.
 
+import { CautionLine } from '../CautionLine/CautionLine';
 import { useEffect, useState } from 'react';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import { formatMoney, formatMoneyWithCode } from '../../model/format';
@@ -66,6 +67,7 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
   const day = network.plan.date ? `on ${network.plan.date}` : 'with every row valid at once (no date chosen)';
   return (
     <div className="lw-review" data-testid="contract-review">
+      <CautionLine kind="review" testId="review-caution" />
       {review.calendar && <CalendarReview calendar={review.calendar} exponent={network.exponent} fixBy={fixBy} onFixBy={setFixBy} onSaveReport={() => void saveReport()} />}
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>

@@ -6,6 +6,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
+import { csvDialect } from '../../app/csv-dialect-store';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { DEFAULT_LOADS_QUERY, queryLoads, type LoadStatusWord, type LoadsQuery } from '../../model/loads-table';
@@ -15,7 +16,7 @@ import { hasChanges, type Scenario } from '../../model/scenario-edits';
 import { sampleLoadFiles } from '../../sample/sample-loads';
 import { DispatchSheet } from './DispatchSheet';
 import { LoadsTable } from './LoadsTable';
-import { PRODUCT_NAME } from '../../../engine/index';
+import { applyCsvDialect, PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
 import type { LoadFiles } from '../../app/workspace-doc';
 import './loads.css';
@@ -101,7 +102,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, files, onFil
   const money = (v: number | null) => (v === null ? '—' : formatMoney(v, network.exponent));
   const exportCsv = async () => {
     if (!view?.csv) return;
-    const saved = await host.saveExport(`dispatch-${date || 'loads'}.csv`, view.csv, 'csv');
+    const saved = await host.saveExport(`dispatch-${date || 'loads'}.csv`, applyCsvDialect(view.csv, csvDialect()), 'csv');
     if (!saved.ok) onMessage(`Dispatch sheet not saved: ${saved.failure.message}`);
     else if (saved.value) onMessage(`Saved the dispatch sheet: ${saved.value.path}`);
   };

@@ -1,7 +1,7 @@
 // The planning controls: origin, dispatch date, vehicle class and the leg limit. Every change
 // recomputes the plan in the worker (debounced by the plan hook).
 
-import { useId } from 'react';
+import { useEffect, useId, useState } from 'react';
 import type { NetworkView, PlanSettings } from '../../worker/protocol';
 import { OriginPicker } from '../OriginPicker/OriginPicker';
 
@@ -14,6 +14,14 @@ export interface PlanControlsProps {
 export function PlanControls({ network, settings, onChange }: PlanControlsProps) {
   const id = useId();
   const set = (patch: Partial<PlanSettings>) => onChange({ ...settings, ...patch });
+  // The leg limit as typed: a value that is not a whole number from 1 stays in the field, marked,
+  // with the reason (it used to be dropped silently, leaving the old limit in force).
+  const [legsText, setLegsText] = useState(settings.maxLegs === null ? '' : String(settings.maxLegs));
+  const [legsProblem, setLegsProblem] = useState<string | null>(null);
+  useEffect(() => {
+    setLegsText(settings.maxLegs === null ? '' : String(settings.maxLegs));
+    setLegsProblem(null);
+  }, [settings.maxLegs]);
   return (
     <fieldset className="lw-controls">
       <legend>Plan</legend>
@@ -41,17 +49,31 @@ export function PlanControls({ network, settings, onChange }: PlanControlsProps)
           min={1}
           step={1}
           placeholder="no limit"
-          aria-describedby={`${id}-legs-help`}
-          value={settings.maxLegs ?? ''}
+          aria-describedby={`${id}-legs-help${legsProblem ? ` ${id}-legs-problem` : ''}`}
+          aria-invalid={legsProblem ? true : undefined}
+          value={legsText}
           onChange={(e) => {
             const raw = e.target.value.trim();
-            if (raw === '') set({ maxLegs: null });
-            else if (/^\d+$/.test(raw) && Number(raw) >= 1) set({ maxLegs: Number(raw) });
+            setLegsText(e.target.value);
+            if (raw === '') {
+              setLegsProblem(null);
+              set({ maxLegs: null });
+            } else if (/^\d+$/.test(raw) && Number(raw) >= 1) {
+              setLegsProblem(null);
+              set({ maxLegs: Number(raw) });
+            } else {
+              setLegsProblem(`"${raw}" is not a whole number from 1; the limit stays ${settings.maxLegs ?? 'off'}.`);
+            }
           }}
         />
         <span id={`${id}-legs-help`} className="lw-muted">
           Empty = no limit
         </span>
+        {legsProblem && (
+          <span id={`${id}-legs-problem`} className="lw-warn" role="alert">
+            Maximum legs: {legsProblem}
+          </span>
+        )}
       </div>
     </fieldset>
   );

@@ -3,7 +3,8 @@
 // (arrow keys, Page Up/Down, Home/End move between rows, Enter shows the route), exportable as CSV.
 // Long tables are windowed: only rows near the view are in the DOM.
 
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { CautionLine } from '../CautionLine/CautionLine';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { useRowKeys } from '../DataTable/use-row-keys';
@@ -59,6 +60,7 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
           Export routes CSV
         </button>
       </div>
+      <CautionLine testId="results-caution" />
       <table className="lw-table" aria-label={`Routes from ${network.depotIds[solve.origin]}`} aria-rowcount={visible.length + 1} data-testid="results-table">
         <thead>
           <tr aria-rowindex={1}>

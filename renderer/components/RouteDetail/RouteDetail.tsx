@@ -3,7 +3,8 @@
 // own as CSV or as a printed sheet, and a button to plan from this depot instead.
 
 import type { LanewrightHost } from '../../../main/ipc/contract';
-import { exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
+import { applyCsvDialect, exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
+import { csvDialect } from '../../app/csv-dialect-store';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
@@ -72,7 +73,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
   const exportRoute = async () => {
     if (!sheet) return;
     const name = exportFileName({ kind: `route-${sheet.origin}-${sheet.destination}`, date: sheet.date, vehicleClass: sheet.vehicleClass, scenario: sheet.scenario }, 'csv');
-    const result = await host.saveExport(name, routeSheetCsv(sheet), 'csv');
+    const result = await host.saveExport(name, applyCsvDialect(routeSheetCsv(sheet), csvDialect()), 'csv');
     if (!result.ok) onMessage(`Export failed: ${result.failure.message}`);
     else if (result.value) onMessage(`Exported ${result.value.path}.`);
   };

@@ -3,9 +3,10 @@
 // then every depot whose status or cost differs from the base contract, largest change first. Each
 // change can be undone on its own.
 
+import { CautionLine } from '../CautionLine/CautionLine';
 import { useMemo } from 'react';
 import { withoutChange } from '../../../engine/index';
-import { laneKeyText } from '../../../engine/index';
+import { laneKeyWords } from '../../../engine/index';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { formatMoney } from '../../model/format';
@@ -60,13 +61,14 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
   const views = solve.overlay.changes;
   const describe = (c: Scenario['changes'][number], i: number) => {
     if (views.length === scenario.changes.length && views[i]) return views[i].text;
-    if (c.kind === 'set-amount') return `${laneKeyText(c.lane)}: ${c.field === 'toll' ? `toll ${c.vehicleClass ?? 'every class'}` : c.field} → ${money(c.amountMinor)}`;
-    if (c.kind === 'close-lane') return `${laneKeyText(c.lane)}: closed`;
-    if (c.kind === 'set-validity') return `${laneKeyText(c.lane)}: valid ${c.validFrom ?? '…'} to ${c.validTo ?? '…'}`;
+    if (c.kind === 'set-amount') return `${laneKeyWords(c.lane)}: ${c.field === 'toll' ? `toll ${c.vehicleClass ?? 'every class'}` : c.field} → ${money(c.amountMinor)}`;
+    if (c.kind === 'close-lane') return `${laneKeyWords(c.lane)}: closed`;
+    if (c.kind === 'set-validity') return `${laneKeyWords(c.lane)}: valid ${c.validFrom ?? '…'} to ${c.validTo ?? '…'}`;
     return `new lane ${c.lane.from} → ${c.lane.to}`;
   };
   return (
     <div className="lw-compare" data-testid="scenario-compare">
+      <CautionLine testId="compare-caution" />
       <h3>Changes in “{scenario.name}”</h3>
       <ul>
         {scenario.changes.map((c, i) => {

@@ -2,6 +2,7 @@
 // exports, about). In the desktop app the same commands are also in the application menu.
 
 import type { ExportChoice } from '../../model/export-file';
+import { CsvDialectPicker } from '../CsvDialectPicker/CsvDialectPicker';
 
 const BUSY_REASON = 'Waits for the import that is running (cancel it or let it finish)';
 
@@ -69,6 +70,7 @@ export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImp
             <option value="scenario-json">Scenario file (JSON)</option>
           </select>
         </label>
+        <CsvDialectPicker />
         <button type="button" onClick={onAbout}>
           About &amp; cautions
         </button>

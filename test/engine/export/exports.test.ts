@@ -94,7 +94,8 @@ describe('routes and loops CSV', () => {
       expect(b.over_drive_limit).toBe((b.drive_minutes ?? 0) > 540);
     }
     expect(rows).toHaveLength(report.depots.length);
-    expect(report.over_drive_limit > 0 ? report.caution : 'none').toMatch(/estimate|none/);
+    expect(report.over_drive_limit > 0 ? report.drive_limit_caution : 'none').toMatch(/estimate|none/);
+    expect(report.caution).toMatch(/estimate/);
   });
 
   it('loops CSV lists each loop lane in order with the net per lap', () => {

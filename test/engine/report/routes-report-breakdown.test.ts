@@ -1,6 +1,7 @@
 // The per-route breakdown: components summed along the lanes used (worked out by hand below), the
 // distance and drive time, and the driving-limit flag with its caution.
 
+import { ROUTE_CAUTION } from '../../../engine/text/cautions';
 import { describe, expect, it } from 'vitest';
 import { importNetwork } from '../../../engine/planning/import-network';
 import { routesReport } from '../../../engine/report/routes-report';
@@ -19,12 +20,14 @@ describe('routes report breakdown', () => {
     expect(c.refs).toEqual(['L1', 'L2']);
     expect(c.breakdown).toMatchObject({ toll: '11.10', fuel: '22.20', fees: '5.30', rebate: '2.50', distance_km: 550.5, drive_minutes: 550, over_drive_limit: true });
     expect(report.over_drive_limit).toBe(1);
-    expect(report.caution).toMatch(/estimate/);
+    expect(report.drive_limit_caution).toMatch(/estimate/);
+    expect(report.caution).toBe(ROUTE_CAUTION);
     const b = report.depots.find((d) => d.id === 'B')!;
     expect(b.breakdown!.over_drive_limit).toBe(false);
     // US limit (11 h = 660 min): nothing is over.
     const us = routesReport(r.network!, cheapestRoutes(r.network!, 0), { driveLimitMinutes: 660 });
     expect(us.over_drive_limit).toBe(0);
-    expect(us.caution).toBeNull();
+    expect(us.drive_limit_caution).toBeNull();
+    expect(us.caution).toBe(ROUTE_CAUTION); // the route caution is never null
   });
 });

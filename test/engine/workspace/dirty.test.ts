@@ -16,7 +16,7 @@ describe('DirtyTracker', () => {
 
   it('ignores key order and the save timestamp', () => {
     const a = emptyWorkspace();
-    const b = { activeScenario: null, scenarios: [], settings: { ...a.settings }, files: { lanes: null, depots: null }, savedAt: '2026-01-01T00:00:00Z', version: a.version, format: a.format } as typeof a;
+    const b = { activeScenario: null, scenarios: [], planning: { ...a.planning }, settings: { ...a.settings }, files: { lanes: null, depots: null }, savedAt: '2026-01-01T00:00:00Z', version: a.version, format: a.format } as typeof a;
     expect(workspaceFingerprint(a)).toBe(workspaceFingerprint(b));
   });
 });

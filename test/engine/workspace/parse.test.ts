@@ -48,6 +48,32 @@ function withField(mutate: (doc: Record<string, any>) => void): string {
   return JSON.stringify(doc);
 }
 
+describe('version 2: planning settings', () => {
+  it('keeps the planning settings as typed', () => {
+    const doc = { ...sampleWorkspace(), planning: { ...sampleWorkspace().planning, fuelPrice: '1.719', drivingLimit: 'us', exchangeRates: 'USD=0.92,CHF=1.05' } };
+    expect(parseWorkspace(serializeWorkspace(doc), 'p.json').document.planning).toEqual(doc.planning);
+  });
+
+  it('upgrades a version 1 file: same files, settings and scenarios, every planning setting at its default', () => {
+    const v1 = JSON.parse(serializeWorkspace(sampleWorkspace())) as Record<string, unknown>;
+    delete v1.planning;
+    v1.version = 1;
+    const { document, migratedFrom } = parseWorkspace(JSON.stringify(v1), 'old.json');
+    expect(migratedFrom).toBe(1);
+    expect(document.version).toBe(2);
+    expect(document.planning).toEqual({ fuelPrice: null, fuelConsumption: null, drivingLimit: null, detourFactor: null, averageSpeed: null, defaultToll: null, currency: null, exchangeRates: null });
+    const { planning: _planning, ...rest } = document;
+    const { planning: _expected, ...expected } = { ...sampleWorkspace(), version: 2 };
+    expect(rest).toEqual(expected);
+  });
+
+  it('refuses a version 2 file without planning, or with an unknown planning field, naming the pointer', () => {
+    expect(failure(withField((d) => delete d.planning)).field).toBe('/planning');
+    expect(failure(withField((d) => (d.planning.fuelColour = 'red'))).field).toBe('/planning/fuelColour');
+    expect(failure(withField((d) => (d.planning.fuelPrice = 1.7))).field).toBe('/planning/fuelPrice');
+  });
+});
+
 describe('parseWorkspace', () => {
   it('reads back exactly what serializeWorkspace wrote', () => {
     const doc = sampleWorkspace();

@@ -50,7 +50,7 @@ describe('workspaces', () => {
     expect(h.recentChanges.at(-1)!.map((e) => e.path)).toEqual([target]);
 
     const opened = await h.service['workspace:open']({ path: target });
-    expect(opened).toMatchObject({ path: target, migratedFrom: 1, document: { files: { depots, lanes: null }, settings: { origin: 'RTM' } } });
+    expect(opened).toMatchObject({ path: target, migratedFrom: emptyWorkspace().version, document: { files: { depots, lanes: null }, settings: { origin: 'RTM' } } });
     expect(await h.service['workspace:recent']({})).toHaveLength(1);
   });
 

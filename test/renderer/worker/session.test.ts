@@ -123,6 +123,66 @@ describe('worker exports', () => {
   });
 });
 
+describe('route details', () => {
+  it('answers a route with each lane\'s clause, validity and estimate flags', () => {
+    const depots = 'id,name,lat,lon\nA,a,50,4\nB,b,51,5\n';
+    const lanes = 'from,to,ref,toll,fuel,fees,rebate,clause,valid_from,valid_to\nA,B,R-1,1.00,,0,0,Clause 4.2 volume credit,2026-01-01,2026-12-31\n';
+    const out = drive([
+      { kind: 'load', id: 1, depots: { name: 'd.csv', text: depots }, lanes: { name: 'l.csv', text: lanes }, acceptPartial: false, plan: { date: DATE, vehicleClass: '' } },
+      { kind: 'solve', id: 2, settings: { ...settings, origin: 'A' }, scenario: null },
+      { kind: 'route', id: 3, target: 1, solveId: 2 },
+    ]);
+    const route = (out[2] as { route: { details: unknown[]; estimateRules: { distance: string } } }).route;
+    expect(route.details).toEqual([{ validFrom: '2026-01-01', validTo: '2026-12-31', distanceEstimated: true, fuelEstimated: true, driveEstimated: true, notes: null, clause: 'Clause 4.2 volume credit' }]);
+    expect(route.estimateRules.distance).toMatch(/detour factor 1\.3/);
+  });
+});
+
+describe('planning settings', () => {
+  it('re-plans with a fuel price, and reads the files again for exchange rates', () => {
+    const planning = { fuelPrice: '2.00', fuelConsumption: null, drivingLimit: null, detourFactor: null, averageSpeed: null, defaultToll: null, currency: null, exchangeRates: null };
+    const out = drive([load('lanes.csv'), { kind: 'replan', id: 2, plan: { date: DATE, vehicleClass: '', planning } }]);
+    const before = (out[0] as { network: NetworkView }).network;
+    const after = (out[1] as { network: NetworkView }).network;
+    const engine = importNetwork(text('depots.csv'), text('lanes.csv'), { plan: { date: DATE, settings: { fuelPricePerLitre: '2.00' } } }).network!;
+    expect(Array.from(after.laneFuel)).toEqual(Array.from(engine.laneFuel));
+    expect(Array.from(after.laneFuel)).not.toEqual(Array.from(before.laneFuel));
+    expect(after.plan.planning).toEqual(planning);
+
+    // A USD lane is refused without a rate; with one the files are read again and it is converted.
+    const depots = 'id,name,lat,lon\nA,a,50,4\nB,b,51,5\n';
+    const lanes = 'from,to,toll,fuel,fees,rebate,currency\nA,B,10.00,0,0,0,EUR\nB,A,10.00,0,0,0,USD\n';
+    const usd = drive([
+      { kind: 'load', id: 1, depots: { name: 'd.csv', text: depots }, lanes: { name: 'l.csv', text: lanes }, acceptPartial: true, plan: { date: DATE, vehicleClass: '' } },
+      { kind: 'replan', id: 2, plan: { date: DATE, vehicleClass: '', planning: { ...planning, fuelPrice: null, exchangeRates: 'USD=0.50' } } },
+    ]);
+    expect((usd[0] as { network: NetworkView }).network.laneFrom.length).toBe(1);
+    const converted = (usd[1] as { network: NetworkView }).network;
+    expect(converted.laneFrom.length).toBe(2);
+    expect(Array.from(converted.laneToll)).toEqual([1000, 500]);
+  });
+});
+
+describe('export names, dialect and settings', () => {
+  it('names files by kind, origin, date and class, writes the chosen CSV dialect and puts the settings in the GeoJSON', () => {
+    const twoAxle = { ...load('lanes.csv'), plan: { date: DATE, vehicleClass: '2axle' } } as ToWorker;
+    const dialect = { separator: ';' as const, decimalMark: ',' as const, bom: true };
+    const out = drive([twoAxle, { kind: 'solve', id: 2, settings: { ...settings, vehicleClass: '2axle' }, scenario: null }, { kind: 'export', id: 3, what: 'routes-csv', dialect }, { kind: 'export', id: 4, what: 'geojson' }]);
+    const routes = out[2] as { fileName: string; text: string };
+    expect(routes.fileName).toBe(`routes-RTM-${DATE}-2axle.csv`);
+    expect(routes.text.charCodeAt(0)).toBe(0xfeff);
+    const { rows, delimiter } = parseCsvText(routes.text);
+    expect(delimiter).toBe(';');
+    const cost = rows[0].indexOf('cost');
+    expect(rows.slice(1).some((r) => /^\d+,\d\d$/.test(r[cost]))).toBe(true);
+    const geo = out[3] as { fileName: string; text: string };
+    expect(geo.fileName).toBe(`network-RTM-${DATE}-2axle.geojson`);
+    const json = JSON.parse(geo.text) as { caution: string; settings: unknown };
+    expect(json.caution).toMatch(/estimate/i);
+    expect(json.settings).toEqual({ date: DATE, vehicle_class: '2axle', files: ['depots.csv', 'lanes.csv'], scenario: null });
+  });
+});
+
 describe('scenarios that change the lane set', () => {
   it('solves an added lane through the engine and maps the answer back onto the drawn lanes', () => {
     const scenario = {

@@ -1,0 +1,54 @@
+// The caution on every surface that shows a route or a cost: the results table, the route, the map's
+// attribution corner, the scenario comparison and the contract review, in the words of
+// engine/text/cautions.ts (the one place they are written).
+
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { MAP_CAUTION, REVIEW_CAUTION, ROUTE_CAUTION } from '../../engine/text/cautions';
+import { offsiteRequests, openApp, solveCount, waitForPlan, type Session } from './support/browser';
+
+let session: Session;
+let page: Page;
+
+beforeAll(async () => {
+  session = await openApp({ width: 1024, height: 700 });
+  page = session.page;
+  await page.getByRole('button', { name: 'I understand' }).click();
+  await waitForPlan(page);
+});
+
+afterAll(async () => {
+  await session?.close();
+});
+
+const visibleText = (testId: string) => page.getByTestId(testId).innerText();
+
+describe('cautions', () => {
+  it('sits above the results, with the route and on the map', async () => {
+    expect(await visibleText('results-caution')).toContain(ROUTE_CAUTION);
+    const caution = (await page.getByTestId('results-caution').boundingBox())!;
+    const head = (await page.locator('[data-testid="results-table"] thead').boundingBox())!;
+    expect(caution.y).toBeLessThan(head.y); // a line above the table
+    await page.locator('[data-testid="results-table"] tr[data-depot="LYS"]').click();
+    expect(await visibleText('route-caution')).toContain(ROUTE_CAUTION);
+    expect(await page.locator('.leaflet-control-attribution').innerText()).toContain(MAP_CAUTION);
+  });
+
+  it('comes with the scenario comparison and the contract review', async () => {
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    const rebate = page.locator('[data-testid="lane-table"] input[aria-label^="rebate of lane"]').first();
+    const before = await solveCount(page);
+    await rebate.fill('1.00');
+    await rebate.press('Enter');
+    await waitForPlan(page, before);
+    expect(await visibleText('compare-caution')).toContain(ROUTE_CAUTION);
+    await page.getByRole('tab', { name: /Contract review/ }).click();
+    await page.getByTestId('contract-review').waitFor();
+    expect(await visibleText('review-caution')).toContain(REVIEW_CAUTION);
+  });
+
+  it('made no request outside localhost and logged no errors', () => {
+    expect(offsiteRequests(session)).toEqual([]);
+    expect(session.errors).toEqual([]);
+  });
+});
