@@ -15,9 +15,10 @@ export interface CommandOutput {
   write(text: string): void;
   /**
    * Queues a whole output file; every file is written atomically once the command has succeeded,
-   * and `done` (when given) is printed as "wrote <done>" only after its file is on disk.
+   * and `done` (when given) is printed as "wrote <done>" only after its file is on disk. Text given
+   * as chunks goes to a temporary file at once (never held whole) and is renamed in the same order.
    */
-  writeFile(path: string, text: string, done?: string): void;
+  writeFile(path: string, text: string | Iterable<string>, done?: string): void;
   warn(line: string): void;
   /** Prints figures as one JSON line; times are rounded to 0.01 ms here, once for every command. */
   timing(figures: Record<string, number>): void;
@@ -55,7 +56,7 @@ export async function main(argv: readonly string[]): Promise<number> {
     const outPath = args.values.get('out');
     // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
     const opened: { file: AtomicFileStream | null } = { file: null };
-    const files: [path: string, text: string, done?: string][] = [];
+    const files: [path: string, text: string | AtomicFileStream, done?: string][] = [];
     const output: CommandOutput = {
       write: (text) => {
         if (!outPath) {
@@ -65,7 +66,15 @@ export async function main(argv: readonly string[]): Promise<number> {
         opened.file ??= openAtomicFileStream(outPath);
         opened.file.write(text);
       },
-      writeFile: (path, text, done) => files.push([path, text, done]),
+      writeFile: (path, text, done) => {
+        if (typeof text === 'string') {
+          files.push([path, text, done]);
+          return;
+        }
+        const stream = openAtomicFileStream(path);
+        files.push([path, stream, done]);
+        for (const chunk of text) stream.write(chunk);
+      },
       warn: (line) => process.stderr.write(line + '\n'),
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
     };
@@ -74,13 +83,21 @@ export async function main(argv: readonly string[]): Promise<number> {
       status = command.run(args, output);
     } catch (error) {
       opened.file?.abort();
+      for (const [, file] of files) if (typeof file !== 'string') file.abort();
       throw error;
     }
     // The same guarantees as workspace saves (temporary file, fsync, rename, clean-up on failure):
     // a failed or interrupted run never leaves half a report where a spreadsheet will read it.
     if (outPath) await (opened.file ?? openAtomicFileStream(outPath)).commit();
-    for (const [path, text, done] of files) {
-      await writeFileAtomic(path, text);
+    for (let i = 0; i < files.length; i++) {
+      const [path, file, done] = files[i];
+      try {
+        await (typeof file === 'string' ? writeFileAtomic(path, file) : file.commit());
+      } catch (error) {
+        // Files not yet renamed into place are dropped with their temporary files.
+        for (const [, later] of files.slice(i)) if (typeof later !== 'string') later.abort();
+        throw error;
+      }
       if (done) process.stdout.write(`wrote ${done}\n`);
     }
     return status;

@@ -5,7 +5,7 @@ import { findDistinctLoops } from '../../../engine/index';
 import { geoJsonText } from '../../../engine/index';
 import { lanesCsv } from '../../../engine/index';
 import { loopsCsv } from '../../../engine/index';
-import { routesCsv } from '../../../engine/index';
+import { routesCsvChunks, routesReportStream } from '../../../engine/index';
 import { networkGeoJson } from '../../../engine/index';
 import { depotIndexOf } from '../../../engine/index';
 import { routesReport, type RoutesReport } from '../../../engine/index';
@@ -29,14 +29,13 @@ export function runExport(args: ParsedArgs, out: CommandOutput): number {
 
   const imported = loadImport(args);
   const network = imported.network;
-  let report: RoutesReport | undefined;
-  if (originId) {
-    const solved = cheapestRoutes(network, depotIndexOf(network, originId, '--from'));
-    report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
-  }
+  const solved = originId ? cheapestRoutes(network, depotIndexOf(network, originId, '--from')) : undefined;
+  const driveLimitMinutes = imported.plan.settings.drivingLimit.dailyDrivingMinutes;
+  // The GeoJSON draws every route, so it needs the whole report; the routes CSV is streamed.
+  const report: RoutesReport | undefined = solved && geojsonOut ? routesReport(network, solved, { driveLimitMinutes }) : undefined;
   const loops = findDistinctLoops(network).loops;
   if (lanesOut) out.writeFile(lanesOut, lanesCsv(imported, loops), `lanes: ${lanesOut} (${network.laneCount} lane(s))`);
-  if (routesOut && report) out.writeFile(routesOut, routesCsv(report), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  if (routesOut && solved) out.writeFile(routesOut, routesCsvChunks(routesReportStream(network, solved, { driveLimitMinutes })), `routes from ${originId}: ${routesOut} (${network.depotCount} depot(s))`);
   if (loopsOut) out.writeFile(loopsOut, loopsCsv(network, loops), `loops: ${loopsOut} (${loops.length} loop(s))`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);

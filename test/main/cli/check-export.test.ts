@@ -2,7 +2,7 @@
 // documented JSON shape, one line per problem and no stack trace, --skip-invalid, and files written.
 
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -80,4 +80,23 @@ describe('lanewright export', () => {
     expect(run('check', '--depots', D, '--lanes', lanes).status).toBe(0);
     expect(run('export', '--depots', D, '--lanes', 'sample-data/lanes.csv').status).toBe(2);
   });
+
+  it('--routes-out (streamed) writes the CSV of the routes command; a run that fails leaves no file and no temporary file', () => {
+    const folder = mkdtempSync(join(work, 'routes-out-'));
+    const routes = join(folder, 'routes.csv');
+    const result = run('export', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--routes-out', routes);
+    expect(result.status, result.stderr).toBe(0);
+    expect(result.stdout).toMatch(/wrote routes from RTM/);
+    expect(readFileSync(routes, 'utf8')).toBe(run('routes', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM').stdout);
+    // The routes are streamed to a temporary file during the run; the lanes file (queued first) cannot
+    // be written over a folder, so the run fails and the streamed routes never appear.
+    const blocked = join(folder, 'blocked');
+    mkdirSync(blocked);
+    const failed = run('export', '--depots', D, '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--lanes-out', blocked, '--routes-out', join(folder, 'second.csv'));
+    expect(failed.status).not.toBe(0);
+    expect(failed.stderr).toContain(blocked);
+    expect(readdirSync(folder).sort()).toEqual(['blocked', 'routes.csv']);
+    expect(readdirSync(folder).some((name) => name.endsWith('.tmp'))).toBe(false);
+  });
 });
+
