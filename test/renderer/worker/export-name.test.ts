@@ -25,6 +25,6 @@ describe('export file names', () => {
     expect(exported, JSON.stringify(out.filter((m) => m.kind === 'error'))).toBeDefined();
     if (exported?.kind !== 'exported') return;
     expect(validateRequest('file:save-export', { suggestedName: exported.fileName, text: exported.text, kind: 'csv' }).suggestedName).toBe(exported.fileName);
-    expect(exported.fileName.startsWith('routes-from-')).toBe(true);
+    expect(exported.fileName.startsWith('routes-')).toBe(true);
   });
 });
