@@ -38,7 +38,8 @@ export const auditCommand: CommandSpec = {
     CSV_DIALECT_OPTION,
     OUT_OPTION,
     TIMINGS_OPTION,
-    ...PLANNING_OPTIONS,
+    // audit's --date has its own meaning: without it the whole calendar is reviewed, not today.
+    ...PLANNING_OPTIONS.map((o) => (o.name === 'date' ? { ...o, help: 'review this one day; without it, audit reviews the whole calendar of the contract' } : o)),
   ],
   run: runAudit,
 };
