@@ -1,46 +1,108 @@
 // Depot ids looked up straight from the text of a lanes file: the id is hashed over its characters
 // where it stands in the line (FNV-1a), so a million lanes need no fresh id string and no string
 // hashing per cell. Open addressing with linear probing; built once from the depots reader's Map.
+// Lanes name depots in no order, so each lookup lands in a random place: what costs is memory
+// misses, not arithmetic. A slot holds the depot, the full hash and (for ids of up to 8 characters
+// in 1..255, the usual codes) the characters themselves, so a lookup touches one cache line; a
+// longer id is compared against one flat array of every id's characters.
+
+const SLOT = 4; // Int32 words per slot: depot * 2 + inline flag, hash, characters 0-3, characters 4-7.
+const INLINE_MAX = 8;
 
 export class DepotIdIndex {
   private readonly slots: Int32Array;
   private readonly mask: number;
-  private readonly ids: string[];
+  /** Every id's characters, depot after depot (for ids too long or too wide to sit in a slot). */
+  private readonly chars: Uint16Array;
+  /** Depot d's characters are chars[offsets[d], offsets[d + 1]). */
+  private readonly offsets: Int32Array;
+  // The key of the last range hashed (hash, packed characters, whether it fits a slot).
+  private hash = 0;
+  private low = 0;
+  private high = 0;
+  private inline = false;
 
   constructor(index: ReadonlyMap<string, number>) {
     let size = 16;
     while (size < index.size * 2) size *= 2;
-    this.slots = new Int32Array(size).fill(-1);
+    this.slots = new Int32Array(size * SLOT).fill(-1);
     this.mask = size - 1;
-    this.ids = [];
+    const ids: string[] = new Array<string>(index.size);
+    let total = 0;
     for (const [id, depot] of index) {
-      this.ids[depot] = id;
-      let slot = hashRange(id, 0, id.length) & this.mask;
-      while (this.slots[slot] !== -1) slot = (slot + 1) & this.mask;
-      this.slots[slot] = depot;
+      ids[depot] = id;
+      total += id.length;
+    }
+    this.chars = new Uint16Array(total);
+    this.offsets = new Int32Array(ids.length + 1);
+    let at = 0;
+    for (let d = 0; d < ids.length; d++) {
+      this.offsets[d] = at;
+      const id = ids[d];
+      for (let k = 0; k < id.length; k++) this.chars[at++] = id.charCodeAt(k);
+    }
+    this.offsets[ids.length] = at;
+    for (let d = 0; d < ids.length; d++) {
+      const id = ids[d];
+      this.key(id, 0, id.length);
+      let slot = this.hash & this.mask;
+      while (this.slots[slot * SLOT] !== -1) slot = (slot + 1) & this.mask;
+      const b = slot * SLOT;
+      this.slots[b] = d * 2 + (this.inline ? 1 : 0);
+      this.slots[b + 1] = this.hash;
+      this.slots[b + 2] = this.low;
+      this.slots[b + 3] = this.high;
     }
   }
 
   /** The depot whose id is exactly `text` from `start` to `end`, or -1. */
   find(text: string, start: number, end: number): number {
-    const length = end - start;
-    let slot = hashRange(text, start, end) & this.mask;
+    this.key(text, start, end);
+    const hash = this.hash;
+    const inline = this.inline;
+    const slots = this.slots;
+    let slot = hash & this.mask;
     for (;;) {
-      const depot = this.slots[slot];
-      if (depot === -1) return -1;
-      const id = this.ids[depot];
-      if (id.length === length) {
-        let k = 0;
-        while (k < length && id.charCodeAt(k) === text.charCodeAt(start + k)) k++;
-        if (k === length) return depot;
+      const b = slot * SLOT;
+      const entry = slots[b];
+      if (entry === -1) return -1;
+      if (slots[b + 1] === hash) {
+        if ((entry & 1) === 1) {
+          // Packed with zero padding: equal words mean equal length and characters.
+          if (inline && slots[b + 2] === this.low && slots[b + 3] === this.high) return entry >> 1;
+        } else if (!inline && this.sameChars(entry >> 1, text, start, end)) return entry >> 1;
       }
       slot = (slot + 1) & this.mask;
     }
   }
-}
 
-function hashRange(text: string, start: number, end: number): number {
-  let h = 0x811c9dc5;
-  for (let i = start; i < end; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return h >>> 0;
+  private sameChars(depot: number, text: string, start: number, end: number): boolean {
+    const from = this.offsets[depot];
+    const length = end - start;
+    if (this.offsets[depot + 1] - from !== length) return false;
+    const chars = this.chars;
+    for (let k = 0; k < length; k++) if (chars[from + k] !== text.charCodeAt(start + k)) return false;
+    return true;
+  }
+
+  // FNV-1a over the range, and its characters packed four to a word when the id can sit in a slot
+  // (at most 8 characters, each 1..255: a zero byte is the padding).
+  private key(text: string, start: number, end: number): void {
+    let h = 0x811c9dc5 | 0;
+    let low = 0;
+    let high = 0;
+    let inline = end - start <= INLINE_MAX;
+    for (let i = start; i < end; i++) {
+      const c = text.charCodeAt(i);
+      h = Math.imul(h ^ c, 0x01000193);
+      if (c === 0 || c > 255) inline = false;
+      const k = i - start;
+      if (k < 4) low |= c << (8 * k);
+      else if (k < 8) high |= c << (8 * (k - 4));
+    }
+    this.hash = h;
+    this.low = low;
+    this.high = high;
+    this.inline = inline;
+  }
 }

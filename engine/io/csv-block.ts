@@ -21,10 +21,11 @@ export interface CsvBlockRows {
  * a blank line yields [""].
  */
 /**
- * Offered each plain line (no quote) in order, with the records collected since the last offer; it
- * must deliver `before` itself. True = the line was read without being cut into cells.
+ * Offered each plain line (no quote) in order, with the records collected since the last offer (null
+ * when there are none, the usual case: nothing is allocated per line); it must deliver `before`
+ * itself. True = the line was read without being cut into cells.
  */
-export type PlainLineTaker = (block: string, start: number, end: number, before: CsvBlockRows) => boolean;
+export type PlainLineTaker = (block: string, start: number, end: number, before: CsvBlockRows | null) => boolean;
 
 export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | '\r\n' | '\r', take?: PlainLineTaker): CsvBlockRows {
   const lineBreak = newline === '\r' ? '\r' : '\n';
@@ -51,11 +52,14 @@ export function splitCsvBlock(block: string, delimiter: string, newline: '\n' | 
     let lineEnd = end;
     if (lineBreak === '\n' && lineEnd > start && block.charCodeAt(lineEnd - 1) === 13) lineEnd--;
     if (take !== undefined) {
-      const taken = take(block, start, lineEnd, { rows, badQuoteRows, strayQuoteCells });
-      rows = [];
-      badQuoteRows = [];
-      strayQuoteCells = [];
-      if (taken) {
+      let before: CsvBlockRows | null = null;
+      if (rows.length > 0) {
+        before = { rows, badQuoteRows, strayQuoteCells };
+        rows = [];
+        badQuoteRows = [];
+        strayQuoteCells = [];
+      }
+      if (take(block, start, lineEnd, before)) {
         start = end + 1;
         continue;
       }

@@ -148,7 +148,7 @@ export class CsvRecordStream {
     const fast = sink.plainLine !== undefined && this.nextRow > 1 && !suspect;
     const take: PlainLineTaker | undefined = fast
       ? (text, start, end, before) => {
-          this.deliver(before.rows, before.badQuoteRows, false, before.strayQuoteCells);
+          if (before !== null) this.deliver(before.rows, before.badQuoteRows, false, before.strayQuoteCells);
           if (!sink.plainLine!(text, start, end, this.nextRow, this.delimiter)) return false;
           this.nextRow++;
           return true;
