@@ -1,15 +1,30 @@
 // Reads depot records (id, name, lat, lon, optional type and notes) as they stream in, checking
 // each row and keeping the accepted ones. Duplicate ids keep the first row and reject the others.
 
+import { withoutFormulaGuard } from '../io/csv-cell-safety';
 import { textKeyedRecord } from '../text/lookup-table';
-import { cellText } from './cells';
+import { cellText, ownText } from './cells';
 import { readNumber } from './decimal-text';
 import { matchDepotHeaders, type DepotField, type HeaderMatch } from './headers';
 import type { ReportCollector } from './report-collector';
+import { cutCells, plainCell } from './plain-cells';
 import { RecordFileReader } from './record-file-reader';
 import type { DepotRecord } from './types';
 
 const REQUIRED: DepotField[] = ['id', 'lat', 'lon'];
+const POW10 = [1, 10, 100, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15];
+
+/** Where a plain row's cells are cut, and the column of each field (-1 = absent). */
+interface PlainDepotColumns {
+  starts: Int32Array;
+  ends: Int32Array;
+  id: number;
+  name: number;
+  lat: number;
+  lon: number;
+  type: number;
+  notes: number;
+}
 
 export class DepotsReader extends RecordFileReader {
   readonly depots: DepotRecord[] = [];
@@ -17,6 +32,8 @@ export class DepotsReader extends RecordFileReader {
   /** Ids of depot rows that were rejected, with their row, so lanes naming them can say why. */
   readonly rejectedIds = new Map<string, number>();
   private header: HeaderMatch<DepotField> | null = null;
+  /** The plain-row fast path's columns, made at its first row (null = not for this file). */
+  private plain: PlainDepotColumns | null | undefined;
 
   constructor(file: string, report: ReportCollector) {
     super(file, report, 'depots');
@@ -98,4 +115,85 @@ export class DepotsReader extends RecordFileReader {
     });
     return true;
   }
+
+  /**
+   * The fast path for a plain row (no quote): cut by character codes, every cell already trimmed, an
+   * id not seen before, coordinates as plain decimals within range. Anything else, including every
+   * row with a problem to report, returns false and goes through readRow, which owns the messages;
+   * this path accepts only what readRow accepts, with the same values (depot-row-fast.test.ts).
+   */
+  protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    if (this.plain === undefined) this.plain = this.plainColumns();
+    const p = this.plain;
+    if (p === null || !cutCells(text, start, end, delimiter.charCodeAt(0), p.starts, p.ends)) return false;
+    const { starts, ends } = p;
+    for (let k = 0; k < starts.length; k++) if (!plainCell(text, starts[k], ends[k])) return false;
+    const lat = plainCoordinate(text, starts[p.lat], ends[p.lat], 90);
+    const lon = plainCoordinate(text, starts[p.lon], ends[p.lon], 180);
+    if (Number.isNaN(lat) || Number.isNaN(lon) || starts[p.id] === ends[p.id]) return false;
+    const id = keptText(text, starts[p.id], ends[p.id]);
+    if (id === '' || this.index.has(id)) return false;
+    this.rejectedIds.delete(id);
+    let extra: Record<string, string> | null = null;
+    for (const u of this.header!.unknown) {
+      const value = keptText(text, starts[u.index], ends[u.index]);
+      if (value !== '') (extra ??= textKeyedRecord<string>())[u.header] = value;
+    }
+    this.index.set(id, this.depots.length);
+    this.depots.push({
+      id,
+      name: optionalText(text, p.name, starts, ends) || id,
+      lat,
+      lon,
+      type: optionalText(text, p.type, starts, ends) || null,
+      notes: optionalText(text, p.notes, starts, ends) || null,
+      sourceRow: row,
+      extra,
+    });
+    return true;
+  }
+
+  private plainColumns(): PlainDepotColumns | null {
+    const h = this.header;
+    if (h === null || h.duplicates.length > 0 || this.headerCells.length === 0) return null;
+    const at = (f: DepotField) => h.columns.get(f)?.index ?? -1;
+    const n = this.headerCells.length;
+    return { starts: new Int32Array(n), ends: new Int32Array(n), id: at('id'), name: at('name'), lat: at('lat'), lon: at('lon'), type: at('type'), notes: at('notes') };
+  }
+}
+
+function optionalText(text: string, column: number, starts: Int32Array, ends: Int32Array): string {
+  return column === -1 ? '' : keptText(text, starts[column], ends[column]);
+}
+
+/** A kept text cell of a plain row as cellText reads it (the exporter's formula guard removed), copied out of the block. */
+function keptText(text: string, start: number, end: number): string {
+  return start === end ? '' : ownText(withoutFormulaGuard(text.slice(start, end)));
+}
+
+/**
+ * A coordinate written as a plain decimal ("-12.345"), the form readNumber reads with Number(): the
+ * same value (an exact integer divided by an exact power of ten is the correctly rounded decimal),
+ * or NaN for anything else and for a value past `limit`, which the general reader refuses with its reason.
+ */
+function plainCoordinate(text: string, start: number, end: number, limit: number): number {
+  let i = start;
+  const negative = i < end && text.charCodeAt(i) === 45;
+  if (negative) i++;
+  let value = 0;
+  let digits = 0;
+  let fraction = -1;
+  for (; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      value = value * 10 + (c - 48);
+      digits++;
+      if (fraction >= 0) fraction++;
+    } else if (c === 46 && fraction === -1 && digits > 0) fraction = 0;
+    else return NaN;
+  }
+  if (digits === 0 || fraction === 0) return NaN;
+  const read = digits > 15 ? Number(text.slice(start, end)) : fraction > 0 ? value / POW10[fraction] : value;
+  const signed = negative && digits <= 15 ? -read : read;
+  return Math.abs(signed) <= limit ? signed : NaN;
 }

@@ -11,6 +11,7 @@ import { withoutFormulaGuard } from '../io/csv-cell-safety';
 import { ownText } from './cells';
 import type { DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
+import { cutCells, plainCell } from './plain-cells';
 import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-cells';
 import type { LaneTableBuilder } from './lane-table';
 
@@ -67,7 +68,7 @@ export class PlainLaneRows {
     const ends = this.ends;
     if (!cutCells(text, start, end, delimiter.charCodeAt(0), starts, ends)) return false;
     const n = this.setup.columnCount;
-    for (let k = 0; k < n; k++) if (!this.trimmed(text, k)) return false;
+    for (let k = 0; k < n; k++) if (!plainCell(text, starts[k], ends[k])) return false;
 
     const col = this.col;
     const depots = this.setup.depots;
@@ -109,16 +110,6 @@ export class PlainLaneRows {
     return true;
   }
 
-  // A cell the general reader would read unchanged: nothing to trim at either end (ASCII only, so
-  // Unicode spaces go the general way) and no leading apostrophe (the exporter's formula guard).
-  private trimmed(text: string, k: number): boolean {
-    const s = this.starts[k];
-    const e = this.ends[k];
-    if (s === e) return true;
-    const first = text.charCodeAt(s);
-    const last = text.charCodeAt(e - 1);
-    return first > 32 && first < 127 && first !== 39 && last > 32 && last < 127;
-  }
 
   private kept(text: string, column: number | undefined): string | undefined {
     if (column === undefined || this.starts[column] === this.ends[column]) return undefined;
@@ -219,23 +210,3 @@ export class PlainLaneRows {
   }
 }
 
-/**
- * Cuts `text[start, end)` at the delimiter into exactly `starts.length` cells (their bounds into
- * `starts`/`ends`); false when the line has more or fewer. One pass over the characters: a call to
- * indexOf per cell costs more than the few characters a cell holds. Shared with the depots reader.
- */
-export function cutCells(text: string, start: number, end: number, delimiter: number, starts: Int32Array, ends: Int32Array): boolean {
-  const last = starts.length - 1;
-  let k = 0;
-  starts[0] = start;
-  for (let i = start; i < end; i++) {
-    if (text.charCodeAt(i) === delimiter) {
-      if (k === last) return false;
-      ends[k] = i;
-      starts[++k] = i + 1;
-    }
-  }
-  if (k !== last) return false;
-  ends[k] = end;
-  return true;
-}

@@ -42,6 +42,7 @@ export function startImport(options: ImportOptions = {}): ImportSession {
       depots.decimalComma = depotStream.delimiter === ';';
       depots.records(rows, first, bad, text, stray);
     },
+    plainLine: (text, start, end, row, delimiter) => depots.plainLine(text, start, end, row, delimiter),
     issue: (issue) => depots.issue(issue),
   });
   let lanes: LanesReader | null = null;

@@ -1,0 +1,35 @@
+// Cutting a plain line (no quote) into cells by character codes, for the readers' fast paths
+// (lanes: lane-row-fast.ts, depots: depots-reader.ts). A cell is plain when the general reader would
+// read it unchanged; anything else sends the row the general way, which owns every message.
+
+/**
+ * Cuts `text[start, end)` at the delimiter into exactly `starts.length` cells (their bounds into
+ * `starts`/`ends`); false when the line has more or fewer. One pass over the characters: a call to
+ * indexOf per cell costs more than the few characters a cell holds.
+ */
+export function cutCells(text: string, start: number, end: number, delimiter: number, starts: Int32Array, ends: Int32Array): boolean {
+  const last = starts.length - 1;
+  let k = 0;
+  starts[0] = start;
+  for (let i = start; i < end; i++) {
+    if (text.charCodeAt(i) === delimiter) {
+      if (k === last) return false;
+      ends[k] = i;
+      starts[++k] = i + 1;
+    }
+  }
+  if (k !== last) return false;
+  ends[k] = end;
+  return true;
+}
+
+/**
+ * A cell the general reader would read unchanged: nothing to trim at either end (ASCII only, so
+ * Unicode spaces go the general way) and no leading apostrophe (the exporter's formula guard).
+ */
+export function plainCell(text: string, start: number, end: number): boolean {
+  if (start === end) return true;
+  const first = text.charCodeAt(start);
+  const last = text.charCodeAt(end - 1);
+  return first > 32 && first < 127 && first !== 39 && last > 32 && last < 127;
+}
