@@ -7,7 +7,7 @@
 import { existsSync, mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { build, type Metafile } from 'esbuild';
+import { build, type Metafile, type Plugin } from 'esbuild';
 
 /** Repository root (two folders above this file). */
 export const REPO_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -33,6 +33,34 @@ export interface CliBuild {
   startupInputs: string[];
 }
 
+/**
+ * What the start-up files (the entry, the option tables, the parser, the help) take from the engine:
+ * errors, cautions and the escaping of shown text. esbuild's code splitting follows every re-export
+ * of engine/index.ts, so one `import { CAUTIONS } from '../../engine/index'` would put the whole
+ * engine (and zod, turf, papaparse) in the chunk `--help` loads. For these files only, the bundle
+ * resolves engine/index to the three engine modules they use; a start-up file that imports anything
+ * else from the engine fails the build ("No matching export"), it is never silently slow.
+ */
+export const STARTUP_FILES = ['main/cli/run.ts', 'main/cli/args.ts', 'main/cli/usage.ts', 'main/cli/terminal-text.ts', 'main/workspace/errors.ts'];
+const STARTUP_ENGINE = ['engine/errors.ts', 'engine/text/cautions.ts', 'engine/text/shown-text.ts'];
+
+const startupEngine: Plugin = {
+  name: 'startup-engine',
+  setup(b) {
+    const startup = new Set(STARTUP_FILES.map((f) => path.join(REPO_ROOT, f)));
+    const engineIndex = path.join(REPO_ROOT, 'engine', 'index');
+    b.onResolve({ filter: /engine\/index$/ }, (args) => {
+      if (!startup.has(args.importer) || path.resolve(args.resolveDir, args.path) !== engineIndex) return undefined;
+      return { path: 'engine-for-start-up', namespace: 'startup-engine' };
+    });
+    b.onLoad({ filter: /.*/, namespace: 'startup-engine' }, () => ({
+      contents: STARTUP_ENGINE.map((f) => `export * from ${JSON.stringify(path.join(REPO_ROOT, f))};`).join('\n'),
+      loader: 'ts',
+      resolveDir: REPO_ROOT,
+    }));
+  },
+};
+
 /** Builds the bundle and its manifest (inputs.json) into `outDir`. */
 export async function buildCli(outDir: string = CLI_OUT_DIR): Promise<CliBuild> {
   const builtAt = Date.now();
@@ -53,6 +81,7 @@ export async function buildCli(outDir: string = CLI_OUT_DIR): Promise<CliBuild> 
     // CommonJS dependencies (papaparse) call require() for Node modules; an ES module has none.
     banner: { js: "import { createRequire as __lanewrightRequire } from 'node:module'; const require = __lanewrightRequire(import.meta.url);" },
     metafile: true,
+    plugins: [startupEngine],
     logLevel: 'warning',
     define: { 'process.env.NODE_ENV': '"production"' },
   });
@@ -61,8 +90,9 @@ export async function buildCli(outDir: string = CLI_OUT_DIR): Promise<CliBuild> 
   for (const name of existsSync(chunks) ? readdirSync(chunks) : []) {
     if (!written.has(path.join(chunks, name))) rmSync(path.join(chunks, name), { force: true });
   }
+  // Real files only: not node_modules, not the plugin's virtual module ("namespace:path").
   const inputs = Object.keys(result.metafile.inputs)
-    .filter((input) => !input.includes('node_modules/'))
+    .filter((input) => !input.includes('node_modules/') && !input.includes(':'))
     .sort();
   const manifest: CliManifest = { entry: CLI_ENTRY, builtAt, inputs };
   writeFileSync(path.join(outDir, 'inputs.json'), JSON.stringify(manifest, null, 1) + '\n');
@@ -77,7 +107,7 @@ function startupInputs(metafile: Metafile, entry: string): string[] {
   const visit = (out: string) => {
     if (seen.has(out) || !metafile.outputs[out]) return;
     seen.add(out);
-    for (const input of Object.keys(metafile.outputs[out].inputs)) inputs.add(input);
+    for (const input of Object.keys(metafile.outputs[out].inputs)) if (!input.includes(':')) inputs.add(input);
     for (const imported of metafile.outputs[out].imports) if (imported.kind === 'import-statement' && !imported.external) visit(imported.path);
   };
   if (key) visit(key);

@@ -29,8 +29,15 @@ export interface CommandSpec {
   /** A complete command line that works on the sample data. */
   readonly example: string;
   readonly options: readonly OptionSpec[];
-  run(args: ParsedArgs, out: CommandOutput): number;
+  /**
+   * The command's work, imported when it runs (a dynamic import: a chunk of its own in the bundle),
+   * so the option tables and `--help` load no engine code.
+   */
+  load(): Promise<CommandRun>;
 }
+
+/** Runs a command on its parsed arguments; returns the exit status. */
+export type CommandRun = (args: ParsedArgs, out: CommandOutput) => number;
 
 /** The two input files every command reads. */
 export const NETWORK_FILES: readonly OptionSpec[] = [

@@ -105,7 +105,7 @@ export async function main(argv: readonly string[]): Promise<number> {
     };
     let status: number;
     try {
-      status = command.run(args, output);
+      status = (await command.load())(args, output);
     } catch (error) {
       opened.file?.abort();
       throw error;

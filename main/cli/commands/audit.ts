@@ -2,16 +2,10 @@
 // every distinct rebate loop, a verified fix plan and the rebate headroom of every lane, as CSV (one
 // row per lane) or JSON; --loops-csv also writes one row per lane of each loop. Without --date the
 // command reviews the whole calendar (audit-calendar.ts).
+// This file holds the option table and help; the work is in audit-run.ts, imported only when it runs, so
+// `--help` never loads the engine.
 
-import { auditNetwork, overlayKeys } from '../../../engine/index';
-import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
-import { formatCsvRows } from '../../../engine/index';
-import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
-import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
-import { loadImport, planDateOf } from '../load-network';
-import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
-import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
-import type { CommandOutput } from '../run';
+import { NETWORK_FILES, PLANNING_OPTIONS, JSON_OPTION, OUT_OPTION, TIMINGS_OPTION, LOOP_CAP_OPTION, CSV_DIALECT_OPTION, type CommandSpec } from '../options';
 
 export const auditCommand: CommandSpec = {
   name: 'audit',
@@ -41,63 +35,5 @@ export const auditCommand: CommandSpec = {
     // audit's --date has its own meaning: without it the whole calendar is reviewed, not today.
     ...PLANNING_OPTIONS.map((o) => (o.name === 'date' ? { ...o, help: 'review this one day; without it, audit reviews the whole calendar of the contract' } : o)),
   ],
-  run: runAudit,
+  load: async () => (await import('./audit-run')).runAudit,
 };
-
-function runAudit(args: ParsedArgs, out: CommandOutput): number {
-  if (!args.values.has('date')) return runCalendarAudit(args, out);
-  for (const name of CALENDAR_AUDIT_OPTIONS) {
-    if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
-  }
-  const loopCap = wholeNumberOption(args, 'loop-cap', 1);
-  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
-  const loopsCsv = args.values.get('loops-csv');
-  csvDialectOption(args);
-
-  const readStart = performance.now();
-  const imported = loadImport(args);
-  const network = imported.network;
-  // Lane keys as scenarios name them: counted over the file's rows, not the day's network.
-  const rowKeys = overlayKeys(imported);
-  const laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
-  const readMs = performance.now() - readStart;
-
-  let lastLine = '';
-  const solveStart = performance.now();
-  const audit = auditNetwork(network, {
-    loopCap,
-    negotiable,
-    laneKeys,
-    onProgress: args.flags.has('progress')
-      ? ({ phase, done, total }) => {
-          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-          if (line !== lastLine) out.warn((lastLine = line));
-        }
-      : undefined,
-  });
-  const solveMs = performance.now() - solveStart;
-
-  for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
-  const report = auditReport(network, audit);
-  // Which review this is: one day, named.
-  const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
-  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
-  if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
-  if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
-
-  if (report.loops.length > 0) {
-    out.warn(
-      `WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate loop(s) in the network: costs through them are unbounded and the contract terms need fixing`,
-    );
-    // What stopped the search, truthfully: "more loops exist" only when one more was found.
-    if (report.loop_search_note !== null) out.warn(`WARNING: ${report.loop_search_note}`);
-    if (report.fix_plan_verified) {
-      out.warn(`fix plan: ${report.fix_plan.length} rebate cut(s) remove every loop (checked by solving the changed network); headroom is computed after the fix plan`);
-    } else if (report.fix_plan_incomplete) {
-      out.warn(`WARNING: the fix plan stopped after ${report.fix_plan.length} lane change(s) with loops left; headroom is not available`);
-    } else {
-      out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
-    }
-  }
-  return 0;
-}

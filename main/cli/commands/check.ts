@@ -1,11 +1,9 @@
 // `lanewright check`: reads the depots and lanes files and prints the validation report, as lines or
 // JSON. Exit status 0 when there are no errors, 1 when there are; warnings alone do not fail.
+// This file holds the option table and help; the work is in check-run.ts, imported only when it runs, so
+// `--help` never loads the engine.
 
-import { formatReport } from '../../../engine/index';
-import type { ParsedArgs } from '../args';
-import { planDateOf, readImport } from '../load-network';
-import { JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
-import type { CommandOutput } from '../run';
+import { NETWORK_FILES, PLANNING_OPTIONS, JSON_OPTION, OUT_OPTION, type CommandSpec } from '../options';
 
 export const checkCommand: CommandSpec = {
   name: 'check',
@@ -16,36 +14,5 @@ export const checkCommand: CommandSpec = {
     '1 with errors (warnings alone do not fail), 2 for a mistake on the command line.',
   example: 'lanewright check --depots sample-data/depots.csv --lanes sample-data/lanes.csv',
   options: [...NETWORK_FILES, JSON_OPTION, OUT_OPTION, ...PLANNING_OPTIONS],
-  run: runCheck,
+  load: async () => (await import('./check-run')).runCheck,
 };
-
-function runCheck(args: ParsedArgs, out: CommandOutput): number {
-  // Building the network is not needed to report on the files.
-  const result = readImport(args, { skipInvalid: false });
-  const { report } = result;
-  const { date, note } = planDateOf(args);
-  if (note !== null) out.warn(note);
-  if (args.flags.has('json')) {
-    out.write(
-      JSON.stringify({
-        date,
-        total: report.total,
-        accepted: report.accepted,
-        rejected: report.rejected,
-        errors: report.errors.map(({ file, row, column, value, message, code }) => ({ file, row, column, value, message, code })),
-        warnings: report.warnings.map(({ file, row, column, value, message, code }) => ({ file, row, column, value, message, code })),
-        files: report.files,
-        omitted: report.omitted,
-        currency: result.currency,
-        vehicle_classes: result.vehicleClasses,
-        notes: result.notes,
-      }) + '\n',
-    );
-  } else {
-    const lines = formatReport(report);
-    lines.push(`total ${report.total} row(s): ${report.accepted} accepted, ${report.rejected} rejected; ${report.errors.length} error(s), ${report.warnings.length} warning(s)`);
-    for (const note of result.notes) lines.push(`note: ${note}`);
-    out.write(lines.join('\n') + '\n');
-  }
-  return report.errors.length > 0 ? 1 : 0;
-}

@@ -2,17 +2,10 @@
 // before and after, the routes that changed and the rebate loops that appear or disappear.
 // Changes that no longer fit the lanes file are printed as warnings; the scenario file is never rewritten.
 // The scenario goes through the engine's overlay (engine/scenario/overlay.ts), as in the app.
+// This file holds the option table and help; the work is in compare-run.ts, imported only when it runs, so
+// `--help` never loads the engine.
 
-import { compareImport } from '../../../engine/index';
-import { parseScenarioDocument } from '../../../engine/index';
-import { compareReport, compareReportRows } from '../../../engine/index';
-import { formatCsvRows } from '../../../engine/index';
-import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { readDocumentFile } from '../files';
-import { loadImport, planDateOf } from '../load-network';
-import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, type CommandSpec } from '../options';
-import { inCsvDialect } from '../csv-dialect-option';
-import type { CommandOutput } from '../run';
+import { NETWORK_FILES, PLANNING_OPTIONS, JSON_OPTION, OUT_OPTION, LOOP_CAP_OPTION, CSV_DIALECT_OPTION, type CommandSpec } from '../options';
 
 export const compareCommand: CommandSpec = {
   name: 'compare',
@@ -32,27 +25,5 @@ export const compareCommand: CommandSpec = {
     OUT_OPTION,
     ...PLANNING_OPTIONS,
   ],
-  run: runCompare,
+  load: async () => (await import('./compare-run')).runCompare,
 };
-
-function runCompare(args: ParsedArgs, out: CommandOutput): number {
-  const originId = required(args, 'from');
-  const scenarioPath = required(args, 'scenario');
-  const loopCap = wholeNumberOption(args, 'loop-cap', 1);
-  const scenario = parseScenarioDocument(readDocumentFile(scenarioPath, 'scenario'), scenarioPath);
-  // The scenario is laid over every lane row of the file, then planned for --date and
-  // --vehicle-class like the base, so a change names the same row whatever the date or class.
-  const imported = loadImport(args);
-  const network = imported.network;
-  const comparison = compareImport(imported, scenario, originId, { loopCap });
-  const report = compareReport(comparison);
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, formatCsvRows(compareReportRows(report, network.exponent))));
-
-  for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
-  for (const loop of report.loops_appeared) {
-    out.warn(`WARNING: the scenario creates a rebate loop ${loop.depots.join(' > ')} netting ${loop.net_per_lap_minor} minor units per lap${loop.reached_from_origin ? `; costs from ${originId} through it are unbounded` : ''}`);
-  }
-  for (const loop of report.loops_disappeared) out.warn(`the scenario removes the rebate loop ${loop.depots.join(' > ')}`);
-  if (report.loop_cap_reached) out.warn('WARNING: more loops exist than were compared (raise --loop-cap)');
-  return 0;
-}

@@ -2,24 +2,10 @@
 // routes CSV from an origin, the loops CSV and a GeoJSON of depots, routes and loops; options choose
 // which. With --scenario every file describes the contract as the scenario changes it, through the
 // engine's overlay (engine/scenario/overlay.ts) as in the app. Every file is written atomically.
+// This file holds the option table and help; the work is in export-run.ts, imported only when it runs, so
+// `--help` never loads the engine.
 
-import { findDistinctLoops } from '../../../engine/index';
-import { geoJsonText } from '../../../engine/index';
-import { lanesCsv, type LanesExportInput } from '../../../engine/index';
-import { loopsCsv } from '../../../engine/index';
-import { routesCsv } from '../../../engine/index';
-import { networkGeoJson } from '../../../engine/index';
-import { depotIndexOf } from '../../../engine/index';
-import { routesReport, type RoutesReport } from '../../../engine/index';
-import { cheapestRoutes } from '../../../engine/index';
-import { parseScenarioDocument, scenarioImport } from '../../../engine/index';
-import type { Network } from '../../../engine/index';
-import { UsageError, type ParsedArgs } from '../args';
-import { readTextFile } from '../files';
-import { loadImport } from '../load-network';
-import { CSV_DIALECT_OPTION, NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
-import { inCsvDialect } from '../csv-dialect-option';
-import type { CommandOutput } from '../run';
+import { NETWORK_FILES, PLANNING_OPTIONS, CSV_DIALECT_OPTION, type CommandSpec } from '../options';
 
 export const exportCommand: CommandSpec = {
   name: 'export',
@@ -40,45 +26,5 @@ export const exportCommand: CommandSpec = {
     { name: 'scenario', value: 'FILE', help: 'lay this scenario file over the lanes before exporting' },
     ...PLANNING_OPTIONS,
   ],
-  run: runExport,
+  load: async () => (await import('./export-run')).runExport,
 };
-
-function runExport(args: ParsedArgs, out: CommandOutput): number {
-  const lanesOut = args.values.get('lanes-out');
-  const routesOut = args.values.get('routes-out');
-  const loopsOut = args.values.get('loops-out');
-  const geojsonOut = args.values.get('geojson-out');
-  if (!lanesOut && !routesOut && !loopsOut && !geojsonOut) {
-    throw new UsageError('export needs at least one of --lanes-out, --routes-out, --loops-out, --geojson-out');
-  }
-  const originId = args.values.get('from');
-  if (routesOut && !originId) throw new UsageError('--routes-out needs --from DEPOT_ID');
-  const scenarioPath = args.values.get('scenario');
-  const scenario = scenarioPath === undefined ? null : parseScenarioDocument(readTextFile(scenarioPath), scenarioPath);
-
-  const imported = loadImport(args);
-  let network: Network = imported.network;
-  let lanes: LanesExportInput = imported;
-  if (scenario) {
-    const what = scenarioImport(imported, scenario);
-    for (const p of what.overlay.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
-    network = what.network;
-    lanes = what;
-  }
-  let report: RoutesReport | undefined;
-  if (originId) {
-    const solved = cheapestRoutes(network, depotIndexOf(network, originId, '--from'));
-    report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
-  }
-  const loops = findDistinctLoops(network).loops;
-  if (lanesOut) {
-    const rows = lanes.lanes.count - (lanes.leaveOut ? lanes.leaveOut.reduce((n, x) => n + x, 0) : 0);
-    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
-  }
-  if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
-  if ((routesOut || lanesOut || geojsonOut) && report) out.afterOutput(`CAUTION: ${report.caution}`);
-  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
-  if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
-  if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
-  return 0;
-}

@@ -2,18 +2,10 @@
 // or JSON; --out writes it to a file. Rows are written as they are made (routesCsvChunks,
 // routesJsonChunks), so memory follows the depot count, never the output's size. --no-paths leaves
 // out each route's path; --to lists only the named depots. Input problems stop it unless --skip-invalid.
+// This file holds the option table and help; the work is in routes-run.ts, imported only when it runs, so
+// `--help` never loads the engine.
 
-import { depotIndexOf } from '../../../engine/index';
-import { cheapestRoutes } from '../../../engine/index';
-import { legLimitedRoutes } from '../../../engine/index';
-import { routesReportStream } from '../../../engine/index';
-import { routesCsvChunks, routesJsonChunks } from '../../../engine/index';
-import type { Network } from '../../../engine/index';
-import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { loadImport, planDateOf } from '../load-network';
-import { CSV_DIALECT_OPTION, JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
-import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
-import type { CommandOutput } from '../run';
+import { NETWORK_FILES, PLANNING_OPTIONS, JSON_OPTION, OUT_OPTION, TIMINGS_OPTION, CSV_DIALECT_OPTION, type CommandSpec } from '../options';
 
 export const routesCommand: CommandSpec = {
   name: 'routes',
@@ -35,61 +27,5 @@ export const routesCommand: CommandSpec = {
     TIMINGS_OPTION,
     ...PLANNING_OPTIONS,
   ],
-  run: runRoutes,
+  load: async () => (await import('./routes-run')).runRoutes,
 };
-
-/** Depot indices named by --to (comma-separated ids, in the order given, repeats dropped); undefined = all. */
-function targetDepots(network: Network, args: ParsedArgs): number[] | undefined {
-  const text = args.values.get('to');
-  if (text === undefined) return undefined;
-  const seen = new Set<number>();
-  for (const id of text.split(',')) seen.add(depotIndexOf(network, id.trim(), '--to'));
-  return [...seen];
-}
-
-function runRoutes(args: ParsedArgs, out: CommandOutput): number {
-  const originId = required(args, 'from');
-  const maxLegs = wholeNumberOption(args, 'max-legs', 0);
-  csvDialectOption(args); // a wrong name is refused before any file is read
-
-  const readStart = performance.now();
-  const imported = loadImport(args);
-  const network = imported.network;
-  const origin = depotIndexOf(network, originId, `--from`);
-  const depots = targetDepots(network, args);
-  const readMs = performance.now() - readStart;
-
-  const solveStart = performance.now();
-  const solved = maxLegs === undefined ? cheapestRoutes(network, origin) : legLimitedRoutes(network, origin, maxLegs);
-  const solveMs = performance.now() - solveStart;
-
-  const reportStart = performance.now();
-  const report = routesReportStream(network, solved, {
-    driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes,
-    paths: !args.flags.has('no-paths'),
-    depots,
-  });
-  const reportMs = performance.now() - reportStart;
-
-  const writeStart = performance.now();
-  if (args.flags.has('json')) for (const chunk of routesJsonChunks(report, undefined, { date: planDateOf(args).date })) out.write(chunk);
-  else if (!args.values.has('csv-dialect')) for (const chunk of routesCsvChunks(report)) out.write(chunk);
-  // Another dialect re-writes the whole table (its numeric columns are judged over every row), so
-  // only then is the CSV held in memory at once.
-  else out.write(inCsvDialect(args, [...routesCsvChunks(report)].join('')));
-  const writeMs = performance.now() - writeStart;
-  if (args.flags.has('timings')) {
-    out.timing({ read_ms: readMs, solve_ms: solveMs, report_ms: reportMs, write_ms: writeMs, depots: network.depotCount, lanes: network.laneCount, rows: report.depots.length });
-  }
-  const { over_drive_limit: over, caution, loops } = report.tail;
-  if (over > 0) {
-    const limit = imported.plan.settings.drivingLimit;
-    out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
-  }
-  // The CSV's companion text: the caution goes with every output, on stderr beside the CSV.
-  out.afterOutput(`CAUTION: ${caution}`);
-  if (loops.length > 0) {
-    out.warn(`WARNING: ${loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
-  }
-  return 0;
-}

@@ -38,6 +38,15 @@ describe('lanewright bundle', () => {
     expect(built.manifest.inputs.every((input) => !input.includes('node_modules'))).toBe(true);
   });
 
+  it('loads no engine code for the help beyond errors, cautions and shown text; each command is its own chunk', () => {
+    const startup = built.startupInputs;
+    expect(startup.filter((input) => input.startsWith('engine/'))).toEqual(['engine/errors.ts', 'engine/text/cautions.ts', 'engine/text/shown-text.ts']);
+    expect(startup.some((input) => input.includes('node_modules'))).toBe(false);
+    expect(startup).toContain('main/cli/commands/routes.ts');
+    expect(startup.some((input) => input.endsWith('-run.ts') || input.endsWith('load-network.ts'))).toBe(false);
+    expect(built.manifest.inputs).toContain('main/cli/commands/routes-run.ts');
+  });
+
   it('prints the same help as the sources, and the same routes CSV', async () => {
     const help = runBundle('--help');
     expect(help.status).toBe(0);

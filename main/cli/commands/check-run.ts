@@ -1,0 +1,39 @@
+// `lanewright check`: reads the depots and lanes files and prints the validation report, as lines or
+// JSON. Exit status 0 when there are no errors, 1 when there are; warnings alone do not fail.
+// The command's work; its option table is in check.ts (engine-free), so this module loads only when it runs.
+
+import { formatReport } from '../../../engine/index';
+import type { ParsedArgs } from '../args';
+import { planDateOf, readImport } from '../load-network';
+import type { CommandOutput } from '../run';
+
+export function runCheck(args: ParsedArgs, out: CommandOutput): number {
+  // Building the network is not needed to report on the files.
+  const result = readImport(args, { skipInvalid: false });
+  const { report } = result;
+  const { date, note } = planDateOf(args);
+  if (note !== null) out.warn(note);
+  if (args.flags.has('json')) {
+    out.write(
+      JSON.stringify({
+        date,
+        total: report.total,
+        accepted: report.accepted,
+        rejected: report.rejected,
+        errors: report.errors.map(({ file, row, column, value, message, code }) => ({ file, row, column, value, message, code })),
+        warnings: report.warnings.map(({ file, row, column, value, message, code }) => ({ file, row, column, value, message, code })),
+        files: report.files,
+        omitted: report.omitted,
+        currency: result.currency,
+        vehicle_classes: result.vehicleClasses,
+        notes: result.notes,
+      }) + '\n',
+    );
+  } else {
+    const lines = formatReport(report);
+    lines.push(`total ${report.total} row(s): ${report.accepted} accepted, ${report.rejected} rejected; ${report.errors.length} error(s), ${report.warnings.length} warning(s)`);
+    for (const note of result.notes) lines.push(`note: ${note}`);
+    out.write(lines.join('\n') + '\n');
+  }
+  return report.errors.length > 0 ? 1 : 0;
+}
