@@ -29,6 +29,12 @@ export interface CommandOutput {
    * and `done` (when given) is printed as "wrote <done>" only after its file is on disk.
    */
   writeFile(path: string, text: string, done?: string): void;
+  /**
+   * Opens an output file written as it is made (for files too large to hold as one string): chunks
+   * go to a temporary file at once; like `writeFile`, it replaces `path` only once the command has
+   * succeeded (in the order the files were asked for), and a failure removes it.
+   */
+  openFile(path: string, done?: string): { write(text: string): void };
   warn(line: string): void;
   /** Printed on stderr after the output is written (the caution that goes with it); never with a failure. */
   afterOutput(line: string): void;
@@ -87,7 +93,11 @@ export async function main(argv: readonly string[]): Promise<number> {
     if (outPath) await writableTarget(outPath);
     // --out streams into a temporary file (see atomic-write.ts), opened at the first write.
     const opened: { file: AtomicFileStream | null } = { file: null };
-    const files: [path: string, text: string, done?: string][] = [];
+    // Whole files and streamed files, in the order the command asked for them.
+    const files: { path: string; text: string | AtomicFileStream; done?: string }[] = [];
+    const abortStreams = () => {
+      for (const f of files) if (typeof f.text !== 'string') f.text.abort();
+    };
     const after: string[] = [];
     const output: CommandOutput = {
       write: (text) => {
@@ -98,7 +108,12 @@ export async function main(argv: readonly string[]): Promise<number> {
         opened.file ??= openAtomicFileStream(outPath);
         opened.file.write(text);
       },
-      writeFile: (path, text, done) => files.push([path, text, done]),
+      writeFile: (path, text, done) => files.push({ path, text, done }),
+      openFile: (path, done) => {
+        const stream = openAtomicFileStream(path);
+        files.push({ path, text: stream, done });
+        return { write: (text) => stream.write(text) };
+      },
       warn: printError,
       afterOutput: (line) => after.push(line),
       timing: (figures) => process.stderr.write(JSON.stringify(figures, (_key, v) => (typeof v === 'number' ? Math.round(v * 100) / 100 : v)) + '\n'),
@@ -108,14 +123,21 @@ export async function main(argv: readonly string[]): Promise<number> {
       status = (await command.load())(args, output);
     } catch (error) {
       opened.file?.abort();
+      abortStreams();
       throw error;
     }
     // The same guarantees as workspace saves (temporary file, fsync, rename, clean-up on failure):
     // a failed or interrupted run never leaves half a report where a spreadsheet will read it.
-    if (outPath) await (opened.file ?? openAtomicFileStream(outPath)).commit();
-    for (const [path, text, done] of files) {
-      await writeFileAtomic(path, text);
-      if (done) process.stdout.write(forStdout(`wrote ${done}\n`));
+    try {
+      if (outPath) await (opened.file ?? openAtomicFileStream(outPath)).commit();
+      for (const { path, text, done } of files) {
+        if (typeof text === 'string') await writeFileAtomic(path, text);
+        else await text.commit();
+        if (done) process.stdout.write(forStdout(`wrote ${done}\n`));
+      }
+    } catch (error) {
+      abortStreams();
+      throw error;
     }
     for (const line of after) printError(line);
     return status;

@@ -8,7 +8,7 @@ import { findDistinctLoops } from '../../../engine/index';
 import { geoJsonText } from '../../../engine/index';
 import { lanesCsv, type LanesExportInput } from '../../../engine/index';
 import { loopsCsv } from '../../../engine/index';
-import { routesCsv } from '../../../engine/index';
+import { routesCsvChunks, routesReportStream, type RoutesReportStream } from '../../../engine/index';
 import { networkGeoJson } from '../../../engine/index';
 import { depotIndexOf } from '../../../engine/index';
 import { routesReport, type RoutesReport } from '../../../engine/index';
@@ -44,17 +44,27 @@ export function runExport(args: ParsedArgs, out: CommandOutput): number {
     lanes = what;
   }
   let report: RoutesReport | undefined;
+  let routes: RoutesReportStream | undefined;
   if (originId) {
     const solved = cheapestRoutes(network, depotIndexOf(network, originId, '--from'));
-    report = routesReport(network, solved, { driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes });
+    const driveLimitMinutes = imported.plan.settings.drivingLimit.dailyDrivingMinutes;
+    // The routes CSV is written as a stream of rows, as `routes --out` writes it, so its size never
+    // has to fit in memory; only the GeoJSON, which places every route, takes the whole report.
+    routes = routesReportStream(network, solved, { driveLimitMinutes });
+    if (geojsonOut) report = routesReport(network, solved, { driveLimitMinutes });
   }
   const loops = findDistinctLoops(network).loops;
   if (lanesOut) {
     const rows = lanes.lanes.count - (lanes.leaveOut ? lanes.leaveOut.reduce((n, x) => n + x, 0) : 0);
     out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
   }
-  if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
-  if ((routesOut || lanesOut || geojsonOut) && report) out.afterOutput(`CAUTION: ${report.caution}`);
+  if (routesOut && routes) {
+    const file = out.openFile(routesOut, `routes from ${originId}: ${routesOut} (${routes.depots.length} depot(s))`);
+    // Another dialect re-writes the whole table (its numeric columns are judged over every row).
+    if (!args.values.has('csv-dialect')) for (const chunk of routesCsvChunks(routes)) file.write(chunk);
+    else file.write(inCsvDialect(args, [...routesCsvChunks(routes)].join('')));
+  }
+  if ((routesOut || lanesOut || geojsonOut) && routes) out.afterOutput(`CAUTION: ${routes.tail.caution}`);
   if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);

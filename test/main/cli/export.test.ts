@@ -6,6 +6,9 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../../engine/io/csv-papaparse';
+import { parseCommandLine } from '../../../main/cli/args';
+import { exportCommand } from '../../../main/cli/commands/export';
+import type { CommandOutput } from '../../../main/cli/run';
 import { runCli, tempFiles } from './cli-harness';
 
 const depots = ['id,name,lat,lon', 'A,Alpha yard,51.0,4.0', 'B,Bravo yard,51.1,4.1', 'C,Charlie yard,51.2,4.2'].join('\n');
@@ -50,5 +53,39 @@ describe('lanewright export', () => {
     expect(rows[1][header.indexOf('toll_5axle')]).toBe('19.00');
     const [rh, ...rr] = parseCsvText(readFileSync(routes, 'utf8')).rows;
     expect(rr.find((r) => r[0] === 'B')![rh.indexOf('cost')]).toBe('25.00');
+  });
+
+  it('--routes-out writes the same file as routes --out, row by row through a streamed file (never one string)', async () => {
+    const dir = tempFiles({});
+    const common = ['--depots', 'sample-data/depots.csv', '--lanes', 'sample-data/lanes.csv', '--from', 'RTM', '--date', '2026-06-01'];
+    const exported = join(dir, 'export-routes.csv');
+    const routed = join(dir, 'routes.csv');
+    const a = await runCli(['export', ...common, '--routes-out', exported]);
+    const b = await runCli(['routes', ...common, '--out', routed]);
+    expect([a.status, b.status]).toEqual([0, 0]);
+    expect(readFileSync(exported, 'utf8')).toBe(readFileSync(routed, 'utf8'));
+    expect(a.stdout).toMatch(/^wrote routes from RTM: .*export-routes\.csv \(\d+ depot\(s\)\)$/m);
+    expect(a.stderr).toContain('CAUTION: ');
+
+    // The command asks for a streamed file; a whole-text file for the routes would hold the output in memory.
+    const args = parseCommandLine('export', [...common, '--routes-out', exported, '--lanes-out', join(dir, 'lanes.csv')], exportCommand.options, new Map());
+    const whole: string[] = [];
+    const streamed: { path: string; chunks: string[] }[] = [];
+    const output: CommandOutput = {
+      write: () => undefined,
+      writeFile: (path) => whole.push(path),
+      openFile: (path) => {
+        const file = { path, chunks: [] as string[] };
+        streamed.push(file);
+        return { write: (text) => file.chunks.push(text) };
+      },
+      warn: () => undefined,
+      afterOutput: () => undefined,
+      timing: () => undefined,
+    };
+    expect((await exportCommand.load())(args, output)).toBe(0);
+    expect(whole).toEqual([join(dir, 'lanes.csv')]);
+    expect(streamed.map((f) => f.path)).toEqual([exported]);
+    expect(streamed[0].chunks.join('')).toBe(readFileSync(routed, 'utf8'));
   });
 });
