@@ -1,29 +1,20 @@
-// `lanewright check` as a user runs it (a fresh process: start-up, read, validate, report) on the
-// seeded 1,000,000-lane file, beside pandas `read_csv` on the same file in the same run, which only
-// parses (no validation, no exact amounts). pandas is the baseline when Debian's python3-pandas is
-// installed; otherwise the figure stands alone and the note says so.
+// `lanewright check` as a user runs it (a fresh process from the bundle: start-up, read, validate,
+// plan, report) on the seeded 1,000,000-lane file, beside two baselines measured in the same run on
+// the same file: pandas `read_csv` (a fresh Python process: parse only, no validation, no exact
+// amounts), when Debian's python3-pandas is installed (the note says so when it is not), and
+// papaparse with no checks (the file as one string, parsed inside a process; tsx's start-up left out).
+// Each figure is the run with the least CPU time of two, with its wall time, CPU seconds and peak RSS.
 
-import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { BenchSuite } from '../harness';
+import { bestOf, runText, timedCommand } from '../timed-command';
 import { writeFiles } from './import';
 
-const cli = fileURLToPath(new URL('../../../main/cli/lanewright.mjs', import.meta.url));
-
-/** Best wall time of `runs` runs of a command, or null when it failed. */
-function wallMs(command: string, args: string[], runs = 2): number | null {
-  let best = Infinity;
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    const result = spawnSync(command, args, { stdio: ['ignore', 'ignore', 'pipe'], maxBuffer: 64 * 2 ** 20 });
-    if (result.status !== 0) return null;
-    best = Math.min(best, performance.now() - start);
-  }
-  return best;
-}
+const root = fileURLToPath(new URL('../../../', import.meta.url));
+const PYTHON = '/usr/bin/python3';
 
 export const suite: BenchSuite = {
   name: 'check-command',
@@ -31,17 +22,29 @@ export const suite: BenchSuite = {
     const folder = mkdtempSync(join(tmpdir(), 'lanewright-bench-check-'));
     try {
       const files = writeFiles(folder);
-      const engine = wallMs(process.execPath, [cli, 'check', '--depots', files.depots, '--lanes', files.lanes]);
-      if (engine === null) throw new Error('lanewright check failed');
-      const python = '/usr/bin/python3';
-      const pandas = existsSync(python) ? wallMs(python, ['-c', `import pandas; pandas.read_csv(${JSON.stringify(files.lanes)})`]) : null;
+      const check = bestOf(2, () => timedCommand(process.execPath, ['main/cli/lanewright.mjs', 'check', '--depots', files.depots, '--lanes', files.lanes, '--date', '2026-06-01'], root));
+      if (!check.ok) throw new Error(`lanewright check failed: ${check.detail}`);
+      const hasPandas = existsSync(PYTHON) && timedCommand(PYTHON, ['-c', 'import pandas'], root).ok;
+      const pandas = hasPandas ? bestOf(2, () => timedCommand(PYTHON, ['-c', `import pandas; pandas.read_csv(${JSON.stringify(files.lanes)})`], root)) : null;
+      const papa = bestOf(2, () => timedCommand(process.execPath, ['--import', 'tsx', 'test/bench/papaparse-read-command.ts', files.lanes], root));
+      const papaMs = papa.ok ? (JSON.parse(papa.detail) as { read_parse_ms: number }).read_parse_ms : undefined;
+      const checkText = `check: ${runText(check)}`;
       record({
-        case: 'check 1M lanes: whole command (fresh process)',
-        engine,
-        baseline: pandas ?? undefined,
+        case: 'check 1M lanes: whole command (fresh process) vs pandas read_csv',
+        engine: check.ms,
+        baseline: pandas?.ms,
         unit: 'ms',
-        note: pandas === null ? 'no baseline: python3-pandas is not installed' : 'baseline: pandas read_csv of the lanes file (parse only, includes Python start-up)',
+        target: pandas?.ok ? 0.7 * pandas.ms : undefined,
+        note: pandas === null ? `${checkText}; no pandas baseline: python3-pandas is not installed` : `${checkText}; pandas read_csv (parse only, with Python start-up): ${runText(pandas)}; target 0.7 x pandas wall`,
       });
+      record({
+        case: 'check 1M lanes: whole command vs papaparse with no checks',
+        engine: check.ms,
+        baseline: papaMs,
+        unit: 'ms',
+        note: `papaparse: the whole file as one string, parsed in-process (start-up not counted), ${papaMs ?? '?'} ms; its process: ${runText(papa)}`,
+      });
+      record({ case: 'check 1M lanes: peak memory (max RSS)', engine: check.mb ?? NaN, baseline: pandas?.mb, unit: 'MB', target: 300, note: `baseline: pandas read_csv; papaparse (one string) peaked at ${papa.mb?.toFixed(0) ?? '?'} MB` });
     } finally {
       rmSync(folder, { recursive: true, force: true });
     }

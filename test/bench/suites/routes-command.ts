@@ -5,51 +5,20 @@
 // (routes-path-walk-command.ts, the method before the linear report), given a 1.5 GB heap. Also the
 // start-up of `lanewright --help` from the bundle beside the same help through tsx.
 
-import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, statSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { freshBundle } from '../../../main/cli/fresh-bundle.mjs';
 import { writeNetworkFiles, type NetworkFiles } from '../network-files';
 import type { BenchSuite } from '../harness';
+import { timedCommand, type TimedRun } from '../timed-command';
 
 const root = fileURLToPath(new URL('../../../', import.meta.url));
-const TIME = '/usr/bin/time';
 const BASELINE_HEAP_MB = 1536;
 
-interface Run {
-  ms: number;
-  /** Peak resident memory, when /usr/bin/time is there to measure it. */
-  mb?: number;
-  /** User + system CPU seconds (all threads), from the same; less disturbed than wall time on a busy machine. */
-  cpuS?: number;
-  ok: boolean;
-  /** The command's own timing line, or the first line of its error. */
-  detail: string;
-  outputMb: number;
-}
-
-/** Runs `node args` under /usr/bin/time -v when present; wall time measured here. */
-function measure(args: string[], out: string | null): Run {
-  const timed = existsSync(TIME);
-  const start = performance.now();
-  const result = spawnSync(timed ? TIME : process.execPath, timed ? ['-v', process.execPath, ...args] : args, {
-    cwd: root,
-    encoding: 'utf8',
-    maxBuffer: 1 << 26,
-  });
-  const ms = performance.now() - start;
-  const rss = /Maximum resident set size \(kbytes\): (\d+)/.exec(result.stderr)?.[1];
-  const user = /User time \(seconds\): ([\d.]+)/.exec(result.stderr)?.[1];
-  const system = /System time \(seconds\): ([\d.]+)/.exec(result.stderr)?.[1];
-  const timing = result.stderr.split('\n').find((line) => line.startsWith('{'));
-  const failure = result.stderr.split('\n').find((line) => /heap|RangeError|FATAL|lanewright:/.test(line));
-  const outputMb = out && existsSync(out) ? statSync(out).size / 2 ** 20 : 0;
-  if (out) rmSync(out, { force: true });
-  const cpuS = user && system ? Number(user) + Number(system) : undefined;
-  return { ms, mb: rss ? Number(rss) / 1024 : undefined, cpuS, ok: result.status === 0, detail: result.status === 0 ? (timing ?? '') : (failure ?? `exit ${result.status}`), outputMb };
-}
+type Run = TimedRun;
+const measure = (args: string[], out: string | null): Run => timedCommand(process.execPath, args, root, out);
 
 export const suite: BenchSuite = {
   name: 'routes-command',
