@@ -17,6 +17,11 @@ export interface ImportOptions {
   exchangeRates?: Record<string, string>;
   /** Build the network from the accepted rows even when the report has errors. */
   skipInvalid?: boolean;
+  /**
+   * False: read, check and plan (every problem reported) but build no network (`network` is null);
+   * what `lanewright check` needs, at less time and memory. Default true.
+   */
+  network?: boolean;
   onProgress?: (progress: ProgressEvent) => void;
   /** Checked between chunks; when set, the import stops with ImportCancelledError. */
   signal?: { readonly aborted: boolean };

@@ -210,8 +210,18 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     }
     const fees = t.fees[i];
     const rebate = t.rebate[i];
-    // Out of the exact range is refused when the network is built; here only the sign matters.
-    const net = netCostOrNull(toll, fuel, fees, rebate) ?? 0;
+    // The reader refused rows whose own amounts leave the exact range; a planned toll or an estimated
+    // fuel cost (a default toll, a fuel price) can still push the net past it: a row error here, so a
+    // check that builds no network reports it too, and the network build never meets it.
+    const planned = netCostOrNull(toll, fuel, fees, rebate);
+    if (planned === null) {
+      errors.push(
+        item(t.sourceRow[i], fuelEstimated ? header('fuel') : header('toll'), null, 'amount-overflow', `the lane's planned net cost (toll + fuel + fees - rebate, with the ${fuelEstimated ? 'estimated fuel' : 'planned toll'}) is outside the exact range (±${Number.MAX_SAFE_INTEGER} minor units)`),
+      );
+      rejected++;
+      continue;
+    }
+    const net = planned;
     if (net < 0 && warnings.length >= MAX_PLAN_ITEMS) dropped++;
     else if (net < 0) {
       const f = (v: number) => formatMinor(v as Minor, exponent);
@@ -234,13 +244,15 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   if (closedRows > 0) notes.push(`${closedRows} lane row(s) closed by the scenario.`);
   if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
 
+  // Trimmed to the planned lanes; a view when nearly every row is planned, so the columns are not held twice.
+  const rows = <T extends Int32Array | Float64Array | Uint8Array>(a: T): T => (n >= cap * 0.9 ? a.subarray(0, n) : a.slice(0, n)) as T;
   const columns: PlannedColumns = {
-    record: record.slice(0, n),
-    toll: tolls.slice(0, n),
-    fuel: fuels.slice(0, n),
-    distanceKm: distances.slice(0, n),
-    driveMinutes: drives.slice(0, n),
-    estimated: estimated.slice(0, n),
+    record: rows(record),
+    toll: rows(tolls),
+    fuel: rows(fuels),
+    distanceKm: rows(distances),
+    driveMinutes: rows(drives),
+    estimated: rows(estimated),
   };
   const network = build(errors.length) ? buildPlannedNetwork(depots, t, columns, currency, exponent) : null;
   let lanes: PlannedLane[] | null = null;

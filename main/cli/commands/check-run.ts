@@ -8,8 +8,8 @@ import { planDateOf, readImport } from '../load-network';
 import type { CommandOutput } from '../run';
 
 export function runCheck(args: ParsedArgs, out: CommandOutput): number {
-  // Building the network is not needed to report on the files.
-  const result = readImport(args, { skipInvalid: false });
+  // Every problem is found by reading and planning; the network itself is not needed for the report.
+  const result = readImport(args, { skipInvalid: false, network: false });
   const { report } = result;
   const { date, note } = planDateOf(args);
   if (note !== null) out.warn(note);

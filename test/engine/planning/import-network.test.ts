@@ -329,3 +329,28 @@ describe('report cap', () => {
     expect(r.report.files[1]).toMatchObject({ total: 50, accepted: 30, rejected: 20 });
   });
 });
+
+describe('a plan whose estimate leaves the exact range; an import without a network', () => {
+  // B>C has no fuel: 39,999 km at 9 x 10^10 per litre gives an estimated fuel far past 2^53 minor units.
+  const lanes = 'from,to,toll,fuel,fees,rebate,distance_km,drive_minutes\nA,B,1.00,2.00,0,0,94.3,83\nB,C,1.00,,0,0,39999,120\n';
+  const plan = { settings: { fuelPricePerLitre: '90000000000' } };
+
+  it('names the row as an amount-overflow error (the network build never meets it)', () => {
+    const r = importNetwork(DEPOTS, lanes, { plan });
+    expect(r.network).toBeNull();
+    expect(r.report.errors.map((e) => [e.row, e.column, e.code])).toEqual([[3, 'fuel', 'amount-overflow']]);
+    expect(r.report.files[1]).toMatchObject({ total: 2, accepted: 1, rejected: 1 });
+    const skipped = importNetwork(DEPOTS, lanes, { plan, skipInvalid: true });
+    expect(skipped.network!.laneCount).toBe(1);
+  });
+
+  it('network: false reports the same problems and plan, and builds no network', () => {
+    for (const text of [LANES, lanes]) {
+      const full = importNetwork(DEPOTS, text, { plan });
+      const bare = importNetwork(DEPOTS, text, { plan, network: false });
+      expect(bare.network).toBeNull();
+      expect(bare.report).toEqual(full.report);
+      expect(Array.from(bare.plan.laneRecord)).toEqual(Array.from(full.plan.laneRecord));
+    }
+  });
+});
