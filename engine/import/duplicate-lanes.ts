@@ -14,8 +14,8 @@ export interface DuplicateLane {
 
 export function findDuplicateLanes(table: LaneTable, depotCount: number): DuplicateLane[] {
   const start = originStarts(table.from, table.count, depotCount);
-  const order = byOrigin(table.from, table.count, start);
-  return repeats(table, depotCount, start, order).sort((a, b) => a.lane - b.lane);
+  const { order, toInOrder } = byOrigin(table.from, table.to, table.count, start);
+  return repeats(table, depotCount, start, order, toInOrder).sort((a, b) => a.lane - b.lane);
 }
 
 // start[d] .. start[d + 1] - 1: the positions of depot d's lanes in the origin order.
@@ -26,16 +26,24 @@ function originStarts(from: Int32Array, n: number, depotCount: number): Int32Arr
   return start;
 }
 
-// Lanes in order of origin (a counting sort, stable: file order within an origin).
-function byOrigin(from: Int32Array, n: number, start: Int32Array): Int32Array {
+// Lanes in order of origin (a counting sort, stable: file order within an origin), with each lane's
+// destination beside it: the scan then reads both in sequence instead of jumping through the table.
+function byOrigin(from: Int32Array, to: Int32Array, n: number, start: Int32Array): { order: Int32Array; toInOrder: Int32Array } {
   const fill = start.slice(0, start.length - 1);
   const order = new Int32Array(n);
-  for (let e = 0; e < n; e++) order[fill[from[e]]++] = e;
-  return order;
+  const toInOrder = new Int32Array(n);
+  for (let e = 0; e < n; e++) {
+    const p = fill[from[e]]++;
+    order[p] = e;
+    toInOrder[p] = to[e];
+  }
+  return { order, toInOrder };
 }
 
-function repeats(table: LaneTable, depotCount: number, start: Int32Array, order: Int32Array): DuplicateLane[] {
-  const { to, ref, validFrom, validTo } = table;
+// Per origin, lanes to the same destination are chained by position in the origin order; only a
+// lane whose destination repeats is compared (reference, class, validity) with the chain's rows.
+function repeats(table: LaneTable, depotCount: number, start: Int32Array, order: Int32Array, toInOrder: Int32Array): DuplicateLane[] {
+  const { ref, validFrom, validTo } = table;
   const cls = table.vehicleClass;
   const stamp = new Int32Array(depotCount).fill(-1);
   const head = new Int32Array(depotCount);
@@ -43,16 +51,17 @@ function repeats(table: LaneTable, depotCount: number, start: Int32Array, order:
   const found: DuplicateLane[] = [];
   for (let d = 0; d < depotCount; d++) {
     for (let p = start[d]; p < start[d + 1]; p++) {
-      const e = order[p];
-      const t = to[e];
+      const t = toInOrder[p];
       if (stamp[t] !== d) {
         stamp[t] = d;
-        head[t] = e;
-        next[e] = -1;
+        head[t] = p;
+        next[p] = -1;
         continue;
       }
+      const e = order[p];
       let match = -1;
-      for (let c = head[t]; c !== -1; c = next[c]) {
+      for (let q = head[t]; q !== -1; q = next[q]) {
+        const c = order[q];
         if (validFrom[c] === validFrom[e] && validTo[c] === validTo[e] && (cls === null || cls[c] === cls[e]) && ref[c] === ref[e]) {
           match = c;
           break;
@@ -60,8 +69,8 @@ function repeats(table: LaneTable, depotCount: number, start: Int32Array, order:
       }
       if (match !== -1) found.push({ lane: e, first: match });
       else {
-        next[e] = head[t];
-        head[t] = e;
+        next[p] = head[t];
+        head[t] = p;
       }
     }
   }
