@@ -2,7 +2,7 @@
 // their validity or of another class are left out, the class's toll applies, blanks are filled from
 // the planning settings (great-circle distance x detour, fuel from consumption and price, drive time).
 
-import { greatCircleOfRow } from './great-circle-cache';
+import { greatCircleAt, greatCircleColumn } from './great-circle-cache';
 import { classKey } from '../import/headers';
 import { isoDateText, readIsoDate } from '../import/cells';
 import { PlanRequestError } from '../import/import-errors';
@@ -156,6 +156,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
   let dropped = 0;
   let closedRows = 0;
   const missingReported = new Set<string>();
+  let greatCircle: Float64Array | null = null;
   for (let i = 0; i < t.count; i++) {
     if (!validOn(i)) {
       excluded++;
@@ -193,7 +194,8 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     let distanceKm = t.distanceKm[i];
     const distanceEstimated = Number.isNaN(distanceKm);
     if (distanceEstimated) {
-      distanceKm = Math.round(greatCircleOfRow(t, depots, i) * settings.detourFactor * 10) / 10;
+      greatCircle ??= greatCircleColumn(t);
+      distanceKm = Math.round(greatCircleAt(greatCircle, t, depots, i) * settings.detourFactor * 10) / 10;
     }
     let driveMinutes = t.driveMinutes[i];
     const driveEstimated = Number.isNaN(driveMinutes);

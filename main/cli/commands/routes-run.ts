@@ -9,7 +9,7 @@ import { cheapestRoutes } from '../../../engine/index';
 import { legLimitedRoutes } from '../../../engine/index';
 import { routesReportStream } from '../../../engine/index';
 import { routesCsvChunks, routesJsonChunks } from '../../../engine/index';
-import type { Network } from '../../../engine/index';
+import type { Network, PlanningSettings } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
@@ -24,14 +24,23 @@ function targetDepots(network: Network, args: ParsedArgs): number[] | undefined 
   return [...seen];
 }
 
+/**
+ * The network and the planning settings, and nothing else of the import: the lane table, the depot
+ * records and the plan's columns are garbage once this returns, so the solve, the report and the
+ * writing reuse their memory (about as much as the network again on a million lanes).
+ */
+function networkOnly(args: ParsedArgs): { network: Network; settings: PlanningSettings } {
+  const imported = loadImport(args);
+  return { network: imported.network, settings: imported.plan.settings };
+}
+
 export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const originId = required(args, 'from');
   const maxLegs = wholeNumberOption(args, 'max-legs', 0);
   csvDialectOption(args); // a wrong name is refused before any file is read
 
   const readStart = performance.now();
-  const imported = loadImport(args);
-  const network = imported.network;
+  const { network, settings } = networkOnly(args);
   const origin = depotIndexOf(network, originId, `--from`);
   const depots = targetDepots(network, args);
   const readMs = performance.now() - readStart;
@@ -42,7 +51,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
 
   const reportStart = performance.now();
   const report = routesReportStream(network, solved, {
-    driveLimitMinutes: imported.plan.settings.drivingLimit.dailyDrivingMinutes,
+    driveLimitMinutes: settings.drivingLimit.dailyDrivingMinutes,
     paths: !args.flags.has('no-paths'),
     depots,
   });
@@ -60,7 +69,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   }
   const { over_drive_limit: over, caution, loops } = report.tail;
   if (over > 0) {
-    const limit = imported.plan.settings.drivingLimit;
+    const limit = settings.drivingLimit;
     out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
   }
   // The CSV's companion text: the caution goes with every output, on stderr beside the CSV.
