@@ -1,6 +1,7 @@
 // Compiles depots and lanes into the typed-array Network. Runs once per import; every solver then
 // works on flat arrays, which keeps a million lanes in well under 100 MB.
 
+import { knownDepotIndex } from './depot-index-registry';
 import { NetworkBuildError, UnknownDepotError } from '../errors';
 import { netCost } from '../money/net-cost';
 import { compressRows } from './compressed-rows';
@@ -79,6 +80,7 @@ export function buildNetwork(depots: readonly DepotInput[], lanes: readonly Lane
 /** The depot part of a Network (ids, names, coordinates, id index), shared by both network builders. */
 export function depotColumns(depots: readonly DepotInput[]): Pick<Network, 'depotIds' | 'depotNames' | 'lat' | 'lon' | 'depotIndex'> {
   const depotCount = depots.length;
+  const remembered = knownDepotIndex(depots);
   const depotIndex = new Map<string, number>();
   const depotIds: string[] = new Array(depotCount);
   const depotNames: string[] = new Array(depotCount);
@@ -86,14 +88,16 @@ export function depotColumns(depots: readonly DepotInput[]): Pick<Network, 'depo
   const lon = new Float64Array(depotCount);
   for (let i = 0; i < depotCount; i++) {
     const d = depots[i];
-    if (depotIndex.has(d.id)) throw new NetworkBuildError(`duplicate depot id "${d.id}"`);
-    depotIndex.set(d.id, i);
+    if (remembered === undefined) {
+      if (depotIndex.has(d.id)) throw new NetworkBuildError(`duplicate depot id "${d.id}"`);
+      depotIndex.set(d.id, i);
+    }
     depotIds[i] = d.id;
     depotNames[i] = d.name;
     lat[i] = d.lat;
     lon[i] = d.lon;
   }
-  return { depotIds, depotNames, lat, lon, depotIndex };
+  return { depotIds, depotNames, lat, lon, depotIndex: remembered ?? depotIndex };
 }
 
 /** Index of a depot id, or UnknownDepotError. */

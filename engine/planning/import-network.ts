@@ -3,6 +3,7 @@
 // duplicate lanes, plans for the requested day and class, and builds the network when allowed.
 
 import { CsvRecordStream } from '../io/csv-record-stream';
+import { rememberDepotIndex } from '../network/depot-index-registry';
 import { planLanes } from './plan-network';
 import type { PlanRequest } from './types';
 import { DepotsReader } from '../import/depots-reader';
@@ -124,6 +125,8 @@ function assemble(collector: ReportCollector, depots: DepotsReader, lanes: Lanes
   const notes: string[] = [];
   for (const [code, rows] of lanes.converted) notes.push(`${rows} lane row(s) converted from ${code} to ${lanes.currency} at ${options.exchangeRates?.[code]}.`);
   const importReport = collector.report();
+  // The reader's id index is exactly the depots' positions; every plan's network reuses it.
+  rememberDepotIndex(depots.depots, depots.index);
   const base = {
     depots: depots.depots,
     lanes: table,
