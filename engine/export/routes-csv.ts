@@ -4,8 +4,11 @@
 import { formatCsvRows } from '../io/csv-papaparse';
 import { routesReportHeader, routesReportRows, type RoutesReport, type RoutesReportStream } from '../report/routes-report';
 
-/** Characters gathered before a chunk is handed on: large enough that writes are few. */
-export const ROUTES_CHUNK_CHARS = 1 << 20;
+/**
+ * Characters gathered before a chunk is handed on: large enough that writes are few, small enough
+ * that a batch's rows die young (a 1 MB batch outlived two scavenges and was copied into the old space).
+ */
+export const ROUTES_CHUNK_CHARS = 1 << 16;
 
 /** The routes report as CSV text. */
 export function routesCsv(report: RoutesReport): string {
