@@ -7,7 +7,7 @@ import { cellText, ownText } from './cells';
 import { readNumber } from './decimal-text';
 import { matchDepotHeaders, type DepotField, type HeaderMatch } from './headers';
 import type { ReportCollector } from './report-collector';
-import { cutCells, plainCell } from './plain-cells';
+import { cutCells } from './plain-cells';
 import { RecordFileReader } from './record-file-reader';
 import type { DepotRecord } from './types';
 
@@ -127,7 +127,6 @@ export class DepotsReader extends RecordFileReader {
     const p = this.plain;
     if (p === null || !cutCells(text, start, end, delimiter.charCodeAt(0), p.starts, p.ends)) return false;
     const { starts, ends } = p;
-    for (let k = 0; k < starts.length; k++) if (!plainCell(text, starts[k], ends[k])) return false;
     const lat = plainCoordinate(text, starts[p.lat], ends[p.lat], 90);
     const lon = plainCoordinate(text, starts[p.lon], ends[p.lon], 180);
     if (Number.isNaN(lat) || Number.isNaN(lon) || starts[p.id] === ends[p.id]) return false;

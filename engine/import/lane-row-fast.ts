@@ -11,7 +11,7 @@ import { withoutFormulaGuard } from '../io/csv-cell-safety';
 import { ownText } from './cells';
 import type { DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
-import { cutCells, plainCell } from './plain-cells';
+import { cutCells } from './plain-cells';
 import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-cells';
 import type { LaneTableBuilder } from './lane-table';
 
@@ -67,8 +67,6 @@ export class PlainLaneRows {
     const starts = this.starts;
     const ends = this.ends;
     if (!cutCells(text, start, end, delimiter.charCodeAt(0), starts, ends)) return false;
-    const n = this.setup.columnCount;
-    for (let k = 0; k < n; k++) if (!plainCell(text, starts[k], ends[k])) return false;
 
     const col = this.col;
     const depots = this.setup.depots;
@@ -193,20 +191,21 @@ export class PlainLaneRows {
     const e = this.ends[column];
     if (s === e) return 0;
     if (e - s !== 10 || text.charCodeAt(s + 4) !== 45 || text.charCodeAt(s + 7) !== 45) return SLOW;
-    const part = (from: number, to: number) => {
-      let v = 0;
-      for (let i = from; i < to; i++) {
-        const c = text.charCodeAt(i) - 48;
-        if (c < 0 || c > 9) return -1;
-        v = v * 10 + c;
-      }
-      return v;
-    };
-    const year = part(s, s + 4);
-    const month = part(s + 5, s + 7);
-    const day = part(s + 8, s + 10);
+    const year = digitsAt(text, s, s + 4);
+    const month = digitsAt(text, s + 5, s + 7);
+    const day = digitsAt(text, s + 8, s + 10);
     if (year < 0 || month < 0 || day < 0) return SLOW;
     return isoDateNumber(year, month, day) ?? SLOW;
   }
 }
 
+// The whole number written by the digits text[from, to), or -1 when any is not a digit.
+function digitsAt(text: string, from: number, to: number): number {
+  let v = 0;
+  for (let i = from; i < to; i++) {
+    const c = text.charCodeAt(i) - 48;
+    if (c < 0 || c > 9) return -1;
+    v = v * 10 + c;
+  }
+  return v;
+}

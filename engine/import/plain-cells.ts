@@ -4,21 +4,24 @@
 
 /**
  * Cuts `text[start, end)` at the delimiter into exactly `starts.length` cells (their bounds into
- * `starts`/`ends`); false when the line has more or fewer. One pass over the characters: a call to
- * indexOf per cell costs more than the few characters a cell holds.
+ * `starts`/`ends`), each of them plain (`plainCell`); false when the line has more or fewer cells or
+ * one that is not plain. One pass over the characters: a call to indexOf per cell costs more than
+ * the few characters a cell holds.
  */
 export function cutCells(text: string, start: number, end: number, delimiter: number, starts: Int32Array, ends: Int32Array): boolean {
   const last = starts.length - 1;
   let k = 0;
+  let from = start;
   starts[0] = start;
   for (let i = start; i < end; i++) {
     if (text.charCodeAt(i) === delimiter) {
-      if (k === last) return false;
+      if (k === last || !plainCell(text, from, i)) return false;
       ends[k] = i;
-      starts[++k] = i + 1;
+      from = i + 1;
+      starts[++k] = from;
     }
   }
-  if (k !== last) return false;
+  if (k !== last || !plainCell(text, from, end)) return false;
   ends[k] = end;
   return true;
 }
@@ -27,7 +30,7 @@ export function cutCells(text: string, start: number, end: number, delimiter: nu
  * A cell the general reader would read unchanged: nothing to trim at either end (ASCII only, so
  * Unicode spaces go the general way) and no leading apostrophe (the exporter's formula guard).
  */
-export function plainCell(text: string, start: number, end: number): boolean {
+function plainCell(text: string, start: number, end: number): boolean {
   if (start === end) return true;
   const first = text.charCodeAt(start);
   const last = text.charCodeAt(end - 1);
