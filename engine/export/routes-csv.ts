@@ -21,16 +21,17 @@ export function routesCsv(report: RoutesReport): string {
  */
 export function* routesCsvChunks(stream: RoutesReportStream, chunkChars = ROUTES_CHUNK_CHARS): Generator<string> {
   let batch: (string | number)[][] = [routesReportHeader(stream.paths)];
+  const plainColumns = stream.plainColumns();
   let size = 0;
   for (let i = 0; i < stream.depots.length; i++) {
     const cells = stream.cells(stream.depots[i]);
     batch.push(cells);
     for (const cell of cells) size += typeof cell === 'string' ? cell.length + 1 : 12;
     if (size >= chunkChars) {
-      yield formatCsvRows(batch);
+      yield formatCsvRows(batch, { plainColumns });
       batch = [];
       size = 0;
     }
   }
-  if (batch.length > 0) yield formatCsvRows(batch);
+  if (batch.length > 0) yield formatCsvRows(batch, { plainColumns });
 }

@@ -68,6 +68,12 @@ export interface CsvWriteOptions {
   escapeFormulae?: boolean;
   /** Field separator; default comma (RFC 4180). */
   delimiter?: ',' | ';';
+  /**
+   * Columns whose every cell the caller has checked is plain (`isPlainCsvText`, or a finite number),
+   * so they are written without testing each cell again: a routes file of every path repeats the
+   * same depot ids hundreds of millions of times. Only for cells the caller built from such parts.
+   */
+  plainColumns?: readonly boolean[];
 }
 
 // A cell written as it is: a plain number, or text with no separator of any common dialect, quote,
@@ -75,11 +81,23 @@ export interface CsvWriteOptions {
 // the quoting below would leave it unchanged).
 const PLAIN_TEXT = /^(?:[-+]?(?:\d+(?:\.\d*)?|\.\d+)|(?![\s=+\-@'])[^\r\n",;\t\uFEFF]*(?<!\s))$/;
 
-function isPlainRow(row: readonly (string | number | null)[]): boolean {
-  for (const cell of row) {
+function isPlainRow(row: readonly (string | number | null)[], known: readonly boolean[] | undefined): boolean {
+  for (let k = 0; k < row.length; k++) {
+    if (known !== undefined && known[k] === true) continue;
+    const cell = row[k];
     if (typeof cell === 'string' ? !PLAIN_TEXT.test(cell) : typeof cell === 'number' && !Number.isFinite(cell)) return false;
   }
   return true;
+}
+
+/**
+ * Text written as it is (no guard, no quotes) that stays so when joined to others like it with a
+ * character that is neither a separator nor a space (the routes file's `>`): plain, and not starting
+ * with a sign, which a plain number may and a joined text may not ("-3>D1" would start a formula).
+ */
+export function isPlainCsvText(text: string): boolean {
+  const first = text.charCodeAt(0);
+  return first !== 45 && first !== 43 && PLAIN_TEXT.test(text);
 }
 
 /**
@@ -100,7 +118,7 @@ export function formatCsvRows(rows: readonly (readonly (string | number | null)[
   };
   let text = '';
   for (const row of rows) {
-    if (guard && isPlainRow(row)) text += row.join(delimiter) + '\r\n';
+    if (guard && isPlainRow(row, options.plainColumns)) text += row.join(delimiter) + '\r\n';
     else text += Papa.unparse([guard ? row.map((cell) => (typeof cell === 'string' ? guardFormulaCell(cell) : cell)) : row] as unknown[][], papaOptions) + '\r\n';
   }
   return text;

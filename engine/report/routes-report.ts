@@ -4,6 +4,7 @@
 // is its flat form. Rows are built one at a time (`routesReportStream`), so an export of any size
 // is written without holding every path at once; the breakdowns are running totals (route-totals.ts).
 
+import { isPlainCsvText } from '../io/csv-papaparse';
 import { formatMinor, type Minor } from '../money/minor';
 import { roundedKm, roundedMinutes, routeBreakdown } from '../planning/route-breakdown';
 import type { Network } from '../network/types';
@@ -105,6 +106,12 @@ export interface RoutesReportStream {
   fullRow(d: number): DepotRouteRow;
   /** One depot's row of the flat table (columns of `routesReportHeader(paths)`), the same as routesReportCells of its row. */
   cells(d: number): (string | number)[];
+  /**
+   * Per column of the flat table: true when every cell `cells` can give in it is plain CSV text
+   * (formatCsvRows' `plainColumns`): numbers, amounts, statuses, and the id, name and reference
+   * columns when every depot id, name or lane reference is `isPlainCsvText`. Worked out on first use.
+   */
+  plainColumns(): readonly boolean[];
 }
 
 // Totals and the lane into each depot, from either kind of solve.
@@ -226,10 +233,14 @@ export function routesReportStream(network: Network, solved: RouteTree | LegLimi
       lane === -1 ? '' : laneRow[lane],
     ];
     const path = paths && reachable ? pathOf(d) : null;
+    // Paths are joined natively (join), not added up one leg at a time: a file of every path writes
+    // hundreds of millions of legs.
     if (paths) {
-      let text = '';
-      if (path) for (let i = 0; i < path.depots.length; i++) text += (i === 0 ? '' : '>') + depotIds[path.depots[i]];
-      row.push(text);
+      if (path) {
+        const ids = new Array<string>(path.depots.length);
+        for (let i = 0; i < ids.length; i++) ids[i] = depotIds[path.depots[i]];
+        row.push(ids.join('>'));
+      } else row.push('');
     }
     if (reachable) {
       row.push(part(totals.toll[d]) ?? '', part(totals.fuel[d]) ?? '', part(totals.fees[d]) ?? '', part(totals.rebate[d]) ?? '');
@@ -238,21 +249,44 @@ export function routesReportStream(network: Network, solved: RouteTree | LegLimi
       row.push('', '', '', '', '', '', '');
     }
     if (paths) {
-      let rows = '';
-      let refs = '';
-      let anyRef = false;
       if (path) {
-        for (let i = 0; i < path.lanes.length; i++) {
+        const rows = new Array<number>(path.lanes.length);
+        let anyRef = false;
+        for (let i = 0; i < rows.length; i++) {
           const e = path.lanes[i];
+          rows[i] = laneRow[e];
           const ref = laneRef[e];
           if (ref !== undefined && ref !== '') anyRef = true;
-          rows += (i === 0 ? '' : '>') + laneRow[e];
-          refs += (i === 0 ? '' : '>') + (ref ?? '');
         }
-      }
-      row.push(rows, anyRef ? refs : '');
+        let refs = '';
+        if (anyRef) {
+          const texts = new Array<string>(rows.length);
+          for (let i = 0; i < texts.length; i++) texts[i] = laneRef[path.lanes[i]] ?? '';
+          refs = texts.join('>');
+        }
+        row.push(rows.join('>'), refs);
+      } else row.push('', '');
     }
     return row;
+  };
+
+  let plain: boolean[] | null = null;
+  const plainColumns = (): readonly boolean[] => {
+    if (plain !== null) return plain;
+    const every = (texts: ArrayLike<string | undefined>) => {
+      for (let i = 0; i < texts.length; i++) {
+        const t = texts[i];
+        if (t !== undefined && t !== '' && !isPlainCsvText(t)) return false;
+      }
+      return true;
+    };
+    const ids = every(depotIds);
+    const names = every(network.depotNames);
+    // id, name, status, cost, legs, via, via_lane [, path], toll ... over_drive_limit [, lane_rows, lane_refs]
+    const head = [ids, names, true, true, true, ids, true];
+    const breakdown = [true, true, true, true, true, true, true];
+    plain = paths ? [...head, ids, ...breakdown, true, every(laneRef)] : [...head, ...breakdown];
+    return plain;
   };
 
   return {
@@ -275,6 +309,7 @@ export function routesReportStream(network: Network, solved: RouteTree | LegLimi
     },
     fullRow,
     cells,
+    plainColumns,
   };
 }
 

@@ -3,10 +3,10 @@
 // paths add up to, and --no-paths / --to rows carry what they should.
 
 import { describe, expect, it } from 'vitest';
-import { parseCsvText } from '../../../engine/io/csv-papaparse';
+import { formatCsvRows, parseCsvText } from '../../../engine/io/csv-papaparse';
 import { routesCsv, routesCsvChunks } from '../../../engine/export/routes-csv';
 import { routesJsonChunks } from '../../../engine/export/routes-json';
-import { routesReport, routesReportStream } from '../../../engine/report/routes-report';
+import { routesReport, routesReportHeader, routesReportStream } from '../../../engine/report/routes-report';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { legLimitedRoutes } from '../../../engine/routes/leg-limited';
 import { routePath } from '../../../engine/routes/route-path';
@@ -106,6 +106,31 @@ describe('routes report stream', () => {
       expect(b.toll_minor! + b.fuel_minor! + b.fees_minor! - b.rebate_minor!).toBe(row.cost_minor);
       expect(row.via_lane).toBe(row.lanes[row.lanes.length - 1]);
       expect(row.lanes.length).toBe(row.legs);
+    }
+  });
+
+  it('writes the same text as the generic writer checking every cell, whatever ids, names and refs hold', () => {
+    // Columns the stream vouches plain skip the per-cell check; a vouch that is wrong would let a
+    // formula or a separator through, so hostile texts are mixed in at random.
+    const hostile = ['-3', '+1', '=cmd', '@x', ' lead', 'trail ', 'a,b', 'a;b', 'q"q', "'x", '12', '-0.5', 'D\u00e9p\u00f4t', 'x>y', ''];
+    for (const seed of [1, 2, 6, 7]) {
+      const base = randomPricedNetwork(seed, 60, 240, seed === 7);
+      const pick = (i: number, plain: string) => ((i * 7 + seed) % 5 === 0 ? hostile[(i + seed) % hostile.length] + i : plain);
+      const net = {
+        ...base,
+        // Seed 6: the origin, which starts every path, is a signed number: plain alone, a formula start in a path.
+        depotIds: base.depotIds.map((id, i) => (seed === 1 ? id : seed === 6 ? (i === 0 ? '-35' : id) : pick(i, id))),
+        depotNames: base.depotNames.map((n, i) => (seed === 2 ? n : pick(i + 1, n))),
+        laneRef: base.laneRef.map((_, e) => (e % 3 === 0 ? undefined : seed === 6 ? `R${e}` : pick(e, `R${e}`))),
+      };
+      const tree = cheapestRoutes(net, 0);
+      for (const paths of [true, false]) {
+        const stream = routesReportStream(net, tree, { driveLimitMinutes: 540, paths });
+        const generic = formatCsvRows([routesReportHeader(paths), ...Array.from(stream.depots, (d) => stream.cells(d))]);
+        expect([...routesCsvChunks(stream, CHUNK)].join('')).toBe(generic);
+      }
+      const plain = routesReportStream(net, tree, { driveLimitMinutes: 540 }).plainColumns();
+      expect(plain[0]).toBe(seed === 1);
     }
   });
 });
