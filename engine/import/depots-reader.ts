@@ -132,7 +132,7 @@ export class DepotsReader extends RecordFileReader {
     if (Number.isNaN(lat) || Number.isNaN(lon) || starts[p.id] === ends[p.id]) return false;
     const id = keptText(text, starts[p.id], ends[p.id]);
     if (id === '' || this.index.has(id)) return false;
-    this.rejectedIds.delete(id);
+    if (this.rejectedIds.size > 0) this.rejectedIds.delete(id);
     let extra: Record<string, string> | null = null;
     for (const u of this.header!.unknown) {
       const value = keptText(text, starts[u.index], ends[u.index]);

@@ -33,13 +33,16 @@ export function buildPlannedNetwork(depots: readonly DepotRecord[], table: LaneT
   const laneNet = new Float64Array(laneCount);
   const laneRow = new Int32Array(laneCount);
   const laneRef: (string | undefined)[] = new Array(laneCount);
+  // One message function for every lane (it reads the row being built), not a closure per lane.
+  let r = 0;
+  const context = () => `net cost of the lane from row ${table.sourceRow[r]}`;
   for (let e = 0; e < laneCount; e++) {
-    const r = c.record[e];
+    r = c.record[e];
     laneFrom[e] = table.from[r];
     laneTo[e] = table.to[r];
     laneFees[e] = table.fees[r];
     laneRebate[e] = table.rebate[r];
-    laneNet[e] = netCost(c.toll[e], c.fuel[e], table.fees[r], table.rebate[r], () => `net cost of the lane from row ${table.sourceRow[r]}`);
+    laneNet[e] = netCost(c.toll[e], c.fuel[e], table.fees[r], table.rebate[r], context);
     laneRow[e] = table.sourceRow[r];
     laneRef[e] = table.ref[r];
   }
