@@ -144,7 +144,8 @@ type ImportBase = Omit<ImportResult, 'network' | 'report' | 'plan'>;
 function planFrom(base: ImportBase, request: PlanRequest, skipInvalid: boolean, lanesFile: string, maxItems: number, network = true): ImportResult {
   const importReport = base.importReport;
   // The stored errors are capped, but the first ones are always kept: none stored means none found.
-  const outcome = planLanes({ ...base, lanesFile }, request, (planErrors) => network && (skipInvalid || (importReport.errors.length === 0 && planErrors === 0)));
+  // The report keeps the first maxItems warnings (the import's first): the plan need make no more.
+  const outcome = planLanes({ ...base, lanesFile, maxWarnings: maxItems }, request, (planErrors) => network && (skipInvalid || (importReport.errors.length === 0 && planErrors === 0)));
   const report = mergeReport(importReport, outcome.errors, outcome.warnings, outcome.rejected, lanesFile, maxItems, outcome.dropped);
   return { ...base, network: outcome.plan.network, report, plan: outcome.plan, notes: [...base.notes, ...outcome.plan.notes] };
 }

@@ -27,6 +27,12 @@ export interface PlanInput {
    * network: the rows a what-if scenario closes. Absent = none.
    */
   leaveOut?: Uint8Array;
+  /**
+   * Warnings past this many are counted (`dropped`), not made: the import's report keeps only its
+   * first `maxItems` anyway, so making the rest (a message each for a million net-negative lanes)
+   * is wasted. Absent = 100,000.
+   */
+  maxWarnings?: number;
 }
 
 export interface PlanOutcome {
@@ -101,6 +107,7 @@ export function plannedRowToll(t: LaneTable, i: number, chosen: number, defaultT
 /** Plans the lanes; builds the network only when `build` says so, given this plan's error count. */
 export function planLanes(input: PlanInput, request: PlanRequest, build: (planErrors: number) => boolean): PlanOutcome {
   const { lanes: t, depots, exponent, currency, lanesFile } = input;
+  const maxWarnings = Math.min(input.maxWarnings ?? MAX_PLAN_ITEMS, MAX_PLAN_ITEMS);
   const settings = planningSettings(request.settings);
   const errors: ValidationItem[] = [];
   const warnings: ValidationItem[] = [];
@@ -224,7 +231,7 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
       continue;
     }
     const net = planned;
-    if (net < 0 && warnings.length >= MAX_PLAN_ITEMS) dropped++;
+    if (net < 0 && warnings.length >= maxWarnings) dropped++;
     else if (net < 0) {
       const f = (v: number) => formatMinor(v as Minor, exponent);
       warnings.push(
