@@ -47,7 +47,7 @@ function buildReference(folder: string): { binary: string | null; why: string } 
 }
 
 function runDriver(family: string, write: string | null): SolverRun {
-  const args = ['--import', 'tsx', DRIVER, family, ...(write ? ['--write', write] : [])];
+  const args = ['--expose-gc', '--import', 'tsx', DRIVER, family, ...(write ? ['--write', write] : [])];
   const child = spawnSync(process.execPath, args, { cwd: root, encoding: 'utf8', maxBuffer: 1 << 24 });
   if (child.status !== 0) throw new Error(`first-call driver failed on ${family}: ${child.stderr}`);
   return JSON.parse(child.stdout.trim().split('\n').pop()!) as SolverRun;
