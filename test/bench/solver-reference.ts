@@ -53,6 +53,17 @@ function runDriver(family: string, write: string | null): SolverRun {
   return JSON.parse(child.stdout.trim().split('\n').pop()!) as SolverRun;
 }
 
+// The solver's functions, as V8's --trace-deopt names them.
+const SOLVER_FUNCTIONS = /<JSFunction (labelCorrect|scanUntilLoop|markUnbounded|markSeeds|takeLoop|enqueue|linkAfter|recordLoop|Labels) /;
+
+/** Deopts of the solver's functions during the first call, from a fresh process run with --trace-deopt (independent of machine load). */
+function firstCallDeopts(family: string): number {
+  const args = ['--expose-gc', '--trace-deopt', '--import', 'tsx', DRIVER, family, '--warm', '0'];
+  const child = spawnSync(process.execPath, args, { cwd: root, encoding: 'utf8', maxBuffer: 1 << 26 });
+  if (child.status !== 0) throw new Error(`first-call driver failed on ${family}: ${child.stderr}`);
+  return child.stdout.split('\n').filter((line) => line.startsWith('[bailout (kind: deopt') && SOLVER_FUNCTIONS.test(line)).length;
+}
+
 function runReference(binary: string, file: string): ReferenceRun {
   const child = spawnSync(binary, [file, String(REFERENCE_RUNS)], { encoding: 'utf8' });
   if (child.status !== 0) throw new Error(`C++ reference failed: ${child.stderr}`);
@@ -72,6 +83,7 @@ export function firstCallFigures(record: (figure: BenchFigure) => void): void {
       const runs: SolverRun[] = [];
       for (let i = 0; i < PROCESSES; i++) runs.push(runDriver(family, i === 0 && binary ? file : null));
       const reference = binary ? runReference(binary, file) : null;
+      const deopts = firstCallDeopts(family);
       rmSync(file, { force: true });
 
       const first = median(runs.map((r) => r.firstMs));
@@ -79,8 +91,11 @@ export function firstCallFigures(record: (figure: BenchFigure) => void): void {
       const warm = median(runs.flatMap((r) => r.warmMs));
       const warmCpu = median(runs.flatMap((r) => r.warmCpuMs));
       const run = runs[0];
-      const sizes = `${run.depots} depots, ${run.lanes} lanes (${run.rebateLanes} with a net rebate); ${run.loops} loop(s) met, ${run.relaxations} relaxations`;
+      const sizes =
+        `${run.depots} depots, ${run.lanes} lanes (${run.rebateLanes} with a net rebate); ${run.loops} loop(s) met, ${run.relaxations} relaxations; ` +
+        `${deopts} deopt(s) of the solver during the first call (--trace-deopt)`;
       const agreeRuns = runs.every((r) => r.checksum === run.checksum);
+      record({ case: `${family}: solver deopts during the first call`, engine: deopts, unit: 'count', note: 'from node --trace-deopt in a fresh process; independent of machine load' });
       if (!reference) {
         record({ case: `${family}: solver first call (fresh process)`, engine: first, unit: 'ms', note: `${sizes}; ${why}` });
         record({ case: `${family}: solver warm median`, engine: warm, unit: 'ms' });
