@@ -210,21 +210,33 @@ function scanUntilLoop(
       if (sv > 2) continue;
       counts[0] += 1;
       if (v === u || nd > 9007199254740991 || nd < -9007199254740991) return p; // Number.MAX_SAFE_INTEGER
-      if (sv === 1) {
-        // Detach v's subtree: its labels are stale now that v gets cheaper. If u is in it, the
-        // tree path v..u plus this lane is a negative loop: the caller takes it from here.
-        const dv = depth[v];
-        let x = next[v];
-        while (depth[x] > dv && x !== root) {
-          if (x === u) return p;
-          state[x] = 2;
-          x = next[x];
-        }
-        // Unlink the run v .. (last descendant); x is the first depot after it.
-        const before = prev[v];
-        next[before] = x;
-        prev[x] = before;
+      // Detach v's subtree: its labels are stale now that v gets cheaper. If u is in it, the tree
+      // path v..u plus this lane is a negative loop: the caller takes it from here.
+      // Every step of this walk runs for every improvement: a depot not in the tree starts (and
+      // stops) at the root, where each store writes back what is there. V8 optimises this loop
+      // from the types each operation has recorded, and on a large network that can happen before
+      // any depot in the tree has improved; an operation with nothing recorded then makes the
+      // optimised code bail out (seen on the random bench families), so none may be skipped.
+      const inTree = sv === 1;
+      const dv = depth[v];
+      const nextV = next[v];
+      let x = inTree ? nextV : root;
+      for (;;) {
+        const sx = state[x];
+        const following = next[x];
+        const deeper = depth[x] > dv;
+        const stop = x === root || !deeper;
+        const atU = x === u;
+        state[x] = stop || atU ? sx : 2;
+        if (stop) break;
+        if (atU) return p;
+        x = following;
       }
+      // Unlink the run v .. (last descendant); x is the first depot after it. Off the tree, x is
+      // the root and this relinks the root to its own predecessor, which changes nothing.
+      const before = prev[inTree ? v : x];
+      next[before] = x;
+      prev[x] = before;
       dist[v] = nd;
       parent[v] = u;
       parentPos[v] = p;
