@@ -1,126 +1,14 @@
 // Speed and memory of the cheapest-routes solve on seeded networks, side by side with a plain
 // Bellman-Ford written here (rounds over every lane, early exit when a round changes nothing), so
 // the figures show what the label-correcting core with subtree disassembly buys on the same machine.
+// First, per family, the core's first call in a fresh process and its warm median beside a C++
+// build of the same algorithm (solver-reference.ts).
 
-import { buildNetwork } from '../../../engine/network/build';
-import type { DepotInput, LaneInput, Network } from '../../../engine/network/types';
-import type { Minor } from '../../../engine/money/minor';
+import type { Network } from '../../../engine/network/types';
 import { cheapestRoutes, STATUS_UNBOUNDED } from '../../../engine/routes/cheapest-routes';
-import { retainedMb, seeded, timeBest, type BenchFigure, type BenchSuite } from '../harness';
-
-interface Generated {
-  network: Network;
-  origin: number;
-}
-
-/** Builds a network from (from, to, net) triples given as parallel arrays; positive nets go to toll, negative to rebate. */
-function compile(depotCount: number, from: Int32Array, to: Int32Array, net: Float64Array): Network {
-  const depots: DepotInput[] = new Array(depotCount);
-  for (let d = 0; d < depotCount; d++) depots[d] = { id: `D${d}`, name: `Depot ${d}`, lat: 0, lon: 0 };
-  const lanes: LaneInput[] = new Array(from.length);
-  const zero = 0 as Minor;
-  for (let e = 0; e < from.length; e++) {
-    const w = net[e];
-    lanes[e] = {
-      from: `D${from[e]}`,
-      to: `D${to[e]}`,
-      toll: (w > 0 ? w : 0) as Minor,
-      fuel: zero,
-      fees: zero,
-      rebate: (w < 0 ? -w : 0) as Minor,
-      sourceRow: e + 2,
-    };
-  }
-  return buildNetwork(depots, lanes);
-}
-
-/**
- * Random sparse network with negative lanes but no negative loop: w = w0 + p(u) - p(v), w0 >= 0
- * (a loop's potentials cancel, so every loop costs sum(w0) >= 0). A ring keeps every depot reachable.
- */
-function randomSparse(depotCount: number, laneCount: number, seed: number): Generated {
-  const rand = seeded(seed);
-  const potential = new Float64Array(depotCount);
-  for (let d = 0; d < depotCount; d++) potential[d] = Math.floor(rand() * 20_000);
-  const from = new Int32Array(laneCount);
-  const to = new Int32Array(laneCount);
-  const net = new Float64Array(laneCount);
-  for (let e = 0; e < laneCount; e++) {
-    const u = e < depotCount ? e : Math.floor(rand() * depotCount);
-    const v = e < depotCount ? (e + 1) % depotCount : Math.floor(rand() * depotCount);
-    from[e] = u;
-    to[e] = v;
-    net[e] = Math.floor(rand() * 10_000) + potential[u] - potential[v];
-  }
-  return { network: compile(depotCount, from, to, net), origin: 0 };
-}
-
-/**
- * Road-like grid: depots on a side x side lattice, lanes both ways to the four neighbours with
- * costs that grow with distance, plus rebates on some lanes (again by potentials, so no loop).
- */
-function roadGrid(side: number, seed: number): Generated {
-  const rand = seeded(seed);
-  const depotCount = side * side;
-  const potential = new Float64Array(depotCount);
-  for (let d = 0; d < depotCount; d++) potential[d] = rand() < 0.1 ? Math.floor(rand() * 3_000) : 0;
-  const from: number[] = [];
-  const to: number[] = [];
-  const net: number[] = [];
-  const lane = (u: number, v: number, base: number) => {
-    from.push(u);
-    to.push(v);
-    net.push(base + potential[u] - potential[v]);
-  };
-  for (let r = 0; r < side; r++) {
-    for (let c = 0; c < side; c++) {
-      const d = r * side + c;
-      if (c + 1 < side) {
-        const base = 800 + Math.floor(rand() * 1_600);
-        lane(d, d + 1, base);
-        lane(d + 1, d, base);
-      }
-      if (r + 1 < side) {
-        const base = 800 + Math.floor(rand() * 1_600);
-        lane(d, d + side, base);
-        lane(d + side, d, base);
-      }
-    }
-  }
-  const centre = Math.floor(side / 2) * side + Math.floor(side / 2);
-  return { network: compile(depotCount, Int32Array.from(from), Int32Array.from(to), Float64Array.from(net)), origin: centre };
-}
-
-/** A loop-free random network plus one three-lane rebate loop (net -1 per lap) reachable from the origin. */
-function withRebateLoop(depotCount: number, laneCount: number, seed: number): Generated {
-  const base = randomSparse(depotCount, laneCount - 3, seed);
-  const n = base.network;
-  const from = Int32Array.from({ length: laneCount }, (_, e) => (e < n.laneCount ? n.laneFrom[e] : 0));
-  const to = Int32Array.from({ length: laneCount }, (_, e) => (e < n.laneCount ? n.laneTo[e] : 0));
-  const net = Float64Array.from({ length: laneCount }, (_, e) => (e < n.laneCount ? n.laneNet[e] : 0));
-  const [a, b, c] = [depotCount >> 1, (depotCount >> 1) + 7, (depotCount >> 1) + 13];
-  const loop: [number, number, number][] = [[a, b, 400], [b, c, 300], [c, a, -701]];
-  loop.forEach(([u, v, w], i) => {
-    const e = n.laneCount + i;
-    from[e] = u;
-    to[e] = v;
-    net[e] = w;
-  });
-  return { network: compile(depotCount, from, to, net), origin: 0 };
-}
-
-/** A rebate loop at depot 0 <-> 1, then a chain of two-depot parts; every tenth part holds a rebate loop. */
-function chainOfPairs(depotCount: number): Network {
-  const from: number[] = [0, 1];
-  const to: number[] = [1, 0];
-  const net: number[] = [500, -600];
-  for (let i = 2; i + 1 < depotCount; i += 2) {
-    from.push(i - 1, i, i + 1);
-    to.push(i, i + 1, i);
-    net.push(100, 300, i % 20 === 2 ? -400 : 300);
-  }
-  return compile(depotCount, Int32Array.from(from), Int32Array.from(to), Float64Array.from(net));
-}
+import { retainedMb, timeBest, type BenchFigure, type BenchSuite } from '../harness';
+import { chainOfPairs, randomSparse, roadGrid, withRebateLoop, type Generated } from '../route-families';
+import { firstCallFigures } from '../solver-reference';
 
 interface BaselineResult {
   dist: Float64Array;
@@ -203,6 +91,9 @@ function compare(record: (f: BenchFigure) => void, label: string, g: Generated, 
 export const suite: BenchSuite = {
   name: 'routes',
   run(record) {
+    // The label-correcting core's first call in a fresh process per family, beside the C++ reference.
+    firstCallFigures(record);
+
     // Memory first, while the heap is clean: the compiled network plus one solved route tree.
     const built = retainedMb(() => {
       const g = randomSparse(100_000, 1_000_000, 11);
