@@ -1,6 +1,6 @@
 // Rebate headroom for every lane, loop-free networks of 5,000 depots / 50,000 lanes and 20,000 /
-// 200,000 (targets 1 s and 10 s): Johnson's reweighting, then a bidirectional Dijkstra per distinct
-// (destination, origin) pair. Baseline in the same run: the previous method, one Dijkstra per
+// 200,000 (targets 1 s and 10 s): Johnson's reweighting, then bucketed balls (a backward ball per lane
+// origin, one forward search per destination). Baseline in the same run: the previous method, one Dijkstra per
 // distinct lane destination stopped at the last origin (headroom-per-destination.ts): run in full at
 // 5k, on a sample of destinations at 20k (a full run takes minutes), scaled to all of them. Every
 // floor the baseline computes is compared with the engine's.
@@ -91,12 +91,12 @@ export const suite: BenchSuite = {
         check = `baseline timed on ${sample.length} of ${depots} destinations and scaled; ${baseline.mismatches} of ${baseline.compared} sampled floors differ`;
       }
       record({
-        case: `${label} (Johnson + bidirectional Dijkstra per lane pair)`,
+        case: `${label} (Johnson + bucketed balls)`,
         engine: engine.ms,
         baseline: baselineMs,
         unit: 'ms',
         target: depots <= 5_000 ? 1_000 : 10_000,
-        note: `${sources} searches settling ${Math.round(settled / Math.max(1, sources))} depots each on average; ${check}; ${progressCalls} progress calls over 2 runs`,
+        note: `${sources} lane pairs, settling ${Math.round(settled / Math.max(1, sources))} depots per pair on average; ${check}; ${progressCalls} progress calls over 2 runs`,
       });
     }
 

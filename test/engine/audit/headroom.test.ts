@@ -88,9 +88,29 @@ describe('rebate headroom', () => {
     expect(unlimited).toBeGreaterThan(50);
   });
 
+  it('equals the reference with balls of 1 to 5 depots, so forward searches run long and pruning decides', () => {
+    // The default ball holds these small networks whole (radius +Infinity); tiny balls make every
+    // answer depend on the stopping rule best(u) <= forward radius + R(u) and on the labels kept out of the heap.
+    for (let seed = 1; seed <= 60; seed++) {
+      const depots = 6 + (seed % 11) * 5;
+      const net = randomNetwork(seed, depots, depots * (2 + (seed % 4)), true, 30 + seed);
+      let weights: Float64Array | undefined;
+      if (seed % 4 === 0) {
+        weights = Float64Array.from(net.outNet);
+        for (let p = 1; p < weights.length; p += 4) weights[p] = Infinity;
+      }
+      const reference = laneFloorsPerDestination(net, { weights });
+      for (const ballSize of [1, 2, 5]) {
+        expect(Array.from(laneFloors(net, { weights, ballSize }).floor), `seed ${seed} ball ${ballSize}`).toEqual(Array.from(reference.floor));
+      }
+    }
+  });
+
   it('equals the reference on a larger sparse network with many rebates', () => {
     const net = randomNetwork(4242, 600, 3_000, true, 5_000);
-    expect(Array.from(laneFloors(net).floor)).toEqual(Array.from(laneFloorsPerDestination(net).floor));
+    const reference = Array.from(laneFloorsPerDestination(net).floor);
+    expect(Array.from(laneFloors(net).floor)).toEqual(reference);
+    expect(Array.from(laneFloors(net, { ballSize: 8 }).floor)).toEqual(reference);
   });
 });
 
