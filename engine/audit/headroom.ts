@@ -18,7 +18,38 @@ export interface HeadroomOptions {
   onProgress?: (done: number, total: number) => void;
   /** Depots per backward ball (headroom-buckets.ts); tests set it small to exercise long searches. */
   ballSize?: number;
+  /** Runs the searches, perhaps over several threads (main/ gives one); default: this thread. */
+  runner?: HeadroomRunner;
 }
+
+/**
+ * Runs a headroom plan's searches: grows the ball of every lane origin (`growBackBalls`), then the
+ * back cost of every pair (`pairCostsOfSlice`), in slices of its choosing. A front end may spread the
+ * slices over threads; every pair's cost depends on nothing else, so the result equals one thread's.
+ */
+export interface HeadroomRunner {
+  run(arrays: HeadroomArrays, ballSize: number, onProgress?: (done: number, total: number) => void): { cost: Float64Array; settled: number };
+}
+
+/** The runner on the calling thread. */
+export const singleThreadRunner: HeadroomRunner = {
+  run(arrays, ballSize, onProgress) {
+    const n = arrays.depotCount;
+    const total = arrays.pairOrigin.length;
+    const workspace = createBucketWorkspace(n);
+    const balls = createBackBalls(n, ballSize);
+    let settled = growBackBalls(arrays, balls, 0, n, workspace);
+    const cost = new Float64Array(total);
+    // Slices of about 1% of the pairs, for progress.
+    for (const [from, to] of destinationSlices(arrays, Math.min(100, total))) {
+      const slice = pairCostsOfSlice(arrays, balls, from, to, workspace);
+      cost.set(slice.cost, arrays.pairStart[from]);
+      settled += slice.settled;
+      onProgress?.(arrays.pairStart[to], total);
+    }
+    return { cost, settled };
+  },
+};
 
 export interface LaneFloors {
   /** Per lane (input order): the lowest safe net in minor units, NaN for "no limit" or a closed lane. */
@@ -146,19 +177,9 @@ export function destinationSlices(arrays: HeadroomArrays, slices: number): [numb
 /** Floors for all lanes. Throws RebateLoopPresentError when the network still has a loop. */
 export function laneFloors(network: Network, options: HeadroomOptions = {}): LaneFloors {
   const plan = headroomPlan(network, options.weights);
-  const { arrays } = plan;
-  const total = arrays.pairOrigin.length;
-  const workspace = createBucketWorkspace(network.depotCount);
-  const balls = createBackBalls(network.depotCount, options.ballSize ?? defaultBallSize(network.depotCount));
+  const total = plan.arrays.pairOrigin.length;
   options.onProgress?.(0, total);
-  let settled = growBackBalls(arrays, balls, 0, network.depotCount, workspace);
-  const cost = new Float64Array(total);
-  // Slices of about 1% of the pairs, for progress.
-  for (const [from, to] of destinationSlices(arrays, Math.min(100, total))) {
-    const slice = pairCostsOfSlice(arrays, balls, from, to, workspace);
-    cost.set(slice.cost, arrays.pairStart[from]);
-    settled += slice.settled;
-    options.onProgress?.(arrays.pairStart[to], total);
-  }
+  const runner = options.runner ?? singleThreadRunner;
+  const { cost, settled } = runner.run(plan.arrays, options.ballSize ?? defaultBallSize(network.depotCount), options.onProgress);
   return { floor: floorsFromPairCosts(network, plan, cost), net: plan.setup.net, sources: total, settled };
 }

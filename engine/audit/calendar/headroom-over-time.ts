@@ -7,7 +7,7 @@
 // joint search settles too many labels per depot to save work.
 
 import type { PeriodNetwork } from './period-networks';
-import { laneFloors } from '../headroom';
+import { laneFloors, type HeadroomRunner } from '../headroom';
 import { covalidFloors } from './covalid-floors';
 import { weightsWithCuts } from './period-weights';
 
@@ -42,7 +42,7 @@ interface FloorState {
 type Maximal = { pn: PeriodNetwork; weights: Float64Array }[];
 
 /** Headroom of every row in every class it is planned in, rows in table order within each class. */
-export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, cut: Float64Array | null, onProgress?: (done: number, total: number) => void): { rows: RowHeadroom[]; work: HeadroomWork } {
+export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, cut: Float64Array | null, onProgress?: (done: number, total: number) => void, runner?: HeadroomRunner): { rows: RowHeadroom[]; work: HeadroomWork } {
   const out: RowHeadroom[] = [];
   const work: HeadroomWork = { together: 0, wholeSolves: 0, destinations: 0, labelSearches: 0 };
   const classes = [...new Set(nets.map((n) => n.vehicleClass))];
@@ -51,7 +51,7 @@ export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, c
     const maximal: Maximal = nets.filter((n) => n.maximal && n.vehicleClass === vehicleClass).map((pn) => ({ pn, weights: weightsWithCuts(pn, cut) }));
     const state: FloorState = { floor: new Float64Array(rows).fill(NaN), net: new Float64Array(rows).fill(NaN), setBy: new Int32Array(rows).fill(-1) };
     if (maximal.length > 1 && maximal.length <= 30 && together(maximal, state, work)) work.together++;
-    else for (const m of maximal) wholeFloors(m.pn, m.weights, state, work);
+    else for (const m of maximal) wholeFloors(m.pn, m.weights, state, work, runner);
     for (let r = 0; r < rows; r++) if (!Number.isNaN(state.net[r])) out.push({ row: r, vehicleClass, net: state.net[r], floor: state.floor[r], setBy: state.setBy[r] });
     onProgress?.(k + 1, classes.length);
   });
@@ -69,8 +69,8 @@ function offer(state: FloorState, r: number, f: number, net: number, period: num
   }
 }
 
-function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState, work: HeadroomWork): void {
-  const floors = laneFloors(pn.network, { weights });
+function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState, work: HeadroomWork, runner: HeadroomRunner | undefined): void {
+  const floors = laneFloors(pn.network, { weights, runner });
   work.wholeSolves++;
   for (let e = 0; e < pn.record.length; e++) offer(state, pn.record[e], floors.floor[e], floors.net[e], pn.periods[0]);
 }

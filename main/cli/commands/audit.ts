@@ -11,6 +11,7 @@ import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadImport, planDateOf } from '../load-network';
 import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
+import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
 
 export const auditCommand: CommandSpec = {
@@ -30,6 +31,7 @@ export const auditCommand: CommandSpec = {
     { name: 'negotiable', value: 'REF,...', help: 'contract references or lane keys (FROM>TO|ref|n) whose rebates may change' },
     { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
     { name: 'progress', help: 'print progress by phase on stderr' },
+    { name: 'threads', value: 'N', help: 'threads for the headroom searches (default: the processors available to this process; 1 = no worker thread)' },
     { name: 'from-date', value: 'YYYY-MM-DD', help: 'calendar review: first day reviewed (default: the earliest date the file names)' },
     { name: 'to-date', value: 'YYYY-MM-DD', help: 'calendar review: last day reviewed (default: the latest date the file names)' },
     { name: 'fix-by', value: 'lane|clause', help: 'calendar review: one cut per lane (default) or one percentage cut per clause' },
@@ -50,6 +52,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
     if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
   }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
+  const threads = wholeNumberOption(args, 'threads', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
   csvDialectOption(args);
@@ -64,17 +67,25 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   let lastLine = '';
   const solveStart = performance.now();
-  const audit = auditNetwork(network, {
-    loopCap,
-    negotiable,
-    laneKeys,
-    onProgress: args.flags.has('progress')
-      ? ({ phase, done, total }) => {
-          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-          if (line !== lastLine) out.warn((lastLine = line));
-        }
-      : undefined,
-  });
+  // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
+  const pool = createHeadroomThreadPool({ threads });
+  let audit: ReturnType<typeof auditNetwork>;
+  try {
+    audit = auditNetwork(network, {
+      loopCap,
+      negotiable,
+      laneKeys,
+      headroomRunner: pool,
+      onProgress: args.flags.has('progress')
+        ? ({ phase, done, total }) => {
+            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+            if (line !== lastLine) out.warn((lastLine = line));
+          }
+        : undefined,
+    });
+  } finally {
+    pool.close();
+  }
   const solveMs = performance.now() - solveStart;
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
