@@ -1,0 +1,123 @@
+// Floors of several period networks of one class at once, from two headroom runs over all lanes
+// and a few narrow ones. Every network N lies between the common core C (lanes every network holds,
+// at the same net) and the union U, so for the back path v -> u of a lane u -> v:
+//   d_U(v, u) <= d_N(v, u) <= d_C(v, u).
+// Where d_U = d_C, every network has that back cost: the lane's floor is settled and every network
+// holding the lane sets it. Only the pairs where a seasonal lane makes the union cheaper (d_U < d_C)
+// are searched again, network by network, for those pairs alone. All runs use the union's Johnson
+// potentials: its reduced costs are >= 0 on every lane, so they serve each network and the core as
+// they are (lanes a network lacks are closed), and each run is the fast headroom search
+// (headroom-buckets.ts) through the caller's runner (one thread, or the CLI's worker threads).
+
+import type { Network } from '../../network/types';
+import { restoreCost } from '../../routes/johnson-potentials';
+import { defaultBallSize, reverseLanes, type HeadroomArrays } from '../headroom-buckets';
+import { headroomPlan, singleThreadRunner, type HeadroomRunner } from '../headroom';
+import { laneSetNetwork } from './lane-set-network';
+import { firstLoop } from './period-weights';
+
+/** Lanes of several networks (at most 30): each at one net, with the bit of every network holding it at that net. */
+export interface MaskedLanes {
+  from: Int32Array;
+  to: Int32Array;
+  net: Float64Array;
+  mask: Int32Array;
+  /** LaneTable row, carried through. */
+  row: Int32Array;
+}
+
+export interface SharedFloors {
+  /** Per masked lane: -(cheapest back path over its networks); NaN when none has one. */
+  floor: Float64Array;
+  /** Per masked lane: the networks (bits) whose back path is that cheapest one (0 when none has a back path). */
+  setIn: Int32Array;
+  /** Distinct (destination, origin) pairs, those a seasonal lane made cheaper, and the per-network runs over them. */
+  pairs: number;
+  openPairs: number;
+  networkRuns: number;
+}
+
+// The plan's arrays with only the lanes `keep` accepts (per CSR position) open, asking only `pairs`.
+function narrowed(network: Network, arrays: HeadroomArrays, keep: (p: number) => boolean, pairs: number[] | null): HeadroomArrays {
+  const outCost = arrays.outCost.slice();
+  for (let p = 0; p < outCost.length; p++) if (!keep(p)) outCost[p] = Infinity;
+  const reverse = reverseLanes(network, outCost);
+  if (pairs === null) return { ...arrays, outCost, inCost: reverse.inCost };
+  const n = arrays.depotCount;
+  const pairStart = new Int32Array(n + 1);
+  const pairOrigin = new Int32Array(pairs.length);
+  // `pairs` are in ascending order, so still grouped by destination.
+  let at = 0;
+  for (let v = 0; v < n; v++) {
+    pairStart[v] = at;
+    while (at < pairs.length && pairs[at] < arrays.pairStart[v + 1]) pairOrigin[at] = arrays.pairOrigin[pairs[at++]];
+  }
+  pairStart[n] = at;
+  return { ...arrays, outCost, inCost: reverse.inCost, pairStart, pairOrigin };
+}
+
+/** Null when the union of the networks has a loop (no common potentials): then solve them one by one. */
+export function sharedFloors(template: Network, lanes: MaskedLanes, networks: number, runner: HeadroomRunner = singleThreadRunner): SharedFloors | null {
+  const union = laneSetNetwork(template, lanes.from, lanes.to, lanes.net, lanes.row);
+  if (firstLoop(union, union.outNet) !== null) return null;
+  const plan = headroomPlan(union);
+  const { arrays, pairOf, setup } = plan;
+  const { inLane, potential } = setup;
+  const ballSize = defaultBallSize(union.depotCount);
+  const m = union.laneCount;
+  const pairs = arrays.pairOrigin.length;
+  let all = 0;
+  for (let e = 0; e < m; e++) all |= lanes.mask[e];
+  const laneAt = union.outLane;
+
+  const inUnion = runner.run(arrays, ballSize).cost;
+  const inCore = runner.run(narrowed(union, arrays, (p) => lanes.mask[laneAt[p]] === all, null), ballSize).cost;
+
+  // Pairs a seasonal lane made cheaper, numbered 0.. in pair order.
+  const openIndex = new Int32Array(pairs).fill(-1);
+  const open: number[] = [];
+  for (let k = 0; k < pairs; k++) if (inUnion[k] < inCore[k]) openIndex[k] = open.length, open.push(k);
+
+  // Per open pair and network: the back cost there (+Infinity where not searched: no lane of the pair in it).
+  const perNetwork = new Float64Array(open.length * networks).fill(Infinity);
+  let networkRuns = 0;
+  for (let bit = 0; bit < networks; bit++) {
+    const asked = new Uint8Array(open.length);
+    for (let i = 0; i < inLane.length; i++) {
+      const j = openIndex[pairOf[i]];
+      if (j !== -1 && lanes.mask[inLane[i]] & (1 << bit)) asked[j] = 1;
+    }
+    const wanted = open.filter((_, j) => asked[j] === 1);
+    if (wanted.length === 0) continue;
+    networkRuns++;
+    const cost = runner.run(narrowed(union, arrays, (p) => (lanes.mask[laneAt[p]] & (1 << bit)) !== 0, wanted), ballSize).cost;
+    wanted.forEach((k, at) => (perNetwork[openIndex[k] * networks + bit] = cost[at]));
+  }
+
+  const floor = new Float64Array(m).fill(NaN);
+  const setIn = new Int32Array(m);
+  for (let i = 0; i < inLane.length; i++) {
+    const e = inLane[i];
+    const k = pairOf[i];
+    const mask = lanes.mask[e];
+    let best = inUnion[k];
+    let bits = mask;
+    const j = openIndex[k];
+    if (j !== -1) {
+      // The cheapest over the lane's own networks, and every network that has it.
+      best = Infinity;
+      bits = 0;
+      for (let bit = 0; bit < networks; bit++) {
+        if (!(mask & (1 << bit))) continue;
+        const c = perNetwork[j * networks + bit];
+        if (c < best) (best = c), (bits = 1 << bit);
+        else if (c === best && c !== Infinity) bits |= 1 << bit;
+      }
+    }
+    if (best === Infinity) continue;
+    const back = restoreCost(best, potential, lanes.to[e], lanes.from[e]);
+    floor[e] = back === 0 ? 0 : -back;
+    setIn[e] = bits;
+  }
+  return { floor, setIn, pairs, openPairs: open.length, networkRuns };
+}
