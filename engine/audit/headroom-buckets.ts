@@ -7,15 +7,18 @@
 //  2. for every destination v, the balls of v's origins are dropped into buckets by depot, and one
 //     forward Dijkstra from v meets them: a label l(w) (settled or not) at a depot w of B(u) offers
 //     l(w) + d(w, u) for the pair (v, u), best(u) the lowest offer.
-// Why it is exact: let L = d(v, u) and F the forward radius (the heap's top key: every depot cheaper
-// than F from v is settled). If L < F + R(u), then on a cheapest route v = w0 .. wk = u take the last
-// wi with d(v, wi) < F (or, when none, wi = v with d(v, u) = L < R(u), so v is in B(u)): wi is settled,
-// so w(i+1) carries the exact label d(v, w(i+1)); either w(i+1) = u, or d(w(i+1), u) = L - d(v, w(i+1))
-// <= L - F < R(u), so w(i+1) is in B(u); the offer there is L. Every offer is a real route, so
-// best(u) >= L always. Hence once best(u) <= F + R(u): were L < best(u), L < F + R(u) and the offer
-// L would have been made, so best(u) = L. The forward search stops when that holds for every origin
-// of v (or its heap is empty: everything v reaches is settled). A pair whose back route is long simply
-// grows the forward ball further, at worst to a plain Dijkstra from v, the previous method.
+// Why it is exact: let L = d(v, u), and F the radius below which every depot is settled: the heap's
+// top key, or the radius still needed (below) if smaller, since labels at or past that are kept out of
+// the heap (their offers are still made). If L < F + R(u), then on a cheapest route v = w0 .. wk = u take
+// the last wi with d(v, wi) < F (or, when none, wi = v with d(v, u) = L < R(u), so v is in B(u)): wi is
+// settled, so w(i+1) got the exact label d(v, w(i+1)) and made its offers; either w(i+1) = u, or
+// d(w(i+1), u) = L - d(v, w(i+1)) <= L - F < R(u), so w(i+1) is in B(u); the offer there is L. Every
+// offer is a real route (as is a known upper bound the search may start from), so best(u) >= L always.
+// Hence once best(u) <= F + R(u): were L < best(u), L < F + R(u) and the offer L would have been made,
+// so best(u) = L. The radius still needed is the largest best(u) - R(u) over v's origins; the forward
+// search stops when the heap's top reaches it (or the heap is empty: everything v reaches is settled).
+// A pair whose back route is long simply grows the forward ball further, at worst to a plain Dijkstra
+// from v, the previous method.
 // Why it is faster: the previous search per pair grew a backward ball per lane; here each origin's
 // ball is grown once for all its lanes, and each destination's forward ball once for all of its.
 // Everything here reads typed arrays only, so slices of destinations can run in other threads.
@@ -37,6 +40,13 @@ export interface HeadroomArrays {
   /** The pairs asked: destination v's are pairStart[v] .. pairStart[v+1]-1, pair k asking for the cheapest v -> pairOrigin[k]. */
   pairStart: Int32Array;
   pairOrigin: Int32Array;
+  /**
+   * Optional, per pair: the cost of some route v -> u known beforehand (an upper bound, +Infinity =
+   * none) and a cost no route is below (a lower bound). The search starts from the first, which
+   * lets it keep labels out of the heap from the start, and stops for a pair that reaches the second.
+   */
+  pairUpper?: Float64Array;
+  pairLower?: Float64Array;
 }
 
 /** The backward balls, `size` entries per depot (depot u's at u * size ..). */
@@ -111,6 +121,7 @@ export interface BucketWorkspace {
   entryDist: Float64Array;
   best: Float64Array;
   radius: Float64Array;
+  lower: Float64Array;
 }
 
 export function createBucketWorkspace(depotCount: number): BucketWorkspace {
@@ -129,6 +140,7 @@ export function createBucketWorkspace(depotCount: number): BucketWorkspace {
     entryDist: new Float64Array(1024),
     best: new Float64Array(16),
     radius: new Float64Array(16),
+    lower: new Float64Array(16),
   };
 }
 
@@ -243,13 +255,16 @@ function grow(ws: BucketWorkspace, entries: number, pairs: number): void {
     const length = Math.max(pairs, ws.best.length * 2);
     ws.best = new Float64Array(length);
     ws.radius = new Float64Array(length);
+    ws.lower = new Float64Array(length);
   }
 }
 
-// The largest best(u) - R(u) over v's pairs: the forward radius the search must reach.
-function needed(best: Float64Array, radius: Float64Array, pairs: number): number {
+// The largest best(u) - R(u) over v's pairs: the forward radius the search must reach. A pair whose
+// best is at its lower bound is done (radius set to +Infinity).
+function needed(best: Float64Array, radius: Float64Array, lower: Float64Array, pairs: number): number {
   let most = -Infinity;
   for (let j = 0; j < pairs; j++) {
+    if (best[j] <= lower[j]) radius[j] = Infinity;
     if (radius[j] === Infinity) continue;
     const need = best[j] === Infinity ? Infinity : best[j] - radius[j];
     if (need > most) most = need;
@@ -259,7 +274,7 @@ function needed(best: Float64Array, radius: Float64Array, pairs: number): number
 
 /** Cheapest reduced cost v -> u for every pair of the destinations `from` .. `to`-1; the balls of their origins must be grown. */
 export function pairCostsOfSlice(a: HeadroomArrays, balls: BackBalls, from: number, to: number, ws: BucketWorkspace): PairCosts {
-  const { outStart, outTo, outCost, pairStart, pairOrigin } = a;
+  const { outStart, outTo, outCost, pairStart, pairOrigin, pairUpper, pairLower } = a;
   const { size, node: ballNode, dist: ballDist, count: ballCount, radius: ballRadius } = balls;
   const offset = pairStart[from];
   const cost = new Float64Array(pairStart[to] - offset);
@@ -273,7 +288,7 @@ export function pairCostsOfSlice(a: HeadroomArrays, balls: BackBalls, from: numb
     mostPairs = Math.max(mostPairs, pairStart[v + 1] - pairStart[v]);
   }
   grow(ws, mostEntries, mostPairs);
-  const { dist, stamp, heap, key, pos, head, headStamp, entryNext, entryPair, entryDist, best, radius } = ws;
+  const { dist, stamp, heap, key, pos, head, headStamp, entryNext, entryPair, entryDist, best, radius, lower } = ws;
   let run = ws.run;
   let settledAll = 0;
   for (let v = from; v < to; v++) {
@@ -285,7 +300,8 @@ export function pairCostsOfSlice(a: HeadroomArrays, balls: BackBalls, from: numb
     let t = 0;
     for (let j = 0; j < pairs; j++) {
       const u = pairOrigin[first + j];
-      best[j] = Infinity;
+      best[j] = pairUpper === undefined ? Infinity : pairUpper[first + j];
+      lower[j] = pairLower === undefined ? -Infinity : pairLower[first + j];
       radius[j] = ballRadius[u];
       const base = u * size;
       for (let i = 0, end = ballCount[u]; i < end; i++) {
@@ -306,11 +322,11 @@ export function pairCostsOfSlice(a: HeadroomArrays, balls: BackBalls, from: numb
     key[0] = 0;
     pos[v] = 0;
     let heapCount = 1;
-    let need = needed(best, radius, pairs);
+    let need = needed(best, radius, lower, pairs);
     let met = false;
     for (;;) {
       if (met) {
-        need = needed(best, radius, pairs);
+        need = needed(best, radius, lower, pairs);
         met = false;
       }
       if (heapCount === 0 || need <= key[0]) break;

@@ -156,6 +156,8 @@ export function createHeadroomThreadPool(options: HeadroomPoolOptions = {}): Hea
           inCost: shared(arrays.inCost),
           pairStart: shared(arrays.pairStart),
           pairOrigin: shared(arrays.pairOrigin),
+          pairUpper: arrays.pairUpper && shared(arrays.pairUpper),
+          pairLower: arrays.pairLower && shared(arrays.pairLower),
         },
         balls: createBackBalls(n, ballSize, (bytes) => new SharedArrayBuffer(bytes)),
         cost: new Float64Array(new SharedArrayBuffer(total * 8)),

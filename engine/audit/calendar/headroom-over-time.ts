@@ -31,6 +31,8 @@ export interface HeadroomWork {
   pairs: number;
   openPairs: number;
   networkRuns: number;
+  /** Depots settled by the headroom searches (a measure of the work, independent of the machine's load). */
+  settled: number;
 }
 
 interface FloorState {
@@ -44,7 +46,7 @@ type Maximal = { pn: PeriodNetwork; weights: Float64Array }[];
 /** Headroom of every row in every class it is planned in, rows in table order within each class. */
 export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, cut: Float64Array | null, onProgress?: (done: number, total: number) => void, runner?: HeadroomRunner): { rows: RowHeadroom[]; work: HeadroomWork } {
   const out: RowHeadroom[] = [];
-  const work: HeadroomWork = { together: 0, wholeSolves: 0, pairs: 0, openPairs: 0, networkRuns: 0 };
+  const work: HeadroomWork = { together: 0, wholeSolves: 0, pairs: 0, openPairs: 0, networkRuns: 0, settled: 0 };
   const classes = [...new Set(nets.map((n) => n.vehicleClass))];
   onProgress?.(0, classes.length);
   classes.forEach((vehicleClass, k) => {
@@ -72,6 +74,7 @@ function offer(state: FloorState, r: number, f: number, net: number, period: num
 function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState, work: HeadroomWork, runner: HeadroomRunner | undefined): void {
   const floors = laneFloors(pn.network, { weights, runner });
   work.wholeSolves++;
+  work.settled += floors.settled ?? 0;
   for (let e = 0; e < pn.record.length; e++) offer(state, pn.record[e], floors.floor[e], floors.net[e], pn.periods[0]);
 }
 
@@ -112,6 +115,7 @@ function together(maximal: Maximal, state: FloorState, work: HeadroomWork, runne
   work.pairs += found.pairs;
   work.openPairs += found.openPairs;
   work.networkRuns += found.networkRuns;
+  work.settled += found.settled;
   const earliest = (bits: number) => {
     let period = Infinity;
     maximal.forEach(({ pn }, bit) => {

@@ -35,14 +35,17 @@ export interface SharedFloors {
   pairs: number;
   openPairs: number;
   networkRuns: number;
+  /** Depots settled by all the runs. */
+  settled: number;
 }
 
-// The plan's arrays with only the lanes `keep` accepts (per CSR position) open, asking only `pairs`.
-function narrowed(network: Network, arrays: HeadroomArrays, keep: (p: number) => boolean, pairs: number[] | null): HeadroomArrays {
+// The plan's arrays with only the lanes `keep` accepts (per CSR position) open, asking only `pairs`
+// (all when null), with known bounds on each pair's cost (per pair of the plan).
+function narrowed(network: Network, arrays: HeadroomArrays, keep: (p: number) => boolean, pairs: number[] | null, upper: Float64Array | undefined, lower: Float64Array | undefined): HeadroomArrays {
   const outCost = arrays.outCost.slice();
   for (let p = 0; p < outCost.length; p++) if (!keep(p)) outCost[p] = Infinity;
   const reverse = reverseLanes(network, outCost);
-  if (pairs === null) return { ...arrays, outCost, inCost: reverse.inCost };
+  if (pairs === null) return { ...arrays, outCost, inCost: reverse.inCost, pairUpper: upper, pairLower: lower };
   const n = arrays.depotCount;
   const pairStart = new Int32Array(n + 1);
   const pairOrigin = new Int32Array(pairs.length);
@@ -53,7 +56,8 @@ function narrowed(network: Network, arrays: HeadroomArrays, keep: (p: number) =>
     while (at < pairs.length && pairs[at] < arrays.pairStart[v + 1]) pairOrigin[at] = arrays.pairOrigin[pairs[at++]];
   }
   pairStart[n] = at;
-  return { ...arrays, outCost, inCost: reverse.inCost, pairStart, pairOrigin };
+  const pick = (bound: Float64Array) => Float64Array.from(pairs, (k) => bound[k]);
+  return { ...arrays, outCost, inCost: reverse.inCost, pairStart, pairOrigin, pairUpper: upper && pick(upper), pairLower: lower && pick(lower) };
 }
 
 /** Null when the union of the networks has a loop (no common potentials): then solve them one by one. */
@@ -70,8 +74,13 @@ export function sharedFloors(template: Network, lanes: MaskedLanes, networks: nu
   for (let e = 0; e < m; e++) all |= lanes.mask[e];
   const laneAt = union.outLane;
 
-  const inUnion = runner.run(arrays, ballSize).cost;
-  const inCore = runner.run(narrowed(union, arrays, (p) => lanes.mask[laneAt[p]] === all, null), ballSize).cost;
+  const union1 = runner.run(arrays, ballSize);
+  const inUnion = union1.cost;
+  let settled = union1.settled;
+  // The union's cost is a lower bound for the core's (and every network's); the core's an upper bound for every network's.
+  const core = runner.run(narrowed(union, arrays, (p) => lanes.mask[laneAt[p]] === all, null, undefined, inUnion), ballSize);
+  const inCore = core.cost;
+  settled += core.settled;
 
   // Pairs a seasonal lane made cheaper, numbered 0.. in pair order.
   const openIndex = new Int32Array(pairs).fill(-1);
@@ -90,7 +99,9 @@ export function sharedFloors(template: Network, lanes: MaskedLanes, networks: nu
     const wanted = open.filter((_, j) => asked[j] === 1);
     if (wanted.length === 0) continue;
     networkRuns++;
-    const cost = runner.run(narrowed(union, arrays, (p) => (lanes.mask[laneAt[p]] & (1 << bit)) !== 0, wanted), ballSize).cost;
+    const run = runner.run(narrowed(union, arrays, (p) => (lanes.mask[laneAt[p]] & (1 << bit)) !== 0, wanted, inCore, inUnion), ballSize);
+    const cost = run.cost;
+    settled += run.settled;
     wanted.forEach((k, at) => (perNetwork[openIndex[k] * networks + bit] = cost[at]));
   }
 
@@ -119,5 +130,5 @@ export function sharedFloors(template: Network, lanes: MaskedLanes, networks: nu
     floor[e] = back === 0 ? 0 : -back;
     setIn[e] = bits;
   }
-  return { floor, setIn, pairs, openPairs: open.length, networkRuns };
+  return { floor, setIn, pairs, openPairs: open.length, networkRuns, settled };
 }
