@@ -73,7 +73,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
     out.writeFile(reportPath, calendarReviewHtml(report, { files, exponent, madeAt: new Date().toISOString().slice(0, 16) + 'Z' }));
   }
   if (args.flags.has('timings')) {
-    out.timing({ read_ms: readMs, audit_ms: solveMs, periods: report.work.periods, networks: report.work.networks, maximal_networks: report.work.maximal_networks, lanes: imported.lanes.count });
+    out.timing({ read_ms: readMs, audit_ms: solveMs, periods: report.work.periods, networks: report.work.networks, maximal_networks: report.work.maximal_networks, lanes: imported.lanes.count, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });
   }
 
   if (report.loops.length > 0) {
