@@ -209,6 +209,13 @@ export function growBackBalls(a: HeadroomArrays, balls: BackBalls, from: number,
     let heapCount = 1;
     let settled = 0;
     const base = u * size;
+    // Once `size` depots carry labels, none cheaper than the largest of their first labels (`cap`) can
+    // be left out of the ball's `size` nearest, so a new label above `cap` is not kept (labels only
+    // drop, so the bound stays true). Every depot up to `cap` is still searched exactly, hence the
+    // radius below is at most `cap`. This keeps the heap near `size` entries instead of ten times that.
+    let labelled = 1;
+    let firstMost = 0;
+    let cap = Infinity;
     while (heapCount > 0 && settled < size) {
       const x = heap[0];
       const dx = key[0];
@@ -225,15 +232,19 @@ export function growBackBalls(a: HeadroomArrays, balls: BackBalls, from: number,
           dist[y] = nd;
           siftUp(heap, key, pos, pos[y], y, nd);
         } else {
+          if (nd > cap) continue;
           if (nd > MAX) throw new MoneyOverflowError('route cost in headroom search');
           stamp[y] = run;
           dist[y] = nd;
           siftUp(heap, key, pos, heapCount++, y, nd);
+          if (nd > firstMost) firstMost = nd;
+          if (++labelled === size) cap = firstMost;
         }
       }
     }
     count[u] = settled;
-    radius[u] = heapCount > 0 ? key[0] : Infinity;
+    const top = heapCount > 0 ? key[0] : Infinity;
+    radius[u] = top < cap ? top : cap;
     settledAll += settled;
   }
   return settledAll;
