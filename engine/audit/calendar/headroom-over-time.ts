@@ -110,7 +110,7 @@ function together(maximal: Maximal, state: FloorState, work: HeadroomWork, runne
     net: Float64Array.from(net),
     mask: Int32Array.from(mask),
     row: Int32Array.from(row),
-  }, maximal.length, runner);
+  }, maximal.length, maximal.map((_, bit) => bit).sort((a, b) => maximal[a].pn.periods[0] - maximal[b].pn.periods[0]), runner);
   if (found === null) return false;
   work.pairs += found.pairs;
   work.openPairs += found.openPairs;

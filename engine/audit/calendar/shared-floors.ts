@@ -29,7 +29,7 @@ export interface MaskedLanes {
 export interface SharedFloors {
   /** Per masked lane: -(cheapest back path over its networks); NaN when none has one. */
   floor: Float64Array;
-  /** Per masked lane: the networks (bits) whose back path is that cheapest one (0 when none has a back path). */
+  /** Per masked lane: networks (bits) whose back path is that cheapest one, the earliest of them always among them (0 when none has a back path). */
   setIn: Int32Array;
   /** Distinct (destination, origin) pairs, those a seasonal lane made cheaper, and the per-network runs over them. */
   pairs: number;
@@ -60,8 +60,11 @@ function narrowed(network: Network, arrays: HeadroomArrays, keep: (p: number) =>
   return { ...arrays, outCost, inCost: reverse.inCost, pairStart, pairOrigin, pairUpper: upper && pick(upper), pairLower: lower && pick(lower) };
 }
 
-/** Null when the union of the networks has a loop (no common potentials): then solve them one by one. */
-export function sharedFloors(template: Network, lanes: MaskedLanes, networks: number, runner: HeadroomRunner = singleThreadRunner): SharedFloors | null {
+/**
+ * `order`: the networks (bits) earliest period first; null when the union of the networks has a loop
+ * (no common potentials): then solve them one by one.
+ */
+export function sharedFloors(template: Network, lanes: MaskedLanes, networks: number, order: readonly number[], runner: HeadroomRunner = singleThreadRunner): SharedFloors | null {
   const union = laneSetNetwork(template, lanes.from, lanes.to, lanes.net, lanes.row);
   if (firstLoop(union, union.outNet) !== null) return null;
   const plan = headroomPlan(union);
@@ -87,22 +90,41 @@ export function sharedFloors(template: Network, lanes: MaskedLanes, networks: nu
   const open: number[] = [];
   for (let k = 0; k < pairs; k++) if (inUnion[k] < inCore[k]) openIndex[k] = open.length, open.push(k);
 
-  // Per open pair and network: the back cost there (+Infinity where not searched: no lane of the pair in it).
+  // A pair whose lanes all lie in the same networks ("uniform", nearly all) needs only the cheapest
+  // over them and the earliest network that has it: the networks run in period order, each starting
+  // from the cheapest found so far (the search then gives min(that, its own cost), see the exactness
+  // argument in headroom-buckets.ts), and a pair already at the union's cost is asked no more.
+  // Other pairs (a lane and a seasonal twin between the same depots) keep every network's own cost.
+  const uniform = new Uint8Array(pairs).fill(1);
+  const pairMask = new Int32Array(pairs).fill(-1);
+  for (let i = 0; i < inLane.length; i++) {
+    const k = pairOf[i];
+    const mask = lanes.mask[inLane[i]];
+    if (pairMask[k] === -1) pairMask[k] = mask;
+    else if (pairMask[k] !== mask) uniform[k] = 0;
+  }
+  const upper = inCore.slice();
+  const achiever = new Int32Array(open.length).fill(-1);
+  // Per open non-uniform pair and network: the back cost there (+Infinity where not searched: no lane of the pair in it).
   const perNetwork = new Float64Array(open.length * networks).fill(Infinity);
   let networkRuns = 0;
-  for (let bit = 0; bit < networks; bit++) {
+  for (const bit of order) {
     const asked = new Uint8Array(open.length);
     for (let i = 0; i < inLane.length; i++) {
       const j = openIndex[pairOf[i]];
       if (j !== -1 && lanes.mask[inLane[i]] & (1 << bit)) asked[j] = 1;
     }
-    const wanted = open.filter((_, j) => asked[j] === 1);
+    const wanted = open.filter((k, j) => asked[j] === 1 && !(uniform[k] && upper[k] <= inUnion[k]));
     if (wanted.length === 0) continue;
     networkRuns++;
-    const run = runner.run(narrowed(union, arrays, (p) => (lanes.mask[laneAt[p]] & (1 << bit)) !== 0, wanted, inCore, inUnion), ballSize);
+    const run = runner.run(narrowed(union, arrays, (p) => (lanes.mask[laneAt[p]] & (1 << bit)) !== 0, wanted, upper, inUnion), ballSize);
     const cost = run.cost;
     settled += run.settled;
-    wanted.forEach((k, at) => (perNetwork[openIndex[k] * networks + bit] = cost[at]));
+    wanted.forEach((k, at) => {
+      const j = openIndex[k];
+      if (!uniform[k]) perNetwork[j * networks + bit] = cost[at];
+      else if (cost[at] < upper[k]) (upper[k] = cost[at]), (achiever[j] = bit);
+    });
   }
 
   const floor = new Float64Array(m).fill(NaN);
@@ -114,7 +136,11 @@ export function sharedFloors(template: Network, lanes: MaskedLanes, networks: nu
     let best = inUnion[k];
     let bits = mask;
     const j = openIndex[k];
-    if (j !== -1) {
+    if (j !== -1 && uniform[k]) {
+      // No network below the core's cost: every one of the lane's networks has it.
+      best = upper[k];
+      bits = achiever[j] === -1 ? mask : 1 << achiever[j];
+    } else if (j !== -1) {
       // The cheapest over the lane's own networks, and every network that has it.
       best = Infinity;
       bits = 0;
