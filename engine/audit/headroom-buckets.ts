@@ -147,18 +147,22 @@ export function createBucketWorkspace(depotCount: number): BucketWorkspace {
   };
 }
 
-// The heap (a binary min-heap of depots with a position index, so a key can drop in place) is written
-// here rather than imported: it runs millions of times per audit and is kept beside its callers.
+// The heap (a 4-ary min-heap of depots with a position index, so a key can drop in place) is written
+// here rather than imported: it runs millions of times per audit and is kept beside its callers. Four
+// children per node: a shallower heap for the many key drops; measured 8 % less CPU than a binary one
+// on the 5k/50k bench network (1.07-1.09 s against 1.17-1.22 s, alternating runs).
 /** Removes the top of a heap of `count + 1` entries (call with the count already decremented, >= 1) and sifts the last entry down. */
 function siftDownFromTop(heap: Int32Array, key: Float64Array, pos: Int32Array, count: number): void {
   const last = heap[count];
   const lastKey = key[count];
   let at = 0;
   for (;;) {
-    let child = 2 * at + 1;
-    if (child >= count) break;
+    const firstChild = 4 * at + 1;
+    if (firstChild >= count) break;
+    let child = firstChild;
     let childKey = key[child];
-    if (child + 1 < count && key[child + 1] < childKey) childKey = key[++child];
+    const end = firstChild + 4 < count ? firstChild + 4 : count;
+    for (let c = firstChild + 1; c < end; c++) if (key[c] < childKey) (childKey = key[c]), (child = c);
     if (childKey >= lastKey) break;
     const moved = heap[child];
     heap[at] = moved;
@@ -174,7 +178,7 @@ function siftDownFromTop(heap: Int32Array, key: Float64Array, pos: Int32Array, c
 /** Moves depot d with key k up from heap position `at` (a new last slot, or its slot after its key dropped). */
 function siftUp(heap: Int32Array, key: Float64Array, pos: Int32Array, at: number, d: number, k: number): void {
   while (at > 0) {
-    const parentAt = (at - 1) >> 1;
+    const parentAt = (at - 1) >> 2;
     const parentKey = key[parentAt];
     if (parentKey <= k) break;
     const parent = heap[parentAt];
