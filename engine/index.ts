@@ -21,6 +21,7 @@ export * from './audit/loop-reach';
 export * from './audit/neutralise';
 export * from './audit/fix-plan';
 export * from './audit/headroom';
+export * from './audit/headroom-buckets';
 export * from './audit/network-audit';
 export * from './report/audit-report';
 export { reviewCalendar, type CalendarReview, type CalendarReviewOptions, type CalendarPhase } from './audit/calendar/calendar-review';

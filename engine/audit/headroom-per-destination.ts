@@ -1,7 +1,7 @@
 // Rebate headroom by one Dijkstra per distinct lane destination (Johnson's reweighting first),
 // stopped once the origins of that destination's incoming lanes are settled. On a sparse network the
 // last of those origins is usually far away, so each run settles most depots and the whole method
-// grows as about depots x depots. Kept as the reference the bidirectional method in headroom.ts is
+// grows as about depots x depots. Kept as the reference the bucketed method in headroom.ts is
 // tested and benched against.
 
 import type { Network } from '../network/types';

@@ -1,13 +1,14 @@
 // Rebate headroom for every lane: the lowest net cost a lane u -> v can carry before some loop
 // through it pays, given all other lanes, is -(cheapest cost from v back to u); with no way back
-// there is no limit. One label-correcting solve gives Johnson's potentials; then each distinct
-// (v, u) pair gets a bidirectional Dijkstra on the reweighted costs (the forward ball from v shared by
-// all of v's origins), which settles two small balls around v and u instead of most of the network
-// (a Dijkstra per destination, kept in headroom-per-destination.ts as the reference, has to reach
-// the farthest origin of any lane into v).
+// there is no limit. One label-correcting solve gives Johnson's potentials; then the back cost of
+// every distinct (v, u) pair comes from bucketed balls on the reweighted costs (headroom-buckets.ts):
+// a small backward ball per lane origin, grown once, and one forward search per destination that
+// stops as soon as it has met the balls of all its origins exactly. The work is cut into slices of
+// destinations (pure, typed arrays only) so front ends can spread them over threads. A Dijkstra per
+// destination, kept in headroom-per-destination.ts as the reference, has to reach the farthest origin.
 
 import type { Network } from '../network/types';
-import { createBidirectionalWorkspace, reverseLanes, searchTo, startForward } from '../routes/bidirectional-dijkstra';
+import { createBackBalls, createBucketWorkspace, defaultBallSize, growBackBalls, pairCostsOfSlice, reverseLanes, type HeadroomArrays } from './headroom-buckets';
 import { johnsonReweighting, restoreCost } from '../routes/johnson-potentials';
 
 export interface HeadroomOptions {
@@ -15,7 +16,40 @@ export interface HeadroomOptions {
   weights?: Float64Array;
   /** Called with (searches done, searches to run); the total is given first, with 0 done. */
   onProgress?: (done: number, total: number) => void;
+  /** Depots per backward ball (headroom-buckets.ts); tests set it small to exercise long searches. */
+  ballSize?: number;
+  /** Runs the searches, perhaps over several threads (main/ gives one); default: this thread. */
+  runner?: HeadroomRunner;
 }
+
+/**
+ * Runs a headroom plan's searches: grows the ball of every lane origin (`growBackBalls`), then the
+ * back cost of every pair (`pairCostsOfSlice`), in slices of its choosing. A front end may spread the
+ * slices over threads; every pair's cost depends on nothing else, so the result equals one thread's.
+ */
+export interface HeadroomRunner {
+  run(arrays: HeadroomArrays, ballSize: number, onProgress?: (done: number, total: number) => void): { cost: Float64Array; settled: number };
+}
+
+/** The runner on the calling thread. */
+export const singleThreadRunner: HeadroomRunner = {
+  run(arrays, ballSize, onProgress) {
+    const n = arrays.depotCount;
+    const total = arrays.pairOrigin.length;
+    const workspace = createBucketWorkspace(n);
+    const balls = createBackBalls(n, ballSize);
+    let settled = growBackBalls(arrays, balls, 0, n, workspace);
+    const cost = new Float64Array(total);
+    // Slices of about 1% of the pairs, for progress.
+    for (const [from, to] of destinationSlices(arrays, Math.min(100, total))) {
+      const slice = pairCostsOfSlice(arrays, balls, from, to, workspace);
+      cost.set(slice.cost, arrays.pairStart[from]);
+      settled += slice.settled;
+      onProgress?.(arrays.pairStart[to], total);
+    }
+    return { cost, settled };
+  },
+};
 
 export interface LaneFloors {
   /** Per lane (input order): the lowest safe net in minor units, NaN for "no limit" or a closed lane. */
@@ -60,51 +94,92 @@ export function headroomSetup(network: Network, weights: Float64Array = network.
   return { potential, reweighted, net, inStart, inLane };
 }
 
-/** Floors for all lanes. Throws RebateLoopPresentError when the network still has a loop. */
-export function laneFloors(network: Network, options: HeadroomOptions = {}): LaneFloors {
-  const n = network.depotCount;
-  const { potential, reweighted, net, inStart, inLane } = headroomSetup(network, options.weights);
-  const reverse = reverseLanes(network, reweighted);
-  const floor = new Float64Array(network.laneCount).fill(NaN);
-  const workspace = createBidirectionalWorkspace(n);
+/** The searches headroom runs on a network: typed arrays for the slice function, and the lanes each pair answers for. */
+export interface HeadroomPlan {
+  setup: HeadroomSetup;
+  arrays: HeadroomArrays;
+  /** Per position i of setup.inLane: the pair whose back cost gives that lane's floor. */
+  pairOf: Int32Array;
+}
 
-  // Distinct (destination, origin) pairs: parallel lanes need one search between them.
+/** Distinct (destination, origin) pairs by destination (parallel lanes need one search between them) and the reverse lanes. */
+export function headroomPlan(network: Network, weights: Float64Array = network.outNet): HeadroomPlan {
+  const n = network.depotCount;
+  const setup = headroomSetup(network, weights);
+  const { reweighted, inStart, inLane } = setup;
   const pairOf = new Int32Array(inLane.length);
   const lastPairAt = new Int32Array(n).fill(-1);
-  const pairOrigin: number[] = [];
-  const pairDestination: number[] = [];
+  const pairStart = new Int32Array(n + 1);
+  const pairOrigin = new Int32Array(inLane.length);
+  let pairs = 0;
   for (let v = 0; v < n; v++) {
+    pairStart[v] = pairs;
     for (let i = inStart[v]; i < inStart[v + 1]; i++) {
       const u = network.laneFrom[inLane[i]];
       const seen = lastPairAt[u];
-      if (seen !== -1 && pairDestination[seen] === v) {
+      if (seen !== -1 && seen >= pairStart[v]) {
         pairOf[i] = seen;
         continue;
       }
-      lastPairAt[u] = pairOrigin.length;
-      pairOf[i] = pairOrigin.length;
-      pairOrigin.push(u);
-      pairDestination.push(v);
+      lastPairAt[u] = pairs;
+      pairOf[i] = pairs;
+      pairOrigin[pairs++] = u;
     }
   }
-  const total = pairOrigin.length;
-  const back = new Float64Array(total);
-  let settled = 0;
-  const every = Math.max(1, Math.floor(total / 100));
-  options.onProgress?.(0, total);
-  for (let k = 0; k < total; k++) {
-    // floor(u -> v) = -(cheapest v -> u): search from the lane's destination back to its origin. The
-    // pairs come grouped by destination, so its forward ball is grown once for all its origins.
-    if (k === 0 || pairDestination[k] !== pairDestination[k - 1]) startForward(workspace, pairDestination[k]);
-    back[k] = searchTo(network, reweighted, reverse, pairOrigin[k], workspace);
-    settled += workspace.settled;
-    if ((k + 1) % every === 0 || k + 1 === total) options.onProgress?.(k + 1, total);
-  }
+  pairStart[n] = pairs;
+  const reverse = reverseLanes(network, reweighted);
+  const arrays: HeadroomArrays = {
+    depotCount: n,
+    outStart: network.outStart,
+    outTo: network.outTo,
+    outCost: reweighted,
+    inStart: reverse.inStart,
+    inFrom: reverse.inFrom,
+    inCost: reverse.inCost,
+    pairStart,
+    pairOrigin: pairOrigin.slice(0, pairs),
+  };
+  return { setup, arrays, pairOf };
+}
+
+/** Floors from the back cost of every pair (as pairCostsOfSlice gives them, all slices in order). */
+export function floorsFromPairCosts(network: Network, plan: HeadroomPlan, cost: Float64Array): Float64Array {
+  const { setup, arrays, pairOf } = plan;
+  const floor = new Float64Array(network.laneCount).fill(NaN);
+  const { inLane } = setup;
   for (let i = 0; i < inLane.length; i++) {
     const k = pairOf[i];
-    if (back[k] === Infinity) continue;
-    const cost = restoreCost(back[k], potential, pairDestination[k], pairOrigin[k]);
-    floor[inLane[i]] = cost === 0 ? 0 : -cost;
+    if (cost[k] === Infinity) continue;
+    const e = inLane[i];
+    const back = restoreCost(cost[k], setup.potential, network.laneTo[e], arrays.pairOrigin[k]);
+    floor[e] = back === 0 ? 0 : -back;
   }
-  return { floor, net, sources: total, settled };
+  return floor;
+}
+
+/** Destination ranges [from, to) holding about `pairs` pairs each, the slices handed to searches or threads. */
+export function destinationSlices(arrays: HeadroomArrays, slices: number): [number, number][] {
+  const n = arrays.depotCount;
+  const total = arrays.pairStart[n];
+  const out: [number, number][] = [];
+  let from = 0;
+  for (let s = 1; s <= slices && from < n; s++) {
+    const goal = Math.ceil((total * s) / slices);
+    let to = from;
+    while (to < n && (arrays.pairStart[to] < goal || to === from)) to++;
+    if (s === slices) to = n;
+    out.push([from, to]);
+    from = to;
+  }
+  return out;
+}
+
+/** Floors for all lanes. Throws RebateLoopPresentError when the network still has a loop. */
+export function laneFloors(network: Network, options: HeadroomOptions = {}): LaneFloors {
+  const plan = headroomPlan(network, options.weights);
+  const total = plan.arrays.pairOrigin.length;
+  options.onProgress?.(0, total);
+  const runner = options.runner ?? singleThreadRunner;
+  const { cost, settled } = runner.run(plan.arrays, options.ballSize ?? defaultBallSize(network.depotCount), options.onProgress);
+  return { floor: floorsFromPairCosts(network, plan, cost), net: plan.setup.net, sources: total, settled };
 }

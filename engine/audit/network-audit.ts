@@ -6,7 +6,7 @@ import type { Network } from '../network/types';
 import { laneKeysOf, laneKeyText, type LaneKey } from '../import/lane-key';
 import { DEFAULT_LOOP_MEMORY_BOUND, DEFAULT_LOOP_WORK_BUDGET, findDistinctLoops, type LoopSearchStop } from './distinct-loops';
 import { buildFixPlan, type FixPlan } from './fix-plan';
-import { laneFloors, type LaneFloors } from './headroom';
+import { laneFloors, type HeadroomRunner, type LaneFloors } from './headroom';
 import { reachableFrom } from './loop-reach';
 import { neutralisers, type LaneNeutraliser } from './neutralise';
 import type { RebateLoop } from '../routes/rebate-loop';
@@ -26,6 +26,8 @@ export interface AuditOptions {
    * `overlayKeys(imported)[plan.laneRecord[e]]`); default: counted over the network's own lanes.
    */
   laneKeys?: readonly LaneKey[];
+  /** Runs the headroom searches (e.g. over worker threads); default: the calling thread. */
+  headroomRunner?: HeadroomRunner;
   onProgress?: (progress: { phase: AuditPhase; done: number; total: number }) => void;
 }
 
@@ -84,7 +86,7 @@ export function auditNetwork(network: Network, options: AuditOptions = {}): Netw
     weights = fixPlan.weights;
   }
   const headroom =
-    fixPlan && !fixPlan.verified ? null : laneFloors(network, { weights, onProgress: (done, total) => report?.({ phase: 'headroom', done, total }) });
+    fixPlan && !fixPlan.verified ? null : laneFloors(network, { weights, runner: options.headroomRunner, onProgress: (done, total) => report?.({ phase: 'headroom', done, total }) });
   const loopSearch = { stoppedBy: distinct.stoppedBy, cap, searches: distinct.searches, work: distinct.work, workBudget, memoryBound };
   return { loops, loopCapReached: distinct.capReached, loopSearch, fixPlan, headroom, headroomAfterFixPlan: fixPlan !== null, negotiable, negotiableUnmatched: unmatched };
 }

@@ -69,7 +69,8 @@ export async function buildCli(outDir: string = CLI_OUT_DIR): Promise<CliBuild> 
   mkdirSync(outDir, { recursive: true });
   const result = await build({
     absWorkingDir: REPO_ROOT,
-    entryPoints: { run: path.join(REPO_ROOT, 'main/cli/run.ts') },
+    // The headroom worker thread's entry sits beside run.mjs, where main/headroom-threads/pool.ts looks for it.
+    entryPoints: { run: path.join(REPO_ROOT, 'main/cli/run.ts'), 'headroom-worker': path.join(REPO_ROOT, 'main/headroom-threads/worker.ts') },
     bundle: true,
     splitting: true,
     format: 'esm',

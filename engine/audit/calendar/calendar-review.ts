@@ -11,6 +11,7 @@ import type { ImportResult } from '../../planning/import-types';
 import { clauseFixPlan } from './clause-fix-plan';
 import { clauseTable, type ClauseRow } from './clause-table';
 import { daysInRange } from './days';
+import type { HeadroomRunner } from '../headroom';
 import { headroomOverTime, type HeadroomWork, type RowHeadroom } from './headroom-over-time';
 import { laneFixPlan, verifyCuts, type CalendarFixPlan } from './lane-fix-plan';
 import { loopsOverTime, type CalendarLoop, type LoopsOverTime } from './loops-over-time';
@@ -36,6 +37,8 @@ export interface CalendarReviewOptions {
   maxPeriods?: number;
   /** Most feasibility checks of the clause plan (default 4,000). */
   clauseBudget?: number;
+  /** Runs the headroom searches (e.g. over worker threads); default: the calling thread. */
+  headroomRunner?: HeadroomRunner;
   onProgress?: (progress: { phase: CalendarPhase; done: number; total: number }) => void;
 }
 
@@ -90,7 +93,7 @@ export function reviewCalendar(result: ImportResult, options: CalendarReviewOpti
     fixPlan.verified = fixPlan.unfixable.length === 0 && fixPlan.changes.length > 0 && verifyCuts(table, networks, fixPlan.cut);
   }
   const floors =
-    fixPlan && !fixPlan.verified ? null : headroomOverTime(networks, table.count, fixPlan?.cut ?? null, (done, total) => progress?.({ phase: 'headroom', done, total }));
+    fixPlan && !fixPlan.verified ? null : headroomOverTime(networks, table.count, fixPlan?.cut ?? null, (done, total) => progress?.({ phase: 'headroom', done, total }), options.headroomRunner);
   return {
     window,
     periods,

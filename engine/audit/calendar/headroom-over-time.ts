@@ -1,14 +1,13 @@
 // Rebate headroom over the calendar: a row's floor is the highest of its one-period floors (the
 // lowest net that is safe in every period it is valid in), and the period with that floor sets it.
 // A covered network's back paths all exist, no dearer, in its cover, so only the maximal networks
-// count. One maximal network: the one-network headroom (engine/audit/headroom.ts). Several: one
-// search per destination over all of them at once (covalid-floors.ts), falling back to one
-// headroom solve per network when their union has a loop, there are more than 30 of them, or the
-// joint search settles too many labels per depot to save work.
+// count. One maximal network: the one-network headroom (engine/audit/headroom.ts). Several: all of
+// them at once, bounded by their union and their common core (shared-floors.ts), falling back to one
+// headroom solve per network when their union has a loop or there are more than 30 of them.
 
 import type { PeriodNetwork } from './period-networks';
-import { laneFloors } from '../headroom';
-import { covalidFloors } from './covalid-floors';
+import { laneFloors, type HeadroomRunner } from '../headroom';
+import { sharedFloors } from './shared-floors';
 import { weightsWithCuts } from './period-weights';
 
 export interface RowHeadroom {
@@ -28,9 +27,12 @@ export interface HeadroomWork {
   together: number;
   /** Whole-network headroom solves (laneFloors calls). */
   wholeSolves: number;
-  /** Joint searches: destinations, and those that needed the label search after the plain Dijkstra. */
-  destinations: number;
-  labelSearches: number;
+  /** Searched together: lane pairs, those a seasonal lane made cheaper, and the per-network runs over them. */
+  pairs: number;
+  openPairs: number;
+  networkRuns: number;
+  /** Depots settled by the headroom searches (a measure of the work, independent of the machine's load). */
+  settled: number;
 }
 
 interface FloorState {
@@ -42,16 +44,16 @@ interface FloorState {
 type Maximal = { pn: PeriodNetwork; weights: Float64Array }[];
 
 /** Headroom of every row in every class it is planned in, rows in table order within each class. */
-export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, cut: Float64Array | null, onProgress?: (done: number, total: number) => void): { rows: RowHeadroom[]; work: HeadroomWork } {
+export function headroomOverTime(nets: readonly PeriodNetwork[], rows: number, cut: Float64Array | null, onProgress?: (done: number, total: number) => void, runner?: HeadroomRunner): { rows: RowHeadroom[]; work: HeadroomWork } {
   const out: RowHeadroom[] = [];
-  const work: HeadroomWork = { together: 0, wholeSolves: 0, destinations: 0, labelSearches: 0 };
+  const work: HeadroomWork = { together: 0, wholeSolves: 0, pairs: 0, openPairs: 0, networkRuns: 0, settled: 0 };
   const classes = [...new Set(nets.map((n) => n.vehicleClass))];
   onProgress?.(0, classes.length);
   classes.forEach((vehicleClass, k) => {
     const maximal: Maximal = nets.filter((n) => n.maximal && n.vehicleClass === vehicleClass).map((pn) => ({ pn, weights: weightsWithCuts(pn, cut) }));
     const state: FloorState = { floor: new Float64Array(rows).fill(NaN), net: new Float64Array(rows).fill(NaN), setBy: new Int32Array(rows).fill(-1) };
-    if (maximal.length > 1 && maximal.length <= 30 && together(maximal, state, work)) work.together++;
-    else for (const m of maximal) wholeFloors(m.pn, m.weights, state, work);
+    if (maximal.length > 1 && maximal.length <= 30 && together(maximal, state, work, runner)) work.together++;
+    else for (const m of maximal) wholeFloors(m.pn, m.weights, state, work, runner);
     for (let r = 0; r < rows; r++) if (!Number.isNaN(state.net[r])) out.push({ row: r, vehicleClass, net: state.net[r], floor: state.floor[r], setBy: state.setBy[r] });
     onProgress?.(k + 1, classes.length);
   });
@@ -69,14 +71,15 @@ function offer(state: FloorState, r: number, f: number, net: number, period: num
   }
 }
 
-function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState, work: HeadroomWork): void {
-  const floors = laneFloors(pn.network, { weights });
+function wholeFloors(pn: PeriodNetwork, weights: Float64Array, state: FloorState, work: HeadroomWork, runner: HeadroomRunner | undefined): void {
+  const floors = laneFloors(pn.network, { weights, runner });
   work.wholeSolves++;
+  work.settled += floors.settled ?? 0;
   for (let e = 0; e < pn.record.length; e++) offer(state, pn.record[e], floors.floor[e], floors.net[e], pn.periods[0]);
 }
 
-/** All maximal networks of a class in one search per destination; false when their union has a loop or the labels do not pay. */
-function together(maximal: Maximal, state: FloorState, work: HeadroomWork): boolean {
+/** All maximal networks of a class at once; false when their union has a loop. */
+function together(maximal: Maximal, state: FloorState, work: HeadroomWork, runner: HeadroomRunner | undefined): boolean {
   // One masked lane per (row, net under the cuts): the bits of the networks holding the row at that net.
   const index = new Map<string, number>();
   const from: number[] = [];
@@ -101,16 +104,18 @@ function together(maximal: Maximal, state: FloorState, work: HeadroomWork): bool
       mask[j] |= 1 << bit;
     }
   });
-  const found = covalidFloors(maximal[0].pn.network, {
+  const found = sharedFloors(maximal[0].pn.network, {
     from: Int32Array.from(from),
     to: Int32Array.from(to),
     net: Float64Array.from(net),
     mask: Int32Array.from(mask),
     row: Int32Array.from(row),
-  }, maximal.length);
+  }, maximal.length, maximal.map((_, bit) => bit).sort((a, b) => maximal[a].pn.periods[0] - maximal[b].pn.periods[0]), runner);
   if (found === null) return false;
-  work.destinations += found.destinations;
-  work.labelSearches += found.labelSearches;
+  work.pairs += found.pairs;
+  work.openPairs += found.openPairs;
+  work.networkRuns += found.networkRuns;
+  work.settled += found.settled;
   const earliest = (bits: number) => {
     let period = Infinity;
     maximal.forEach(({ pn }, bit) => {

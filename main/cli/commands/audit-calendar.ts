@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import { calendarLaneRows, calendarLoopRows, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport } from '../load-network';
+import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
 
 /** Value options only the calendar review reads (kept together so the option table can take them as they are). */
@@ -22,6 +23,7 @@ const sha256 = (path: string) => createHash('sha256').update(readFileSync(path))
 
 export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
+  const threads = wholeNumberOption(args, 'threads', 1);
   const fixBy = fixByOption(args);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
@@ -34,21 +36,29 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
 
   let lastLine = '';
   const solveStart = performance.now();
-  const review = reviewCalendar(imported, {
-    fromDate: args.values.get('from-date'),
-    toDate: args.values.get('to-date'),
-    vehicleClasses: args.values.has('vehicle-class') ? [imported.plan.vehicleClass] : undefined,
-    loopCap,
-    negotiable,
-    fixBy,
-    skipInvalid: args.flags.has('skip-invalid'),
-    onProgress: args.flags.has('progress')
-      ? ({ phase, done, total }) => {
-          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-          if (line !== lastLine) out.warn((lastLine = line));
-        }
-      : undefined,
-  });
+  // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
+  const pool = createHeadroomThreadPool({ threads });
+  let review: ReturnType<typeof reviewCalendar>;
+  try {
+    review = reviewCalendar(imported, {
+      headroomRunner: pool,
+      fromDate: args.values.get('from-date'),
+      toDate: args.values.get('to-date'),
+      vehicleClasses: args.values.has('vehicle-class') ? [imported.plan.vehicleClass] : undefined,
+      loopCap,
+      negotiable,
+      fixBy,
+      skipInvalid: args.flags.has('skip-invalid'),
+      onProgress: args.flags.has('progress')
+        ? ({ phase, done, total }) => {
+            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+            if (line !== lastLine) out.warn((lastLine = line));
+          }
+        : undefined,
+    });
+  } finally {
+    pool.close();
+  }
   const solveMs = performance.now() - solveStart;
 
   const report = calendarReport(imported, review, fixBy);
@@ -63,7 +73,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
     out.writeFile(reportPath, calendarReviewHtml(report, { files, exponent, madeAt: new Date().toISOString().slice(0, 16) + 'Z' }));
   }
   if (args.flags.has('timings')) {
-    out.timing({ read_ms: readMs, audit_ms: solveMs, periods: report.work.periods, networks: report.work.networks, maximal_networks: report.work.maximal_networks, lanes: imported.lanes.count });
+    out.timing({ read_ms: readMs, audit_ms: solveMs, periods: report.work.periods, networks: report.work.networks, maximal_networks: report.work.maximal_networks, lanes: imported.lanes.count, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });
   }
 
   if (report.loops.length > 0) {

@@ -11,6 +11,7 @@ import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
+import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
 
 export function runAudit(args: ParsedArgs, out: CommandOutput): number {
@@ -19,6 +20,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
     if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
   }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
+  const threads = wholeNumberOption(args, 'threads', 1);
   const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
   const loopsCsv = args.values.get('loops-csv');
   csvDialectOption(args);
@@ -33,17 +35,25 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   let lastLine = '';
   const solveStart = performance.now();
-  const audit = auditNetwork(network, {
-    loopCap,
-    negotiable,
-    laneKeys,
-    onProgress: args.flags.has('progress')
-      ? ({ phase, done, total }) => {
-          const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-          if (line !== lastLine) out.warn((lastLine = line));
-        }
-      : undefined,
-  });
+  // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
+  const pool = createHeadroomThreadPool({ threads });
+  let audit: ReturnType<typeof auditNetwork>;
+  try {
+    audit = auditNetwork(network, {
+      headroomRunner: pool,
+      loopCap,
+      negotiable,
+      laneKeys,
+      onProgress: args.flags.has('progress')
+        ? ({ phase, done, total }) => {
+            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
+            if (line !== lastLine) out.warn((lastLine = line));
+          }
+        : undefined,
+    });
+  } finally {
+    pool.close();
+  }
   const solveMs = performance.now() - solveStart;
 
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
@@ -52,7 +62,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
   out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
-  if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
+  if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });
 
   if (report.loops.length > 0) {
     out.warn(

@@ -24,6 +24,7 @@ export const auditCommand: CommandSpec = {
     { name: 'negotiable', value: 'REF,...', help: 'contract references or lane keys (FROM>TO|ref|n) whose rebates may change' },
     { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
     { name: 'progress', help: 'print progress by phase on stderr' },
+    { name: 'threads', value: 'N', help: 'threads for the headroom searches (default: the processors available to this process; 1 = no worker thread)' },
     { name: 'from-date', value: 'YYYY-MM-DD', help: 'calendar review: first day reviewed (default: the earliest date the file names)' },
     { name: 'to-date', value: 'YYYY-MM-DD', help: 'calendar review: last day reviewed (default: the latest date the file names)' },
     { name: 'fix-by', value: 'lane|clause', help: 'calendar review: one cut per lane (default) or one percentage cut per clause' },

@@ -154,7 +154,7 @@ export const suite: BenchSuite = {
         target: 30_000,
         note:
           `${rv.periods.length} periods, ${rv.networks.length} networks, ${rv.networks.filter((n) => n.maximal).length} maximal; ${rv.loops.length} loops, ` +
-          `${rv.fixPlan?.changes.length ?? 0} rows cut, verified ${rv.fixPlan?.verified}; headroom: ${rv.headroomWork?.together} class(es) searched over all maximal networks at once (${rv.headroomWork?.destinations} destinations, ${rv.headroomWork?.labelSearches} needing labels), ${rv.headroomWork?.wholeSolves} whole-network solves; ` +
+          `${rv.fixPlan?.changes.length ?? 0} rows cut, verified ${rv.fixPlan?.verified}; headroom: ${rv.headroomWork?.together} class(es) searched over all maximal networks at once (${rv.headroomWork?.pairs} lane pairs, ${rv.headroomWork?.openPairs} made cheaper by a seasonal lane and searched again in ${rv.headroomWork?.networkRuns} network runs), ${rv.headroomWork?.wholeSolves} whole-network solves; ` +
           `phases ms: ${Object.entries(phases).map(([k, v]) => `${k} ${Math.round(v)}`).join(', ')}; ` +
           `baseline = full one-day audit on ${sampleDays.length} days (${Math.round(baseline.ms / sampleDays.length)} ms each) x ${bigDays} days`,
       });

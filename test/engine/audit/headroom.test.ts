@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { laneFloors } from '../../../engine/audit/headroom';
+import { headroomPlan, laneFloors, singleThreadRunner } from '../../../engine/audit/headroom';
+import { seededRandom } from '../../support/seeded-random';
 import { laneFloorsPerDestination } from '../../../engine/audit/headroom-per-destination';
 import { auditNetwork } from '../../../engine/audit/network-audit';
 import { networkOf } from '../../support/network-builder';
@@ -88,9 +89,46 @@ describe('rebate headroom', () => {
     expect(unlimited).toBeGreaterThan(50);
   });
 
+  it('equals the reference with balls of 1 to 5 depots, so forward searches run long and pruning decides', () => {
+    // The default ball holds these small networks whole (radius +Infinity); tiny balls make every
+    // answer depend on the stopping rule best(u) <= forward radius + R(u) and on the labels kept out of the heap.
+    for (let seed = 1; seed <= 60; seed++) {
+      const depots = 6 + (seed % 11) * 5;
+      const net = randomNetwork(seed, depots, depots * (2 + (seed % 4)), true, 30 + seed);
+      let weights: Float64Array | undefined;
+      if (seed % 4 === 0) {
+        weights = Float64Array.from(net.outNet);
+        for (let p = 1; p < weights.length; p += 4) weights[p] = Infinity;
+      }
+      const reference = laneFloorsPerDestination(net, { weights });
+      for (const ballSize of [1, 2, 5]) {
+        expect(Array.from(laneFloors(net, { weights, ballSize }).floor), `seed ${seed} ball ${ballSize}`).toEqual(Array.from(reference.floor));
+      }
+    }
+  });
+
+  it('gives the same pair costs when started from known upper bounds and stopped at known lower bounds', () => {
+    // The calendar review passes the core's cost as an upper bound and the union's as a lower one.
+    for (let seed = 1; seed <= 30; seed++) {
+      const depots = 20 + seed * 3;
+      const net = randomNetwork(seed, depots, depots * 4, true, 60);
+      const { arrays } = headroomPlan(net);
+      const exact = singleThreadRunner.run(arrays, 2).cost;
+      const rand = seededRandom(seed);
+      const loose = (k: number, sign: number) => (exact[k] === Infinity || rand() < 0.3 ? sign * Infinity : exact[k] + sign * Math.floor(rand() * 3));
+      const pairUpper = Float64Array.from(exact, (_, k) => loose(k, 1));
+      const pairLower = Float64Array.from(exact, (_, k) => loose(k, -1));
+      for (const ballSize of [1, 3, 50]) {
+        expect(Array.from(singleThreadRunner.run({ ...arrays, pairUpper, pairLower }, ballSize).cost), `seed ${seed} ball ${ballSize}`).toEqual(Array.from(exact));
+      }
+    }
+  });
+
   it('equals the reference on a larger sparse network with many rebates', () => {
     const net = randomNetwork(4242, 600, 3_000, true, 5_000);
-    expect(Array.from(laneFloors(net).floor)).toEqual(Array.from(laneFloorsPerDestination(net).floor));
+    const reference = Array.from(laneFloorsPerDestination(net).floor);
+    expect(Array.from(laneFloors(net).floor)).toEqual(reference);
+    expect(Array.from(laneFloors(net, { ballSize: 8 }).floor)).toEqual(reference);
   });
 });
 

@@ -3,6 +3,7 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { runCli, tempFiles } from './cli-harness';
 import { referenceHasNegativeLoop } from '../../engine/audit/reference';
+import { seededRandom } from '../../support/seeded-random';
 
 const depots = ['id,name,lat,lon', 'A,Alpha yard,51.0,4.0', 'B,Bravo yard,51.1,4.1', 'C,Charlie yard,51.2,4.2', 'D,Delta yard,51.3,4.3'].join('\n');
 // Rows 2-3 form a loop A>B>A netting 10.00 - 12.50 = -2.50 per lap; D has no way back to anything.
@@ -181,5 +182,42 @@ describe('lanewright audit --loop-cap with a huge count', () => {
     expect(['work-budget', 'memory-bound']).toContain(report.loop_search.stopped_by);
     expect(r.stderr).not.toMatch(/more loops exist than/);
     expect(r.stderr).toMatch(/WARNING: the loop search stopped at its (work budget|memory bound)/);
+  });
+});
+
+describe('lanewright audit --threads', () => {
+  // Large enough for the headroom searches to go to worker threads (main/headroom-threads/pool.ts MIN_PAIRS_FOR_THREADS).
+  const count = 2_500;
+  const rand = seededRandom(31);
+  const potential = Array.from({ length: count }, () => Math.floor(rand() * 5_000));
+  const rows: string[] = [];
+  for (let e = 0; e < 24_000; e++) {
+    const u = e < count ? e : Math.floor(rand() * count);
+    const v = e < count ? (e + 1) % count : Math.floor(rand() * count);
+    const net = Math.floor(rand() * 4_000) + potential[u] - potential[v];
+    rows.push(`D${u},D${v},${(Math.max(net, 0) / 100).toFixed(2)},0,0,${(Math.max(-net, 0) / 100).toFixed(2)}`);
+  }
+  const files = () =>
+    tempFiles({
+      'depots.csv': `id,name,lat,lon\n${potential.map((_, d) => `D${d},Depot ${d},${50 + d / 10_000},4`).join('\n')}\n`,
+      'lanes.csv': `from,to,toll,fuel,fees,rebate\n${rows.join('\n')}\n`,
+    });
+
+  it('gives the same review with 1 and 2 threads, one day and over the calendar', async () => {
+    const dir = files();
+    const args = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json'];
+    for (const day of [['--date', '2026-06-01'], []]) {
+      const one = await runCli([...args, ...day, '--threads', '1']);
+      const two = await runCli([...args, ...day, '--threads', '2']);
+      expect([one.status, two.status]).toEqual([0, 0]);
+      expect(two.stdout).toBe(one.stdout);
+      expect(JSON.parse(one.stdout).headroom.filter((h: { floor_minor: number | null }) => h.floor_minor !== null).length).toBeGreaterThan(20_000);
+    }
+  });
+
+  it('refuses a thread count below 1', async () => {
+    const r = await runCli(['audit', '--depots', 'x.csv', '--lanes', 'y.csv', '--date', '2026-06-01', '--threads', '0']);
+    expect(r.status).not.toBe(0);
+    expect(r.stderr).toMatch(/--threads must be a whole number >= 1, got "0"/);
   });
 });
