@@ -31,8 +31,12 @@ export function fitNetwork(map: L.Map, bounds: L.LatLngBounds, corner: HTMLEleme
 export function depotsInView(map: L.Map, network: NetworkView, corner: HTMLElement | null): number {
   const size = map.getSize();
   const { w, h } = cornerSize(corner);
+  // Depots outside the view's latitude / longitude box are not projected at all (50,000 depots).
+  const box = map.getBounds();
+  const south = box.getSouth(), north = box.getNorth(), west = box.getWest(), east = box.getEast();
   let n = 0;
   for (let d = 0; d < network.depotIds.length; d++) {
+    if (network.lat[d] < south || network.lat[d] > north || network.lon[d] < west || network.lon[d] > east) continue;
     const p = map.latLngToContainerPoint([network.lat[d], network.lon[d]]);
     if (p.x < 0 || p.y < 0 || p.x > size.x || p.y > size.y) continue;
     if (p.x > size.x - w && p.y < h) continue;

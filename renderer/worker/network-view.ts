@@ -30,6 +30,26 @@ function rowsView(result: ImportResult, lane: Int32Array, keys: readonly LaneKey
   };
 }
 
+/**
+ * 1 for a lane whose reverse (same depots, other way) is in the network, so the map draws both
+ * directions side by side; found here over the network's rows of out-lanes, never on the UI thread.
+ */
+export function reverseFlags(network: Network): Uint8Array {
+  const flags = new Uint8Array(network.laneCount);
+  for (let e = 0; e < network.laneCount; e++) {
+    const a = network.laneFrom[e];
+    const b = network.laneTo[e];
+    if (a === b) continue;
+    for (let p = network.outStart[b]; p < network.outStart[b + 1]; p++) {
+      if (network.outTo[p] === a) {
+        flags[e] = 1;
+        break;
+      }
+    }
+  }
+  return flags;
+}
+
 /** The UI's view of a planned import: the network, its lane keys and every row of the lanes file. */
 export function networkView(result: ImportResult, plan: PlanChoice, keys: readonly LaneKey[] = overlayKeys(result)): NetworkView {
   const network: Network = result.network!;
@@ -52,6 +72,7 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
     laneRef: network.laneRef.slice(),
     laneDistanceKm: network.laneDistanceKm.slice(),
     laneDriveMinutes: network.laneDriveMinutes.slice(),
+    laneReverse: reverseFlags(network),
     laneKeys: Array.from(result.plan.laneRecord, (r) => rows.keys[r]),
     rows,
     vehicleClasses: result.vehicleClasses,
@@ -64,7 +85,7 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
 /** The typed arrays of a view, for postMessage's transfer list. */
 export function transferablesOf(view: NetworkView): ArrayBuffer[] {
   const r = view.rows;
-  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, r.from, r.to, r.sourceRow, r.lane].map(
+  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, r.from, r.to, r.sourceRow, r.lane].map(
     (a) => a.buffer as ArrayBuffer,
   );
 }

@@ -67,6 +67,8 @@ export interface NetworkView {
   laneRef: (string | undefined)[];
   laneDistanceKm: Float64Array;
   laneDriveMinutes: Float64Array;
+  /** 1 where the lane's reverse is in the network too (the map draws the two side by side). */
+  laneReverse: Uint8Array;
   /** Key of each lane (its row's key, occurrences counted over the whole file), for scenario changes. */
   laneKeys: LaneKey[];
   /** Every row of the lanes file (every date and class), for the lane table's "every row" view. */

@@ -1,0 +1,197 @@
+// Lanes drawn straight onto one canvas per kind (all lanes; the route tree), with level of detail:
+// only lanes that meet the view are drawn, and above `LANE_DETAIL_THRESHOLD` lanes the ones in view
+// are thinned to `MAX_LANES_PER_FRAME` (the map says so). A Leaflet layer per lane, or one polyline
+// of 500,000 rings, took seconds per pan or zoom; this paints in tens of milliseconds. The canvas is
+// Leaflet's own canvas renderer (padding, zoom animation, retina), with its drawing replaced.
+
+import L from 'leaflet';
+import { addedLaneOf, type AddedLane } from '../model/added-lanes';
+import type { NetworkView } from '../worker/protocol';
+import { laneGrid, lanesInView, type LaneGrid, type ViewBox } from './lane-grid';
+import { offsetFor } from './two-way';
+
+/** More lanes than this and the grey lanes are thinned to the cap below. */
+export const LANE_DETAIL_THRESHOLD = 20_000;
+/** Grey lanes drawn per frame at most, once thinned. */
+export const MAX_LANES_PER_FRAME = 20_000;
+
+export interface LaneCounts {
+  /** Lanes drawn in this frame. */
+  drawn: number;
+  /** Lanes that meet the view. */
+  inView: number;
+  /** Lanes of the network. */
+  total: number;
+}
+
+interface CanvasInternals {
+  _ctx: CanvasRenderingContext2D;
+  _bounds: L.Bounds;
+  _map: L.Map | null;
+  _redraw(): void;
+  _draw(): void;
+}
+
+export interface LineStyle {
+  color: string;
+  weight: number;
+  opacity: number;
+  lineCap?: string;
+}
+
+/** Web Mercator metres of each depot, made once per network. */
+const mercator = new WeakMap<NetworkView, { x: Float64Array; y: Float64Array }>();
+export function mercatorOf(network: NetworkView): { x: Float64Array; y: Float64Array } {
+  let m = mercator.get(network);
+  if (!m) {
+    const n = network.lat.length;
+    m = { x: new Float64Array(n), y: new Float64Array(n) };
+    for (let d = 0; d < n; d++) {
+      const p = L.Projection.SphericalMercator.project(L.latLng(network.lat[d], network.lon[d]));
+      m.x[d] = p.x;
+      m.y[d] = p.y;
+    }
+    mercator.set(network, m);
+  }
+  return m;
+}
+
+/** The map's metres-to-layer-pixels affine map at its current zoom (two reference points fix it). */
+export function layerTransform(map: L.Map): { sx: number; ox: number; sy: number; oy: number } {
+  const a = L.latLng(0, 0);
+  const b = L.latLng(40, 40);
+  const pa = L.Projection.SphericalMercator.project(a);
+  const pb = L.Projection.SphericalMercator.project(b);
+  const qa = map.latLngToLayerPoint(a);
+  const qb = map.latLngToLayerPoint(b);
+  const sx = (qb.x - qa.x) / (pb.x - pa.x);
+  const sy = (qb.y - qa.y) / (pb.y - pa.y);
+  return { sx, ox: qa.x - sx * pa.x, sy, oy: qa.y - sy * pa.y };
+}
+
+/** The renderer's pixel box as latitude / longitude bounds. */
+export function viewBoxOf(map: L.Map, bounds: L.Bounds): ViewBox {
+  const sw = map.layerPointToLatLng(L.point(bounds.min!.x, bounds.max!.y));
+  const ne = map.layerPointToLatLng(L.point(bounds.max!.x, bounds.min!.y));
+  return { south: sw.lat, west: sw.lng, north: ne.lat, east: ne.lng };
+}
+
+const canvasDraw = (L.Canvas.prototype as unknown as CanvasInternals)._draw;
+
+/** A Leaflet canvas renderer that calls `paint` after its own (empty) drawing. */
+const PaintedCanvas = L.Canvas.extend({
+  _draw(this: CanvasInternals & { lwPaint?: (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void }) {
+    canvasDraw.call(this);
+    if (this.lwPaint && this._map && this._bounds) this.lwPaint(this._ctx, this._bounds, this._map);
+  },
+}) as unknown as new (options: L.RendererOptions) => L.Canvas & CanvasInternals & { lwPaint?: (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void };
+
+/** A canvas that paints with `paint` whenever the view moves; `repaint()` after the content changes. */
+export class PaintLayer {
+  readonly renderer: L.Canvas & CanvasInternals;
+  private pending = 0;
+
+  constructor(pane: string, paint: (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void) {
+    const renderer = new PaintedCanvas({ pane, padding: 0.3 });
+    renderer.lwPaint = paint;
+    this.renderer = renderer;
+  }
+
+  addTo(map: L.Map): this {
+    this.renderer.addTo(map);
+    return this;
+  }
+
+  remove(): void {
+    if (this.pending) cancelAnimationFrame(this.pending);
+    this.renderer.remove();
+  }
+
+  /** Paints again on the next frame (several changes in one frame paint once). */
+  repaint(): void {
+    if (this.pending) return;
+    this.pending = requestAnimationFrame(() => {
+      this.pending = 0;
+      if (this.renderer._map) this.renderer._redraw();
+    });
+  }
+}
+
+/** Strokes lanes as one path, each shifted right of its direction when its reverse is drawn too. */
+function strokeLanes(ctx: CanvasRenderingContext2D, map: L.Map, network: NetworkView, lanes: ArrayLike<number>, style: LineStyle, view: ViewBox | null, added: readonly AddedLane[] = []): number {
+  const m = mercatorOf(network);
+  const t = layerTransform(map);
+  const shift = offsetFor(style.weight);
+  ctx.beginPath();
+  let drawn = 0;
+  for (let i = 0; i < lanes.length; i++) {
+    const e = lanes[i];
+    let a: number, b: number, twoWay: boolean;
+    if (e >= 0) {
+      if (e >= network.laneFrom.length) continue;
+      a = network.laneFrom[e];
+      b = network.laneTo[e];
+      twoWay = network.laneReverse[e] === 1;
+    } else {
+      // A lane the scenario adds is not in the network: its ends come from its change.
+      const extra = addedLaneOf(added, e);
+      if (!extra || extra.from < 0 || extra.to < 0) continue;
+      a = extra.from;
+      b = extra.to;
+      twoWay = false;
+    }
+    if (view) {
+      const la = network.lat[a], lb = network.lat[b], oa = network.lon[a], ob = network.lon[b];
+      if (Math.max(la, lb) < view.south || Math.min(la, lb) > view.north || Math.max(oa, ob) < view.west || Math.min(oa, ob) > view.east) continue;
+    }
+    let x1 = t.sx * m.x[a] + t.ox;
+    let y1 = t.sy * m.y[a] + t.oy;
+    let x2 = t.sx * m.x[b] + t.ox;
+    let y2 = t.sy * m.y[b] + t.oy;
+    if (twoWay) {
+      const dx = x2 - x1;
+      const dy = y2 - y1;
+      const length = Math.hypot(dx, dy);
+      if (length > 0) {
+        // Screen y grows downwards, so the right-hand normal of (dx, dy) is (-dy, dx).
+        const sx = (-dy / length) * shift;
+        const sy = (dx / length) * shift;
+        x1 += sx;
+        y1 += sy;
+        x2 += sx;
+        y2 += sy;
+      }
+    }
+    ctx.moveTo(x1, y1);
+    ctx.lineTo(x2, y2);
+    drawn++;
+  }
+  ctx.strokeStyle = style.color;
+  ctx.globalAlpha = style.opacity;
+  ctx.lineWidth = style.weight;
+  ctx.lineCap = (style.lineCap as CanvasLineCap | undefined) ?? 'round';
+  ctx.lineJoin = 'round';
+  ctx.stroke();
+  ctx.globalAlpha = 1;
+  return drawn;
+}
+
+/** Every lane of the network, grey, culled to the view and thinned above the threshold. */
+export function allLanesLayer(pane: string, network: NetworkView, style: LineStyle, onCounts: (counts: LaneCounts) => void): PaintLayer {
+  let grid: LaneGrid | null = null;
+  const total = network.laneFrom.length;
+  return new PaintLayer(pane, (ctx, bounds, map) => {
+    grid ??= laneGrid(network);
+    const view = viewBoxOf(map, bounds);
+    const picked = lanesInView(grid, network, view, total > LANE_DETAIL_THRESHOLD ? MAX_LANES_PER_FRAME : total);
+    const drawn = strokeLanes(ctx, map, network, picked.lanes, style, null);
+    onCounts({ drawn, inView: picked.inView, total });
+  });
+}
+
+/** A set of lanes (the route tree), culled to the view; lanes the scenario adds are drawn from `added`. */
+export function laneSetLayer(pane: string, network: NetworkView, lanes: Int32Array, added: readonly AddedLane[], style: LineStyle): PaintLayer {
+  return new PaintLayer(pane, (ctx, bounds, map) => {
+    strokeLanes(ctx, map, network, lanes, style, viewBoxOf(map, bounds), added);
+  });
+}
