@@ -1,8 +1,9 @@
 // Copies what the UI needs out of the compiled network and the import's lane table. The copies
 // travel to the UI thread as transferables, so the worker keeps its own arrays intact. Lane keys
-// come from the engine (counted over the file's rows), so the UI never counts them itself.
+// come from the engine (counted over the file's rows), so the UI never counts them itself; they
+// travel as occurrences beside ref indices, never as 500,000 objects.
 
-import { isoDateText, overlayKeys } from '../../engine/index';
+import { overlayKeys } from '../../engine/index';
 import type { ImportResult, LaneKey, Network } from '../../engine/index';
 import type { LaneRowsView, NetworkView, PlanChoice } from './protocol';
 
@@ -13,19 +14,40 @@ export function laneOfRows(result: ImportResult): Int32Array {
   return lane;
 }
 
-function rowsView(result: ImportResult, lane: Int32Array, keys: readonly LaneKey[]): LaneRowsView {
+function rowsView(result: ImportResult, lane: Int32Array, keys: readonly LaneKey[], refNames: string[]): LaneRowsView {
   const t = result.lanes;
   const n = t.count;
   const cls = t.vehicleClass;
+  // Refs as indices into one list of distinct refs: a file repeats a contract's ref on many rows.
+  const refIndex = new Int32Array(n);
+  const seen = new Map<string, number>();
+  for (let r = 0; r < n; r++) {
+    const ref = t.ref[r];
+    if (!ref) {
+      refIndex[r] = -1;
+      continue;
+    }
+    let i = seen.get(ref);
+    if (i === undefined) {
+      i = refNames.length;
+      refNames.push(ref);
+      seen.set(ref, i);
+    }
+    refIndex[r] = i;
+  }
+  const occurrence = new Int32Array(n);
+  for (let r = 0; r < n; r++) occurrence[r] = keys[r].occurrence;
+  const classIndex = new Int32Array(n).fill(-1);
+  if (cls) for (let r = 0; r < n; r++) classIndex[r] = cls[r];
   return {
     from: t.from.slice(0, n),
     to: t.to.slice(0, n),
     sourceRow: t.sourceRow.slice(0, n),
-    ref: t.ref.slice(0, n),
-    validFrom: Array.from(t.validFrom.subarray(0, n), isoDateText),
-    validTo: Array.from(t.validTo.subarray(0, n), isoDateText),
-    vehicleClass: Array.from({ length: n }, (_, r) => (cls && cls[r] >= 0 ? t.classNames[cls[r]] : null)),
-    keys: keys.slice(),
+    refIndex,
+    occurrence,
+    validFrom: t.validFrom.slice(0, n),
+    validTo: t.validTo.slice(0, n),
+    classIndex,
     lane: lane.slice(),
   };
 }
@@ -54,7 +76,8 @@ export function reverseFlags(network: Network): Uint8Array {
 export function networkView(result: ImportResult, plan: PlanChoice, keys: readonly LaneKey[] = overlayKeys(result)): NetworkView {
   const network: Network = result.network!;
   const lane = laneOfRows(result);
-  const rows = rowsView(result, lane, keys);
+  const refNames: string[] = [];
+  const rows = rowsView(result, lane, keys, refNames);
   return {
     currency: network.currency,
     exponent: network.exponent,
@@ -69,11 +92,12 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
     laneFees: network.laneFees.slice(),
     laneRebate: network.laneRebate.slice(),
     laneRow: network.laneRow.slice(),
-    laneRef: network.laneRef.slice(),
+    laneRecord: result.plan.laneRecord.slice(),
     laneDistanceKm: network.laneDistanceKm.slice(),
     laneDriveMinutes: network.laneDriveMinutes.slice(),
     laneReverse: reverseFlags(network),
-    laneKeys: Array.from(result.plan.laneRecord, (r) => rows.keys[r]),
+    refNames,
+    rowClassNames: result.lanes.classNames.slice(),
     rows,
     vehicleClasses: result.vehicleClasses,
     plannedClass: result.plan.vehicleClass,
@@ -85,7 +109,7 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
 /** The typed arrays of a view, for postMessage's transfer list. */
 export function transferablesOf(view: NetworkView): ArrayBuffer[] {
   const r = view.rows;
-  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, r.from, r.to, r.sourceRow, r.lane].map(
+  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
     (a) => a.buffer as ArrayBuffer,
   );
 }

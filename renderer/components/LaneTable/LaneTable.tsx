@@ -13,6 +13,7 @@ import { formatMoney } from '../../model/format';
 import type { NetworkView, OverlayView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
 import { AmountCell } from './AmountCell';
+import { rowClass, rowKey, rowRef, rowValidity } from '../../model/lane-names';
 
 export interface LaneTableProps {
   network: NetworkView;
@@ -29,12 +30,10 @@ const LANE_TABLE_HEADS = ['Row', 'Lane', 'Ref', NUM('Tolls'), NUM('Fuel'), NUM('
 
 /** Why a row of the file is not in the plan on screen. */
 function notPlannedReason(network: NetworkView, r: number): string {
-  const rows = network.rows;
   const date = network.plan.date;
-  const from = rows.validFrom[r];
-  const to = rows.validTo[r];
+  const { from, to } = rowValidity(network, r);
   if (date && ((from && date < from) || (to && date > to))) return `not valid on ${date} (valid ${from ?? '…'} to ${to ?? '…'})`;
-  const cls = rows.vehicleClass[r];
+  const cls = rowClass(network, r);
   if (cls !== null && cls !== network.plannedClass) return `for vehicle class ${cls}`;
   return 'not in the plan on screen';
 }
@@ -57,7 +56,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
       if (e === -1 && !everyRow) continue;
       if (changedOnly && !(e >= 0 ? amounts.changed[e] : amounts.rows.changed[r])) continue;
       if (needle !== '') {
-        const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rows.ref[r] ?? ''}`.toLowerCase();
+        const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rowRef(network, r) ?? ''}`.toLowerCase();
         if (!hay.includes(needle)) continue;
       }
       out.push(r);
@@ -140,7 +139,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
           {shown.slice(current * PAGE, current * PAGE + PAGE).map((r) => {
             const e = rows.lane[r];
             const name = `${id(rows.from[r])} → ${id(rows.to[r])}`;
-            const key = rows.keys[r];
+            const key = rowKey(network, r);
             const inPlan = e >= 0;
             const value = (field: EditableField) => (inPlan ? amounts[field][e] : amounts.rows[field][r]);
             const closed = inPlan ? amounts.closed[e] === 1 : amounts.rows.closed[r] === 1;
@@ -160,7 +159,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
                   )}
                 </td>
                 <th scope="row">{name}</th>
-                <td>{rows.ref[r] ?? '—'}</td>
+                <td>{rowRef(network, r) ?? '—'}</td>
                 {EDITABLE_FIELDS.map((field) => (
                   <td key={field} className="lw-num">
                     <AmountCell
