@@ -161,6 +161,8 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
 
   // What the lane canvas drew in its last frame (it paints as the view moves).
   const [laneCounts, setLaneCounts] = useState<LaneCounts | null>(null);
+  const [depotCounts, setDepotCounts] = useState<{ drawn: number; inView: number } | null>(null);
+  const onDepotCounts = useCallback((drawn: number, inView: number) => setDepotCounts((now) => (now && now.drawn === drawn && now.inView === inView ? now : { drawn, inView })), []);
   const onCounts = useCallback((next: LaneCounts) => setLaneCounts((now) => (now && now.drawn === next.drawn && now.inView === next.inView && now.total === next.total ? now : next)), []);
   usePaintLayer(map, network && renderers ? () => allLanesLayer(renderers.lanesPane, network, STYLE.lane, onCounts) : null, [network]);
   // Most edits leave the route tree as it was: the same lanes keep the painted layer.
@@ -179,12 +181,13 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     if (!map || !network || !renderers) return;
     const handlers = { onSelect: (d: number) => selectRef.current(d), onPlanFrom: (d: number) => planFromRef.current(d) };
     if (network.depotIds.length > DEPOT_CANVAS_THRESHOLD) {
-      const canvas = depotCanvas(renderers.depotsPane, network, handlers);
+      const canvas = depotCanvas(renderers.depotsPane, network, handlers, onDepotCounts);
       const detach = canvas.attach(map);
       setDepotPaint(canvas);
       return () => {
         detach();
         setDepotPaint(null);
+        setDepotCounts(null);
       };
     }
     const made = depotMarkers(network, renderers.depots, handlers);
@@ -194,7 +197,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
       made.layer.remove();
       setDepots(null);
     };
-  }, [map, network, renderers]);
+  }, [map, network, renderers, onDepotCounts]);
   useEffect(() => {
     if (depots && network && depots.length === network.depotIds.length) styleDepots(depots, solve, selected);
     depotPaint?.restyle(solve, selected);
@@ -253,6 +256,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
       {thinned && (
         <p className="lw-map-thinned" data-testid="map-thinned" title="Above this many lanes the map draws the route tree, the selected route, rebate loops and a share of the lanes in view; zoom in to see more of them">
           Lanes thinned: {laneCounts.drawn.toLocaleString('en')} of {laneTotal.toLocaleString('en')} drawn ({laneCounts.inView.toLocaleString('en')} in view)
+          {depotCounts && depotCounts.drawn < depotCounts.inView ? ` · depots: ${depotCounts.drawn.toLocaleString('en')} of ${depotCounts.inView.toLocaleString('en')} in view drawn` : ''}
         </p>
       )}
       <p id="lw-map-keys" className="lw-visually-hidden">

@@ -12,6 +12,8 @@ import type { DepotHandlers } from './network-layers';
 
 /** More depots than this and they are drawn on the depot canvas instead of as markers. */
 export const DEPOT_CANVAS_THRESHOLD = 5_000;
+/** Depots drawn per frame at most (the origin and the selection always); the map says when it thins them. */
+export const MAX_DEPOTS_PER_FRAME = 10_000;
 
 type DepotStyle = { radius: number; color: string; weight: number; fillColor: string; fillOpacity: number; dashArray?: string };
 
@@ -33,7 +35,7 @@ export interface DepotCanvas {
   attach(map: L.Map): () => void;
 }
 
-export function depotCanvas(pane: string, network: NetworkView, handlers: DepotHandlers): DepotCanvas {
+export function depotCanvas(pane: string, network: NetworkView, handlers: DepotHandlers, onCounts: (drawn: number, inView: number) => void): DepotCanvas {
   let solve: SolveView | null = null;
   let selected: number | null = null;
   // Depots drawn in the last frame with their layer pixels, for hit tests.
@@ -47,12 +49,21 @@ export function depotCanvas(pane: string, network: NetworkView, handlers: DepotH
     const t = layerTransform(map);
     const view = viewBoxOf(map, bounds);
     const n = network.lat.length;
-    const inView: number[] = [];
+    let inView: number[] = [];
     for (let d = 0; d < n; d++) {
       const lat = network.lat[d];
       const lon = network.lon[d];
       if (lat >= view.south && lat <= view.north && lon >= view.west && lon <= view.east) inView.push(d);
     }
+    const inViewCount = inView.length;
+    if (inView.length > MAX_DEPOTS_PER_FRAME) {
+      // An even stride over depots in file order, plus the origin and the selection.
+      const step = inView.length / MAX_DEPOTS_PER_FRAME;
+      const kept = Array.from({ length: MAX_DEPOTS_PER_FRAME }, (_, j) => inView[Math.floor(j * step)]);
+      for (const d of [solve?.origin ?? -1, selected ?? -1]) if (d >= 0 && inView.includes(d) && !kept.includes(d)) kept.push(d);
+      inView = kept;
+    }
+    onCounts(inView.length, inViewCount);
     shown = Int32Array.from(inView);
     shownX = new Float32Array(shown.length);
     shownY = new Float32Array(shown.length);

@@ -46,10 +46,18 @@ export function mercatorOf(network: NetworkView): { x: Float64Array; y: Float64A
   if (!m) {
     const n = network.lat.length;
     m = { x: new Float64Array(n), y: new Float64Array(n) };
+    // Leaflet's spherical Mercator (L.Projection.SphericalMercator), written out: one L.LatLng per
+    // depot cost more than the arithmetic.
+    // Its radius and latitude limit are not in Leaflet's type declarations.
+    const mercatorConstants = L.Projection.SphericalMercator as unknown as { R: number; MAX_LATITUDE: number };
+    const R = mercatorConstants.R;
+    const limit = mercatorConstants.MAX_LATITUDE;
+    const rad = Math.PI / 180;
     for (let d = 0; d < n; d++) {
-      const p = L.Projection.SphericalMercator.project(L.latLng(network.lat[d], network.lon[d]));
-      m.x[d] = p.x;
-      m.y[d] = p.y;
+      const lat = Math.max(Math.min(limit, network.lat[d]), -limit);
+      const sin = Math.sin(lat * rad);
+      m.x[d] = R * network.lon[d] * rad;
+      m.y[d] = (R * Math.log((1 + sin) / (1 - sin))) / 2;
     }
     mercator.set(network, m);
   }
@@ -78,22 +86,54 @@ export function viewBoxOf(map: L.Map, bounds: L.Bounds): ViewBox {
 
 const canvasDraw = (L.Canvas.prototype as unknown as CanvasInternals)._draw;
 
-/** A Leaflet canvas renderer that calls `paint` after its own (empty) drawing. */
+// Paints wait for the next animation frame and share it: at most PAINT_BUDGET_MS of painting per
+// frame, the rest in the frames after, so an import or a solve that changes several canvases never
+// holds the UI thread for all of them in one task.
+const PAINT_BUDGET_MS = 30;
+const paintQueue = new Set<() => void>();
+let paintFrame = 0;
+function runPaints(): void {
+  paintFrame = 0;
+  const started = performance.now();
+  for (const job of paintQueue) {
+    paintQueue.delete(job);
+    job();
+    if (paintQueue.size > 0 && performance.now() - started > PAINT_BUDGET_MS) {
+      paintFrame = requestAnimationFrame(runPaints);
+      return;
+    }
+  }
+}
+function schedulePaint(job: () => void): void {
+  paintQueue.add(job);
+  if (!paintFrame) paintFrame = requestAnimationFrame(runPaints);
+}
+
+type Paint = (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void;
+type Painted = L.Canvas & CanvasInternals & { _clear(): void; lwPaint?: Paint; lwJob?: () => void };
+
+/** A Leaflet canvas renderer whose drawing is `lwPaint`, run in the paint queue after Leaflet has placed and cleared the canvas. */
 const PaintedCanvas = L.Canvas.extend({
-  _draw(this: CanvasInternals & { lwPaint?: (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void }) {
+  _draw(this: Painted) {
     canvasDraw.call(this);
-    if (this.lwPaint && this._map && this._bounds) this.lwPaint(this._ctx, this._bounds, this._map);
+    if (this.lwJob) schedulePaint(this.lwJob);
   },
-}) as unknown as new (options: L.RendererOptions) => L.Canvas & CanvasInternals & { lwPaint?: (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void };
+}) as unknown as new (options: L.RendererOptions) => Painted;
 
 /** A canvas that paints with `paint` whenever the view moves; `repaint()` after the content changes. */
 export class PaintLayer {
-  readonly renderer: L.Canvas & CanvasInternals;
-  private pending = 0;
+  readonly renderer: Painted;
+  private readonly job: () => void;
 
-  constructor(pane: string, paint: (ctx: CanvasRenderingContext2D, bounds: L.Bounds, map: L.Map) => void) {
+  constructor(pane: string, paint: Paint) {
     const renderer = new PaintedCanvas({ pane, padding: 0.3 });
-    renderer.lwPaint = paint;
+    this.job = () => {
+      // The view may have moved or the layer gone since the paint was queued: paint what is current.
+      if (!renderer._map || !renderer._bounds || !renderer._ctx) return;
+      renderer._clear();
+      paint(renderer._ctx, renderer._bounds, renderer._map);
+    };
+    renderer.lwJob = this.job;
     this.renderer = renderer;
   }
 
@@ -103,17 +143,13 @@ export class PaintLayer {
   }
 
   remove(): void {
-    if (this.pending) cancelAnimationFrame(this.pending);
+    paintQueue.delete(this.job);
     this.renderer.remove();
   }
 
-  /** Paints again on the next frame (several changes in one frame paint once). */
+  /** Paints again in the paint queue (several changes before it runs paint once). */
   repaint(): void {
-    if (this.pending) return;
-    this.pending = requestAnimationFrame(() => {
-      this.pending = 0;
-      if (this.renderer._map) this.renderer._redraw();
-    });
+    schedulePaint(this.job);
   }
 }
 

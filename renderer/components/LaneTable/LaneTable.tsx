@@ -48,13 +48,14 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
   const viewedClass = network.plannedClass;
   // Without a class (no class tolls, or the toll column on screen) a toll edit is for every class.
   const tollClass = viewedClass === null || tollForEveryClass ? null : viewedClass;
-  const shown = useMemo(() => {
+  // Rows matching the text, made again only when the network or the filter changes; a solve only
+  // re-filters them when "changed only" is on (500,000 rows per recompute held up the page).
+  const matching = useMemo(() => {
     const needle = text.trim().toLowerCase();
     const out: number[] = [];
     for (let r = 0; r < rows.lane.length; r++) {
       const e = rows.lane[r];
       if (e === -1 && !everyRow) continue;
-      if (changedOnly && !(e >= 0 ? amounts.changed[e] : amounts.rows.changed[r])) continue;
       if (needle !== '') {
         const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rowRef(network, r) ?? ''}`.toLowerCase();
         if (!hay.includes(needle)) continue;
@@ -62,7 +63,8 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
       out.push(r);
     }
     return out;
-  }, [network, rows, amounts, text, changedOnly, everyRow]);
+  }, [network, rows, text, everyRow]);
+  const shown = useMemo(() => (changedOnly ? matching.filter((r) => (rows.lane[r] >= 0 ? amounts.changed[rows.lane[r]] : amounts.rows.changed[r])) : matching), [matching, rows, amounts, changedOnly]);
   const addedShown = useMemo(() => {
     const needle = text.trim().toLowerCase();
     return added.filter((a) => needle === '' || `${a.lane.from} ${a.lane.to} ${a.lane.ref ?? ''}`.toLowerCase().includes(needle));
@@ -71,7 +73,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
   const current = Math.min(page, pages - 1);
   const id = (d: number) => network.depotIds[d];
   const base: Record<EditableField, Float64Array> = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
-  const planned = rows.lane.reduce((n, e) => n + (e >= 0 ? 1 : 0), 0);
+  const planned = useMemo(() => rows.lane.reduce((n, e) => n + (e >= 0 ? 1 : 0), 0), [rows]);
   return (
     <div className="lw-lanes">
       <div className="lw-table-tools" role="group" aria-label="Filter lanes">
