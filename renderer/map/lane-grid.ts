@@ -1,7 +1,7 @@
 // Which lanes a map view draws, found without looking at every lane: lanes are binned once per
 // network into a grid of cells by their origin depot (a lane longer than a cell goes to a short
-// list tested every time), so a view tests only the lanes of the cells it overlaps. Above a cap the
-// lanes in view are thinned by an even stride over the cells, so the thinning is spread over the
+// list tested every time), so a view tests only the lanes of the cells on its border. Above a cap
+// the lanes in view are thinned by an even share of every cell, so the thinning is spread over the
 // whole view. Pure arithmetic on typed arrays, unit-tested under Node (no Leaflet here).
 
 export interface LaneEnds {
@@ -87,31 +87,59 @@ function touches(ends: LaneEnds, e: number, view: ViewBox): boolean {
 }
 
 /**
- * The lanes whose extent meets `view`, thinned to at most `cap` by an even stride. `inView` counts
- * every lane that meets the view; `lanes` (a view of the grid's scratch space: read it before the
- * next call) holds the ones to draw.
+ * The lanes whose extent meets `view`, thinned to at most `cap`. `inView` counts every lane that
+ * meets the view; `lanes` (a view of the grid's scratch space: read it before the next call) holds
+ * the ones to draw. Cells wholly inside the view are not tested lane by lane (every lane starting in
+ * them meets the view): they give their count, and when thinning, an even share of their lanes. So a
+ * view costs about the cap plus the lanes of the cells on its border, never every lane.
  */
 export function lanesInView(grid: LaneGrid, ends: LaneEnds, view: ViewBox, cap: number): { lanes: Int32Array; inView: number } {
   const out = grid.scratch;
-  let k = 0;
+  const { cols, start } = grid;
   // A lane starts in its origin's cell and reaches at most one cell further: widen the box by one.
   const r0 = Math.max(0, Math.floor((view.south - grid.minLat) / grid.cellLat) - 1);
   const r1 = Math.min(grid.rows - 1, Math.floor((view.north - grid.minLat) / grid.cellLat) + 1);
   const c0 = Math.max(0, Math.floor((view.west - grid.minLon) / grid.cellLon) - 1);
   const c1 = Math.min(grid.cols - 1, Math.floor((view.east - grid.minLon) / grid.cellLon) + 1);
+  const inside = (r: number, c: number) =>
+    grid.minLat + r * grid.cellLat >= view.south && grid.minLat + (r + 1) * grid.cellLat <= view.north && grid.minLon + c * grid.cellLon >= view.west && grid.minLon + (c + 1) * grid.cellLon <= view.east;
+  // First pass: the border cells' and long lanes' hits go to the front of `out`; inner cells are counted.
+  let k = 0;
+  let innerCount = 0;
   for (let r = r0; r <= r1; r++) {
-    for (let i = grid.start[r * grid.cols + c0]; i < grid.start[r * grid.cols + c1 + 1]; i++) {
-      const e = grid.lanes[i];
-      if (touches(ends, e, view)) out[k++] = e;
+    for (let c = c0; c <= c1; c++) {
+      const cell = r * cols + c;
+      if (inside(r, c)) {
+        innerCount += start[cell + 1] - start[cell];
+        continue;
+      }
+      for (let i = start[cell]; i < start[cell + 1]; i++) if (touches(ends, grid.lanes[i], view)) out[k++] = grid.lanes[i];
     }
   }
   for (let i = 0; i < grid.long.length; i++) if (touches(ends, grid.long[i], view)) out[k++] = grid.long[i];
-  const inView = k;
-  if (k > cap) {
-    // Keep every (k / cap)-th lane, in place (the write index never passes the read index).
-    const step = k / cap;
-    for (let j = 0; j < cap; j++) out[j] = out[Math.floor(j * step)];
-    k = cap;
+  const inView = k + innerCount;
+  // Share of lanes drawn: every lane up to the cap, else an even stride over all of them.
+  const keep = inView <= cap ? 1 : cap / inView;
+  if (keep < 1) {
+    const kept = Math.floor(k * keep);
+    const step = k / Math.max(kept, 1);
+    for (let j = 0; j < kept; j++) out[j] = out[Math.floor(j * step)];
+    k = kept;
+  }
+  // Second pass: the inner cells' lanes (a share of each cell, so the thinning is spread evenly;
+  // the fractions carry over from cell to cell, so the shares add up to the cap).
+  let carry = 0;
+  for (let r = r0; r <= r1 && k < cap; r++) {
+    for (let c = c0; c <= c1; c++) {
+      if (!inside(r, c)) continue;
+      const cell = r * cols + c;
+      const size = start[cell + 1] - start[cell];
+      const want = size * keep + carry;
+      const take = Math.min(size, Math.floor(want + 1e-9));
+      carry = want - take;
+      const step = take > 0 ? size / take : 1;
+      for (let j = 0; j < take && k < cap; j++) out[k++] = grid.lanes[start[cell] + Math.floor(j * step)];
+    }
   }
   return { lanes: out.subarray(0, k), inView };
 }

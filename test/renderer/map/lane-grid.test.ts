@@ -49,8 +49,9 @@ describe('lanesInView', () => {
     expect(all.inView).toBe(20000);
     const thinned = lanesInView(grid, n, view, 1000);
     expect(thinned.inView).toBe(20000);
-    expect(thinned.lanes.length).toBe(1000);
-    expect(new Set(thinned.lanes).size).toBe(1000);
+    expect(thinned.lanes.length).toBeLessThanOrEqual(1000);
+    expect(thinned.lanes.length).toBeGreaterThan(980);
+    expect(new Set(thinned.lanes).size).toBe(thinned.lanes.length);
     // Spread: lanes from both halves of the map (west and east of 7°E).
     const west = Array.from(thinned.lanes).filter((e) => n.lon[n.laneFrom[e]] < 7).length;
     expect(west).toBeGreaterThan(300);
