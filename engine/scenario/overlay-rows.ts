@@ -5,7 +5,7 @@
 
 import { classKey } from '../import/headers';
 import { isoDateText } from '../import/cells';
-import { laneKeyId, laneKeyText } from '../import/lane-key';
+import { laneKeyId, laneKeyText, type LaneKey } from '../import/lane-key';
 import { formatMinor, type Minor } from '../money/minor';
 import type { LaneOverlay, OverlayBase, OverlayIndex } from './overlay';
 import type { Scenario, ScenarioChange } from './types';
@@ -56,14 +56,14 @@ export interface ChangeView {
  * `index` (overlayIndex of the same base) saves keying every row again: at 500,000 rows that took
  * seconds per recompute in the app.
  */
-export function describeChanges(base: OverlayBase, overlay: LaneOverlay, scenario: Scenario, exponent: number, index?: Pick<OverlayIndex, 'rowOf'>): ChangeView[] {
+export function describeChanges(base: OverlayBase, overlay: LaneOverlay, scenario: Scenario, exponent: number, index?: Pick<OverlayIndex, 'rowOfKey'>): ChangeView[] {
   const t = base.lanes;
-  let rowOf: ReadonlyMap<string, number>;
-  if (index) rowOf = index.rowOf;
+  let rowOf: (key: LaneKey) => number | undefined;
+  if (index) rowOf = (key) => index.rowOfKey(key);
   else {
     const own = new Map<string, number>();
     for (let r = 0; r < t.count; r++) own.set(laneKeyId(overlay.keys[r]), r);
-    rowOf = own;
+    rowOf = (key) => own.get(laneKeyId(key));
   }
   const problems = new Map(overlay.problems.map((p) => [p.changeIndex, p.message]));
   const money = (v: number) => (Number.isNaN(v) ? 'blank' : formatMinor(v as Minor, exponent));
@@ -80,7 +80,7 @@ export function describeChanges(base: OverlayBase, overlay: LaneOverlay, scenari
       const l = c.lane;
       text = `new lane ${l.from} → ${l.to}${l.ref ? ` (${l.ref})` : ''}: toll ${money(l.tollMinor)}, fuel ${money(l.fuelMinor)}, fees ${money(l.feesMinor)}, rebate ${money(l.rebateMinor)}`;
     } else {
-      const r = rowOf.get(laneKeyId(c.lane));
+      const r = rowOf(c.lane);
       const lane = laneKeyText(c.lane);
       if (c.kind === 'set-amount') {
         const field = c.field === 'toll' ? `toll ${c.vehicleClass ?? 'every class'}` : c.field;
