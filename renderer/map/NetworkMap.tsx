@@ -76,12 +76,14 @@ function makeRenderers(map: L.Map): Renderers {
     return name;
   };
   const depotsPane = pane('lw-depots', 450);
+  // Margins of a fifth of the view: every moveend repaints the whole canvas, and without a GPU the
+  // cost grows with its area (half a view each side made the basemap four times the view).
   return {
-    base: L.canvas({ pane: pane('lw-base', 250), padding: 0.5 }),
+    base: L.canvas({ pane: pane('lw-base', 250), padding: 0.2 }),
     lanesPane: pane('lw-lanes', 350),
     treePane: pane('lw-tree', 390),
-    overlay: L.canvas({ padding: 0.5 }),
-    depots: L.canvas({ pane: depotsPane, padding: 0.5, tolerance: 4 }),
+    overlay: L.canvas({ padding: 0.2 }),
+    depots: L.canvas({ pane: depotsPane, padding: 0.2, tolerance: 4 }),
     depotsPane,
   };
 }

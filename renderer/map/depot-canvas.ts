@@ -13,7 +13,13 @@ import type { DepotHandlers } from './network-layers';
 /** More depots than this and they are drawn on the depot canvas instead of as markers. */
 export const DEPOT_CANVAS_THRESHOLD = 5_000;
 /** Depots drawn per frame at most (the origin and the selection always); the map says when it thins them. */
-export const MAX_DEPOTS_PER_FRAME = 10_000;
+export const MAX_DEPOTS_PER_FRAME = 6_000;
+/**
+ * More depots than this in a frame and solid styles are drawn as dots in their outline colour,
+ * without the outline (stroking thousands of circles took most of a frame without a GPU); dashed
+ * and unbounded rings keep their outline, so states still differ in more than colour.
+ */
+export const DENSE_DEPOTS = 2_000;
 
 type DepotStyle = { radius: number; color: string; weight: number; fillColor: string; fillOpacity: number; dashArray?: string };
 
@@ -79,7 +85,9 @@ export function depotCanvas(pane: string, network: NetworkView, handlers: DepotH
       if (!list) groups.set(style, (list = []));
       list.push(i);
     });
-    const paint = (style: DepotStyle, items: number[], radius: number) => {
+    const dense = shown.length > DENSE_DEPOTS;
+    const paint = (given: DepotStyle, items: number[], radius: number) => {
+      const style = dense && !given.dashArray && given.weight < 3 ? { ...given, fillColor: given.color, weight: 0 } : given;
       ctx.beginPath();
       for (const i of items) {
         ctx.moveTo(shownX[i] + radius, shownY[i]);

@@ -13,7 +13,12 @@ import { offsetFor } from './two-way';
 /** More lanes than this and the grey lanes are thinned to the cap below. */
 export const LANE_DETAIL_THRESHOLD = 20_000;
 /** Grey lanes drawn per frame at most, once thinned. */
-export const MAX_LANES_PER_FRAME = 20_000;
+export const MAX_LANES_PER_FRAME = 12_000;
+/**
+ * More lines than this in one frame and a wide style (the route tree) is stroked one pixel wide:
+ * without a GPU, 50,000 three-pixel lines took about 300 ms to rasterise, one-pixel lines 30 ms.
+ */
+export const WIDE_LINES_LIMIT = 15_000;
 
 export interface LaneCounts {
   /** Lanes drawn in this frame. */
@@ -126,7 +131,8 @@ export class PaintLayer {
   private readonly job: () => void;
 
   constructor(pane: string, paint: Paint) {
-    const renderer = new PaintedCanvas({ pane, padding: 0.3 });
+    // A small margin: in software rendering the cost of a paint grows with the canvas area.
+    const renderer = new PaintedCanvas({ pane, padding: 0.15 });
     this.job = () => {
       // The view may have moved or the layer gone since the paint was queued: paint what is current.
       if (!renderer._map || !renderer._bounds || !renderer._ctx) return;
@@ -202,9 +208,10 @@ function strokeLanes(ctx: CanvasRenderingContext2D, map: L.Map, network: Network
     ctx.lineTo(x2, y2);
     drawn++;
   }
+  const dense = drawn > WIDE_LINES_LIMIT && style.weight > 1;
   ctx.strokeStyle = style.color;
-  ctx.globalAlpha = style.opacity;
-  ctx.lineWidth = style.weight;
+  ctx.globalAlpha = dense ? 1 : style.opacity;
+  ctx.lineWidth = dense ? 1 : style.weight;
   ctx.lineCap = (style.lineCap as CanvasLineCap | undefined) ?? 'round';
   ctx.lineJoin = 'round';
   ctx.stroke();

@@ -71,12 +71,29 @@ async function heapMb(page: Page): Promise<{ used: number; total: number }> {
   return { used: get('JSHeapUsedSize'), total: get('JSHeapTotalSize') };
 }
 
-/** The engine worker's heap, in MB (Chromium's performance.memory inside the worker), or null. */
-async function workerHeapMb(page: Page): Promise<number | null> {
-  const worker = page.workers()[0];
-  if (!worker) return null;
-  const used = await worker.evaluate(() => (performance as unknown as { memory?: { usedJSHeapSize: number } }).memory?.usedJSHeapSize ?? null);
-  return used === null ? null : Math.round(used / 1e6);
+/**
+ * The engine worker's JavaScript heap in MB (CDP Runtime.getHeapUsage sent to the worker's target
+ * through a browser session; playwright's worker handle has no CDP session of its own), or null.
+ */
+async function workerHeapMb(): Promise<number | null> {
+  const browserCdp = await session.browser.newBrowserCDPSession();
+  try {
+    const { targetInfos } = await browserCdp.send('Target.getTargets');
+    const worker = targetInfos.find((t) => t.type === 'worker' && t.url.includes('engine.worker'));
+    if (!worker) return null;
+    const { sessionId } = await browserCdp.send('Target.attachToTarget', { targetId: worker.targetId, flatten: false });
+    const answer = new Promise<string>((resolve) =>
+      browserCdp.on('Target.receivedMessageFromTarget', (event) => {
+        if ((JSON.parse(event.message) as { id?: number }).id === 1) resolve(event.message);
+      }),
+    );
+    await browserCdp.send('Target.sendMessageToTarget', { sessionId, message: JSON.stringify({ id: 1, method: 'Runtime.getHeapUsage' }) });
+    const used = (JSON.parse(await answer) as { result?: { usedSize: number } }).result?.usedSize;
+    await browserCdp.send('Target.detachFromTarget', { sessionId });
+    return used === undefined ? null : Math.round(used / 1e6);
+  } finally {
+    await browserCdp.detach();
+  }
 }
 
 beforeAll(async () => {
@@ -120,7 +137,7 @@ describe('50,000 depots and 500,000 lanes', () => {
     figures.longest_ui_task_during_import_ms = longest(importProbe.longTasks);
     figures.ui_long_tasks_during_import = importProbe.longTasks.length;
     figures.page_heap_after_import_mb = await heapMb(page);
-    figures.worker_heap_after_import_mb = await workerHeapMb(page);
+    figures.worker_heap_after_import_mb = await workerHeapMb();
 
     const origin = (await page.locator('.lw-origin-current').innerText()).split(' · ')[0];
     const date = await page.getByLabel('Dispatch date').inputValue();
@@ -208,7 +225,7 @@ describe('50,000 depots and 500,000 lanes', () => {
     figures.longest_frame_gap_while_panning_ms = Math.round(panProbe.frameGap);
     figures.longest_ui_task_while_zooming_ms = longest(zoomProbe.longTasks);
     figures.page_heap_at_end_mb = await heapMb(page);
-    figures.worker_heap_at_end_mb = await workerHeapMb(page);
+    figures.worker_heap_at_end_mb = await workerHeapMb();
 
     // Zoomed in, labels appear for a capped number of depots; the keyboard ring still moves.
     await expect.poll(async () => Number(await map(page).getAttribute('data-depot-labels'))).toBeLessThanOrEqual(250);
