@@ -111,7 +111,8 @@ export interface LaneRowsView {
 /**
  * The engine overlay's figures for a solve (engine/scenario/overlay.ts), so the UI computes none:
  * per network lane the amounts under the scenario for the planned class, per lanes-file row the
- * same for the "every row" view, and each change as text with whether it applied.
+ * same for the "every row" view (empty arrays when every row is planned: then a row's amounts are
+ * its lane's), and each change as text with whether it applied.
  */
 export interface OverlayView extends Omit<PlanAmounts, 'weights'> {
   rows: { toll: Float64Array; fuel: Float64Array; fees: Float64Array; rebate: Float64Array; closed: Uint8Array; changed: Uint8Array };

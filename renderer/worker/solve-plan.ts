@@ -32,8 +32,11 @@ export function scenarioSolveInput(imported: ImportResult, network: Network, sce
   const request = planRequestOf(imported);
   const overlay = buildOverlay(imported, changed ? scenario : null, index);
   const amounts = overlayPlanAmounts(overlay, imported, request, network, imported.plan.laneRecord);
-  const rows = overlayRowAmounts(overlay, imported.plan.vehicleClass);
   const base = overlay.baseCount;
+  // Row amounts are read only for rows the plan leaves out (the lane table's "every row" view);
+  // when every row is planned they would be 500,000 copies per recompute that nothing reads.
+  const everyRowPlanned = imported.plan.laneRecord.length === base;
+  const rows = everyRowPlanned ? null : overlayRowAmounts(overlay, imported.plan.vehicleClass);
   const view: OverlayView = {
     toll: amounts.toll,
     fuel: amounts.fuel,
@@ -42,7 +45,9 @@ export function scenarioSolveInput(imported: ImportResult, network: Network, sce
     closed: amounts.closed,
     changed: amounts.changed,
     notPlanned: amounts.notPlanned,
-    rows: { toll: rows.toll.slice(0, base), fuel: rows.fuel.slice(0, base), fees: rows.fees.slice(0, base), rebate: rows.rebate.slice(0, base), closed: overlay.closed.slice(0, base), changed: overlay.changed.slice(0, base) },
+    rows: rows
+      ? { toll: rows.toll.slice(0, base), fuel: rows.fuel.slice(0, base), fees: rows.fees.slice(0, base), rebate: rows.rebate.slice(0, base), closed: overlay.closed.slice(0, base), changed: overlay.changed.slice(0, base) }
+      : { toll: new Float64Array(0), fuel: new Float64Array(0), fees: new Float64Array(0), rebate: new Float64Array(0), closed: new Uint8Array(0), changed: new Uint8Array(0) },
     changes: changed ? describeChanges(imported, overlay, scenario!, network.exponent, index) : [],
   };
   if (!changed) return { overlay: view, weights: undefined, rebuilt: null };

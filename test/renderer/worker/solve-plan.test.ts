@@ -7,7 +7,7 @@ import { importNetwork } from '../../../engine/planning/import-network';
 import { cheapestRoutes } from '../../../engine/routes/cheapest-routes';
 import { routePath } from '../../../engine/routes/route-path';
 import { buildOverlay } from '../../../engine/scenario/overlay';
-import { solveView } from '../../../renderer/worker/solve-plan';
+import { scenarioSolveInput, solveView } from '../../../renderer/worker/solve-plan';
 import type { OverlayView } from '../../../renderer/worker/protocol';
 import { seededRandom } from '../../support/seeded-random';
 
@@ -49,5 +49,22 @@ describe('solveView', () => {
     }
     expect(reached).toBeGreaterThan(100);
     expect(Array.from(view.treeLanes)).toEqual(last);
+  });
+});
+
+describe('scenarioSolveInput', () => {
+  const depots = 'id,name,lat,lon\nA,Alpha,50.0,4.0\nB,Bravo,50.5,4.5\n';
+  it('sends no per-row amounts when every row of the file is planned (the lane table reads the lanes)', () => {
+    const imported = importNetwork(depots, 'from,to,toll,fuel,fees,rebate\nA,B,1.00,2.00,0,0\nB,A,3.00,4.00,0,0\n', { plan: { date: '2026-08-15' } });
+    const input = scenarioSolveInput(imported, imported.network!, null);
+    expect(input.overlay.rows.toll.length).toBe(0);
+    expect(Array.from(input.overlay.toll)).toEqual([100, 300]);
+  });
+  it('sends every row when the plan leaves a row out, with that row’s own amounts', () => {
+    const lanes = 'from,to,toll,fuel,fees,rebate,valid_from,valid_to\nA,B,1.00,2.00,0,0,,\nB,A,3.00,4.00,0,0,2027-01-01,\n';
+    const imported = importNetwork(depots, lanes, { plan: { date: '2026-08-15' } });
+    const input = scenarioSolveInput(imported, imported.network!, null);
+    expect(Array.from(input.overlay.rows.toll)).toEqual([100, 300]);
+    expect(Array.from(input.overlay.toll)).toEqual([100]);
   });
 });
