@@ -150,7 +150,15 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
 
   useEffect(() => {
     if (!map || !network || network.depotIds.length === 0) return;
-    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number]));
+    // Corners by a plain loop: a LatLng per depot cost a fifth of a second at 50,000 depots.
+    let south = Infinity, west = Infinity, north = -Infinity, east = -Infinity;
+    for (let d = 0; d < network.lat.length; d++) {
+      south = Math.min(south, network.lat[d]);
+      north = Math.max(north, network.lat[d]);
+      west = Math.min(west, network.lon[d]);
+      east = Math.max(east, network.lon[d]);
+    }
+    const bounds = L.latLngBounds([south, west], [north, east]);
     fitTo.current = bounds;
     autoFit.current = true;
     fitNetwork(map, bounds, corner.current);
