@@ -55,6 +55,12 @@ export function scenarioSolveInput(imported: ImportResult, network: Network, sce
   return { overlay: view, weights: undefined, rebuilt: overlayNetwork(overlay, imported, request) };
 }
 
+/** The typed arrays of a solve view (its own copies, overlay included), for postMessage's transfer list. */
+export function solveTransferables(view: SolveView): ArrayBuffer[] {
+  const own = [view.status, view.cost, view.legs, view.driveMinutes, view.flags, view.treeLanes, ...(view.base ? [view.base.status, view.base.cost, view.base.legs] : [])];
+  return [...own.map((a) => a.buffer as ArrayBuffer), ...overlayTransferables(view.overlay)];
+}
+
 /** The typed arrays of an overlay view, for postMessage's transfer list. */
 export function overlayTransferables(view: OverlayView): ArrayBuffer[] {
   const r = view.rows;
