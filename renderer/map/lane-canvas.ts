@@ -7,7 +7,7 @@
 import L from 'leaflet';
 import { addedLaneOf, type AddedLane } from '../model/added-lanes';
 import type { NetworkView } from '../worker/protocol';
-import { laneGrid, lanesInView, type LaneGrid, type ViewBox } from './lane-grid';
+import { lanesInView, type ViewBox } from './lane-grid';
 import { offsetFor } from './two-way';
 
 /** More lanes than this and the grey lanes are thinned to the cap below. */
@@ -221,10 +221,9 @@ function strokeLanes(ctx: CanvasRenderingContext2D, map: L.Map, network: Network
 
 /** Every lane of the network, grey, culled to the view and thinned above the threshold. */
 export function allLanesLayer(pane: string, network: NetworkView, style: LineStyle, onCounts: (counts: LaneCounts) => void): PaintLayer {
-  let grid: LaneGrid | null = null;
+  const grid = network.laneGrid;
   const total = network.laneFrom.length;
   return new PaintLayer(pane, (ctx, bounds, map) => {
-    grid ??= laneGrid(network);
     const view = viewBoxOf(map, bounds);
     const picked = lanesInView(grid, network, view, total > LANE_DETAIL_THRESHOLD ? MAX_LANES_PER_FRAME : total);
     const drawn = strokeLanes(ctx, map, network, picked.lanes, style, null);

@@ -23,9 +23,11 @@ export interface LaneGrid {
   lanes: Int32Array;
   /** Lanes whose extent is larger than a cell: tested against every view. */
   long: Int32Array;
-  /** Scratch space for a view's lanes (reused, one entry per lane). */
-  scratch: Int32Array;
 }
+
+// Scratch space for a view's lanes (one entry per lane), made on first use and reused: the grid
+// itself is plain typed arrays, built in the engine worker and transferred with the network view.
+const scratchOf = new WeakMap<LaneGrid, Int32Array>();
 
 export interface ViewBox {
   south: number;
@@ -76,7 +78,7 @@ export function laneGrid(ends: LaneEnds, size = 128): LaneGrid {
     if (cellOf[e] < 0) long[l++] = e;
     else lanes[count[cellOf[e]]++] = e;
   }
-  return { cols, rows, minLat, minLon, cellLat, cellLon, start, lanes, long, scratch: new Int32Array(m) };
+  return { cols, rows, minLat, minLon, cellLat, cellLon, start, lanes, long };
 }
 
 function touches(ends: LaneEnds, e: number, view: ViewBox): boolean {
@@ -94,7 +96,8 @@ function touches(ends: LaneEnds, e: number, view: ViewBox): boolean {
  * view costs about the cap plus the lanes of the cells on its border, never every lane.
  */
 export function lanesInView(grid: LaneGrid, ends: LaneEnds, view: ViewBox, cap: number): { lanes: Int32Array; inView: number } {
-  const out = grid.scratch;
+  let out = scratchOf.get(grid);
+  if (!out) scratchOf.set(grid, (out = new Int32Array(grid.lanes.length + grid.long.length)));
   const { cols, start } = grid;
   // A lane starts in its origin's cell and reaches at most one cell further: widen the box by one.
   const r0 = Math.max(0, Math.floor((view.south - grid.minLat) / grid.cellLat) - 1);

@@ -5,6 +5,7 @@
 
 import { overlayKeys } from '../../engine/index';
 import type { ImportResult, LaneKey, Network } from '../../engine/index';
+import { laneGrid } from '../map/lane-grid';
 import type { LaneRowsView, NetworkView, PlanChoice } from './protocol';
 
 /** Base network lane of each lanes-file row, -1 for a row the plan leaves out. */
@@ -96,6 +97,8 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
     laneDistanceKm: network.laneDistanceKm.slice(),
     laneDriveMinutes: network.laneDriveMinutes.slice(),
     laneReverse: reverseFlags(network),
+    // Binned here, off the UI thread (the map culls its lanes with it).
+    laneGrid: laneGrid(network),
     refNames,
     rowClassNames: result.lanes.classNames.slice(),
     rows,
@@ -109,7 +112,7 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
 /** The typed arrays of a view, for postMessage's transfer list. */
 export function transferablesOf(view: NetworkView): ArrayBuffer[] {
   const r = view.rows;
-  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
+  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, view.laneGrid.start, view.laneGrid.lanes, view.laneGrid.long, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
     (a) => a.buffer as ArrayBuffer,
   );
 }

@@ -5,6 +5,7 @@ import type { ChangeView, CsvDialect, EstimateRules, PlanAmounts, PlanningChoice
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
+import type { LaneGrid } from '../map/lane-grid';
 
 export type { ContractReviewView } from './review';
 
@@ -75,6 +76,8 @@ export interface NetworkView {
   laneDriveMinutes: Float64Array;
   /** 1 where the lane's reverse is in the network too (the map draws the two side by side). */
   laneReverse: Uint8Array;
+  /** The lanes binned by map cell (map/lane-grid.ts), for culling the lanes to a view. */
+  laneGrid: LaneGrid;
   /** The distinct contract refs of the lanes file (`rows.refIndex` points here). */
   refNames: string[];
   /** The vehicle classes long-layout rows name (`rows.classIndex` points here). */
