@@ -59,7 +59,8 @@ function useSameLanes(lanes: Int32Array | null): Int32Array | null {
 }
 
 interface Renderers {
-  base: L.Renderer;
+  /** Pane of the painted basemap. */
+  basePane: string;
   /** Panes of the painted canvases: all lanes, and the route tree above them. */
   lanesPane: string;
   treePane: string;
@@ -79,7 +80,7 @@ function makeRenderers(map: L.Map): Renderers {
   // Margins of a fifth of the view: every moveend repaints the whole canvas, and without a GPU the
   // cost grows with its area (half a view each side made the basemap four times the view).
   return {
-    base: L.canvas({ pane: pane('lw-base', 250), padding: 0.2 }),
+    basePane: pane('lw-base', 250),
     lanesPane: pane('lw-lanes', 350),
     treePane: pane('lw-tree', 390),
     overlay: L.canvas({ padding: 0.2 }),
@@ -121,7 +122,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)').addAttribution(MAP_CAUTION);
     map.setView([49.5, 6], 5);
     const renderers = makeRenderers(map);
-    addBasemap(map, renderers.base);
+    addBasemap(map, renderers.basePane);
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
     map.on('moveend zoomend resize', () => setView((n) => n + 1));
