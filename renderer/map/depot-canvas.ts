@@ -11,7 +11,7 @@ import { STYLE } from './map-style';
 import type { DepotHandlers } from './network-layers';
 
 /** More depots than this and they are drawn on the depot canvas instead of as markers. */
-export const DEPOT_CANVAS_THRESHOLD = 5_000;
+export const DEPOT_CANVAS_THRESHOLD = 2_000;
 /** Depots drawn per frame at most (the origin and the selection always); the map says when it thins them. */
 export const MAX_DEPOTS_PER_FRAME = 6_000;
 /**
