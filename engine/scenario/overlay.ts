@@ -57,24 +57,58 @@ export function overlayKeys(base: OverlayBase): LaneKey[] {
   return laneKeysOfTable(base.lanes, base.depots);
 }
 
-/** The base rows' keys and their lookup tables, made once per import and shared by every overlay of it. */
+/** The base rows' keys and their lookups, made once per import and shared by every overlay of it. */
 export interface OverlayIndex {
   keys: readonly LaneKey[];
-  /** laneKeyId -> row. */
-  rowOf: ReadonlyMap<string, number>;
-  /** laneGroupText -> rows in the group (the last occurrence). */
-  groupCount: ReadonlyMap<string, number>;
+  /** The base row `key` names, or undefined. */
+  rowOfKey(key: LaneKey): number | undefined;
+  /** Rows of the file with this from, to and ref (the last occurrence); 0 when none. */
+  groupSize(from: string, to: string, ref: string | null): number;
+}
+
+/**
+ * The group of a from / to / ref as one string, for a lookup table: each id is length-prefixed, so
+ * no two groups give the same text whatever characters the ids hold. Concatenation, not
+ * JSON.stringify of an array: at 500,000 rows the index took seconds that way.
+ */
+function groupId(from: string, to: string, ref: string | null): string {
+  return `${from.length}:${from}${to.length}:${to}${ref === null ? '-' : `+${ref}`}`;
 }
 
 export function overlayIndex(base: OverlayBase): OverlayIndex {
-  const keys = overlayKeys(base);
-  const rowOf = new Map<string, number>();
-  const groupCount = new Map<string, number>();
-  keys.forEach((k, i) => {
-    rowOf.set(laneKeyId(k), i);
-    groupCount.set(laneGroupText(k.from, k.to, k.ref), k.occurrence);
-  });
-  return { keys, rowOf, groupCount };
+  const t = base.lanes;
+  const depotIds = base.depots.map((d) => d.id);
+  const keys: LaneKey[] = new Array(t.count);
+  // Group -> its one row, or its rows in file order (most groups have one row).
+  const groups = new Map<string, number | number[]>();
+  for (let i = 0; i < t.count; i++) {
+    const from = depotIds[t.from[i]];
+    const to = depotIds[t.to[i]];
+    // As laneKeysOfTable: an empty ref is no ref.
+    const ref = t.ref[i] || null;
+    const id = groupId(from, to, ref);
+    const rows = groups.get(id);
+    let occurrence = 1;
+    if (rows === undefined) groups.set(id, i);
+    else if (typeof rows === 'number') {
+      groups.set(id, [rows, i]);
+      occurrence = 2;
+    } else occurrence = rows.push(i);
+    keys[i] = { from, to, ref, occurrence };
+  }
+  return {
+    keys,
+    rowOfKey(key) {
+      const rows = groups.get(groupId(key.from, key.to, key.ref ?? null));
+      if (rows === undefined || !Number.isInteger(key.occurrence)) return undefined;
+      if (typeof rows === 'number') return key.occurrence === 1 ? rows : undefined;
+      return key.occurrence >= 1 && key.occurrence <= rows.length ? rows[key.occurrence - 1] : undefined;
+    },
+    groupSize(from, to, ref) {
+      const rows = groups.get(groupId(from, to, ref));
+      return rows === undefined ? 0 : typeof rows === 'number' ? 1 : rows.length;
+    },
+  };
 }
 
 /**
@@ -132,8 +166,7 @@ class OverlayBuilder {
   }
 
   private rowOfKey(key: LaneKey): number | undefined {
-    const id = laneKeyId(key);
-    return this.shared.rowOf.get(id) ?? this.addedIndex.get(id);
+    return this.shared.rowOfKey(key) ?? this.addedIndex.get(laneKeyId(key));
   }
 
   private keyOf(row: number): LaneKey {
@@ -312,7 +345,7 @@ class OverlayBuilder {
       ref: l.ref ?? undefined,
     });
     const group = laneGroupText(l.from, l.to, l.ref);
-    key.occurrence = (this.groupCount.get(group) ?? this.shared.groupCount.get(group) ?? 0) + 1;
+    key.occurrence = (this.groupCount.get(group) ?? this.shared.groupSize(l.from, l.to, l.ref ?? null)) + 1;
     this.groupCount.set(group, key.occurrence);
     this.addedIndex.set(laneKeyId(key), r);
     this.pushRow(key, -1, changeIndex);

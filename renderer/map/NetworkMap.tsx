@@ -1,6 +1,8 @@
 // The map view: a Leaflet map with the offline basemap, the lanes, the route tree from the origin,
 // rebate loops and the selected route. Leaflet is created once; each layer is swapped on its own
-// when its inputs change, so selecting a depot does not redraw 50,000 lanes.
+// when its inputs change, so selecting a depot does not redraw 500,000 lanes. All lanes and the tree
+// are painted on canvases with level of detail (lane-canvas.ts): above a lane count only the lanes
+// in view are drawn, thinned to a cap, and the map says how many of how many it shows.
 
 import L from 'leaflet';
 import 'leaflet/dist/leaflet.css';
@@ -11,9 +13,11 @@ import { addBasemap } from './basemap';
 import type { AddedLane } from '../model/added-lanes';
 import { depotLabelLayer } from './depot-labels';
 import { fitNetwork, depotsInView } from './fit-view';
-import { addedLaneLayer, depotMarkers, laneLayer, loopLayer, routeLayer, solveMarkers, styleDepots, treeLayer } from './network-layers';
+import { addedLaneLayer, depotMarkers, loopLayer, routeLayer, solveMarkers, styleDepots } from './network-layers';
 import { loadRouteLayer, type LoadRouteDrawing } from './load-route-layer';
-import { reverseLookup } from './two-way';
+import { allLanesLayer, laneSetLayer, LANE_DETAIL_THRESHOLD, type LaneCounts, type PaintLayer } from './lane-canvas';
+import { DEPOT_CANVAS_THRESHOLD, depotCanvas, type DepotCanvas } from './depot-canvas';
+import { STYLE } from './map-style';
 import { useDepotCursor } from './use-depot-cursor';
 import './map.css';
 
@@ -55,25 +59,43 @@ function useSameLanes(lanes: Int32Array | null): Int32Array | null {
 }
 
 interface Renderers {
-  base: L.Renderer;
-  lanes: L.Renderer;
+  /** Pane of the painted basemap. */
+  basePane: string;
+  /** Panes of the painted canvases: all lanes, and the route tree above them. */
+  lanesPane: string;
+  treePane: string;
   overlay: L.Renderer;
   depots: L.Renderer;
+  depotsPane: string;
 }
 
 // One canvas per kind of content, stacked in their own panes: a new solve repaints only the route
-// tree's canvas, never the basemap's polygons or 50,000 lanes.
+// tree's canvas, never the basemap's polygons or 500,000 lanes.
 function makeRenderers(map: L.Map): Renderers {
   const pane = (name: string, zIndex: number) => {
     map.createPane(name).style.zIndex = String(zIndex);
     return name;
   };
+  const depotsPane = pane('lw-depots', 450);
+  // Margins of a fifth of the view: every moveend repaints the whole canvas, and without a GPU the
+  // cost grows with its area (half a view each side made the basemap four times the view).
   return {
-    base: L.canvas({ pane: pane('lw-base', 250), padding: 0.5 }),
-    lanes: L.canvas({ pane: pane('lw-lanes', 350), padding: 0.5 }),
-    overlay: L.canvas({ padding: 0.5 }),
-    depots: L.canvas({ pane: pane('lw-depots', 450), padding: 0.5, tolerance: 4 }),
+    basePane: pane('lw-base', 250),
+    lanesPane: pane('lw-lanes', 350),
+    treePane: pane('lw-tree', 390),
+    overlay: L.canvas({ padding: 0.2 }),
+    depots: L.canvas({ pane: depotsPane, padding: 0.2, tolerance: 4 }),
+    depotsPane,
   };
+}
+
+/** A painted canvas layer rebuilt when `deps` change. */
+function usePaintLayer(map: L.Map | null, build: (() => PaintLayer) | null, deps: unknown[]) {
+  useEffect(() => {
+    if (!map || !build) return;
+    const layer = build().addTo(map);
+    return () => layer.remove();
+  }, [map, ...deps]);
 }
 
 export function NetworkMap({ network, solve, route, added, selected, onSelect, onPlanFrom, loadRoutes, legend }: NetworkMapProps) {
@@ -100,7 +122,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)').addAttribution(MAP_CAUTION);
     map.setView([49.5, 6], 5);
     const renderers = makeRenderers(map);
-    addBasemap(map, renderers.base);
+    addBasemap(map, renderers.basePane);
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
     map.on('moveend zoomend resize', () => setView((n) => n + 1));
@@ -129,7 +151,15 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
 
   useEffect(() => {
     if (!map || !network || network.depotIds.length === 0) return;
-    const bounds = L.latLngBounds(Array.from(network.lat, (lat, i) => [lat, network.lon[i]] as [number, number]));
+    // Corners by a plain loop: a LatLng per depot cost a fifth of a second at 50,000 depots.
+    let south = Infinity, west = Infinity, north = -Infinity, east = -Infinity;
+    for (let d = 0; d < network.lat.length; d++) {
+      south = Math.min(south, network.lat[d]);
+      north = Math.max(north, network.lat[d]);
+      west = Math.min(west, network.lon[d]);
+      east = Math.max(east, network.lon[d]);
+    }
+    const bounds = L.latLngBounds([south, west], [north, east]);
     fitTo.current = bounds;
     autoFit.current = true;
     fitNetwork(map, bounds, corner.current);
@@ -140,31 +170,49 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     fitNetwork(map, fitTo.current, corner.current);
   }, [map]);
 
-  const reverse = useMemo(() => (network ? reverseLookup(network) : () => false), [network]);
-  useLayer(map, network && renderers ? () => laneLayer(network, reverse, renderers.lanes) : null, [network, reverse]);
-  // Most edits leave the route tree as it was: the same lanes keep the drawn layer, so the overlay
-  // canvas (as large as the map and its margin) is not repainted and re-sent to the compositor.
+  // What the lane canvas drew in its last frame (it paints as the view moves).
+  const [laneCounts, setLaneCounts] = useState<LaneCounts | null>(null);
+  const [depotCounts, setDepotCounts] = useState<{ drawn: number; inView: number } | null>(null);
+  const onDepotCounts = useCallback((drawn: number, inView: number) => setDepotCounts((now) => (now && now.drawn === drawn && now.inView === inView ? now : { drawn, inView })), []);
+  const onCounts = useCallback((next: LaneCounts) => setLaneCounts((now) => (now && now.drawn === next.drawn && now.inView === next.inView && now.total === next.total ? now : next)), []);
+  usePaintLayer(map, network && renderers ? () => allLanesLayer(renderers.lanesPane, network, STYLE.lane, onCounts) : null, [network]);
+  // Most edits leave the route tree as it was: the same lanes keep the painted layer.
   const tree = useSameLanes(solve?.treeLanes ?? null);
-  useLayer(map, network && tree && renderers ? () => treeLayer(network, tree, added, reverse, renderers.overlay) : null, [network, tree, added, reverse]);
+  usePaintLayer(map, network && tree && renderers ? () => laneSetLayer(renderers.treePane, network, tree, added, STYLE.tree) : null, [network, tree, added]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
-  useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, reverse, renderers.overlay) : null, [network, route, added, reverse]);
+  useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, renderers.overlay) : null, [network, route, added]);
   useLayer(map, network && loadRoutes && renderers ? () => loadRouteLayer(network, loadRoutes, renderers.overlay) : null, [network, loadRoutes]);
-  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, added, reverse, renderers.overlay) : null, [network, solve, added, reverse]);
-  // Depot circles are made once per network (thousands of them) and only restyled per solve.
+  useLayer(map, network && solve && solve.loops.length > 0 && renderers ? () => loopLayer(network, solve, added, renderers.overlay) : null, [network, solve, added]);
+  // Depot circles are made once per network and only restyled per solve: Leaflet circle markers
+  // for a small network (each with its tooltip), one painted canvas for a large one.
+  const bigNetwork = (network?.depotIds.length ?? 0) > DEPOT_CANVAS_THRESHOLD;
   const [depots, setDepots] = useState<L.CircleMarker[] | null>(null);
+  const [depotPaint, setDepotPaint] = useState<DepotCanvas | null>(null);
   useEffect(() => {
     if (!map || !network || !renderers) return;
-    const made = depotMarkers(network, renderers.depots, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) });
+    const handlers = { onSelect: (d: number) => selectRef.current(d), onPlanFrom: (d: number) => planFromRef.current(d) };
+    if (network.depotIds.length > DEPOT_CANVAS_THRESHOLD) {
+      const canvas = depotCanvas(renderers.depotsPane, network, handlers, onDepotCounts);
+      const detach = canvas.attach(map);
+      setDepotPaint(canvas);
+      return () => {
+        detach();
+        setDepotPaint(null);
+        setDepotCounts(null);
+      };
+    }
+    const made = depotMarkers(network, renderers.depots, handlers);
     made.layer.addTo(map);
     setDepots(made.markers);
     return () => {
       made.layer.remove();
       setDepots(null);
     };
-  }, [map, network, renderers]);
+  }, [map, network, renderers, onDepotCounts]);
   useEffect(() => {
     if (depots && network && depots.length === network.depotIds.length) styleDepots(depots, solve, selected);
-  }, [depots, network, solve, selected]);
+    depotPaint?.restyle(solve, selected);
+  }, [depots, depotPaint, network, solve, selected]);
   useLayer(map, network && solve ? () => solveMarkers(network, solve, { onSelect: (d) => selectRef.current(d), onPlanFrom: (d) => planFromRef.current(d) }) : null, [network, solve]);
 
   // Depot ids beside the depots when zoomed in; rebuilt as the view moves (only depots in view).
@@ -186,6 +234,8 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const addedDrawn = added.filter((a) => a.from >= 0 && a.to >= 0).length;
   const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
   const depotCount = network?.depotIds.length ?? 0;
+  const laneTotal = network?.laneFrom.length ?? 0;
+  const thinned = laneTotal > LANE_DETAIL_THRESHOLD && laneCounts !== null && laneCounts.total === laneTotal;
   return (
     <div className="lw-map-frame">
       <div
@@ -199,6 +249,8 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         data-tree-lanes={solve?.treeLanes.length ?? 0}
         data-depots-in-view={inView}
         data-depot-labels={labelCount}
+        data-lanes-drawn={laneCounts?.drawn ?? ''}
+        data-depot-canvas={bigNetwork ? 'yes' : 'no'}
         data-zoom={map && view >= 0 ? map.getZoom() : ''}
       />
       <div className="lw-map-corner" ref={corner}>
@@ -212,6 +264,12 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         </div>
         {legend}
       </div>
+      {thinned && (
+        <p className="lw-map-thinned" data-testid="map-thinned" title="Above this many lanes the map draws the route tree, the selected route, rebate loops and a share of the lanes in view; zoom in to see more of them">
+          Lanes thinned: {laneCounts.drawn.toLocaleString('en')} of {laneTotal.toLocaleString('en')} drawn ({laneCounts.inView.toLocaleString('en')} in view)
+          {depotCounts && depotCounts.drawn < depotCounts.inView ? ` · depots: ${depotCounts.drawn.toLocaleString('en')} of ${depotCounts.inView.toLocaleString('en')} in view drawn` : ''}
+        </p>
+      )}
       <p id="lw-map-keys" className="lw-visually-hidden">
         Arrow keys move to the nearest depot in that direction, Home to the origin; Enter shows the depot's route, Shift+Enter plans from it.
       </p>

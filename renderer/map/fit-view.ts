@@ -4,6 +4,7 @@
 
 import L from 'leaflet';
 import type { NetworkView } from '../worker/protocol';
+import { layerTransform, mercatorOf } from './lane-canvas';
 
 // Room for the zoom buttons (left), the attribution line (bottom) and a margin on every side.
 const LEFT = 44;
@@ -31,11 +32,16 @@ export function fitNetwork(map: L.Map, bounds: L.LatLngBounds, corner: HTMLEleme
 export function depotsInView(map: L.Map, network: NetworkView, corner: HTMLElement | null): number {
   const size = map.getSize();
   const { w, h } = cornerSize(corner);
+  // Projected with the arithmetic the lane canvas uses (no Leaflet point per depot: 50,000 depots).
+  const m = mercatorOf(network);
+  const t = layerTransform(map);
+  const shift = map.latLngToContainerPoint([0, 0]).subtract(map.latLngToLayerPoint([0, 0]));
   let n = 0;
   for (let d = 0; d < network.depotIds.length; d++) {
-    const p = map.latLngToContainerPoint([network.lat[d], network.lon[d]]);
-    if (p.x < 0 || p.y < 0 || p.x > size.x || p.y > size.y) continue;
-    if (p.x > size.x - w && p.y < h) continue;
+    const x = t.sx * m.x[d] + t.ox + shift.x;
+    const y = t.sy * m.y[d] + t.oy + shift.y;
+    if (x < 0 || y < 0 || x > size.x || y > size.y) continue;
+    if (x > size.x - w && y < h) continue;
     n++;
   }
   return n;

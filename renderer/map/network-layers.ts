@@ -1,5 +1,6 @@
-// Builds the network's Leaflet layers: all lanes as one multi-line on the canvas renderer (one
-// layer, so 50,000 lanes stay smooth), the route tree, the selected route, rebate loops, depots.
+// Builds the network's Leaflet layers for the few lanes drawn on top (the selected route, rebate
+// loops, lanes a scenario adds) and the depots of a small network. All lanes and the route tree are
+// painted on canvases of their own (lane-canvas.ts), with level of detail.
 
 import L from 'leaflet';
 import { addedLaneName, addedLaneOf, type AddedLane } from '../model/added-lanes';
@@ -7,20 +8,23 @@ import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { textNode } from './dom-text';
 import { MAX_DIAMONDS, STYLE } from './map-style';
 import { OffsetLines } from './offset-lanes';
-import { offsetFor, type HasReverse } from './two-way';
+import { offsetFor } from './two-way';
 
 type Segments = L.LatLngExpression[][];
 
-/** Lines of these lanes; a lane whose reverse exists is shifted right of its direction (offset-lanes.ts). */
-function linesOf(network: NetworkView, lanes: ArrayLike<number>, reverse: HasReverse, style: L.PolylineOptions & { weight: number }, renderer: L.Renderer, added: readonly AddedLane[] = [], shift = offsetFor(style.weight)): L.Polyline {
-  const ends: number[] = [];
-  const segments = segmentsOf(network, lanes, added, ends);
+/**
+ * Lines of these lanes; a lane whose reverse is in the network (`laneReverse`, found by the worker)
+ * is shifted right of its direction (offset-lanes.ts).
+ */
+function linesOf(network: NetworkView, lanes: ArrayLike<number>, style: L.PolylineOptions & { weight: number }, renderer: L.Renderer, added: readonly AddedLane[] = [], shift = offsetFor(style.weight)): L.Polyline {
+  const drawn: number[] = [];
+  const segments = segmentsOf(network, lanes, added, [], drawn);
   const offsets = new Float32Array(segments.length);
-  for (let i = 0; i < segments.length; i++) if (reverse(ends[2 * i], ends[2 * i + 1])) offsets[i] = shift;
+  for (let i = 0; i < segments.length; i++) if (drawn[i] >= 0 && network.laneReverse[drawn[i]] === 1) offsets[i] = shift;
   return new OffsetLines(segments, { ...style, renderer, interactive: false, lwOffsets: offsets });
 }
 
-function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: readonly AddedLane[] = [], ends: number[] = []): Segments {
+function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: readonly AddedLane[] = [], ends: number[] = [], drawn: number[] = []): Segments {
   const out: Segments = [];
   for (let i = 0; i < lanes.length; i++) {
     const e = lanes[i];
@@ -31,6 +35,7 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: reado
     const b = extra ? extra.to : known ? network.laneTo[e] : -1;
     if (a < 0 || b < 0) continue;
     ends.push(a, b);
+    drawn.push(e);
     out.push([
       [network.lat[a], network.lon[a]],
       [network.lat[b], network.lon[b]],
@@ -39,29 +44,18 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: reado
   return out;
 }
 
-/** Every lane, thin and grey. */
-export function laneLayer(network: NetworkView, reverse: HasReverse, renderer: L.Renderer): L.Layer {
-  const all = new Int32Array(network.laneFrom.length).map((_, i) => i);
-  return linesOf(network, all, reverse, STYLE.lane, renderer);
-}
-
-/** The cheapest-route tree from the origin. */
-export function treeLayer(network: NetworkView, treeLanes: Int32Array, added: readonly AddedLane[], reverse: HasReverse, renderer: L.Renderer): L.Layer {
-  return linesOf(network, treeLanes, reverse, STYLE.tree, renderer, added);
-}
-
 /** The selected route: a dark casing under a bright line, so it reads on any background. */
-export function routeLayer(network: NetworkView, route: RouteView, added: readonly AddedLane[], reverse: HasReverse, renderer: L.Renderer): L.Layer {
+export function routeLayer(network: NetworkView, route: RouteView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
   // Casing and line share the casing's shift, so the bright line stays centred on it.
   const shift = offsetFor(STYLE.route.weight);
-  return L.layerGroup([linesOf(network, route.lanes, reverse, STYLE.route, renderer, added, shift), linesOf(network, route.lanes, reverse, STYLE.routeInner, renderer, added, shift)]);
+  return L.layerGroup([linesOf(network, route.lanes, STYLE.route, renderer, added, shift), linesOf(network, route.lanes, STYLE.routeInner, renderer, added, shift)]);
 }
 
 /** Rebate loops: heavy dashed lines with a permanent text label on each loop. */
-export function loopLayer(network: NetworkView, solve: SolveView, added: readonly AddedLane[], reverse: HasReverse, renderer: L.Renderer): L.Layer {
+export function loopLayer(network: NetworkView, solve: SolveView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer {
   const group = L.layerGroup();
   solve.loops.forEach((loop, i) => {
-    group.addLayer(linesOf(network, loop.lanes, reverse, STYLE.loop, renderer, added));
+    group.addLayer(linesOf(network, loop.lanes, STYLE.loop, renderer, added));
     const lats = loop.depots.map((d) => network.lat[d]);
     const lons = loop.depots.map((d) => network.lon[d]);
     const centre: L.LatLngExpression = [lats.reduce((a, b) => a + b, 0) / lats.length, lons.reduce((a, b) => a + b, 0) / lons.length];

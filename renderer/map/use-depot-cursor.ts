@@ -13,6 +13,27 @@ export interface CursorHandlers {
   onPlanFrom(depot: number): void;
 }
 
+/** Depots weighed per arrow key at most: a box around the cursor shrinks until it holds no more. */
+export const MAX_STEP_CANDIDATES = 5_000;
+
+/** Depots in a lat/lon box around `at` (the view's size, halved until at most `cap` remain), `at` first. */
+function candidatesAround(network: NetworkView, map: L.Map, at: number, cap: number): number[] {
+  const view = map.getBounds();
+  let halfLat = (view.getNorth() - view.getSouth()) / 2;
+  let halfLon = (view.getEast() - view.getWest()) / 2;
+  const lat0 = network.lat[at];
+  const lon0 = network.lon[at];
+  for (;;) {
+    const out = [at];
+    for (let d = 0; d < network.lat.length && out.length <= cap; d++) {
+      if (d !== at && Math.abs(network.lat[d] - lat0) <= halfLat && Math.abs(network.lon[d] - lon0) <= halfLon) out.push(d);
+    }
+    if (out.length <= cap) return out;
+    halfLat /= 2;
+    halfLon /= 2;
+  }
+}
+
 const STATUS_WORDS = ['not reachable', 'reachable', 'cost unbounded (rebate loop)'];
 
 function describe(network: NetworkView, solve: SolveView | null, d: number): string {
@@ -60,15 +81,17 @@ export function useDepotCursor(map: L.Map | null, network: NetworkView | null, s
       const direction = directionOfKey(event.key);
       let next: number | null = null;
       if (direction) {
-        const n = network.depotIds.length;
-        const x = new Float64Array(n);
-        const y = new Float64Array(n);
-        for (let d = 0; d < n; d++) {
+        // A capped list of depots around the cursor: 50,000 projections per key press froze the page.
+        const near = candidatesAround(network, map, state.at, MAX_STEP_CANDIDATES);
+        const x = new Float64Array(near.length);
+        const y = new Float64Array(near.length);
+        near.forEach((d, i) => {
           const p = map.latLngToContainerPoint([network.lat[d], network.lon[d]]);
-          x[d] = p.x;
-          y[d] = p.y;
-        }
-        next = stepToward(x, y, state.at, direction);
+          x[i] = p.x;
+          y[i] = p.y;
+        });
+        const step = stepToward(x, y, 0, direction);
+        next = step === null ? null : near[step];
         if (next === null) setSpoken(`No depot further ${direction}.`);
       } else if (event.key === 'Home') {
         next = solveRef.current?.origin ?? 0;

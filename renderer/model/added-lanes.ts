@@ -24,7 +24,8 @@ const FIELD_OF: Record<EditableField, 'tollMinor' | 'fuelMinor' | 'feesMinor' | 
 
 /** The scenario's added lanes in change order, located on the network's depots. */
 export function addedLanes(depotIds: readonly string[], scenario: Scenario | null): AddedLane[] {
-  if (!scenario) return [];
+  if (!scenario || !scenario.changes.some((c) => c.kind === 'add-lane')) return [];
+  // Made only when the scenario adds a lane: a map of 50,000 depot ids on every edit froze the page.
   const index = new Map(depotIds.map((id, d) => [id, d]));
   const out: AddedLane[] = [];
   scenario.changes.forEach((change, changeIndex) => {

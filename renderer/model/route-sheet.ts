@@ -6,6 +6,7 @@ import type { RouteSheet, RouteSheetLeg } from '../../engine/index';
 import { addedLaneOf, type AddedLane } from './added-lanes';
 import type { LaneAmounts } from './scenario-edits';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
+import { laneRef } from './lane-names';
 
 const NO_RULES = { distance: '', fuel: '', driveTime: '' };
 
@@ -31,7 +32,7 @@ export function routeSheetOf(network: NetworkView, solve: SolveView, amounts: La
     legs.push({
       from: network.depotIds[network.laneFrom[e]],
       to: network.depotIds[network.laneTo[e]],
-      ref: network.laneRef[e] ?? null,
+      ref: laneRef(network, e) ?? null,
       row: network.laneRow[e],
       distanceKm: num(network.laneDistanceKm[e]),
       driveMinutes: num(network.laneDriveMinutes[e]),

@@ -49,7 +49,7 @@ export type LaneAmounts = Pick<PlanAmounts, 'toll' | 'fuel' | 'fees' | 'rebate' 
 export function fixPlanScenario(
   scenario: Scenario,
   network: { laneRow: Int32Array; laneRebate: Float64Array },
-  keys: readonly LaneKey[],
+  keyOf: (lane: number) => LaneKey,
   rows: readonly { row: number; new_rebate_minor: number }[],
 ): Scenario {
   const laneOfRow = new Map<number, number>();
@@ -57,7 +57,7 @@ export function fixPlanScenario(
   let next = scenario;
   for (const r of rows) {
     const e = laneOfRow.get(r.row);
-    if (e !== undefined) next = setLaneAmount(next, keys[e], 'rebate', r.new_rebate_minor, network.laneRebate[e]);
+    if (e !== undefined) next = setLaneAmount(next, keyOf(e), 'rebate', r.new_rebate_minor, network.laneRebate[e]);
   }
   return next;
 }

@@ -1,10 +1,11 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
+import type { ChangeView, CsvDialect, EstimateRules, PlanAmounts, PlanningChoices } from '../../engine/index';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
+import type { LaneGrid } from '../map/lane-grid';
 
 export type { ContractReviewView } from './review';
 
@@ -49,7 +50,12 @@ export interface PlanChoice {
   planning?: PlanningChoices;
 }
 
-/** The network as the UI draws and edits it; one entry per depot / lane, lanes in input order. */
+/**
+ * The network as the UI draws and edits it; one entry per depot / lane, lanes in input order.
+ * Per-lane and per-row data are typed arrays (transferred, not copied) or indices into short
+ * string lists: 500,000 lane keys as objects took seconds to clone and froze the UI thread when
+ * they arrived. A lane's key, ref, validity and class are read with model/lane-names.ts.
+ */
 export interface NetworkView {
   currency: string;
   exponent: number;
@@ -64,11 +70,18 @@ export interface NetworkView {
   laneFees: Float64Array;
   laneRebate: Float64Array;
   laneRow: Int32Array;
-  laneRef: (string | undefined)[];
+  /** Row of the lanes file (index into `rows`) each lane was planned from. */
+  laneRecord: Int32Array;
   laneDistanceKm: Float64Array;
   laneDriveMinutes: Float64Array;
-  /** Key of each lane (its row's key, occurrences counted over the whole file), for scenario changes. */
-  laneKeys: LaneKey[];
+  /** 1 where the lane's reverse is in the network too (the map draws the two side by side). */
+  laneReverse: Uint8Array;
+  /** The lanes binned by map cell (map/lane-grid.ts), for culling the lanes to a view. */
+  laneGrid: LaneGrid;
+  /** The distinct contract refs of the lanes file (`rows.refIndex` points here). */
+  refNames: string[];
+  /** The vehicle classes long-layout rows name (`rows.classIndex` points here). */
+  rowClassNames: string[];
   /** Every row of the lanes file (every date and class), for the lane table's "every row" view. */
   rows: LaneRowsView;
   /** Vehicle classes the lanes file prices (empty when tolls do not depend on the class). */
@@ -85,12 +98,15 @@ export interface LaneRowsView {
   from: Int32Array;
   to: Int32Array;
   sourceRow: Int32Array;
-  ref: (string | undefined)[];
-  validFrom: (string | null)[];
-  validTo: (string | null)[];
-  /** Long layout: the row's class (null = every class); always null in the wide layout. */
-  vehicleClass: (string | null)[];
-  keys: LaneKey[];
+  /** Index into `NetworkView.refNames`, -1 = no ref. */
+  refIndex: Int32Array;
+  /** The row's occurrence among rows with the same from, to and ref, counted over the whole file (its LaneKey). */
+  occurrence: Int32Array;
+  /** Inclusive validity as yyyymmdd numbers; 0 = open. */
+  validFrom: Int32Array;
+  validTo: Int32Array;
+  /** Long layout: index into `NetworkView.rowClassNames` (-1 = every class); always -1 in the wide layout. */
+  classIndex: Int32Array;
   /** The network lane the plan made of the row, -1 when the plan leaves it out (another date or class). */
   lane: Int32Array;
 }
@@ -98,7 +114,8 @@ export interface LaneRowsView {
 /**
  * The engine overlay's figures for a solve (engine/scenario/overlay.ts), so the UI computes none:
  * per network lane the amounts under the scenario for the planned class, per lanes-file row the
- * same for the "every row" view, and each change as text with whether it applied.
+ * same for the "every row" view (empty arrays when every row is planned: then a row's amounts are
+ * its lane's), and each change as text with whether it applied.
  */
 export interface OverlayView extends Omit<PlanAmounts, 'weights'> {
   rows: { toll: Float64Array; fuel: Float64Array; fees: Float64Array; rebate: Float64Array; closed: Uint8Array; changed: Uint8Array };

@@ -14,7 +14,7 @@ import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWork
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
-import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
+import { laneRefsOf, onBaseLanes, pathOf, scenarioSolveInput, solveFor, solveTransferables, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -182,7 +182,7 @@ export class WorkerSession {
       }
       view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice() };
     }
-    this.post({ kind: 'solved', id, result: view }, overlayTransferables(view.overlay));
+    this.post({ kind: 'solved', id, result: view }, solveTransferables(view));
   }
 }
 

@@ -32,8 +32,11 @@ export function scenarioSolveInput(imported: ImportResult, network: Network, sce
   const request = planRequestOf(imported);
   const overlay = buildOverlay(imported, changed ? scenario : null, index);
   const amounts = overlayPlanAmounts(overlay, imported, request, network, imported.plan.laneRecord);
-  const rows = overlayRowAmounts(overlay, imported.plan.vehicleClass);
   const base = overlay.baseCount;
+  // Row amounts are read only for rows the plan leaves out (the lane table's "every row" view);
+  // when every row is planned they would be 500,000 copies per recompute that nothing reads.
+  const everyRowPlanned = imported.plan.laneRecord.length === base;
+  const rows = everyRowPlanned ? null : overlayRowAmounts(overlay, imported.plan.vehicleClass);
   const view: OverlayView = {
     toll: amounts.toll,
     fuel: amounts.fuel,
@@ -42,12 +45,20 @@ export function scenarioSolveInput(imported: ImportResult, network: Network, sce
     closed: amounts.closed,
     changed: amounts.changed,
     notPlanned: amounts.notPlanned,
-    rows: { toll: rows.toll.slice(0, base), fuel: rows.fuel.slice(0, base), fees: rows.fees.slice(0, base), rebate: rows.rebate.slice(0, base), closed: overlay.closed.slice(0, base), changed: overlay.changed.slice(0, base) },
-    changes: changed ? describeChanges(imported, overlay, scenario!, network.exponent) : [],
+    rows: rows
+      ? { toll: rows.toll.slice(0, base), fuel: rows.fuel.slice(0, base), fees: rows.fees.slice(0, base), rebate: rows.rebate.slice(0, base), closed: overlay.closed.slice(0, base), changed: overlay.changed.slice(0, base) }
+      : { toll: new Float64Array(0), fuel: new Float64Array(0), fees: new Float64Array(0), rebate: new Float64Array(0), closed: new Uint8Array(0), changed: new Uint8Array(0) },
+    changes: changed ? describeChanges(imported, overlay, scenario!, network.exponent, index) : [],
   };
   if (!changed) return { overlay: view, weights: undefined, rebuilt: null };
   if (amounts.weights) return { overlay: view, weights: amounts.weights, rebuilt: null };
   return { overlay: view, weights: undefined, rebuilt: overlayNetwork(overlay, imported, request) };
+}
+
+/** The typed arrays of a solve view (its own copies, overlay included), for postMessage's transfer list. */
+export function solveTransferables(view: SolveView): ArrayBuffer[] {
+  const own = [view.status, view.cost, view.legs, view.driveMinutes, view.flags, view.treeLanes, ...(view.base ? [view.base.status, view.base.cost, view.base.legs] : [])];
+  return [...own.map((a) => a.buffer as ArrayBuffer), ...overlayTransferables(view.overlay)];
 }
 
 /** The typed arrays of an overlay view, for postMessage's transfer list. */
@@ -69,13 +80,36 @@ export function pathOf(network: Network, solved: Solved, target: number): RouteV
   return path ? { target, depots: path.depots, lanes: path.lanes } : null;
 }
 
+/**
+ * Drive minutes per depot as running totals down the cheapest-route tree: depots in order of legs,
+ * the parent's total plus the own lane (the same additions in the same order as a walk of each
+ * path, so equal bit for bit). A walk per depot cost O(depots x legs): seconds at 50,000 depots.
+ */
+function treeDriveMinutes(network: Network, tree: RouteTree): Float64Array {
+  const n = network.depotCount;
+  const minutes = new Float64Array(n).fill(NaN);
+  let maxLegs = 0;
+  for (let d = 0; d < n; d++) if (tree.status[d] === STATUS_REACHABLE && tree.legs[d] > maxLegs) maxLegs = tree.legs[d];
+  const start = new Int32Array(maxLegs + 2);
+  for (let d = 0; d < n; d++) if (tree.status[d] === STATUS_REACHABLE) start[tree.legs[d] + 1]++;
+  for (let k = 1; k < start.length; k++) start[k] += start[k - 1];
+  const order = new Int32Array(start[start.length - 1]);
+  const fill = start.slice(0, maxLegs + 1);
+  for (let d = 0; d < n; d++) if (tree.status[d] === STATUS_REACHABLE) order[fill[tree.legs[d]]++] = d;
+  for (const d of order) {
+    const lane = tree.viaLane[d];
+    minutes[d] = lane < 0 ? 0 : minutes[network.laneFrom[lane]] + network.laneDriveMinutes[lane];
+  }
+  return minutes;
+}
+
 /** The solve's per-depot view: drive time, flags and the tree to draw. */
 export function solveView(network: Network, settings: PlanSettings, solved: Solved, solveMs: number, driveLimitMinutes: number, overlay: OverlayView): SolveView {
   const n = network.depotCount;
-  const driveMinutes = new Float64Array(n).fill(NaN);
+  const limited = 'maxLegs' in solved;
+  const driveMinutes = limited ? new Float64Array(n).fill(NaN) : treeDriveMinutes(network, solved);
   const flags = new Uint8Array(n);
   const treeLaneList: number[] = [];
-  const limited = 'maxLegs' in solved;
   // Files without drive times would flag every depot; the flag only means something when some lanes have them.
   const anyDriveData = network.laneDriveMinutes.some((m) => !Number.isNaN(m));
   for (let d = 0; d < n; d++) {
@@ -83,16 +117,22 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
     if (solved.status[d] !== STATUS_REACHABLE) continue;
     if (solved.cost[d] < 0) flags[d] |= FLAG_NEGATIVE_COST;
-    const route = pathOf(network, solved, d);
-    if (!route) continue;
-    let minutes = 0;
-    for (const lane of route.lanes) minutes += network.laneDriveMinutes[lane];
-    driveMinutes[d] = route.lanes.length === 0 ? 0 : minutes;
+    let last = -1;
+    if (limited) {
+      // A leg-limited route is not a tree path: its lanes come from the solve's own path.
+      const route = pathOf(network, solved, d);
+      if (!route) continue;
+      let sum = 0;
+      for (const lane of route.lanes) sum += network.laneDriveMinutes[lane];
+      driveMinutes[d] = route.lanes.length === 0 ? 0 : sum;
+      last = route.lanes.length > 0 ? route.lanes[route.lanes.length - 1] : -1;
+    } else last = solved.viaLane[d];
+    const minutes = driveMinutes[d];
     if (Number.isNaN(minutes)) {
       if (anyDriveData) flags[d] |= FLAG_DRIVE_UNKNOWN;
     }
     else if (minutes > driveLimitMinutes) flags[d] |= FLAG_LONG_DRIVE;
-    if (route.lanes.length > 0) treeLaneList.push(route.lanes[route.lanes.length - 1]);
+    if (last >= 0) treeLaneList.push(last);
   }
   return {
     settings,

@@ -3,10 +3,9 @@
 // belong to `npm run bench`). The test checks only that the edit took effect and nothing froze
 // for good; costs on this synthetic network are checked against the engine for a few depots.
 
-import { writeFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bigNetwork } from './support/big-network';
-import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { chooseFile, offsiteRequests, openApp, recordTimings, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { expectedPlan } from './support/expected';
 
 const DEPOTS = 5_000;
@@ -119,7 +118,7 @@ describe('5,000 depots and 50,000 lanes', () => {
       longest_ui_thread_task_during_cancel_and_import_ms: importLongTasks.length ? Math.max(...importLongTasks) : 0,
       note: 'shared 2-core machine with other work running; figures are noisy',
     };
-    writeFileSync('test-output/e2e-timings.json', JSON.stringify(figures, null, 2) + '\n');
+    recordTimings('large_network', figures);
     console.log(`[e2e timing] ${DEPOTS} depots / ${DEPOTS * LANES_PER_DEPOT} lanes: recompute after an edit ${figures.recompute_after_edit_round_trip_ms.median.toFixed(1)} ms median round trip (engine ${figures.engine_solve_ms.median.toFixed(1)} ms), edit to screen ${figures.edit_to_screen_ms_including_120ms_debounce.median} ms incl. 120 ms debounce; import + first plan ${importMs} ms; longest UI-thread task during edits ${figures.longest_ui_thread_task_during_edits_ms} ms (during cancel + import ${figures.longest_ui_thread_task_during_cancel_and_import_ms} ms) (target <= 200 ms recompute; noisy shared machine)`);
     expect(offsiteRequests(session)).toEqual([]);
   });

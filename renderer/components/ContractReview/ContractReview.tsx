@@ -6,24 +6,24 @@ import { CautionLine } from '../CautionLine/CautionLine';
 import { useEffect, useState } from 'react';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import { formatMoney, formatMoneyWithCode } from '../../model/format';
-import { fixPlanScenario, type LaneKey, type Scenario } from '../../model/scenario-edits';
+import { fixPlanScenario, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { CalendarReview } from './CalendarReview';
 import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
+import { laneKey } from '../../model/lane-names';
 
 export interface ContractReviewProps {
   engine: Engine;
   network: NetworkView;
-  keys: readonly LaneKey[];
   scenario: Scenario;
   onScenario(next: Scenario): void;
   host: LanewrightHost;
   onMessage(text: string): void;
 }
 
-export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage }: ContractReviewProps) {
+export function ContractReview({ engine, network, scenario, onScenario, host, onMessage }: ContractReviewProps) {
   const [fixBy, setFixBy] = useState<'lane' | 'clause'>('lane');
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -93,7 +93,7 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
         <section aria-label="Fix plan">
           <h3>Fix plan: cut {review.fix_plan.length} rebate(s){review.fix_plan_verified ? ' (checked: no loop remains)' : ' (not verified)'}</h3>
           <FixPlanTable rows={review.fix_plan} money={money} />
-          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, keys, review.fix_plan))}>
+          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, (e) => laneKey(network, e), review.fix_plan))}>
             Try the fix plan as a scenario
           </button>
         </section>

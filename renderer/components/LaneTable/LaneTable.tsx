@@ -13,6 +13,7 @@ import { formatMoney } from '../../model/format';
 import type { NetworkView, OverlayView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
 import { AmountCell } from './AmountCell';
+import { rowClass, rowKey, rowRef, rowValidity } from '../../model/lane-names';
 
 export interface LaneTableProps {
   network: NetworkView;
@@ -29,12 +30,10 @@ const LANE_TABLE_HEADS = ['Row', 'Lane', 'Ref', NUM('Tolls'), NUM('Fuel'), NUM('
 
 /** Why a row of the file is not in the plan on screen. */
 function notPlannedReason(network: NetworkView, r: number): string {
-  const rows = network.rows;
   const date = network.plan.date;
-  const from = rows.validFrom[r];
-  const to = rows.validTo[r];
+  const { from, to } = rowValidity(network, r);
   if (date && ((from && date < from) || (to && date > to))) return `not valid on ${date} (valid ${from ?? '…'} to ${to ?? '…'})`;
-  const cls = rows.vehicleClass[r];
+  const cls = rowClass(network, r);
   if (cls !== null && cls !== network.plannedClass) return `for vehicle class ${cls}`;
   return 'not in the plan on screen';
 }
@@ -49,21 +48,23 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
   const viewedClass = network.plannedClass;
   // Without a class (no class tolls, or the toll column on screen) a toll edit is for every class.
   const tollClass = viewedClass === null || tollForEveryClass ? null : viewedClass;
-  const shown = useMemo(() => {
+  // Rows matching the text, made again only when the network or the filter changes; a solve only
+  // re-filters them when "changed only" is on (500,000 rows per recompute held up the page).
+  const matching = useMemo(() => {
     const needle = text.trim().toLowerCase();
     const out: number[] = [];
     for (let r = 0; r < rows.lane.length; r++) {
       const e = rows.lane[r];
       if (e === -1 && !everyRow) continue;
-      if (changedOnly && !(e >= 0 ? amounts.changed[e] : amounts.rows.changed[r])) continue;
       if (needle !== '') {
-        const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rows.ref[r] ?? ''}`.toLowerCase();
+        const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rowRef(network, r) ?? ''}`.toLowerCase();
         if (!hay.includes(needle)) continue;
       }
       out.push(r);
     }
     return out;
-  }, [network, rows, amounts, text, changedOnly, everyRow]);
+  }, [network, rows, text, everyRow]);
+  const shown = useMemo(() => (changedOnly ? matching.filter((r) => (rows.lane[r] >= 0 ? amounts.changed[rows.lane[r]] : amounts.rows.changed[r])) : matching), [matching, rows, amounts, changedOnly]);
   const addedShown = useMemo(() => {
     const needle = text.trim().toLowerCase();
     return added.filter((a) => needle === '' || `${a.lane.from} ${a.lane.to} ${a.lane.ref ?? ''}`.toLowerCase().includes(needle));
@@ -72,7 +73,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
   const current = Math.min(page, pages - 1);
   const id = (d: number) => network.depotIds[d];
   const base: Record<EditableField, Float64Array> = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
-  const planned = rows.lane.reduce((n, e) => n + (e >= 0 ? 1 : 0), 0);
+  const planned = useMemo(() => rows.lane.reduce((n, e) => n + (e >= 0 ? 1 : 0), 0), [rows]);
   return (
     <div className="lw-lanes">
       <div className="lw-table-tools" role="group" aria-label="Filter lanes">
@@ -140,7 +141,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
           {shown.slice(current * PAGE, current * PAGE + PAGE).map((r) => {
             const e = rows.lane[r];
             const name = `${id(rows.from[r])} → ${id(rows.to[r])}`;
-            const key = rows.keys[r];
+            const key = rowKey(network, r);
             const inPlan = e >= 0;
             const value = (field: EditableField) => (inPlan ? amounts[field][e] : amounts.rows[field][r]);
             const closed = inPlan ? amounts.closed[e] === 1 : amounts.rows.closed[r] === 1;
@@ -160,7 +161,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
                   )}
                 </td>
                 <th scope="row">{name}</th>
-                <td>{rows.ref[r] ?? '—'}</td>
+                <td>{rowRef(network, r) ?? '—'}</td>
                 {EDITABLE_FIELDS.map((field) => (
                   <td key={field} className="lw-num">
                     <AmountCell

@@ -11,6 +11,7 @@ import { netCost } from '../../../engine/index';
 import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
+import { laneRef } from '../../model/lane-names';
 
 const LOOP_LANE_HEADS = ['Lane', 'File row', 'Contract ref', { label: 'Net', numeric: true }, { label: 'Rebate', numeric: true }];
 
@@ -133,7 +134,7 @@ function LoopBanner({ network, solve, amounts, added, onReview }: LoopAlertProps
                       {id(network.laneFrom[e])} → {id(network.laneTo[e])}
                     </td>
                     <td>{network.laneRow[e]}</td>
-                    <td>{network.laneRef[e] ?? '—'}</td>
+                    <td>{laneRef(network, e) ?? '—'}</td>
                     <td className="lw-num">{formatMoneyWithCode(net, network.currency, network.exponent)}</td>
                     <td className="lw-num">{formatMoneyWithCode(amounts.rebate[e], network.currency, network.exponent)}</td>
                   </tr>

@@ -15,6 +15,7 @@ import { BreakdownChart } from '../BreakdownChart/BreakdownChart';
 import { RouteSheet, printRouteSheet } from '../RouteSheet/RouteSheet';
 import { RouteLanes } from './RouteLanes';
 import { TableHead } from '../DataTable/DataTable';
+import { laneRef } from '../../model/lane-names';
 
 export interface RouteDetailProps {
   network: NetworkView;
@@ -53,7 +54,7 @@ function legOf(network: NetworkView, amounts: LaneAmounts, added: readonly Added
   }
   return {
     name: `${network.depotIds[network.laneFrom[e]]} → ${network.depotIds[network.laneTo[e]]}`,
-    title: `Lanes file row ${network.laneRow[e]}${network.laneRef[e] ? `, ref ${network.laneRef[e]}` : ''}`,
+    title: `Lanes file row ${network.laneRow[e]}${laneRef(network, e) ? `, ref ${laneRef(network, e)}` : ''}`,
     mark: amounts.changed[e] ? ' ✎' : null,
     toll: amounts.toll[e],
     fuel: amounts.fuel[e],

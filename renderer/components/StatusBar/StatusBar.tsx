@@ -1,6 +1,7 @@
 // The status line: what is loaded, what the plan found and how long the last recompute took.
 // A polite live region, so screen readers hear results without losing their place.
 
+import { useMemo } from 'react';
 import { formatMs } from '../../model/format';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 
@@ -13,8 +14,17 @@ export interface StatusBarProps {
 }
 
 export function StatusBar({ network, solve, roundTripMs, solving, message }: StatusBarProps) {
-  const reachable = solve ? solve.status.reduce((n, s) => n + (s === 1 ? 1 : 0), 0) : 0;
-  const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
+  // Counted once per solve in a plain loop (the bar renders again on every "recomputing" toggle).
+  const [reachable, unbounded] = useMemo(() => {
+    let r = 0;
+    let u = 0;
+    const status = solve?.status ?? new Uint8Array(0);
+    for (let d = 0; d < status.length; d++) {
+      if (status[d] === 1) r++;
+      else if (status[d] === 2) u++;
+    }
+    return [r, u];
+  }, [solve]);
   return (
     <footer className="lw-status" role="status" aria-live="polite">
       {network && (

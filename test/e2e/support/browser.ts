@@ -2,7 +2,7 @@
 // Chromium headless through playwright-core, and a log of every request the page makes so a test
 // can prove nothing left localhost.
 
-import { existsSync, mkdirSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { serveStatic, type RunningServer } from '../../../main/web/static-server';
@@ -90,4 +90,19 @@ export async function snap(page: Page, name: string): Promise<string> {
 export async function chooseFile(page: Page, click: () => Promise<void>, name: string, text: string): Promise<void> {
   const [chooser] = await Promise.all([page.waitForEvent('filechooser'), click()]);
   await chooser.setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(text, 'utf8') });
+}
+
+export const TIMINGS_FILE = 'test-output/e2e-timings.json';
+
+/** Writes `figures` under `key` in the e2e timings file, keeping what other specs wrote there (printed, never asserted). */
+export function recordTimings(key: string, figures: Record<string, unknown>): void {
+  mkdirSync('test-output', { recursive: true });
+  let all: Record<string, unknown> = {};
+  try {
+    all = JSON.parse(readFileSync(TIMINGS_FILE, 'utf8')) as Record<string, unknown>;
+  } catch {
+    all = {};
+  }
+  all[key] = figures;
+  writeFileSync(TIMINGS_FILE, JSON.stringify(all, null, 2) + '\n');
 }

@@ -15,6 +15,7 @@ import type { FromWorker, NetworkView, SolveView, ToWorker } from '../../../rend
 import { WorkerSession } from '../../../renderer/worker/session';
 import { runCli, tempFiles } from '../../main/cli/cli-harness';
 import { DATES, DEPOTS_CSV, randomLaneFile, randomScenario } from './random-lanes';
+import { laneKey } from '../../../renderer/model/lane-names';
 
 function drive(messages: ToWorker[]): FromWorker[] {
   const out: FromWorker[] = [];
@@ -63,7 +64,7 @@ describe('the overlay, the CLI compare and the worker session agree', () => {
         expect(Array.from(solved.overlay.rebate)).toEqual(Array.from(amounts.rebate));
         expect(Array.from(solved.overlay.closed)).toEqual(Array.from(amounts.closed));
         expect(solved.overlay.changes.filter((c) => !c.applied).map((c) => c.index)).toEqual(overlay.problems.map((p) => p.changeIndex));
-        expect(view.laneKeys).toEqual(Array.from(imported.plan.laneRecord, (r) => overlay.keys[r]));
+        expect(Array.from(view.laneRecord, (_, e) => laneKey(view, e))).toEqual(Array.from(imported.plan.laneRecord, (r) => overlay.keys[r]));
       }),
       { numRuns: 40, seed: 20261205 },
     );

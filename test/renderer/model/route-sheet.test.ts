@@ -12,9 +12,12 @@ const network = {
   laneFrom: Int32Array.from([0, 1]),
   laneTo: Int32Array.from([1, 2]),
   laneRow: Int32Array.from([2, 3]),
-  laneRef: ['R1', undefined],
+  laneRecord: Int32Array.from([0, 1]),
+  refNames: ['R1'],
+  rows: { refIndex: Int32Array.from([0, -1]) },
   laneDistanceKm: Float64Array.from([10, NaN]),
   laneDriveMinutes: Float64Array.from([12, 30]),
+  laneReverse: new Uint8Array(2),
 } as unknown as NetworkView;
 const solve = { origin: 0, settings: { origin: 'A', maxLegs: null, vehicleClass: '', dispatchDate: '2026-08-15' } } as unknown as SolveView;
 const amounts = { toll: [100, 5], fuel: [200, 6], fees: [0, 7], rebate: [50, 0], changed: [true, false] } as never;

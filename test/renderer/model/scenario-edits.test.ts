@@ -48,7 +48,7 @@ describe('scenario edits', () => {
 
   it('turns fix-plan rows (lanes file rows) into rebate changes', () => {
     const network = { laneRow: Int32Array.from([2, 3, 4]), laneRebate: base.rebate };
-    const s = fixPlanScenario(emptyScenario(), network, keys, [{ row: 3, new_rebate_minor: 12 }]);
+    const s = fixPlanScenario(emptyScenario(), network, (e) => keys[e], [{ row: 3, new_rebate_minor: 12 }]);
     expect(s.changes).toEqual([{ kind: 'set-amount', lane: keys[1], field: 'rebate', amountMinor: 12, note: null }]);
   });
 });

@@ -11,6 +11,7 @@ import { emptyScenario, setLaneAmount } from '../../../renderer/model/scenario-e
 import type { FromWorker, NetworkView, PlanChoice, SolveView, ToWorker } from '../../../renderer/worker/protocol';
 import { WorkerSession } from '../../../renderer/worker/session';
 import type { Scenario } from '../../../engine/scenario/types';
+import { laneKey } from '../../../renderer/model/lane-names';
 
 const sample = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
 
@@ -24,6 +25,7 @@ function drive(messages: ToWorker[]): FromWorker[] {
 const load = (depots: string, lanes: string, plan: PlanChoice): ToWorker => ({ kind: 'load', id: 1, depots: { name: 'depots.csv', text: depots }, lanes: { name: 'lanes.csv', text: lanes }, acceptPartial: true, plan });
 const solve = (origin: string, plan: PlanChoice, scenario: Scenario | null, id = 2): ToWorker => ({ kind: 'solve', id, settings: { origin, maxLegs: null, vehicleClass: plan.vehicleClass, dispatchDate: plan.date }, scenario });
 const loadedView = (m: FromWorker) => (m as { network: NetworkView }).network;
+const laneKeys = (view: NetworkView) => Array.from(view.laneRecord, (_, e) => laneKey(view, e));
 const solvedView = (m: FromWorker) => (m as { result: SolveView }).result;
 
 describe('worker session on the overlay', () => {
@@ -33,12 +35,12 @@ describe('worker session on the overlay', () => {
     const plan = { date: '2026-08-15', vehicleClass: '' };
     const [loaded] = drive([load(depots, lanes, plan)]);
     const view = loadedView(loaded);
-    expect(view.laneKeys).toEqual([{ from: 'A', to: 'B', ref: 'R1', occurrence: 2 }]);
+    expect(laneKeys(view)).toEqual([{ from: 'A', to: 'B', ref: 'R1', occurrence: 2 }]);
     const first = setLaneAmount(emptyScenario(), { from: 'A', to: 'B', ref: 'R1', occurrence: 1 }, 'toll', 100, 1000);
     const [, a] = drive([load(depots, lanes, plan), solve('A', plan, first)]);
     expect(solvedView(a).cost[1]).toBe(2000);
     expect(solvedView(a).overlay.changes[0].applied).toBe(true);
-    const second = setLaneAmount(emptyScenario(), view.laneKeys[0], 'toll', 2500, 2000);
+    const second = setLaneAmount(emptyScenario(), laneKeys(view)[0], 'toll', 2500, 2000);
     const [, b] = drive([load(depots, lanes, plan), solve('A', plan, second)]);
     expect(solvedView(b).cost[1]).toBe(2500);
   });
@@ -48,14 +50,14 @@ describe('worker session on the overlay', () => {
     const heavy = { date: '2026-08-15', vehicleClass: '5axle' };
     const [loaded] = drive([load(sample('depots.csv'), sample('lanes.csv'), light)]);
     const view = loadedView(loaded);
-    const e = view.laneKeys.findIndex((k) => k.from === 'LUX' && k.to === 'SXB');
+    const e = laneKeys(view).findIndex((k) => k.from === 'LUX' && k.to === 'SXB');
     expect(view.laneToll[e]).toBe(819);
-    const scenario = setLaneAmount(emptyScenario(), view.laneKeys[e], 'toll', 900, 819, view.plannedClass);
+    const scenario = setLaneAmount(emptyScenario(), laneKeys(view)[e], 'toll', 900, 819, view.plannedClass);
     const [, onLight] = drive([load(sample('depots.csv'), sample('lanes.csv'), light), solve('LUX', light, scenario)]);
     expect(solvedView(onLight).overlay.toll[e]).toBe(900);
     expect(solvedView(onLight).overlay.changes[0].text).toBe('LUX>SXB|BFH-L-014|1: toll 2axle 8.19 → 9.00');
     const [heavyLoaded, onHeavy] = drive([load(sample('depots.csv'), sample('lanes.csv'), heavy), solve('LUX', heavy, scenario)]);
-    const h = loadedView(heavyLoaded).laneKeys.findIndex((k) => k.from === 'LUX' && k.to === 'SXB');
+    const h = laneKeys(loadedView(heavyLoaded)).findIndex((k) => k.from === 'LUX' && k.to === 'SXB');
     expect(solvedView(onHeavy).overlay.toll[h]).toBe(1820);
   });
 

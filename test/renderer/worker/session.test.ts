@@ -17,6 +17,7 @@ import type { FromWorker, NetworkView, PlanSettings, SolveView, ToWorker } from 
 import { WorkerSession } from '../../../renderer/worker/session';
 import type { ContractReviewView } from '../../../renderer/worker/review';
 import { createHash } from 'node:crypto';
+import { laneRef } from '../../../renderer/model/lane-names';
 
 const text = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
 const DATE = '2026-08-15';
@@ -66,7 +67,7 @@ describe('worker session', () => {
     expect(loop.netPerLap).toBeLessThan(0);
 
     const lane = loop.lanes.find((e) => view.laneRebate[e] > 0)!;
-    const keys = laneKeysOf(Array.from(view.laneFrom, (a, e) => ({ from: view.depotIds[a], to: view.depotIds[view.laneTo[e]], ref: view.laneRef[e] })));
+    const keys = laneKeysOf(Array.from(view.laneFrom, (a, e) => ({ from: view.depotIds[a], to: view.depotIds[view.laneTo[e]], ref: laneRef(view, e) })));
     const scenario = setLaneAmount(emptyScenario(), keys[lane], 'rebate', 0, view.laneRebate[lane]);
     const [, after] = drive([load('lanes-rebate-loop.csv'), { kind: 'solve', id: 3, settings, scenario }]);
     const result = (after as { result: SolveView }).result;
