@@ -3,12 +3,13 @@
 // row per lane) or JSON; --loops-csv also writes one row per lane of each loop. Without --date the
 // command reviews the whole calendar (audit-calendar.ts).
 
-import { auditNetwork, overlayKeys } from '../../../engine/index';
+import { auditNetwork, overlayKeys, parseScenarioDocument, scenarioImport, type Scenario } from '../../../engine/index';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
 import { loadImport, planDateOf } from '../load-network';
+import { readDocumentFile } from '../files';
 import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
@@ -19,7 +20,8 @@ export const auditCommand: CommandSpec = {
   details:
     'Without --date, reviews the whole calendar: the periods in which the set of valid lanes is the same, each\n' +
     'loop with the date ranges it exists in and the clauses it combines, one fix plan verified on every period\n' +
-    '(--fix-by lane or clause) and headroom per lane; --report writes a printable HTML report. With --date,\n' +
+    '(--fix-by lane or clause) and headroom per lane; --report writes a printable HTML report. With --scenario,\n' +
+    'the contract is reviewed as the what-if changes it (amounts, closed and added lanes, validity). With --date,\n' +
     'reviews that day\'s network. Finds the distinct rebate loops (up to --loop-cap), a set of rebate cuts that\n' +
     'removes them all (checked by solving again) and how far each lane\'s rebate can grow before a loop appears.\n' +
     'Prints one CSV row per lane, or one JSON object with --json; --loops-csv also writes one row per lane of each loop.',
@@ -30,10 +32,12 @@ export const auditCommand: CommandSpec = {
     { name: 'negotiable', value: 'REF,...', help: 'contract references or lane keys (FROM>TO|ref|n) whose rebates may change' },
     { name: 'loops-csv', value: 'FILE', help: 'also write one row per lane of each loop to FILE' },
     { name: 'progress', help: 'print progress by phase on stderr' },
+    { name: 'scenario', value: 'FILE', help: 'review the contract as this what-if scenario file (lanewright-scenario) changes it' },
     { name: 'from-date', value: 'YYYY-MM-DD', help: 'calendar review: first day reviewed (default: the earliest date the file names)' },
     { name: 'to-date', value: 'YYYY-MM-DD', help: 'calendar review: last day reviewed (default: the latest date the file names)' },
     { name: 'fix-by', value: 'lane|clause', help: 'calendar review: one cut per lane (default) or one percentage cut per clause' },
     { name: 'report', value: 'FILE', help: 'calendar review: also write a printable HTML report to FILE' },
+    { name: 'fix-scenario-out', value: 'FILE', help: 'calendar review: write the verified fix plan as a scenario file (the --scenario given plus one rebate change per lane)' },
     JSON_OPTION,
     CSV_DIALECT_OPTION,
     OUT_OPTION,
@@ -44,8 +48,15 @@ export const auditCommand: CommandSpec = {
   run: runAudit,
 };
 
+/** The --scenario file, read before any work; null without one. */
+export function auditScenario(args: ParsedArgs): { path: string; scenario: Scenario } | null {
+  const path = args.values.get('scenario');
+  return path === undefined ? null : { path, scenario: parseScenarioDocument(readDocumentFile(path, 'scenario'), path) };
+}
+
 function runAudit(args: ParsedArgs, out: CommandOutput): number {
-  if (!args.values.has('date')) return runCalendarAudit(args, out);
+  const what = auditScenario(args);
+  if (!args.values.has('date')) return runCalendarAudit(args, out, what);
   for (const name of CALENDAR_AUDIT_OPTIONS) {
     if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
   }
@@ -56,10 +67,17 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   const readStart = performance.now();
   const imported = loadImport(args);
-  const network = imported.network;
+  let network = imported.network;
   // Lane keys as scenarios name them: counted over the file's rows, not the day's network.
   const rowKeys = overlayKeys(imported);
-  const laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
+  let laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
+  if (what) {
+    // The day's network as the scenario makes it, through the one overlay (as export and compare do).
+    const overlaid = scenarioImport(imported, what.scenario);
+    for (const p of overlaid.overlay.problems) out.warn(`scenario ${what.path}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
+    network = overlaid.network;
+    laneKeys = overlaid.keys;
+  }
   const readMs = performance.now() - readStart;
 
   let lastLine = '';
@@ -80,7 +98,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
-  const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
+  const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, ...report };
   out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
