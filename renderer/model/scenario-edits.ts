@@ -62,6 +62,11 @@ export function fixPlanScenario(
   return next;
 }
 
+/** The scenario with each change put in as withChange does (one on the same lane and field replaces the earlier). */
+export function withChanges(scenario: Scenario, changes: readonly ScenarioChange[]): Scenario {
+  return changes.reduce(withChange, scenario);
+}
+
 /** True when the scenario changes anything. */
 export function hasChanges(scenario: Scenario | null): boolean {
   return !!scenario && scenario.changes.length > 0;

@@ -1,12 +1,13 @@
-// The contract-review view: the engine's audit of the whole contract under the active scenario —
-// every rebate loop with the lanes and references that form it, a fix plan (which rebates to cut,
-// and by how much) that can be tried as a scenario, and rebate headroom per lane.
+// The contract-review view, under the active scenario: the whole calendar (CalendarReview) and the
+// one-day review of the planned date — every rebate loop of that day with the lanes and references
+// that form it, a fix plan (which rebates to cut, and by how much) that can be tried as a scenario,
+// and rebate headroom per lane.
 
 import { CautionLine } from '../CautionLine/CautionLine';
 import { useEffect, useState } from 'react';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import { formatMoney, formatMoneyWithCode } from '../../model/format';
-import { fixPlanScenario, type LaneKey, type Scenario } from '../../model/scenario-edits';
+import { fixPlanScenario, withChanges, type LaneKey, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
 import type { LanewrightHost } from '../../../main/ipc/contract';
@@ -21,9 +22,11 @@ export interface ContractReviewProps {
   onScenario(next: Scenario): void;
   host: LanewrightHost;
   onMessage(text: string): void;
+  /** Sets the dispatch date (from the calendar strip). */
+  onDate(date: string): void;
 }
 
-export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage }: ContractReviewProps) {
+export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage, onDate }: ContractReviewProps) {
   const [fixBy, setFixBy] = useState<'lane' | 'clause'>('lane');
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -63,12 +66,28 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
     if (!saved.ok) onMessage(`Report not saved: ${saved.failure.message}`);
     else if (saved.value) onMessage(`Saved the contract review report: ${saved.value.path}`);
   };
+  // The calendar plan's changes go into the active scenario, where the user sees, undoes and saves them.
+  const applyCalendarFix = () => {
+    const changes = review.calendarFix;
+    onScenario(withChanges(scenario, changes));
+    onMessage(`Applied the calendar fix plan (by ${fixBy}) to the scenario “${scenario.name}”: ${changes.length} rebate change(s); undo or save them under Lanes & scenario.`);
+  };
   // "Whole contract" is said only of the calendar review; the one-day review names its date.
   const day = network.plan.date ? `on ${network.plan.date}` : 'with every row valid at once (no date chosen)';
   return (
     <div className="lw-review" data-testid="contract-review">
       <CautionLine kind="review" testId="review-caution" />
-      {review.calendar && <CalendarReview calendar={review.calendar} exponent={network.exponent} fixBy={fixBy} onFixBy={setFixBy} onSaveReport={() => void saveReport()} />}
+      {review.calendar && (
+        <CalendarReview
+          calendar={review.calendar}
+          exponent={network.exponent}
+          fixBy={fixBy}
+          onFixBy={setFixBy}
+          onSaveReport={() => void saveReport()}
+          onDate={onDate}
+          onApplyFix={review.calendarFix.length > 0 ? applyCalendarFix : null}
+        />
+      )}
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>
         One-day review: rebate loops {day}{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
