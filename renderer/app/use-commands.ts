@@ -25,7 +25,7 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
           what === 'scenario-json'
             ? { fileName: scenarioFileName(scenario.name), text: serializeScenarioDocument(scenario) }
             : await engine.client.request('export', { what, dialect: csvDialect() });
-        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : 'csv');
+        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : what === 'review-html' ? 'html' : 'csv');
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);
       } catch (error) {

@@ -74,7 +74,7 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name) };
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name), reviewedFiles: this.files };
         const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;

@@ -123,6 +123,13 @@ describe('calendar review and its report', () => {
     // The review runs again under the what-if: no loop in any period.
     await expect.poll(() => review.innerText(), { timeout: 60_000 }).toMatch(/Rebate loops in the whole contract, 2026-01-01 to 2027-06-30 \(scenario “[^”]+”\): 0/);
     expect(await review.innerText()).toMatch(/the contract as the scenario “[^”]+” changes it \(3 of 3 change\(s\) applied\)/);
+    // The Export menu's review report is the calendar under the same what-if.
+    const [exported] = await Promise.all([page.waitForEvent('download'), page.getByLabel('Export', { exact: true }).selectOption('review-html')]);
+    expect(exported.suggestedFilename()).toMatch(/^contract-review-2026-01-01-2027-06-30.*\.html$/);
+    const html = readFileSync((await exported.path())!, 'utf8');
+    expect(html).toMatch(/Under the what-if scenario “[^”]+”/);
+    expect(html).toContain('No rebate loop in any period of the window, for any vehicle class.');
+    expect(html).toContain('calendar fix plan by clause 7.2');
 
     await page.getByRole('tab', { name: /Lanes & scenario/ }).click();
     const changes = page.locator('[data-testid="scenario-compare"] li');
