@@ -112,7 +112,7 @@ describe('calendar review and its report', () => {
     await snap(page, 'calendar-clauses-beside-lanes');
   });
 
-  it('applies the fix plan by clause as a scenario: named changes, the review under it, undo and save', async () => {
+  it('applies the fix plan by clause, then by lane, as a scenario: named changes, the review under it, undo and save', async () => {
     const imported = importNetwork(text('depots.csv'), text('lanes-rebate-loop.csv'));
     const byClause = calendarReport(imported, reviewCalendar(imported, { fixBy: 'clause' }), 'clause');
     const review = page.locator('[data-testid="contract-review"]');
@@ -151,6 +151,16 @@ describe('calendar review and its report', () => {
     await expect.poll(() => review.innerText(), { timeout: 60_000 }).toMatch(/Rebate loops in the whole contract, 2026-01-01 to 2027-06-30 \(scenario “[^”]+”\): 1/);
     expect(await review.innerText()).toContain('Loop 1: FRA → SXB → FRA');
     await snap(page, 'calendar-review-under-fix-scenario');
+
+    // By lane, over what the scenario still leaves: one more change, on the lane the plan names.
+    const byLane = calendarReport(imported, reviewCalendar(imported), 'lane');
+    await page.getByLabel('Fix plan by lane or by clause').selectOption('lane');
+    await page.getByRole('button', { name: 'Apply this fix plan (by lane) as a scenario' }).click();
+    await expect.poll(() => review.innerText(), { timeout: 60_000 }).toMatch(/Rebate loops in the whole contract, 2026-01-01 to 2027-06-30 \(scenario “[^”]+”\): 0/);
+    await page.getByRole('tab', { name: /Lanes & scenario/ }).click();
+    const lane20 = byLane.fix_plan.find((f) => f.row === 20)!;
+    expect(await changes.allInnerTexts()).toContainEqual(expect.stringContaining(`calendar fix plan by lane (clause ${lane20.clause}): lanes-file row 20;`));
+    await page.getByRole('button', { name: 'Back to the base contract' }).click();
     expect(offsiteRequests(session)).toEqual([]);
   });
 });
