@@ -11,7 +11,7 @@ import { exportText } from './exports';
 import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
 import { laneOfRows, networkView, transferablesOf } from './network-view';
 import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
-import { reviewContract } from './review';
+import { CalendarCache, reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
 import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
@@ -41,6 +41,8 @@ export class WorkerSession {
   private files: ReviewedFile[] = [];
   /** Settles once the loaded files' SHA-256 (named in the review report) are known. */
   filesHashed: Promise<void> = Promise.resolve();
+  /** The last calendar review: a new date or class re-plans one day, not the calendar. */
+  private readonly calendarCache = new CalendarCache();
   private loads = 0;
 
   constructor(private readonly post: Post) {}
@@ -88,7 +90,7 @@ export class WorkerSession {
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
+        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane', cache: this.calendarCache };
         this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
         return;
       }
