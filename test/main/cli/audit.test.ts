@@ -182,6 +182,15 @@ describe('lanewright audit', () => {
       expect(JSON.parse(day.stdout)).toMatchObject({ review: 'day', date: '2026-11-15', scenario: 'Spring rebate, new backhaul', loops: [expect.objectContaining({ depots: ['A', 'B', 'C'] })] });
       const plain = await runCli([...base, '--date', '2026-11-15']);
       expect(JSON.parse(plain.stdout)).toMatchObject({ scenario: null, loops: [] });
+      // A scenario file that is missing or not a scenario: one line naming it, nothing written.
+      const missing = await runCli([...base, '--scenario', join(dir, 'nope.json')]);
+      expect([missing.status, missing.stdout]).toEqual([1, '']);
+      expect(missing.stderr.trim().split('\n')).toEqual([expect.stringMatching(/nope\.json.*file not found/)]);
+      const notScenario = await runCli([...base, '--date', '2026-11-15', '--scenario', join(dir, 'lanes.csv')]);
+      expect([notScenario.status, notScenario.stdout]).toEqual([1, '']);
+      expect(notScenario.stderr).toMatch(/lanes\.csv/);
+      const dayFix = await runCli([...base, '--date', '2026-11-15', '--fix-scenario-out', fixFile]);
+      expect([dayFix.status, dayFix.stderr]).toEqual([2, expect.stringMatching(/--fix-scenario-out belongs to the calendar review/)]);
     });
 
     it('refuses calendar options with --date and an unknown --fix-by', async () => {
