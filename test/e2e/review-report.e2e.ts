@@ -161,6 +161,15 @@ describe('calendar review and its report', () => {
     const lane20 = byLane.fix_plan.find((f) => f.row === 20)!;
     expect(await changes.allInnerTexts()).toContainEqual(expect.stringContaining(`calendar fix plan by lane (clause ${lane20.clause}): lanes-file row 20;`));
     await page.getByRole('button', { name: 'Back to the base contract' }).click();
+
+    // The one-day plan's changes name their day, class and row too.
+    await page.getByRole('tab', { name: /Contract review/ }).click();
+    await page.getByRole('button', { name: 'Loop 2, 2026-06-01 to 2026-08-31: set the dispatch date to 2026-06-01' }).click();
+    await expect.poll(() => review.innerText(), { timeout: 60_000 }).toMatch(/One-day review: rebate loops on 2026-06-01: 2/);
+    await page.getByRole('button', { name: 'Try the fix plan as a scenario' }).click();
+    await page.getByRole('tab', { name: /Lanes & scenario/ }).click();
+    await expect.poll(() => changes.allInnerTexts(), { timeout: 30_000 }).toContainEqual(expect.stringContaining('one-day fix plan on 2026-06-01 (vehicle class 2axle): lanes-file row 20;'));
+    await page.getByRole('button', { name: 'Back to the base contract' }).click();
     expect(offsiteRequests(session)).toEqual([]);
   });
 });

@@ -112,7 +112,7 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
         <section aria-label="Fix plan">
           <h3>Fix plan: cut {review.fix_plan.length} rebate(s){review.fix_plan_verified ? ' (checked: no loop remains)' : ' (not verified)'}</h3>
           <FixPlanTable rows={review.fix_plan} money={money} />
-          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, keys, review.fix_plan))}>
+          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, keys, review.fix_plan, (row) => `one-day fix plan ${day} (vehicle class ${network.plan.vehicleClass ?? 'as priced in the lanes file'}): lanes-file row ${row}; the rebate holds for every vehicle class`))}>
             Try the fix plan as a scenario
           </button>
         </section>
