@@ -13,7 +13,6 @@ import type { ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { routesReport } from '../../engine/index';
 import { scenarioImport } from '../../engine/index';
-import { calendarReport, calendarReportScenario, calendarReviewHtml, reviewCalendarUnder, type ReviewedFile } from '../../engine/index';
 import { applyCsvDialect, exportFileName, RFC4180_DIALECT, type CsvDialect, type ExportSettings } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import type { ExportKind, PlanSettings } from './protocol';
@@ -35,8 +34,6 @@ export interface ExportContext {
   vehicleClass?: string | null;
   /** Input file names (depots, lanes). */
   files?: string[];
-  /** Input files with their SHA-256, named in the contract review report. */
-  reviewedFiles?: readonly ReviewedFile[];
 }
 
 /** The network and lane rows the exports describe: the import's, or the scenario's when it changes anything. */
@@ -83,15 +80,6 @@ export function exportText(ctx: ExportContext, what: ExportKind, dialect: CsvDia
     case 'geojson': {
       const routes = report();
       return { fileName: name('network', 'geojson', routes?.origin ?? null), mime: 'application/geo+json', text: geoJsonText(networkGeoJson(network, { report: routes, loops: loops(), settings: exportSettings(ctx) })) };
-    }
-    case 'review-html': {
-      // The whole calendar (no one date or class), under the active scenario, fixed by lane.
-      const active = ctx.scenario && hasChanges(ctx.scenario) ? ctx.scenario : null;
-      const reviewed = reviewCalendarUnder(ctx.imported, active);
-      const calendar = calendarReport({ ...ctx.imported, lanes: reviewed.overlay.table }, reviewed.review, 'lane', calendarReportScenario(active, reviewed));
-      const window = calendar.window.from === null ? 'undated' : `${calendar.window.from}-${calendar.window.to}`;
-      const fileName = exportFileName({ kind: `contract-review-${window}`, scenario: scenarioName(ctx) }, 'html');
-      return { fileName, mime: 'text/html', text: calendarReviewHtml(calendar, { files: ctx.reviewedFiles ?? [], exponent: ctx.imported.exponent }) };
     }
   }
 }

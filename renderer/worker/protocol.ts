@@ -169,7 +169,7 @@ export interface RouteView {
   estimateRules?: EstimateRules;
 }
 
-export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson' | 'review-html';
+export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
 
 export interface WorkerErrorView {
   name: string;

@@ -23,33 +23,19 @@ export interface CalendarContext {
   imported: ImportResult;
   files: readonly ReviewedFile[];
   fixBy: 'lane' | 'clause';
-  /** The last calendar review, kept by the session: a new date or class leaves it as it is. */
-  cache?: CalendarCache;
 }
 
 type CalendarPart = Pick<ContractReviewView, 'calendar' | 'calendarHtml' | 'calendarFix'>;
 
 /**
- * The calendar review does not depend on the date or class planned (it covers them all), so
- * choosing a range of the strip, which re-plans that day, need not review the calendar again. It
- * depends on the lane rows, the planning settings, the scenario, the plan's kind and the files named.
+ * The last calendar review of each lane table. The review does not depend on the date or class
+ * planned (it covers them all), so choosing a range of the strip, which re-plans that day, need not
+ * review the calendar again. It depends on the lane rows (the table, kept across re-plans), the
+ * planning settings, the scenario's changes, the plan's kind and the files named.
  */
-export class CalendarCache {
-  private last: { lanes: object; key: string; part: CalendarPart } | null = null;
+const calendarCache = new WeakMap<object, { key: string; part: CalendarPart }>();
 
-  static key(context: CalendarContext, scenario: Scenario | null): string {
-    return JSON.stringify([context.imported.plan.settings, scenario?.changes ?? [], context.fixBy, context.files]);
-  }
-
-  get(context: CalendarContext, scenario: Scenario | null): CalendarPart | null {
-    const last = this.last;
-    return last && last.lanes === context.imported.lanes && last.key === CalendarCache.key(context, scenario) ? last.part : null;
-  }
-
-  set(context: CalendarContext, scenario: Scenario | null, part: CalendarPart): void {
-    this.last = { lanes: context.imported.lanes, key: CalendarCache.key(context, scenario), part };
-  }
-}
+const calendarKey = (context: CalendarContext, scenario: Scenario | null) => JSON.stringify([context.imported.plan.settings, scenario?.changes ?? [], context.fixBy, context.files]);
 
 /** Audits the planned network, with the scenario laid over the import's lane rows first when it has changes. */
 export function reviewContract(
@@ -80,8 +66,8 @@ export function reviewContract(
   let calendarHtml: string | null = null;
   let calendarFix: ScenarioChange[] = [];
   const active = scenario && hasChanges(scenario) ? scenario : null;
-  const cached = context?.cache?.get(context, active) ?? null;
-  if (cached) ({ calendar, calendarHtml, calendarFix } = cached);
+  const last = context ? calendarCache.get(context.imported.lanes) : undefined;
+  if (context && last && last.key === calendarKey(context, active)) ({ calendar, calendarHtml, calendarFix } = last.part);
   else if (context) {
     const calendarPhases = { periods: 'Planning every period', loops: 'Rebate loops over the calendar', 'fix-plan': 'A fix plan for the whole calendar', verify: 'Checking the plan in every period', headroom: 'Headroom over the calendar' } as const;
     const reviewed = reviewCalendarUnder(context.imported, active, {
@@ -91,7 +77,7 @@ export function reviewContract(
     calendar = calendarReport({ ...context.imported, lanes: reviewed.overlay.table }, reviewed.review, context.fixBy, calendarReportScenario(active, reviewed));
     calendarHtml = calendarReviewHtml(calendar, { files: context.files, exponent: context.imported.exponent });
     if (calendar.fix_plan_verified) calendarFix = calendarFixChanges(reviewed);
-    context.cache?.set(context, active, { calendar, calendarHtml, calendarFix });
+    calendarCache.set(context.imported.lanes, { key: calendarKey(context, active), part: { calendar, calendarHtml, calendarFix } });
   }
   return { ...auditReport(target, audit), scenarioProblems, calendar, calendarHtml, calendarFix };
 }

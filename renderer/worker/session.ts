@@ -11,7 +11,7 @@ import { exportText } from './exports';
 import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
 import { laneOfRows, networkView, transferablesOf } from './network-view';
 import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
-import { CalendarCache, reviewContract } from './review';
+import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
 import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
@@ -41,8 +41,6 @@ export class WorkerSession {
   private files: ReviewedFile[] = [];
   /** Settles once the loaded files' SHA-256 (named in the review report) are known. */
   filesHashed: Promise<void> = Promise.resolve();
-  /** The last calendar review: a new date or class re-plans one day, not the calendar. */
-  private readonly calendarCache = new CalendarCache();
   private loads = 0;
 
   constructor(private readonly post: Post) {}
@@ -76,7 +74,7 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name), reviewedFiles: this.files };
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name) };
         const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
@@ -90,7 +88,7 @@ export class WorkerSession {
       case 'review': {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane', cache: this.calendarCache };
+        const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
         this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
         return;
       }

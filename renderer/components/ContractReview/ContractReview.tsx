@@ -15,6 +15,8 @@ import { CalendarReview } from './CalendarReview';
 import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
 
 export interface ContractReviewProps {
+  /** Sets the dispatch date (from the calendar strip). */
+  onDate(date: string): void;
   engine: Engine;
   network: NetworkView;
   keys: readonly LaneKey[];
@@ -22,8 +24,6 @@ export interface ContractReviewProps {
   onScenario(next: Scenario): void;
   host: LanewrightHost;
   onMessage(text: string): void;
-  /** Sets the dispatch date (from the calendar strip). */
-  onDate(date: string): void;
 }
 
 export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage, onDate }: ContractReviewProps) {
