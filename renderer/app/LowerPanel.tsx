@@ -70,7 +70,7 @@ export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, 
           onScenario={onScenario}
           host={bench.host}
           onMessage={bench.setMessage}
-          onDate={(dispatchDate) => bench.setSettings((now) => ({ ...now, dispatchDate }))}
+          onDate={(dispatchDate, vehicleClass) => bench.setSettings((now) => ({ ...now, dispatchDate, ...(vehicleClass === undefined ? {} : { vehicleClass: vehicleClass ?? '' }) }))}
         />
       )}
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}

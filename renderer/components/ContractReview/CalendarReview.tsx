@@ -18,8 +18,8 @@ export interface CalendarReviewProps {
   fixBy: 'lane' | 'clause';
   onFixBy(next: 'lane' | 'clause'): void;
   onSaveReport(): void;
-  /** Sets the dispatch date (a range of the strip was chosen). */
-  onDate(date: string): void;
+  /** A range of the strip was chosen: its first day, and the classes its loop holds for (null for a period). */
+  onDate(date: string, classes: readonly (string | null)[] | null): void;
   /** Applies the verified fix plan as scenario changes; null when there is none to apply. */
   onApplyFix: (() => void) | null;
 }

@@ -1,14 +1,15 @@
 // The calendar strip of the contract review: the window drawn to scale, its periods as segments and
 // each loop as a hatched bar over every date range it exists in, each bar carrying its loop number
 // and dates as text, so the strip reads without colour. A segment or a bar is a button: it sets the
-// dispatch date to the first day of its range, so the one-day review and the map show that date.
+// dispatch date to the first day of its range, so the one-day review and the map show that date (a
+// bar also names the classes its loop exists for, so the plan can switch to one of them).
 
 import type { CalendarReport } from '../../../engine/index';
 
 export interface CalendarStripProps {
   calendar: CalendarReport;
-  /** Sets the dispatch date (ISO 8601). */
-  onDate(date: string): void;
+  /** Sets the dispatch date (ISO 8601); `classes`: the vehicle classes a chosen loop range holds for (null for a period). */
+  onDate(date: string, classes: readonly (string | null)[] | null): void;
 }
 
 type Range = { from: string | null; to: string | null };
@@ -49,7 +50,7 @@ export function CalendarStrip({ calendar, onDate }: CalendarStripProps) {
               style={place(p)}
               title={`Period ${dates(p)}: ${p.loops.length === 0 ? 'no loop' : `loop(s) ${p.loops.join(', ')}`}`}
               aria-label={`Period ${dates(p)}, ${p.loops.length === 0 ? 'no loop' : `loop(s) ${p.loops.join(', ')}`}: set the dispatch date to ${p.from}`}
-              onClick={() => onDate(p.from!)}
+              onClick={() => onDate(p.from!, null)}
             >
               {short(p.from!, year)}
               {p.loops.length > 0 ? ` ⚠${p.loops.length}` : ''}
@@ -69,7 +70,7 @@ export function CalendarStrip({ calendar, onDate }: CalendarStripProps) {
                 style={place(r)}
                 title={`Loop ${loop.id}: ${dates(r)}`}
                 aria-label={`Loop ${loop.id}, ${dates(r)}: set the dispatch date to ${r.from}`}
-                onClick={() => onDate(r.from!)}
+                onClick={() => onDate(r.from!, r.by_class.map((c) => c.vehicle_class))}
               >
                 <span>
                   {loop.id}: {short(r.from!, year)} – {short(r.to!, year)}

@@ -15,8 +15,8 @@ import { CalendarReview } from './CalendarReview';
 import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
 
 export interface ContractReviewProps {
-  /** Sets the dispatch date (from the calendar strip). */
-  onDate(date: string): void;
+  /** Sets the dispatch date (from the calendar strip), and the vehicle class when given (null = as priced in the lanes file). */
+  onDate(date: string, vehicleClass?: string | null): void;
   engine: Engine;
   network: NetworkView;
   keys: readonly LaneKey[];
@@ -66,6 +66,14 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
     if (!saved.ok) onMessage(`Report not saved: ${saved.failure.message}`);
     else if (saved.value) onMessage(`Saved the contract review report: ${saved.value.path}`);
   };
+  // A loop bar of the strip plans its first day for a class the loop holds for: the planned class
+  // when it is one of them, else the first, and says so (a loop of the 2-axle tolls is not in a plan
+  // of the 5-axle ones).
+  const showRange = (date: string, classes: readonly (string | null)[] | null) => {
+    if (classes === null || classes.length === 0 || classes.includes(network.plannedClass)) return onDate(date);
+    onDate(date, classes[0]);
+    onMessage(`Planning ${date} for vehicle class ${classes[0] ?? 'as priced in the lanes file'}: the loop exists for ${classes.map((c) => c ?? 'the toll column').join(', ')}.`);
+  };
   // The calendar plan's changes go into the active scenario, where the user sees, undoes and saves them.
   const applyCalendarFix = () => {
     const changes = review.calendarFix;
@@ -84,7 +92,7 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
           fixBy={fixBy}
           onFixBy={setFixBy}
           onSaveReport={() => void saveReport()}
-          onDate={onDate}
+          onDate={showRange}
           onApplyFix={review.calendarFix.length > 0 ? applyCalendarFix : null}
         />
       )}
