@@ -10,6 +10,7 @@ import { reviewCalendar } from '../../../engine/audit/calendar/calendar-review';
 import { importNetwork } from '../../../engine/planning/import-network';
 import { calendarReport, type CalendarReport } from '../../../engine/report/calendar-report';
 import { calendarFixChanges, calendarReportScenario, reviewCalendarUnder } from '../../../engine/scenario/calendar-under-scenario';
+import { parseScenarioDocument } from '../../../engine/scenario/document';
 import { withChange } from '../../../engine/scenario/edit';
 import type { Scenario } from '../../../engine/scenario/types';
 
@@ -60,6 +61,11 @@ function byRef(report: CalendarReport) {
 describe('calendar review under a what-if', () => {
   const imported = importNetwork(depots, lanes);
   const edited = importNetwork(depots, handEdited());
+
+  it('is the sample scenario file what-if-spring-rebate.json (notes aside)', () => {
+    const file = parseScenarioDocument(readFileSync('sample-data/what-if-spring-rebate.json', 'utf8'), 'what-if-spring-rebate.json');
+    expect(file.changes.map((c) => ({ ...c, note: null }))).toEqual(WHAT_IF.changes);
+  });
 
   for (const fixBy of ['lane', 'clause'] as const) {
     it(`equals the review of the hand-edited file (fix plan by ${fixBy})`, () => {
