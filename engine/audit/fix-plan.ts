@@ -7,6 +7,7 @@ import { sumMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 import { toRebateLoop, type RebateLoop } from '../routes/rebate-loop';
 import { labelCorrect } from '../routes/label-correcting';
+import { pickRebateCut } from './rebate-cut-choice';
 
 export interface FixPlanOptions {
   /** 1 for lanes whose contract the user marks as negotiable; those are cut first. */
@@ -43,12 +44,7 @@ export interface FixPlan {
 
 const allDepots = (n: number) => Int32Array.from({ length: n }, (_, d) => d);
 
-/**
- * Builds the plan. Among a loop's rebate lanes it prefers, in order: negotiable lanes; lanes whose
- * rebate covers the whole amount (one cut fixes the loop); lanes the plan already cuts (fewer clauses
- * to renegotiate); the cut that is the smallest share of the lane's rebate; the largest rebate (when
- * none covers the amount); the lowest source row.
- */
+/** Builds the plan. Among a loop's rebate lanes it cuts the one `pickRebateCut` prefers. */
 export function buildFixPlan(network: Network, options: FixPlanOptions = {}): FixPlan {
   const n = network.depotCount;
   const sources = allDepots(n);
@@ -78,14 +74,7 @@ export function buildFixPlan(network: Network, options: FixPlanOptions = {}): Fi
       stepLimitReached = true;
       break;
     }
-    const rank = (e: number) => [negotiable && negotiable[e] ? 0 : 1, rebate[e] >= amount ? 0 : 1, cut[e] ? 0 : 1, Math.min(amount, rebate[e]) / rebate[e], -rebate[e], network.laneRow[e]];
-    candidates.sort((a, b) => {
-      const ra = rank(a);
-      const rb = rank(b);
-      for (let i = 0; i < ra.length; i++) if (ra[i] !== rb[i]) return ra[i] - rb[i];
-      return a - b;
-    });
-    const lane = candidates[0];
+    const lane = pickRebateCut(candidates, amount, (e) => ({ negotiable: !!(negotiable && negotiable[e]), rebateLeft: rebate[e], alreadyCut: cut[e] === 1, sourceRow: network.laneRow[e] }));
     const amountCut = Math.min(amount, rebate[lane]) as Minor;
     rebate[lane] -= amountCut;
     weights[positionOf[lane]] = sumMinor([weights[positionOf[lane]], amountCut], 'net cost after a rebate cut');

@@ -54,6 +54,12 @@ export function calendarReviewHtml(report: CalendarReport, options: CalendarHtml
 
   parts.push(`<h1>Contract review across the calendar</h1>`);
   parts.push(`<p>Window reviewed: <b>${e(range(report.window))}</b>, ${report.periods.length} period(s) in which the valid lane rows do not change; vehicle classes: ${e(report.classes.map(cls).join(', '))}. Amounts in ${e(report.currency)}.${options.madeAt ? ` Made ${e(options.madeAt)}.` : ''}</p>`);
+  if (report.scenario) {
+    const sc = report.scenario;
+    parts.push(`<p><b>Under the what-if scenario “${e(sc.name)}”</b>: every figure below is the contract as these changes make it, not the files as loaded.</p>`);
+    parts.push(table(['change', 'note', 'applied'], sc.changes.map((c) => [c.text, c.note ?? '', c.applied ? 'yes' : `no: ${c.problem ?? ''}`])));
+    if (sc.plan_problems.length > 0) parts.push(`<p class="note">Rows left out of some period: ${e(sc.plan_problems.join('; '))}</p>`);
+  }
   parts.push(`<div class="caution"><b>Caution.</b> ${e(report.caution)}</div>`);
   parts.push(`<h2>Files reviewed</h2>` + table(['file', 'SHA-256'], options.files.map((f) => [f.name, f.sha256])));
 

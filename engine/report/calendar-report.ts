@@ -12,6 +12,7 @@ import { formatMinor, type Minor } from '../money/minor';
 import { CAUTIONS } from '../text/cautions';
 import { loopSearchNote } from './audit-report';
 import type { LoopSearchStop } from '../audit/distinct-loops';
+import type { CalendarReportScenario } from '../scenario/calendar-under-scenario';
 
 export interface DateRange {
   from: string | null;
@@ -64,6 +65,8 @@ export interface CalendarHeadroomRow {
 
 export interface CalendarReport {
   review: 'calendar';
+  /** Null for the files as loaded; else every figure is the contract as the scenario changes it. */
+  scenario: CalendarReportScenario | null;
   currency: string;
   window: DateRange;
   classes: (string | null)[];
@@ -96,8 +99,11 @@ export interface CalendarReportInput {
   currency: string;
 }
 
-/** Builds the report object. */
-export function calendarReport(input: CalendarReportInput, review: CalendarReview, fixBy: 'lane' | 'clause' = 'lane'): CalendarReport {
+/**
+ * Builds the report object. `input.lanes` is the table the review ran on (under a scenario: the
+ * overlay's table, whose added lanes read row 0), and `scenario` names the what-if.
+ */
+export function calendarReport(input: CalendarReportInput, review: CalendarReview, fixBy: 'lane' | 'clause' = 'lane', scenario: CalendarReportScenario | null = null): CalendarReport {
   const t = input.lanes;
   const id = (d: number) => input.depots[d].id;
   const row = (r: number) => t.sourceRow[r];
@@ -113,6 +119,7 @@ export function calendarReport(input: CalendarReportInput, review: CalendarRevie
 
   return {
     review: 'calendar',
+    scenario,
     currency: input.currency,
     window: review.window ? { from: isoDateText(review.window.from), to: isoDateText(review.window.to) } : { from: null, to: null },
     classes: review.classes,

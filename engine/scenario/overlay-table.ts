@@ -38,6 +38,9 @@ export class TableCopy {
   private readonly ownClass = new Map<number, Float64Array>();
   private grown = false;
   private ref: (string | undefined)[];
+  /** Clause and notes cells: copied with the rows, so a class copy keeps its clause (the review groups by it). */
+  private clause: (string | undefined)[] | undefined;
+  private notes: (string | undefined)[];
   private limits: LaneTable['limits'];
   private log: { array: Typed; index: number; value: number }[] | null = null;
 
@@ -45,6 +48,8 @@ export class TableCopy {
     this.count = base.count;
     this.capacity = base.count;
     this.ref = base.ref;
+    this.clause = base.clause;
+    this.notes = base.notes;
     this.limits = base.limits;
   }
 
@@ -110,6 +115,8 @@ export class TableCopy {
     }
     this.base.classTolls.forEach((c, k) => this.ownClass.set(k, sized(this.ownClass.get(k) ?? c.toll, this.capacity, NaN)));
     this.ref = this.base.ref.slice();
+    this.clause = this.base.clause?.slice();
+    this.notes = this.base.notes.slice();
     const l = this.base.limits;
     if (l) {
       this.limits = {
@@ -149,6 +156,8 @@ export class TableCopy {
     for (const col of this.own.values()) col[r] = col[from];
     for (const col of this.ownClass.values()) col[r] = col[from];
     this.ref[r] = this.ref[from];
+    if (this.clause) this.clause[r] = this.clause[from];
+    this.notes[r] = this.notes[from];
     const l = this.limits;
     if (l) {
       for (const m of l.measures) m.values[r] = m.values[from];
@@ -186,6 +195,8 @@ export class TableCopy {
       vehicleClass: hasClassColumn && b.vehicleClass !== null ? col('vehicleClass') : null,
       classTolls: b.classTolls.map((c, k) => ({ ...c, toll: this.ownClass.has(k) ? trim(this.ownClass.get(k)!) : c.toll })),
       ref: this.ref,
+      clause: this.clause,
+      notes: this.notes,
       limits: this.limits
         ? {
             ...this.limits,

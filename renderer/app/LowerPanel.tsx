@@ -61,7 +61,17 @@ export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, 
           <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} />
         </div>
       )}
-      {tab === 'review' && <ContractReview engine={bench.engine} network={network} scenario={scenario} onScenario={onScenario} host={bench.host} onMessage={bench.setMessage} />}
+      {tab === 'review' && (
+        <ContractReview
+          engine={bench.engine}
+          network={network}
+          scenario={scenario}
+          onScenario={onScenario}
+          host={bench.host}
+          onMessage={bench.setMessage}
+          onDate={(dispatchDate, vehicleClass) => bench.setSettings((now) => ({ ...now, dispatchDate, ...(vehicleClass === undefined ? {} : { vehicleClass: vehicleClass ?? '' }) }))}
+        />
+      )}
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
       {/* Kept mounted while other tabs show, so the loads and their plan stay. */}
       <div hidden={tab !== 'loads'}>

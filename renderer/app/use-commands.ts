@@ -3,7 +3,8 @@
 
 import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
-import { serializeScenarioDocument } from '../../engine/index';
+import { exportFileName, serializeScenarioDocument } from '../../engine/index';
+import { hasChanges } from '../model/scenario-edits';
 import { scenarioFileName, type ExportChoice } from '../model/export-file';
 import { csvDialect } from './csv-dialect-store';
 import type { Workbench } from './use-workbench';
@@ -16,6 +17,16 @@ export interface CommandHandlers {
 export function useCommands(bench: Workbench, ui: CommandHandlers) {
   const { host, engine, setMessage, save, openWorkspace, openSample, scenario } = bench;
 
+  // The printable review of the whole calendar under the active scenario (fixed by lane), as the
+  // Contract review tab makes it; the worker keeps the calendar review while only the date changes.
+  const reviewReport = useCallback(async () => {
+    const { review } = await engine.track((onProgress) => engine.client.request('review', { scenario, fixBy: 'lane' }, onProgress), 'Reviewing the contract');
+    if (!review.calendar || !review.calendarHtml) throw new RangeError('the calendar review is not available');
+    const w = review.calendar.window;
+    const fileName = exportFileName({ kind: `contract-review-${w.from === null ? 'undated' : `${w.from}-${w.to}`}`, scenario: hasChanges(scenario) ? scenario.name : null }, 'html');
+    return { fileName, text: review.calendarHtml };
+  }, [engine, scenario]);
+
   const exportFile = useCallback(
     async (what: ExportChoice) => {
       try {
@@ -24,15 +35,17 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
         const file =
           what === 'scenario-json'
             ? { fileName: scenarioFileName(scenario.name), text: serializeScenarioDocument(scenario) }
-            : await engine.client.request('export', { what, dialect: csvDialect() });
-        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : 'csv');
+            : what === 'review-html'
+              ? await reviewReport()
+              : await engine.client.request('export', { what, dialect: csvDialect() });
+        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : what === 'review-html' ? 'html' : 'csv');
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);
       } catch (error) {
         setMessage(`Export failed: ${(error as Error).message}`);
       }
     },
-    [engine, host, setMessage, scenario],
+    [engine, host, setMessage, scenario, reviewReport],
   );
 
   // Subscribed again only when a handler changes (the workbench object itself is new every render).

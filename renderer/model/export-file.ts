@@ -4,8 +4,8 @@
 import { exportFileName } from '../../engine/index';
 import type { ExportKind } from '../worker/protocol';
 
-/** One entry of the Export menu. */
-export type ExportChoice = ExportKind | 'scenario-json';
+/** One entry of the Export menu; the review report is the Contract review's calendar report (HTML). */
+export type ExportChoice = ExportKind | 'scenario-json' | 'review-html';
 
 /**
  * File name for a scenario document: the scenario's name reduced to letters, digits, dots, dashes

@@ -45,21 +45,32 @@ export function setLaneClosed(scenario: Scenario, lane: LaneKey, closed: boolean
 /** Lane amounts under the scenario, one entry per network lane, as the worker ships the overlay's. */
 export type LaneAmounts = Pick<PlanAmounts, 'toll' | 'fuel' | 'fees' | 'rebate' | 'closed' | 'changed'>;
 
-/** The scenario plus one rebate change per fix-plan row (rows of the lanes file name the lanes). */
+/**
+ * The scenario plus one rebate change per fix-plan row (rows of the lanes file name the lanes);
+ * `noteOf(row)` gives each change's note (which plan, which row and classes), null without one.
+ */
 export function fixPlanScenario(
   scenario: Scenario,
   network: { laneRow: Int32Array; laneRebate: Float64Array },
   keyOf: (lane: number) => LaneKey,
   rows: readonly { row: number; new_rebate_minor: number }[],
+  noteOf: (row: number) => string | null = () => null,
 ): Scenario {
   const laneOfRow = new Map<number, number>();
   network.laneRow.forEach((row, e) => laneOfRow.set(row, e));
   let next = scenario;
   for (const r of rows) {
     const e = laneOfRow.get(r.row);
-    if (e !== undefined) next = setLaneAmount(next, keyOf(e), 'rebate', r.new_rebate_minor, network.laneRebate[e]);
+    if (e === undefined) continue;
+    const change: ScenarioChange = { kind: 'set-amount', lane: keyOf(e), field: 'rebate', amountMinor: r.new_rebate_minor, note: noteOf(r.row) };
+    next = withLaneChange(next, change, r.new_rebate_minor === network.laneRebate[e]);
   }
   return next;
+}
+
+/** The scenario with each change put in as withChange does (one on the same lane and field replaces the earlier). */
+export function withChanges(scenario: Scenario, changes: readonly ScenarioChange[]): Scenario {
+  return changes.reduce(withChange, scenario);
 }
 
 /** True when the scenario changes anything. */

@@ -5,9 +5,10 @@
 // (those no other network of the class contains) are searched, fixed and solved for headroom.
 
 import { clauseOf } from '../../import/lane-clause';
-import { laneKeysOf, laneKeyText } from '../../import/lane-key';
+import { laneKeyText } from '../../import/lane-key';
 import type { LaneTable } from '../../import/types';
 import type { ImportResult } from '../../planning/import-types';
+import { importCalendarSource, type CalendarSource } from './calendar-source';
 import { clauseFixPlan } from './clause-fix-plan';
 import { clauseTable, type ClauseRow } from './clause-table';
 import { daysInRange } from './days';
@@ -66,20 +67,29 @@ export interface CalendarReview {
   rowDays: Float64Array;
 }
 
-/** Runs the calendar review on an import (its lane table and planning settings). */
+/** Runs the calendar review on an import as loaded (its lane table and planning settings). */
 export function reviewCalendar(result: ImportResult, options: CalendarReviewOptions = {}): CalendarReview {
-  const table = result.lanes;
+  return reviewCalendarOf(importCalendarSource(result, options.skipInvalid), options);
+}
+
+/**
+ * Runs the calendar review on a lane table and its planner: the import's own, or a what-if's
+ * overlay (engine/scenario/calendar-under-scenario.ts), whose rows, amounts, closures and windows
+ * then decide every period network. `skipInvalid` is the source's business here.
+ */
+export function reviewCalendarOf(source: CalendarSource, options: CalendarReviewOptions = {}): CalendarReview {
+  const table = source.lanes;
   const progress = options.onProgress;
-  const window = reviewWindow(table, { fromDate: options.fromDate, toDate: options.toDate });
-  const periods = reviewPeriods(table, window, options.maxPeriods);
-  const networks = periodNetworks(result, periods, {
+  const leaveOut = source.leaveOut;
+  const window = reviewWindow(table, { fromDate: options.fromDate, toDate: options.toDate }, leaveOut);
+  const periods = reviewPeriods(table, window, options.maxPeriods, leaveOut);
+  const networks = periodNetworks(source, periods, {
     vehicleClasses: options.vehicleClasses,
-    skipInvalid: options.skipInvalid,
     onProgress: (done, total) => progress?.({ phase: 'periods', done, total }),
   });
   const classes = [...new Set(networks.map((n) => n.vehicleClass))];
-  const { marks: negotiable, unmatched } = markNegotiable(result, options.negotiable);
-  const rowDays = validDays(table, window);
+  const { marks: negotiable, unmatched } = markNegotiable(source, options.negotiable);
+  const rowDays = validDays(table, window, leaveOut);
 
   const found = loopsOverTime(networks, { cap: options.loopCap, onProgress: (done, total) => progress?.({ phase: 'loops', done, total }) });
   let fixPlan: CalendarFixPlan | null = null;
@@ -90,6 +100,7 @@ export function reviewCalendar(result: ImportResult, options: CalendarReviewOpti
         ? clauseFixPlan(table, networks, found.loops.map((l) => l.rows), rowDays, { negotiable, budget: options.clauseBudget })
         : laneFixPlan(table, networks, { negotiable });
     progress?.({ phase: 'verify', done: 0, total: 1 });
+    if (leaveOut) withoutLeftOut(fixPlan, leaveOut);
     fixPlan.verified = fixPlan.unfixable.length === 0 && fixPlan.changes.length > 0 && verifyCuts(table, networks, fixPlan.cut);
   }
   const floors =
@@ -106,16 +117,23 @@ export function reviewCalendar(result: ImportResult, options: CalendarReviewOpti
     headroom: floors?.rows ?? [],
     headroomWork: floors?.work ?? null,
     headroomAfterFixPlan: fixPlan !== null,
-    clauses: clauseTable(table, found.loops),
+    clauses: clauseTable(table, found.loops, leaveOut),
     negotiable,
     negotiableUnmatched: unmatched,
     rowDays,
   };
 }
 
-function validDays(table: LaneTable, window: ReviewWindow | null): Float64Array {
+// A clause cut reaches every row of the clause; rows in no network (closed by a what-if) are left out of the plan.
+function withoutLeftOut(plan: CalendarFixPlan, leaveOut: Uint8Array): void {
+  plan.changes = plan.changes.filter((c) => !leaveOut[c.row]);
+  for (let r = 0; r < plan.cut.length; r++) if (leaveOut[r]) plan.cut[r] = 0;
+}
+
+function validDays(table: LaneTable, window: ReviewWindow | null, leaveOut: Uint8Array | undefined): Float64Array {
   const days = new Float64Array(table.count);
   for (let r = 0; r < table.count; r++) {
+    if (leaveOut?.[r]) continue;
     if (window === null) {
       days[r] = 365;
       continue;
@@ -128,13 +146,12 @@ function validDays(table: LaneTable, window: ReviewWindow | null): Float64Array 
 }
 
 // The same names as the one-day audit takes (refs, lane key texts), plus clause names.
-function markNegotiable(result: ImportResult, names: Iterable<string> | undefined): { marks: Uint8Array; unmatched: string[] } {
-  const table = result.lanes;
+function markNegotiable(source: CalendarSource, names: Iterable<string> | undefined): { marks: Uint8Array; unmatched: string[] } {
+  const table = source.lanes;
   const marks = new Uint8Array(table.count);
   const wanted = new Set([...(names ?? [])].map((s) => s.trim()).filter((s) => s !== ''));
   if (wanted.size === 0) return { marks, unmatched: [] };
-  const ids = result.depots.map((d) => d.id);
-  const keys = laneKeysOf(Array.from({ length: table.count }, (_, r) => ({ from: ids[table.from[r]], to: ids[table.to[r]], ref: table.ref[r] })));
+  const keys = source.keys();
   const matched = new Set<string>();
   for (let r = 0; r < table.count; r++) {
     const clause = clauseOf(table, r);

@@ -29,8 +29,8 @@ export function loopClauses(table: LaneTable, loop: CalendarLoop): LaneClause[] 
   return [...seen.values()];
 }
 
-/** One row per clause with a rebate or on a loop: clauses on loops first, then by name. */
-export function clauseTable(table: LaneTable, loops: readonly CalendarLoop[]): ClauseRow[] {
+/** One row per clause with a rebate or on a loop: clauses on loops first, then by name. Rows in `leaveOut` (closed by a what-if) are not in any clause. */
+export function clauseTable(table: LaneTable, loops: readonly CalendarLoop[], leaveOut?: Uint8Array): ClauseRow[] {
   const rows = new Map<string, ClauseRow>();
   const get = (r: number) => {
     const c = clauseOf(table, r);
@@ -39,7 +39,7 @@ export function clauseTable(table: LaneTable, loops: readonly CalendarLoop[]): C
     return row;
   };
   for (let r = 0; r < table.count; r++) {
-    if (!counts(table, r)) continue;
+    if (!counts(table, r) || leaveOut?.[r]) continue;
     const row = get(r);
     row.rows.push(r);
     row.rebate += table.rebate[r];

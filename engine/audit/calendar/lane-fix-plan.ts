@@ -1,11 +1,12 @@
 // One fix plan for the whole calendar, by lane row: take the maximal period networks one by one;
 // while one has a loop, cut the rebate of one of the loop's rows by what the lap pays (never below
 // zero). Cuts only raise nets, so a network once free of loops stays free, and a covered network is
-// free when its cover is: one pass settles every period and class. The choice of row follows the
-// one-day plan's preferences (engine/audit/fix-plan.ts).
+// free when its cover is: one pass settles every period and class. The row is chosen by the same
+// ranking as the one-day plan's (engine/audit/rebate-cut-choice.ts).
 
 import type { LaneTable } from '../../import/types';
 import type { RebateLoop } from '../../routes/rebate-loop';
+import { pickRebateCut } from '../rebate-cut-choice';
 import type { PeriodNetwork } from './period-networks';
 import { firstLoop, weightsWithCuts } from './period-weights';
 
@@ -70,14 +71,7 @@ export function laneFixPlan(table: LaneTable, nets: readonly PeriodNetwork[], op
         stepLimitReached = true;
         break;
       }
-      const rank = (r: number) => [negotiable && negotiable[r] ? 0 : 1, left(r) >= amount ? 0 : 1, cut[r] > 0 ? 0 : 1, Math.min(amount, left(r)) / left(r), -left(r), table.sourceRow[r]];
-      candidates.sort((a, b) => {
-        const ra = rank(a);
-        const rb = rank(b);
-        for (let i = 0; i < ra.length; i++) if (ra[i] !== rb[i]) return ra[i] - rb[i];
-        return a - b;
-      });
-      const row = candidates[0];
+      const row = pickRebateCut(candidates, amount, (r) => ({ negotiable: !!negotiable?.[r], rebateLeft: left(r), alreadyCut: cut[r] > 0, sourceRow: table.sourceRow[r] }));
       cut[row] += Math.min(amount, left(row));
       weights = weightsWithCuts(net, cut);
     }

@@ -5,11 +5,9 @@
 // larger one offers at the same or lower cost. So loops, fix plans and headroom need only be
 // worked out on the *maximal* networks; the others are read off them.
 
-import { InvalidInputError } from '../../import/import-errors';
 import { isoDateText } from '../../import/cells';
 import type { Network } from '../../network/types';
-import { planNetwork } from '../../planning/import-network';
-import type { ImportResult } from '../../planning/import-types';
+import type { CalendarSource } from './calendar-source';
 import type { ReviewPeriod } from './periods';
 
 export interface PeriodNetwork {
@@ -30,28 +28,26 @@ export interface PeriodNetwork {
 export interface PeriodNetworksOptions {
   /** Classes to review; default every class of the file, or the default toll when it has none. */
   vehicleClasses?: (string | null)[];
-  skipInvalid?: boolean;
   onProgress?: (done: number, total: number) => void;
 }
 
 /** The classes a review covers by default. */
-export function reviewClasses(result: ImportResult): (string | null)[] {
+export function reviewClasses(result: Pick<CalendarSource, 'vehicleClasses'>): (string | null)[] {
   return result.vehicleClasses.length > 0 ? result.vehicleClasses.slice() : [null];
 }
 
 /** Distinct networks, grouped by class in the order of `classes`, then by first period. */
-export function periodNetworks(result: ImportResult, periods: readonly ReviewPeriod[], options: PeriodNetworksOptions = {}): PeriodNetwork[] {
-  const classes = options.vehicleClasses ?? reviewClasses(result);
-  const rows = result.lanes.count;
+export function periodNetworks(source: CalendarSource, periods: readonly ReviewPeriod[], options: PeriodNetworksOptions = {}): PeriodNetwork[] {
+  const classes = options.vehicleClasses ?? reviewClasses(source);
+  const rows = source.lanes.count;
   const out: PeriodNetwork[] = [];
   let done = 0;
   for (const vehicleClass of classes) {
     const first = out.length;
     const byRows = new Map<string, number>();
     periods.forEach((period, k) => {
-      const planned = planNetwork(result, { date: isoDateText(period.from) ?? undefined, vehicleClass: vehicleClass ?? undefined, settings: result.plan.settings }, { skipInvalid: options.skipInvalid });
-      if (planned.network === null) throw new InvalidInputError(planned.report);
-      const record = planned.plan.laneRecord;
+      const planned = source.plan(isoDateText(period.from) ?? undefined, vehicleClass);
+      const record = planned.laneRecord;
       const key = record.join(',');
       const known = byRows.get(key);
       if (known !== undefined) out[known].periods.push(k);

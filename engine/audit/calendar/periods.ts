@@ -14,11 +14,12 @@ export interface ReviewPeriod {
   to: number;
 }
 
-/** The periods in date order; throws ReviewBudgetError past `maxPeriods` (default 1,000). */
-export function reviewPeriods(table: LaneTable, window: ReviewWindow | null, maxPeriods = 1000): ReviewPeriod[] {
+/** The periods in date order; throws ReviewBudgetError past `maxPeriods` (default 1,000). Rows in `leaveOut` cut none. */
+export function reviewPeriods(table: LaneTable, window: ReviewWindow | null, maxPeriods = 1000, leaveOut?: Uint8Array): ReviewPeriod[] {
   if (window === null) return [{ from: 0, to: 0 }];
   const starts = new Set<number>([window.from]);
   for (let i = 0; i < table.count; i++) {
+    if (leaveOut?.[i]) continue;
     const from = table.validFrom[i];
     const to = table.validTo[i];
     if (from > window.from && from <= window.to) starts.add(from);

@@ -26,10 +26,12 @@ function read(option: string, text: string | undefined): number | null {
 }
 
 /** The window; throws PlanRequestError for a bad date or a window that ends before it starts. */
-export function reviewWindow(table: LaneTable, request: ReviewWindowRequest = {}): ReviewWindow | null {
+/** Rows marked in `leaveOut` (a what-if closes them) name no date. */
+export function reviewWindow(table: LaneTable, request: ReviewWindowRequest = {}, leaveOut?: Uint8Array): ReviewWindow | null {
   let first = Infinity;
   let last = -Infinity;
   for (let i = 0; i < table.count; i++) {
+    if (leaveOut?.[i]) continue;
     for (const d of [table.validFrom[i], table.validTo[i]]) {
       if (d === 0) continue;
       if (d < first) first = d;

@@ -4,14 +4,14 @@
 
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import { calendarLaneRows, calendarLoopRows, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
+import { calendarFixChanges, calendarLaneRows, calendarLoopRows, calendarReport, calendarReportScenario, calendarReviewHtml, formatCsvRows, reviewCalendarUnder, serializeScenarioDocument, withChange, type Scenario } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport } from '../load-network';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
 
 /** Value options only the calendar review reads (kept together so the option table can take them as they are). */
-export const CALENDAR_AUDIT_OPTIONS = ['from-date', 'to-date', 'fix-by', 'report'] as const;
+export const CALENDAR_AUDIT_OPTIONS = ['from-date', 'to-date', 'fix-by', 'report', 'fix-scenario-out'] as const;
 
 function fixByOption(args: ParsedArgs): 'lane' | 'clause' {
   const value = args.values.get('fix-by') ?? 'lane';
@@ -21,7 +21,7 @@ function fixByOption(args: ParsedArgs): 'lane' | 'clause' {
 
 const sha256 = (path: string) => createHash('sha256').update(readFileSync(path)).digest('hex');
 
-export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
+export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { path: string; scenario: Scenario } | null): number {
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const threads = wholeNumberOption(args, 'threads', 1);
   const fixBy = fixByOption(args);
@@ -38,9 +38,9 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   const solveStart = performance.now();
   // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
   const pool = createHeadroomThreadPool({ threads });
-  let review: ReturnType<typeof reviewCalendar>;
+  let reviewed: ReturnType<typeof reviewCalendarUnder>;
   try {
-    review = reviewCalendar(imported, {
+    reviewed = reviewCalendarUnder(imported, what?.scenario ?? null, {
       headroomRunner: pool,
       fromDate: args.values.get('from-date'),
       toDate: args.values.get('to-date'),
@@ -60,17 +60,29 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
     pool.close();
   }
   const solveMs = performance.now() - solveStart;
+  const review = reviewed.review;
+  for (const p of reviewed.overlay.problems) out.warn(`scenario ${what!.path}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
+  for (const p of reviewed.planProblems) out.warn(`scenario ${what!.path}: ${p}`);
 
-  const report = calendarReport(imported, review, fixBy);
+  // Under a scenario the rows are the overlay's (added lanes read row 0); the report names the scenario.
+  const report = calendarReport({ ...imported, lanes: reviewed.overlay.table }, review, fixBy, what ? calendarReportScenario(what.scenario, reviewed) : null);
   const exponent = imported.exponent;
   const window = report.window.from === null ? 'every date (the lanes file names none)' : `${report.window.from} to ${report.window.to}`;
-  out.warn(`calendar review: ${window}, ${report.periods.length} period(s), vehicle class(es) ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
+  out.warn(`calendar review${what ? ` under scenario "${what.scenario.name}" (${what.path})` : ''}: ${window}, ${report.periods.length} period(s), vehicle class(es) ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
   for (const name of review.negotiableUnmatched) out.warn(`--negotiable: no lane has the contract reference, clause or lane key "${name}"; it marks nothing`);
   out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(calendarLaneRows(report, exponent)));
   if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(calendarLoopRows(report, exponent)));
   if (reportPath) {
     const files = ['depots', 'lanes'].map((k) => args.values.get(k)!).map((path) => ({ name: path, sha256: sha256(path) }));
     out.writeFile(reportPath, calendarReviewHtml(report, { files, exponent, madeAt: new Date().toISOString().slice(0, 16) + 'Z' }));
+  }
+  const fixOut = args.values.get('fix-scenario-out');
+  if (fixOut && report.loops.length > 0 && !report.fix_plan_verified) out.warn(`--fix-scenario-out: the fix plan is not verified; ${fixOut} is not written`);
+  else if (fixOut) {
+    // The verified plan as a scenario file (the scenario given, plus one rebate change per lane cut), for `compare` or the app.
+    const base: Scenario = what?.scenario ?? { name: `Calendar fix plan by ${fixBy}`, description: null, changes: [] };
+    const fixed = calendarFixChanges(reviewed).reduce(withChange, base);
+    out.writeFile(fixOut, serializeScenarioDocument(fixed));
   }
   if (args.flags.has('timings')) {
     out.timing({ read_ms: readMs, audit_ms: solveMs, periods: report.work.periods, networks: report.work.networks, maximal_networks: report.work.maximal_networks, lanes: imported.lanes.count, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });

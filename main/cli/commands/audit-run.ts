@@ -4,7 +4,8 @@
 // command reviews the whole calendar (audit-calendar.ts).
 // The command's work; its option table is in audit.ts (engine-free), so this module loads only when it runs.
 
-import { auditNetwork, overlayKeys } from '../../../engine/index';
+import { auditNetwork, overlayKeys, parseScenarioDocument, scenarioImport, type Scenario } from '../../../engine/index';
+import { readDocumentFile } from '../files';
 import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
@@ -14,8 +15,15 @@ import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
 
+/** The --scenario file, read before any work; null without one. */
+export function auditScenario(args: ParsedArgs): { path: string; scenario: Scenario } | null {
+  const path = args.values.get('scenario');
+  return path === undefined ? null : { path, scenario: parseScenarioDocument(readDocumentFile(path, 'scenario'), path) };
+}
+
 export function runAudit(args: ParsedArgs, out: CommandOutput): number {
-  if (!args.values.has('date')) return runCalendarAudit(args, out);
+  const what = auditScenario(args);
+  if (!args.values.has('date')) return runCalendarAudit(args, out, what);
   for (const name of CALENDAR_AUDIT_OPTIONS) {
     if (args.values.has(name)) throw new UsageError(`--${name} belongs to the calendar review; leave out --date to review the whole calendar`);
   }
@@ -27,10 +35,17 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   const readStart = performance.now();
   const imported = loadImport(args);
-  const network = imported.network;
+  let network = imported.network;
   // Lane keys as scenarios name them: counted over the file's rows, not the day's network.
   const rowKeys = overlayKeys(imported);
-  const laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
+  let laneKeys = Array.from(imported.plan.laneRecord, (r) => rowKeys[r]);
+  if (what) {
+    // The day's network as the scenario makes it, through the one overlay (as export and compare do).
+    const overlaid = scenarioImport(imported, what.scenario);
+    for (const p of overlaid.overlay.problems) out.warn(`scenario ${what.path}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
+    network = overlaid.network;
+    laneKeys = overlaid.keys;
+  }
   const readMs = performance.now() - readStart;
 
   let lastLine = '';
@@ -59,7 +74,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
-  const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
+  const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, ...report };
   out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });

@@ -1,13 +1,15 @@
-// The contract review across the whole calendar: how many loops the contract has on any date (so a
-// day without a loop never reads as a contract without one), a strip of periods with a bar per loop
-// (hatched and numbered, readable without colour), each loop's date ranges and clauses, the clause
-// table and the calendar-wide fix plan, by lane or by clause; the review saves as a printable report.
+// The contract review across the whole calendar, under the active what-if when there is one: how
+// many loops the contract has on any date (so a day without a loop never reads as a contract without
+// one), the calendar strip (CalendarStrip), each loop's date ranges and clauses, the clause table
+// beside the lane table (ClauseLanes) and the calendar-wide fix plan, by lane or by clause, which can
+// be applied as scenario changes; the review saves as a printable report.
 
 import type { CalendarReport } from '../../../engine/index';
 import { formatMoney } from '../../model/format';
 import { DataTable, type Column } from '../DataTable/DataTable';
+import { CalendarStrip } from './CalendarStrip';
+import { ClauseLanes } from './ClauseLanes';
 
-type Clause = CalendarReport['clauses'][number];
 type Fix = CalendarReport['fix_plan'][number];
 
 export interface CalendarReviewProps {
@@ -16,20 +18,18 @@ export interface CalendarReviewProps {
   fixBy: 'lane' | 'clause';
   onFixBy(next: 'lane' | 'clause'): void;
   onSaveReport(): void;
+  /** A range of the strip was chosen: its first day, and the classes its loop holds for (null for a period). */
+  onDate(date: string, classes: readonly (string | null)[] | null): void;
+  /** Applies the verified fix plan as scenario changes; null when there is none to apply. */
+  onApplyFix: (() => void) | null;
 }
 
 const range = (r: { from: string | null; to: string | null }) => (r.from === null ? 'every date' : `${r.from} to ${r.to}`);
 const className = (c: string | null) => c ?? 'default toll';
 
-export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveReport }: CalendarReviewProps) {
+export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveReport, onDate, onApplyFix }: CalendarReviewProps) {
   const money = (v: number) => formatMoney(v, exponent);
-  const clauseColumns: Column<Clause>[] = [
-    { label: 'Clause', cell: (c) => (c.source === 'clause' ? c.clause : `${c.clause} (${c.source})`) },
-    { label: 'Lane rows', cell: (c) => c.lanes.join(' ') },
-    { label: 'Total rebate', numeric: true, cell: (c) => money(c.rebate_minor) },
-    { label: 'Loops', cell: (c) => c.loops.join(' ') },
-    { label: 'On a loop', cell: (c) => c.ranges.map(range).join('; ') },
-  ];
+  const what = calendar.scenario;
   const fixColumns: Column<Fix>[] = [
     { label: 'Row', numeric: true, cell: (f) => String(f.row) },
     { label: 'Lane', cell: (f) => `${f.from} → ${f.to}` },
@@ -41,17 +41,19 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
   return (
     <section className="lw-calendar" aria-label="Whole contract" data-testid="calendar-review">
       <h3>
-        Rebate loops in the whole contract, {range(calendar.window)}: {calendar.loops.length}
+        Rebate loops in the whole contract, {range(calendar.window)}
+        {what ? ` (scenario “${what.name}”)` : ''}: {calendar.loops.length}
         {calendar.loop_cap_reached ? ' (list capped)' : ''}
       </h3>
       <p className="lw-muted">
-        {calendar.periods.length} period(s) in which the valid lane rows do not change, every vehicle class ({calendar.classes.map(className).join(', ')}), the files as loaded
-        (a scenario applies to the one-day review below).{' '}
+        {calendar.periods.length} period(s) in which the valid lane rows do not change, every vehicle class ({calendar.classes.map(className).join(', ')}),{' '}
+        {what ? `the contract as the scenario “${what.name}” changes it (${what.changes.filter((c) => c.applied).length} of ${what.changes.length} change(s) applied)` : 'the files as loaded'}. Choose a period or a loop's dates to plan that day.{' '}
         <button type="button" onClick={onSaveReport}>
           Save review report (HTML)
         </button>
       </p>
-      {calendar.loops.length > 0 && <CalendarStrip calendar={calendar} />}
+      {what && what.plan_problems.length > 0 && <p className="lw-warn">Rows left out under the scenario: {what.plan_problems.join('; ')}</p>}
+      <CalendarStrip calendar={calendar} onDate={onDate} />
       {calendar.loops.map((loop) => (
         <p key={loop.id} className="lw-warn">
           ⚠ Loop {loop.id}: {[...loop.depots, loop.depots[0]].join(' → ')} · clauses {loop.clauses.join(', ') || 'none'} ·{' '}
@@ -64,7 +66,7 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
             Fix plan for every date: cut {calendar.fix_plan.length} rebate(s){calendar.fix_plan_verified ? ' (checked in every period: no loop remains)' : ' (not verified)'}{' '}
             <label>
               by{' '}
-              <select value={fixBy} onChange={(e) => onFixBy(e.currentTarget.value === 'clause' ? 'clause' : 'lane')}>
+              <select aria-label="Fix plan by lane or by clause" value={fixBy} onChange={(e) => onFixBy(e.currentTarget.value === 'clause' ? 'clause' : 'lane')}>
                 <option value="lane">lane</option>
                 <option value="clause">clause</option>
               </select>
@@ -72,54 +74,14 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
           </h3>
           {calendar.fix_plan_method && <p className="lw-muted">Method: {calendar.fix_plan_method}.</p>}
           <DataTable columns={fixColumns} rows={calendar.fix_plan} rowKey={(f) => f.row} label="Calendar fix plan" />
+          {onApplyFix && (
+            <button type="button" onClick={onApplyFix}>
+              Apply this fix plan (by {fixBy}) as a scenario
+            </button>
+          )}
         </section>
       )}
-      <section aria-label="Clauses">
-        <h3>Clauses</h3>
-        <DataTable columns={clauseColumns} rows={calendar.clauses} rowKey={(c) => `${c.source}:${c.clause}`} label="Clauses" />
-      </section>
+      <ClauseLanes calendar={calendar} exponent={exponent} />
     </section>
-  );
-}
-
-/** Periods as columns (width by days), a row per loop with a hatched, numbered cell where it exists. */
-function CalendarStrip({ calendar }: { calendar: CalendarReport }) {
-  const days = calendar.periods.map((p) => (p.from === null ? 1 : Math.max(1, (Date.parse(p.to!) - Date.parse(p.from)) / 86_400_000 + 1)));
-  const total = days.reduce((a, b) => a + b, 0);
-  return (
-    <table className="lw-strip" aria-label="When each loop exists">
-      <colgroup>
-        <col style={{ width: '8%' }} />
-        {days.map((d, k) => (
-          <col key={k} style={{ width: `${((92 * d) / total).toFixed(3)}%` }} />
-        ))}
-      </colgroup>
-      <thead>
-        <tr>
-          <th scope="col">Period</th>
-          {calendar.periods.map((p, k) => (
-            <th key={k} scope="col" title={range(p)}>
-              {p.from === null ? 'undated' : k === 0 || calendar.periods[k - 1].from!.slice(0, 4) !== p.from.slice(0, 4) ? p.from : p.from.slice(5)}
-            </th>
-          ))}
-        </tr>
-      </thead>
-      <tbody>
-        {calendar.loops.map((loop) => (
-          <tr key={loop.id}>
-            <th scope="row">Loop {loop.id}</th>
-            {calendar.periods.map((p, k) =>
-              p.loops.includes(loop.id) ? (
-                <td key={k} className="lw-strip-on" title={`Loop ${loop.id}: ${range(p)}`}>
-                  <span>{loop.id}</span>
-                </td>
-              ) : (
-                <td key={k} />
-              ),
-            )}
-          </tr>
-        ))}
-      </tbody>
-    </table>
   );
 }

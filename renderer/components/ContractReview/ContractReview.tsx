@@ -1,12 +1,13 @@
-// The contract-review view: the engine's audit of the whole contract under the active scenario —
-// every rebate loop with the lanes and references that form it, a fix plan (which rebates to cut,
-// and by how much) that can be tried as a scenario, and rebate headroom per lane.
+// The contract-review view, under the active scenario: the whole calendar (CalendarReview) and the
+// one-day review of the planned date — every rebate loop of that day with the lanes and references
+// that form it, a fix plan (which rebates to cut, and by how much) that can be tried as a scenario,
+// and rebate headroom per lane.
 
 import { CautionLine } from '../CautionLine/CautionLine';
 import { useEffect, useState } from 'react';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
 import { formatMoney, formatMoneyWithCode } from '../../model/format';
-import { fixPlanScenario, type Scenario } from '../../model/scenario-edits';
+import { fixPlanScenario, withChanges, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
 import type { LanewrightHost } from '../../../main/ipc/contract';
@@ -15,6 +16,8 @@ import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
 import { laneKey } from '../../model/lane-names';
 
 export interface ContractReviewProps {
+  /** Sets the dispatch date (from the calendar strip), and the vehicle class when given (null = as priced in the lanes file). */
+  onDate(date: string, vehicleClass?: string | null): void;
   engine: Engine;
   network: NetworkView;
   scenario: Scenario;
@@ -23,7 +26,7 @@ export interface ContractReviewProps {
   onMessage(text: string): void;
 }
 
-export function ContractReview({ engine, network, scenario, onScenario, host, onMessage }: ContractReviewProps) {
+export function ContractReview({ engine, network, scenario, onScenario, host, onMessage, onDate }: ContractReviewProps) {
   const [fixBy, setFixBy] = useState<'lane' | 'clause'>('lane');
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -63,12 +66,36 @@ export function ContractReview({ engine, network, scenario, onScenario, host, on
     if (!saved.ok) onMessage(`Report not saved: ${saved.failure.message}`);
     else if (saved.value) onMessage(`Saved the contract review report: ${saved.value.path}`);
   };
+  // A loop bar of the strip plans its first day for a class the loop holds for: the planned class
+  // when it is one of them, else the first, and says so (a loop of the 2-axle tolls is not in a plan
+  // of the 5-axle ones).
+  const showRange = (date: string, classes: readonly (string | null)[] | null) => {
+    if (classes === null || classes.length === 0 || classes.includes(network.plannedClass)) return onDate(date);
+    onDate(date, classes[0]);
+    onMessage(`Planning ${date} for vehicle class ${classes[0] ?? 'as priced in the lanes file'}: the loop exists for ${classes.map((c) => c ?? 'the toll column').join(', ')}.`);
+  };
+  // The calendar plan's changes go into the active scenario, where the user sees, undoes and saves them.
+  const applyCalendarFix = () => {
+    const changes = review.calendarFix;
+    onScenario(withChanges(scenario, changes));
+    onMessage(`Applied the calendar fix plan (by ${fixBy}) to the scenario “${scenario.name}”: ${changes.length} rebate change(s); undo or save them under Lanes & scenario.`);
+  };
   // "Whole contract" is said only of the calendar review; the one-day review names its date.
   const day = network.plan.date ? `on ${network.plan.date}` : 'with every row valid at once (no date chosen)';
   return (
     <div className="lw-review" data-testid="contract-review">
       <CautionLine kind="review" testId="review-caution" />
-      {review.calendar && <CalendarReview calendar={review.calendar} exponent={network.exponent} fixBy={fixBy} onFixBy={setFixBy} onSaveReport={() => void saveReport()} />}
+      {review.calendar && (
+        <CalendarReview
+          calendar={review.calendar}
+          exponent={network.exponent}
+          fixBy={fixBy}
+          onFixBy={setFixBy}
+          onSaveReport={() => void saveReport()}
+          onDate={showRange}
+          onApplyFix={review.calendarFix.length > 0 ? applyCalendarFix : null}
+        />
+      )}
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>
         One-day review: rebate loops {day}{scenario.changes.length > 0 ? ` (scenario “${scenario.name}”)` : ''}: {review.loops.length}
@@ -93,7 +120,7 @@ export function ContractReview({ engine, network, scenario, onScenario, host, on
         <section aria-label="Fix plan">
           <h3>Fix plan: cut {review.fix_plan.length} rebate(s){review.fix_plan_verified ? ' (checked: no loop remains)' : ' (not verified)'}</h3>
           <FixPlanTable rows={review.fix_plan} money={money} />
-          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, (e) => laneKey(network, e), review.fix_plan))}>
+          <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, (e) => laneKey(network, e), review.fix_plan, (row) => `one-day fix plan ${day} (vehicle class ${network.plan.vehicleClass ?? 'as priced in the lanes file'}): lanes-file row ${row}; the rebate holds for every vehicle class`))}>
             Try the fix plan as a scenario
           </button>
         </section>

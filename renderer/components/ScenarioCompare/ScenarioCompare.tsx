@@ -84,7 +84,8 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
           const view = views.length === scenario.changes.length ? views[i] : undefined;
           return (
             <li key={i} data-change-applied={view ? (view.applied ? 'yes' : 'no') : undefined}>
-              {describe(c, i)}{' '}
+              {describe(c, i)}
+              {c.note && <span className="lw-muted"> — {c.note}</span>}{' '}
               {view && !view.applied && (
                 <span className="lw-badge lw-badge-problem" role="note">
                   not applied: {view.problem}

@@ -67,6 +67,7 @@ export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImp
             <option value="lanes-csv">Lane costs (CSV)</option>
             <option value="loops-csv">Rebate loops (CSV)</option>
             <option value="geojson">Network and routes (GeoJSON)</option>
+            <option value="review-html">Contract review report (HTML)</option>
             <option value="scenario-json">Scenario file (JSON)</option>
           </select>
         </label>

@@ -143,6 +143,57 @@ describe('lanewright audit', () => {
       expect(text).toContain('Defer to local codes');
     });
 
+    it('--scenario reviews the calendar as the what-if changes it; --fix-scenario-out writes the plan as a scenario that leaves no loop', async () => {
+      // The what-if: K-2's rebate only in March-April, K-4 closed, and a new lane C>A (net -20.00) from
+      // November, which makes A>B>C>A pay 10.00 + 5.00 - 20.00 = -5.00 per lap.
+      const k = (from: string, to: string, ref: string) => ({ from, to, ref, occurrence: 1 });
+      const scenario = {
+        format: 'lanewright-scenario',
+        version: 2,
+        name: 'Spring rebate, new backhaul',
+        description: null,
+        changes: [
+          { kind: 'set-validity', lane: k('B', 'A', 'K-2'), validFrom: '2026-03-01', validTo: '2026-04-30', note: null },
+          { kind: 'close-lane', lane: k('C', 'B', 'K-4'), note: null },
+          { kind: 'add-lane', lane: { from: 'C', to: 'A', ref: 'NEW-1', tollMinor: 0, fuelMinor: 0, feesMinor: 0, rebateMinor: 2000, validFrom: '2026-11-01', validTo: '2026-12-31', distanceKm: 30, driveMinutes: 30 }, note: null },
+        ],
+      };
+      const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': dated, 'what-if.json': JSON.stringify(scenario) });
+      const base = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--json'];
+      const fixFile = join(dir, 'fix.json');
+      const { status, stdout, stderr } = await runCli([...base, '--scenario', join(dir, 'what-if.json'), '--fix-scenario-out', fixFile]);
+      expect([status, stderr]).toEqual([0, expect.stringMatching(/calendar review under scenario "Spring rebate, new backhaul"/)]);
+      const report = JSON.parse(stdout);
+      expect(report.scenario.name).toBe('Spring rebate, new backhaul');
+      expect(report.scenario.changes.map((c: { applied: boolean }) => c.applied)).toEqual([true, true, true]);
+      // The added lane has no file row: it reads row 0.
+      expect(report.loops.map((l: { depots: string[]; lanes: number[]; ranges: { from: string; to: string }[] }) => [l.depots.join('>'), l.lanes, l.ranges.map((r) => `${r.from}..${r.to}`)])).toEqual([
+        ['A>B', [2, 3], ['2026-03-01..2026-04-30']],
+        ['A>B>C', [2, 5, 0], ['2026-11-01..2026-12-31']],
+      ]);
+      // K-4 is closed: clause 7.2 holds K-2 alone.
+      expect(report.clauses.find((c: { clause: string }) => c.clause === '7.2')).toMatchObject({ lanes: [3], rebate_minor: 2000 });
+      expect(report.fix_plan_verified).toBe(true);
+      const fix = JSON.parse(readFileSync(fixFile, 'utf8'));
+      expect(fix.changes.length).toBe(3 + report.fix_plan.length);
+      const again = await runCli([...base, '--scenario', fixFile]);
+      expect(JSON.parse(again.stdout).loops).toEqual([]);
+      // One day under the scenario: the day report names it; without the scenario November has no loop.
+      const day = await runCli([...base, '--scenario', join(dir, 'what-if.json'), '--date', '2026-11-15']);
+      expect(JSON.parse(day.stdout)).toMatchObject({ review: 'day', date: '2026-11-15', scenario: 'Spring rebate, new backhaul', loops: [expect.objectContaining({ depots: ['A', 'B', 'C'] })] });
+      const plain = await runCli([...base, '--date', '2026-11-15']);
+      expect(JSON.parse(plain.stdout)).toMatchObject({ scenario: null, loops: [] });
+      // A scenario file that is missing or not a scenario: one line naming it, nothing written.
+      const missing = await runCli([...base, '--scenario', join(dir, 'nope.json')]);
+      expect([missing.status, missing.stdout]).toEqual([1, '']);
+      expect(missing.stderr.trim().split('\n')).toEqual([expect.stringMatching(/nope\.json.*file not found/)]);
+      const notScenario = await runCli([...base, '--date', '2026-11-15', '--scenario', join(dir, 'lanes.csv')]);
+      expect([notScenario.status, notScenario.stdout]).toEqual([1, '']);
+      expect(notScenario.stderr).toMatch(/lanes\.csv/);
+      const dayFix = await runCli([...base, '--date', '2026-11-15', '--fix-scenario-out', fixFile]);
+      expect([dayFix.status, dayFix.stderr]).toEqual([2, expect.stringMatching(/--fix-scenario-out belongs to the calendar review/)]);
+    });
+
     it('refuses calendar options with --date and an unknown --fix-by', async () => {
       const dir = tempFiles({ 'depots.csv': depots, 'lanes.csv': dated });
       const base = ['audit', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv')];

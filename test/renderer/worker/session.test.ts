@@ -265,4 +265,42 @@ describe('scenarios that change the lane set', () => {
     const expectedHash = createHash('sha256').update(readFileSync('sample-data/lanes-rebate-loop.csv')).digest('hex');
     expect(reviewed.review.calendarHtml).toContain(expectedHash);
   });
+
+  it('the calendar review runs under the active scenario, and its fix plan comes back as scenario changes', async () => {
+    const out: FromWorker[] = [];
+    const session = new WorkerSession((m) => out.push(m));
+    session.handle({ ...load('lanes-rebate-loop.csv'), plan: { date: '2026-11-01', vehicleClass: '' } } as ToWorker);
+    await session.filesHashed;
+    // Closing KRL > MHG (BFH-L-188) ends the MHG/KRL loop; the FRA/SXB loop stays.
+    const scenario = { name: 'No KRL backhaul', description: null, changes: [{ kind: 'close-lane' as const, lane: { from: 'KRL', to: 'MHG', ref: 'BFH-L-188', occurrence: 1 }, note: null }] };
+    session.handle({ kind: 'review', id: 2, scenario, fixBy: 'lane' });
+    const { review } = out.find((m) => m.kind === 'reviewed') as { review: ContractReviewView };
+    expect(review.calendar!.scenario?.name).toBe('No KRL backhaul');
+    expect(review.calendar!.loops.map((l) => l.depots)).toEqual([['FRA', 'SXB']]);
+    expect(review.calendarHtml).toContain('Under the what-if scenario “No KRL backhaul”');
+    expect(review.calendarFix).toEqual([expect.objectContaining({ kind: 'set-amount', field: 'rebate', amountMinor: 16_860, lane: { from: 'FRA', to: 'SXB', ref: 'BFH-L-019', occurrence: 1 } })]);
+  });
+
+  it('a new date re-plans the day but reuses the calendar review; a new scenario or plan kind reviews it again', async () => {
+    const out: FromWorker[] = [];
+    const session = new WorkerSession((m) => out.push(m));
+    session.handle({ ...load('lanes-rebate-loop.csv'), plan: { date: '2026-11-01', vehicleClass: '' } } as ToWorker);
+    await session.filesHashed;
+    const reviews = () => out.filter((m): m is Extract<FromWorker, { kind: 'reviewed' }> => m.kind === 'reviewed').map((m) => m.review);
+    session.handle({ kind: 'review', id: 2, scenario: null, fixBy: 'lane' });
+    const planning = { fuelPrice: null, fuelConsumption: null, drivingLimit: null, detourFactor: null, averageSpeed: null, defaultToll: null, currency: null, exchangeRates: null };
+    session.handle({ kind: 'replan', id: 3, plan: { date: '2026-06-15', vehicleClass: '', planning } });
+    session.handle({ kind: 'review', id: 4, scenario: null, fixBy: 'lane' });
+    const [first, second] = reviews();
+    expect(first.loops).toEqual([]);
+    expect(second.loops.length).toBeGreaterThan(0); // the one-day review is of 2026-06-15
+    expect(second.calendar).toBe(first.calendar);
+    session.handle({ kind: 'review', id: 5, scenario: null, fixBy: 'clause' });
+    const closed = { name: 'w', description: null, changes: [{ kind: 'close-lane' as const, lane: { from: 'KRL', to: 'MHG', ref: 'BFH-L-188', occurrence: 1 }, note: null }] };
+    session.handle({ kind: 'review', id: 6, scenario: closed, fixBy: 'clause' });
+    const [, , byClause, underScenario] = reviews();
+    expect(byClause.calendar).not.toBe(first.calendar);
+    expect(byClause.calendar!.fix_by).toBe('clause');
+    expect(underScenario.calendar!.loops).toHaveLength(1);
+  });
 });
