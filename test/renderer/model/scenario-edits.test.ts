@@ -50,7 +50,7 @@ describe('scenario edits', () => {
     const network = { laneRow: Int32Array.from([2, 3, 4]), laneRebate: base.rebate };
     const s = fixPlanScenario(emptyScenario(), network, (e) => keys[e], [{ row: 3, new_rebate_minor: 12 }]);
     expect(s.changes).toEqual([{ kind: 'set-amount', lane: keys[1], field: 'rebate', amountMinor: 12, note: null }]);
-    const noted = fixPlanScenario(emptyScenario(), network, keys, [{ row: 3, new_rebate_minor: 12 }], (row) => `one-day fix plan: lanes-file row ${row}`);
+    const noted = fixPlanScenario(emptyScenario(), network, (e) => keys[e], [{ row: 3, new_rebate_minor: 12 }], (row) => `one-day fix plan: lanes-file row ${row}`);
     expect(noted.changes.map((c) => c.note)).toEqual(['one-day fix plan: lanes-file row 3']);
   });
 });
