@@ -56,6 +56,8 @@ export * from './planning/estimate-rules';
 export * from './planning/planning-choices';
 export * from './report/route-sheet';
 export * from './export/route-sheet-csv';
+export * from './export/review-csv';
+export * from './export/compare-csv';
 export * from './export/file-name';
 export * from './export/csv-dialect';
 export * from './export/export-settings';

@@ -58,10 +58,10 @@ export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, 
       {tab === 'lanes' && (
         <div className="lw-split">
           <LaneTable network={network} amounts={amounts} added={added} scenario={scenario} onScenario={onScenario} />
-          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} />
+          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} onExport={() => onExport('compare-csv')} />
         </div>
       )}
-      {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={network.laneKeys} scenario={scenario} onScenario={onScenario} host={bench.host} onMessage={bench.setMessage} />}
+      {tab === 'review' && <ContractReview engine={bench.engine} network={network} keys={network.laneKeys} scenario={scenario} onScenario={onScenario} host={bench.host} onMessage={bench.setMessage} onExport={onExport} />}
       {tab === 'import' && (dataset.report ? <ImportReportTable report={dataset.report} /> : <p>No import yet.</p>)}
       {/* Kept mounted while other tabs show, so the loads and their plan stay. */}
       <div hidden={tab !== 'loads'}>

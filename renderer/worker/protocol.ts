@@ -169,7 +169,11 @@ export interface RouteView {
   estimateRules?: EstimateRules;
 }
 
-export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
+/**
+ * What the worker exports. `review-csv` and `calendar-review-csv` are the contract review last made
+ * (the Contract review tab); `compare-csv` compares the active scenario with the base from the origin.
+ */
+export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson' | 'review-csv' | 'calendar-review-csv' | 'compare-csv';
 
 export interface WorkerErrorView {
   name: string;

@@ -10,7 +10,7 @@ import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
 import { laneOfRows, networkView, transferablesOf } from './network-view';
-import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
+import type { ContractReviewView, FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
@@ -42,6 +42,8 @@ export class WorkerSession {
   /** Settles once the loaded files' SHA-256 (named in the review report) are known. */
   filesHashed: Promise<void> = Promise.resolve();
   private loads = 0;
+  /** The contract review last made, for its CSV exports; a new import or plan drops it. */
+  private reviewed: { scenario: Scenario | null; report: ContractReviewView } | null = null;
 
   constructor(private readonly post: Post) {}
 
@@ -74,7 +76,7 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name) };
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name), review: this.reviewed };
         const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
@@ -89,7 +91,9 @@ export class WorkerSession {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
         const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
+        const review = reviewContract(this.imported, this.need(), message.scenario, progress, context);
+        this.reviewed = { scenario: message.scenario, report: review };
+        this.post({ kind: 'reviewed', id: message.id, review });
         return;
       }
       default: {
@@ -115,6 +119,7 @@ export class WorkerSession {
     this.solvedId = null;
     this.base = null;
     this.baseKey = '';
+    this.reviewed = null;
     const view = networkView(result, plan, this.rowIndex!.keys);
     this.post({ kind: 'loaded', id, network: view, report: reportOf(result) }, transferablesOf(view));
   }

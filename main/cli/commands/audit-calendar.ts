@@ -4,8 +4,9 @@
 
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import { calendarLaneRows, calendarLoopRows, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
+import { calendarLoopRows, calendarReviewCsv, calendarReport, calendarReviewHtml, formatCsvRows, reviewCalendar } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
+import { inCsvDialect } from '../csv-dialect-option';
 import { loadImport } from '../load-network';
 import type { CommandOutput } from '../run';
 
@@ -56,8 +57,8 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput): number {
   const window = report.window.from === null ? 'every date (the lanes file names none)' : `${report.window.from} to ${report.window.to}`;
   out.warn(`calendar review: ${window}, ${report.periods.length} period(s), vehicle class(es) ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
   for (const name of review.negotiableUnmatched) out.warn(`--negotiable: no lane has the contract reference, clause or lane key "${name}"; it marks nothing`);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(calendarLaneRows(report, exponent)));
-  if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(calendarLoopRows(report, exponent)));
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : inCsvDialect(args, calendarReviewCsv(report, exponent)));
+  if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(calendarLoopRows(report, exponent))));
   if (reportPath) {
     const files = ['depots', 'lanes'].map((k) => args.values.get(k)!).map((path) => ({ name: path, sha256: sha256(path) }));
     out.writeFile(reportPath, calendarReviewHtml(report, { files, exponent, madeAt: new Date().toISOString().slice(0, 16) + 'Z' }));

@@ -4,7 +4,7 @@
 // command reviews the whole calendar (audit-calendar.ts).
 
 import { auditNetwork, overlayKeys } from '../../../engine/index';
-import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
+import { auditLoopRows, auditReport, reviewCsv } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
@@ -81,7 +81,7 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
   const dayReport = { review: 'day' as const, date: planDateOf(args).date, ...report };
-  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
+  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, reviewCsv(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount });
 

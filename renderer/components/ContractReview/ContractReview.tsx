@@ -11,7 +11,7 @@ import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { CalendarReview } from './CalendarReview';
-import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
+import { FixPlanTable, HeadroomTable, LoopLanes, ReviewExports } from './ReviewTables';
 
 export interface ContractReviewProps {
   engine: Engine;
@@ -21,9 +21,11 @@ export interface ContractReviewProps {
   onScenario(next: Scenario): void;
   host: LanewrightHost;
   onMessage(text: string): void;
+  /** Exports the review on screen as CSV (the worker keeps the review it last made). */
+  onExport(kind: 'review-csv' | 'calendar-review-csv'): void;
 }
 
-export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage }: ContractReviewProps) {
+export function ContractReview({ engine, network, keys, scenario, onScenario, host, onMessage, onExport }: ContractReviewProps) {
   const [fixBy, setFixBy] = useState<'lane' | 'clause'>('lane');
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -68,6 +70,7 @@ export function ContractReview({ engine, network, keys, scenario, onScenario, ho
   return (
     <div className="lw-review" data-testid="contract-review">
       <CautionLine kind="review" testId="review-caution" />
+      <ReviewExports calendar={review.calendar !== null} onExport={onExport} />
       {review.calendar && <CalendarReview calendar={review.calendar} exponent={network.exponent} fixBy={fixBy} onFixBy={setFixBy} onSaveReport={() => void saveReport()} />}
       {review.scenarioProblems.length > 0 && <p className="lw-warn">Scenario changes not applied: {review.scenarioProblems.join('; ')}</p>}
       <h3>

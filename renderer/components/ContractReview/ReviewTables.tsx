@@ -56,3 +56,22 @@ export function HeadroomTable({ rows, exponent }: { rows: HeadroomRow[]; exponen
     </>
   );
 }
+
+/** The review's CSV exports (the tables `lanewright audit` writes), in the chosen CSV format. */
+export function ReviewExports({ calendar, onExport }: { calendar: boolean; onExport(kind: 'review-csv' | 'calendar-review-csv'): void }) {
+  return (
+    <p className="lw-review-exports">
+      <button type="button" onClick={() => onExport('review-csv')}>
+        Export one-day review (CSV)
+      </button>
+      {calendar && (
+        <>
+          {' '}
+          <button type="button" onClick={() => onExport('calendar-review-csv')}>
+            Export calendar review (CSV)
+          </button>
+        </>
+      )}
+    </p>
+  );
+}

@@ -22,6 +22,8 @@ export interface ScenarioCompareProps {
   onLoadFile(): void;
   /** Saves the scenario as a scenario file (for `lanewright compare --scenario`). */
   onSaveFile(): void;
+  /** Exports the comparison (one row per depot, as `lanewright compare` writes it) as CSV. */
+  onExport(): void;
 }
 
 const STATUS = ['unreachable', 'reachable', 'unbounded'];
@@ -42,7 +44,7 @@ function movedDepots(network: NetworkView, solve: SolveView): { d: number; text:
   return moved.sort((a, b) => b.delta - a.delta || a.d - b.d);
 }
 
-export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile, onSaveFile }: ScenarioCompareProps) {
+export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile, onSaveFile, onExport }: ScenarioCompareProps) {
   const money = (v: number) => formatMoney(v, network.exponent);
   const moved = useMemo(() => movedDepots(network, solve), [network, solve]);
   const rowWindow = useRowWindow(moved.length);
@@ -96,6 +98,9 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       </button>{' '}
       <button type="button" onClick={onSaveFile}>
         Save as scenario file…
+      </button>{' '}
+      <button type="button" onClick={onExport}>
+        Export comparison (CSV)
       </button>
       {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds are listed first in the lane table and drawn dotted, labelled “Added”, on the map.</p>}
       <h3>What moved from {network.depotIds[solve.origin]}</h3>

@@ -68,6 +68,8 @@ export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImp
             <option value="loops-csv">Rebate loops (CSV)</option>
             <option value="geojson">Network and routes (GeoJSON)</option>
             <option value="scenario-json">Scenario file (JSON)</option>
+            <option value="compare-csv">Scenario comparison (CSV)</option>
+            <option value="review-csv">Contract review, one day (CSV)</option>
           </select>
         </label>
         <CsvDialectPicker />
