@@ -75,6 +75,7 @@ export * from './json/document-size';
 export * from './workspace/parse';
 export * from './workspace/dirty';
 export * from './text/cautions';
+export * from './text/plural';
 export { escapeControls, shownText, SHOWN_VALUE_LIMIT } from './text/shown-text';
 export * from './import/adr-tunnels';
 export * from './dispatch/plan-loads';

@@ -115,7 +115,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           current={dataset.files}
           pending={dataset.pending}
           onImport={bench.importFiles}
-          onContinue={dataset.continueWithAccepted}
+          onContinue={bench.continueImport}
           onFix={dataset.dismissPending}
           onClose={() => setImportOpen(false)}
           progress={bench.progress}
@@ -123,7 +123,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           importing={dataset.importing}
         />
       )}
-      {bench.discardPrompt && <DiscardPrompt action={bench.discardPrompt.action} onAnswer={bench.answerDiscard} />}
+      {bench.discardPrompt && <DiscardPrompt action={bench.discardPrompt.action} onAnswer={bench.answerDiscard} browser={host.kind === 'web'} />}
     </div>
   );
 }

@@ -33,17 +33,19 @@ export interface LowerPanelProps {
 export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, onExport, onDrawLoad }: LowerPanelProps) {
   const { scenario, setScenario, selected, setSelected, dataset } = bench;
   const onScenario = (next: Scenario) => setScenario(next);
-  const loadScenarioFile = async () => {
-    const picked = await bench.host.pickFile('scenario');
-    if (!picked.ok) return bench.setMessage(`Scenario not read: ${picked.failure.message}`);
-    if (!picked.value) return;
-    try {
-      setScenario(parseScenarioDocument(picked.value.text, picked.value.name));
-      bench.setMessage(`Loaded scenario file ${picked.value.name}.`);
-    } catch (error) {
-      bench.setMessage(`Scenario not read: ${(error as Error).message}`);
-    }
-  };
+  // A scenario file replaces the what-if edits on screen: unsaved ones are asked about first.
+  const loadScenarioFile = () =>
+    bench.replaceWith('Loading a scenario file', async () => {
+      const picked = await bench.host.pickFile('scenario');
+      if (!picked.ok) return bench.setMessage(`Scenario not read: ${picked.failure.message}`);
+      if (!picked.value) return;
+      try {
+        bench.scenarioFromFile(parseScenarioDocument(picked.value.text, picked.value.name));
+        bench.setMessage(`Loaded scenario file ${picked.value.name}.`);
+      } catch (error) {
+        bench.setMessage(`Scenario not read: ${(error as Error).message}`);
+      }
+    });
   const issues = dataset.report?.issues.length ?? 0;
   const tabs = [
     { id: 'results', label: 'Results' },

@@ -3,8 +3,7 @@
 
 import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
-import { serializeScenarioDocument } from '../../engine/index';
-import { scenarioFileName, type ExportChoice } from '../model/export-file';
+import type { ExportChoice } from '../model/export-file';
 import { csvDialect } from './csv-dialect-store';
 import type { Workbench } from './use-workbench';
 
@@ -14,25 +13,24 @@ export interface CommandHandlers {
 }
 
 export function useCommands(bench: Workbench, ui: CommandHandlers) {
-  const { host, engine, setMessage, save, openWorkspace, openSample, scenario } = bench;
+  const { host, engine, setMessage, save, openWorkspace, openSample, saveScenarioFile } = bench;
 
   const exportFile = useCallback(
     async (what: ExportChoice) => {
       try {
         // The scenario file is the scenario as held here (every change, including ones the loaded
-        // files no longer match), in the versioned format `lanewright compare --scenario` reads.
-        const file =
-          what === 'scenario-json'
-            ? { fileName: scenarioFileName(scenario.name), text: serializeScenarioDocument(scenario) }
-            : await engine.client.request('export', { what, dialect: csvDialect() });
-        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : 'csv');
+        // files no longer match), in the versioned format `lanewright compare --scenario` reads;
+        // once written, browser mode no longer counts its edits as unsaved.
+        if (what === 'scenario-json') return void (await saveScenarioFile());
+        const file = await engine.client.request('export', { what, dialect: csvDialect() });
+        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : 'csv');
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);
       } catch (error) {
         setMessage(`Export failed: ${(error as Error).message}`);
       }
     },
-    [engine, host, setMessage, scenario],
+    [engine, host, setMessage, saveScenarioFile],
   );
 
   // Subscribed again only when a handler changes (the workbench object itself is new every render).

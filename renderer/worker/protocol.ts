@@ -141,8 +141,11 @@ export interface SolveView {
   /** Lanes drawn as the cheapest-route tree (each reachable depot's last lane). */
   treeLanes: Int32Array;
   loops: LoopView[];
-  /** Same arrays for the scenario's base (no edits), when the scenario has edits. */
-  base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null;
+  /**
+   * Same arrays for the scenario's base (no edits), when the scenario has edits, and per depot
+   * whether its cheapest route changed (1) as `lanewright compare` says it: other lanes, or another status.
+   */
+  base: { status: Uint8Array; cost: Float64Array; legs: Int32Array; routeChanged: Uint8Array } | null;
   /** The lane amounts and changes the solve was made with. */
   overlay: OverlayView;
   solveMs: number;

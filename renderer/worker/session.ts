@@ -14,7 +14,7 @@ import type { ContractReviewView, FromWorker, NamedText, PlanChoice, PlanSetting
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
-import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
+import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, routeChanges, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -36,7 +36,7 @@ export class WorkerSession {
   private rowIndex: OverlayIndex | null = null;
   /** The texts of the last accepted import: a new currency or rates means reading them again. */
   private texts: { depots: NamedText; lanes: NamedText } | null = null;
-  private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
+  private base: { solved: Solved; status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
   /** Names and SHA-256 of the texts last loaded, for the printable review (hashed as they arrive). */
   private files: ReviewedFile[] = [];
   /** Settles once the loaded files' SHA-256 (named in the review report) are known. */
@@ -182,10 +182,12 @@ export class WorkerSession {
       const key = JSON.stringify(settings);
       if (key !== this.baseKey || !this.base) {
         const base = solveFor(network, settings);
-        this.base = { status: base.status.slice(), cost: base.cost.slice(), legs: base.legs.slice() };
+        this.base = { solved: base, status: base.status.slice(), cost: base.cost.slice(), legs: base.legs.slice() };
         this.baseKey = key;
       }
-      view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice() };
+      const on = this.solvedOn;
+      const routeChanged = routeChanges(network, this.base.solved, on ? on.network : network, this.solved, on ? on.laneRefs : null);
+      view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice(), routeChanged };
     }
     this.post({ kind: 'solved', id, result: view }, overlayTransferables(view.overlay));
   }

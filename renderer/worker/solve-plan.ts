@@ -80,8 +80,9 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
   const anyDriveData = network.laneDriveMinutes.some((m) => !Number.isNaN(m));
   for (let d = 0; d < n; d++) {
     if (solved.status[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_UNBOUNDED;
-    if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
     if (solved.status[d] !== STATUS_REACHABLE) continue;
+    // Only a cost on screen can be hidden: a depot the limit leaves unreachable shows no cost at all.
+    if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
     if (solved.cost[d] < 0) flags[d] |= FLAG_NEGATIVE_COST;
     const route = pathOf(network, solved, d);
     if (!route) continue;
@@ -108,6 +109,28 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     overlay,
     solveMs,
   };
+}
+
+/**
+ * Per depot, 1 when its cheapest route under the scenario differs from the base's: another status,
+ * or other lanes (a re-priced lane is the same lane), as `compareImport` decides it for the CLI.
+ * `laneRefs` names the scenario network's lanes as base lanes when it was rebuilt (else null).
+ */
+export function routeChanges(baseNetwork: Network, base: Solved, network: Network, solved: Solved, laneRefs: Int32Array | null): Uint8Array {
+  const n = baseNetwork.depotCount;
+  const changed = new Uint8Array(n);
+  for (let d = 0; d < n; d++) {
+    if (base.status[d] !== solved.status[d]) {
+      changed[d] = 1;
+      continue;
+    }
+    if (solved.status[d] !== STATUS_REACHABLE) continue;
+    const before = pathOf(baseNetwork, base, d)?.lanes ?? [];
+    const after = pathOf(network, solved, d)?.lanes ?? [];
+    const same = before.length === after.length && after.every((e, i) => (laneRefs ? laneRefs[e] : e) === before[i]);
+    if (!same) changed[d] = 1;
+  }
+  return changed;
 }
 
 /**

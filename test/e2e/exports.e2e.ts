@@ -95,6 +95,9 @@ describe('exports', () => {
 
     await page.getByRole('tab', { name: /Contract review/ }).click();
     await page.getByTestId('contract-review').waitFor();
+    // One name pair for the same figures in the app, the CSV (floor, headroom) and the JSON (floor_minor, headroom_minor).
+    const headroomHead = await page.locator('table[aria-label="Rebate headroom per lane"] thead').innerText();
+    expect(headroomHead).toMatch(/Floor\s+Headroom/);
     const review = await downloaded(() => page.getByRole('button', { name: 'Export one-day review (CSV)' }).click());
     expect(review.name).toMatch(new RegExp(`^contract-review-${date}-2axle-.+\\.csv$`));
     expect(review.text.slice(1).split('\r\n')[0]).toMatch(/^row;from;to;ref;.*;floor;headroom$/);

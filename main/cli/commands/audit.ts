@@ -12,6 +12,7 @@ import { loadImport, planDateOf } from '../load-network';
 import { CSV_DIALECT_OPTION, JSON_OPTION, LOOP_CAP_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
+import { counted, plural } from '../../../engine/index';
 
 export const auditCommand: CommandSpec = {
   name: 'audit',
@@ -87,16 +88,16 @@ function runAudit(args: ParsedArgs, out: CommandOutput): number {
 
   if (report.loops.length > 0) {
     out.warn(
-      `WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate loop(s) in the network: costs through them are unbounded and the contract terms need fixing`,
+      `WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate ${plural(report.loops.length, 'loop')} in the network: costs through them are unbounded and the contract terms need fixing`,
     );
     // What stopped the search, truthfully: "more loops exist" only when one more was found.
     if (report.loop_search_note !== null) out.warn(`WARNING: ${report.loop_search_note}`);
     if (report.fix_plan_verified) {
-      out.warn(`fix plan: ${report.fix_plan.length} rebate cut(s) remove every loop (checked by solving the changed network); headroom is computed after the fix plan`);
+      out.warn(`fix plan: ${counted(report.fix_plan.length, 'rebate cut')} ${plural(report.fix_plan.length, 'removes', 'remove')} every loop (checked by solving the changed network); headroom is computed after the fix plan`);
     } else if (report.fix_plan_incomplete) {
-      out.warn(`WARNING: the fix plan stopped after ${report.fix_plan.length} lane change(s) with loops left; headroom is not available`);
+      out.warn(`WARNING: the fix plan stopped after ${counted(report.fix_plan.length, 'lane change')} with loops left; headroom is not available`);
     } else {
-      out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
+      out.warn(`WARNING: no rebate cut can fix ${counted(report.unfixable_loops.length, 'loop')} (no lane on them carries a rebate); headroom is not available`);
     }
   }
   return 0;

@@ -20,6 +20,7 @@ import { loadImport } from '../load-network';
 import { CSV_DIALECT_OPTION, NETWORK_FILES, PLANNING_OPTIONS, type CommandSpec } from '../options';
 import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
+import { counted } from '../../../engine/index';
 
 export const exportCommand: CommandSpec = {
   name: 'export',
@@ -73,12 +74,12 @@ function runExport(args: ParsedArgs, out: CommandOutput): number {
   const loops = findDistinctLoops(network).loops;
   if (lanesOut) {
     const rows = lanes.lanes.count - (lanes.leaveOut ? lanes.leaveOut.reduce((n, x) => n + x, 0) : 0);
-    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
+    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${counted(rows, 'lane row')}, ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
   }
-  if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${report.depots.length} depot(s))`);
+  if (routesOut && report) out.writeFile(routesOut, inCsvDialect(args, routesCsv(report)), `routes from ${originId}: ${routesOut} (${counted(report.depots.length, 'depot')})`);
   if ((routesOut || lanesOut || geojsonOut) && report) out.afterOutput(`CAUTION: ${report.caution}`);
-  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
+  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${counted(loops.length, 'loop')})`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
-  if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
+  if (loops.length > 0) out.warn(`WARNING: ${counted(loops.length, 'rebate loop')} in the network; the contract terms need fixing (see the loops export)`);
   return 0;
 }

@@ -14,6 +14,7 @@ import { loadImport, planDateOf } from '../load-network';
 import { CSV_DIALECT_OPTION, JSON_OPTION, NETWORK_FILES, OUT_OPTION, PLANNING_OPTIONS, TIMINGS_OPTION, type CommandSpec } from '../options';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
+import { counted, plural } from '../../../engine/index';
 
 export const routesCommand: CommandSpec = {
   name: 'routes',
@@ -84,12 +85,12 @@ function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const { over_drive_limit: over, caution, loops } = report.tail;
   if (over > 0) {
     const limit = imported.plan.settings.drivingLimit;
-    out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
+    out.warn(`CAUTION: ${counted(over, 'route')} ${plural(over, 'exceeds', 'exceed')} the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
   }
   // The CSV's companion text: the caution goes with every output, on stderr beside the CSV.
   out.afterOutput(`CAUTION: ${caution}`);
   if (loops.length > 0) {
-    out.warn(`WARNING: ${loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
+    out.warn(`WARNING: ${counted(loops.length, 'rebate loop')} ${plural(loops.length, 'makes', 'make')} costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
   }
   return 0;
 }

@@ -6,6 +6,7 @@
 import type { CalendarReport } from '../../../engine/index';
 import { formatMoney } from '../../model/format';
 import { DataTable, type Column } from '../DataTable/DataTable';
+import { counted } from '../../../engine/index';
 
 type Clause = CalendarReport['clauses'][number];
 type Fix = CalendarReport['fix_plan'][number];
@@ -45,7 +46,7 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
         {calendar.loop_cap_reached ? ' (list capped)' : ''}
       </h3>
       <p className="lw-muted">
-        {calendar.periods.length} period(s) in which the valid lane rows do not change, every vehicle class ({calendar.classes.map(className).join(', ')}), the files as loaded
+        {counted(calendar.periods.length, 'period')} in which the valid lane rows do not change, every vehicle class ({calendar.classes.map(className).join(', ')}), the files as loaded
         (a scenario applies to the one-day review below).{' '}
         <button type="button" onClick={onSaveReport}>
           Save review report (HTML)
@@ -61,7 +62,7 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
       {calendar.loops.length > 0 && (
         <section aria-label="Calendar fix plan">
           <h3>
-            Fix plan for every date: cut {calendar.fix_plan.length} rebate(s){calendar.fix_plan_verified ? ' (checked in every period: no loop remains)' : ' (not verified)'}{' '}
+            Fix plan for every date: cut {counted(calendar.fix_plan.length, 'rebate')}{calendar.fix_plan_verified ? ' (checked in every period: no loop remains)' : ' (not verified)'}{' '}
             <label>
               by{' '}
               <select value={fixBy} onChange={(e) => onFixBy(e.currentTarget.value === 'clause' ? 'clause' : 'lane')}>

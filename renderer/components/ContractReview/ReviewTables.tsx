@@ -45,8 +45,9 @@ export function HeadroomTable({ rows, exponent }: { rows: HeadroomRow[]; exponen
   const columns: Column<HeadroomRow>[] = [
     ...laneColumns<HeadroomRow>(),
     { label: 'Net', numeric: true, cell: (r) => money(r.net_minor) },
-    { label: 'Lowest safe net', numeric: true, cell: (r) => money(r.floor_minor) },
-    { label: 'Extra rebate possible', numeric: true, cell: (r) => money(r.headroom_minor) },
+    // The same names as the CSV columns (floor, headroom) and the JSON fields (floor_minor, headroom_minor).
+    { label: 'Floor', numeric: true, cell: (r) => money(r.floor_minor) },
+    { label: 'Headroom', numeric: true, cell: (r) => money(r.headroom_minor) },
   ];
   return (
     <>

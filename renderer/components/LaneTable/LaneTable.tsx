@@ -6,7 +6,7 @@
 // Lanes the scenario adds are listed first. Filtered and paged so 50,000 lanes stay responsive.
 
 import { useMemo, useState } from 'react';
-import { netCost, withoutChange } from '../../../engine/index';
+import { counted, netCost, withoutChange } from '../../../engine/index';
 import { addedAmount, addedLaneName, setAddedLaneAmount, type AddedLane } from '../../model/added-lanes';
 import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type EditableField, type Scenario } from '../../model/scenario-edits';
 import { formatMoney } from '../../model/format';
@@ -90,7 +90,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
           </label>
         )}
         <span className="lw-muted" aria-live="polite">
-          {shown.length} lanes{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
+          {counted(shown.length, 'lane')}{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
         </span>
         <button type="button" disabled={current === 0} onClick={() => setPage(current - 1)}>
           Previous page

@@ -3,7 +3,7 @@
 // own as CSV or as a printed sheet, and a button to plan from this depot instead.
 
 import type { LanewrightHost } from '../../../main/ipc/contract';
-import { applyCsvDialect, exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
+import { applyCsvDialect, counted, exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
 import { csvDialect } from '../../app/csv-dialect-store';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
@@ -96,7 +96,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
       {status === 1 && route && route.lanes.length > 0 && (
         <>
           <p>
-            <strong>{formatMoneyWithCode(solve.cost[depot], network.currency, network.exponent)}</strong> over {route.lanes.length} leg{route.lanes.length === 1 ? '' : 's'}, drive time {formatDriveMinutes(solve.driveMinutes[depot])}.
+            <strong>{formatMoneyWithCode(solve.cost[depot], network.currency, network.exponent)}</strong> over {counted(route.lanes.length, 'leg')}, drive time {formatDriveMinutes(solve.driveMinutes[depot])}.
           </p>
           <p className="lw-muted" data-testid="route-caution">
             {ROUTE_CAUTION}

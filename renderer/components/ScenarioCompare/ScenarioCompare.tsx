@@ -28,18 +28,30 @@ export interface ScenarioCompareProps {
 
 const STATUS = ['unreachable', 'reachable', 'unbounded'];
 
-/** Depots whose status or cost differs from the base, largest change first (status changes on top). */
-function movedDepots(network: NetworkView, solve: SolveView): { d: number; text: string; delta: number }[] {
+interface Moved {
+  d: number;
+  text: string;
+  /** Whether the cheapest route changed (the worker decides it as `lanewright compare` does). */
+  routeChanged: boolean;
+  delta: number;
+}
+
+/**
+ * Depots whose status, cost or route differs from the base, largest change first (status changes
+ * on top, then cost changes, then depots whose route changed at the same cost).
+ */
+function movedDepots(network: NetworkView, solve: SolveView): Moved[] {
   const base = solve.base;
   if (!base) return [];
   const money = (v: number) => formatMoney(v, network.exponent);
-  const moved: { d: number; text: string; delta: number }[] = [];
+  const moved: Moved[] = [];
   for (let d = 0; d < network.depotIds.length; d++) {
-    if (base.status[d] !== solve.status[d]) moved.push({ d, text: `${STATUS[base.status[d]]} → ${STATUS[solve.status[d]]}`, delta: Infinity });
+    const routeChanged = base.routeChanged[d] === 1;
+    if (base.status[d] !== solve.status[d]) moved.push({ d, text: `${STATUS[base.status[d]]} → ${STATUS[solve.status[d]]}`, routeChanged, delta: Infinity });
     else if (solve.status[d] === 1 && base.cost[d] !== solve.cost[d]) {
       const delta = solve.cost[d] - base.cost[d];
-      moved.push({ d, text: `${money(base.cost[d])} → ${money(solve.cost[d])} (${delta > 0 ? '+' : ''}${money(delta)})`, delta: Math.abs(delta) });
-    }
+      moved.push({ d, text: `${money(base.cost[d])} → ${money(solve.cost[d])} (${delta > 0 ? '+' : ''}${money(delta)})`, routeChanged, delta: Math.abs(delta) });
+    } else if (routeChanged) moved.push({ d, text: `${money(solve.cost[d])}, same cost`, routeChanged, delta: 0 });
   }
   return moved.sort((a, b) => b.delta - a.delta || a.d - b.d);
 }
@@ -105,24 +117,26 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds are listed first in the lane table and drawn dotted, labelled “Added”, on the map.</p>}
       <h3>What moved from {network.depotIds[solve.origin]}</h3>
       {moved.length === 0 ? (
-        <p>No depot’s status or cost changed.</p>
+        <p>No depot’s status, cost or route changed.</p>
       ) : (
-        <table className="lw-compact" aria-label={`Depots whose cost or status changed (${moved.length})`} aria-rowcount={moved.length + 1}>
+        <table className="lw-compact" aria-label={`Depots whose cost, status or route changed (${moved.length})`} aria-rowcount={moved.length + 1}>
           <thead>
             <tr aria-rowindex={1}>
               <th scope="col">Depot</th>
               <th scope="col">Base → scenario</th>
+              <th scope="col">Route</th>
             </tr>
           </thead>
           <tbody ref={rowWindow.bodyRef}>
-            <SpacerRow heightPx={rowWindow.padTop} columns={2} />
+            <SpacerRow heightPx={rowWindow.padTop} columns={3} />
             {moved.slice(rowWindow.start, rowWindow.end).map((m, k) => (
-              <tr key={m.d} aria-rowindex={rowWindow.start + k + 2} data-moved-depot={network.depotIds[m.d]}>
+              <tr key={m.d} aria-rowindex={rowWindow.start + k + 2} data-moved-depot={network.depotIds[m.d]} data-route-changed={m.routeChanged ? 'yes' : 'no'}>
                 <th scope="row">{network.depotIds[m.d]}</th>
                 <td>{m.text}</td>
+                <td>{m.routeChanged ? 'changed' : 'same'}</td>
               </tr>
             ))}
-            <SpacerRow heightPx={rowWindow.padBottom} columns={2} />
+            <SpacerRow heightPx={rowWindow.padBottom} columns={3} />
           </tbody>
         </table>
       )}
