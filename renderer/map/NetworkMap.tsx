@@ -193,7 +193,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         className="lw-map"
         ref={element}
         role="region"
-        aria-label={`Network map: ${counted(depotCount, 'depot')} (${inView} in view), ${counted(network?.laneFrom.length ?? 0, 'lane')}${addedDrawn ? `, ${counted(addedDrawn, 'lane')} the scenario adds drawn dotted and labelled` : ''}${loopCount ? `, ${counted(loopCount, 'rebate loop')} drawn dashed, ${counted(unbounded, 'unbounded depot')} marked with a diamond` : ''}`}
+        aria-label={`Network map: ${counted(depotCount, 'depot')} (${inView} in view), ${counted(network?.laneFrom.length ?? 0, 'lane')}${addedDrawn ? `, ${counted(addedDrawn, 'lane')} only the scenario plans drawn dotted and labelled` : ''}${loopCount ? `, ${counted(loopCount, 'rebate loop')} drawn dashed, ${counted(unbounded, 'unbounded depot')} marked with a diamond` : ''}`}
         data-loops={loopCount}
         data-unbounded={unbounded}
         data-added-lanes={addedDrawn}

@@ -2,7 +2,7 @@
 // layer, so 50,000 lanes stay smooth), the route tree, the selected route, rebate loops, depots.
 
 import L from 'leaflet';
-import { addedLaneName, addedLaneOf, type AddedLane } from '../model/added-lanes';
+import { addedLaneLabel, addedLaneOf, type AddedLane } from '../model/added-lanes';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { textNode } from './dom-text';
 import { MAX_DIAMONDS, STYLE } from './map-style';
@@ -84,7 +84,7 @@ export function addedLaneLayer(network: NetworkView, added: readonly AddedLane[]
     group.addLayer(L.polyline(ends, { ...STYLE.addedCasing, renderer, interactive: false }));
     group.addLayer(L.polyline(ends, { ...STYLE.added, renderer, interactive: false }));
     const middle: L.LatLngExpression = [(network.lat[a.from] + network.lat[a.to]) / 2, (network.lon[a.from] + network.lon[a.to]) / 2];
-    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(textNode(`Added: ${addedLaneName(a.lane)}`)));
+    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(textNode(addedLaneLabel(a))));
   }
   return group;
 }

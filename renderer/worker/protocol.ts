@@ -2,6 +2,7 @@
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
 import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
+import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
@@ -122,8 +123,8 @@ export interface LoopView {
   netPerLap: number;
 }
 
-// Lanes in results (loop lanes, tree lanes, route lanes) are network lane indices; a lane the
-// scenario adds is -2 minus its change's index (model/added-lanes.ts), -1 when it cannot be traced.
+// Lanes in results (loop lanes, tree lanes, route lanes) are network lane indices; a lane only the
+// scenario plans is -2 minus its index in `SolveView.extraLanes` (model/added-lanes.ts).
 
 /** Result of one solve, per depot (index = depot index). */
 export interface SolveView {
@@ -146,6 +147,11 @@ export interface SolveView {
    * whether its cheapest route changed (1) as `lanewright compare` says it: other lanes, or another status.
    */
   base: { status: Uint8Array; cost: Float64Array; legs: Int32Array; routeChanged: Uint8Array } | null;
+  /**
+   * Lanes in the plan only because of the scenario (added lanes, rows a validity change brings into
+   * the date), from the engine's overlay; results name the k-th as `addedLaneRef(k)`.
+   */
+  extraLanes: AddedLane[];
   /** The lane amounts and changes the solve was made with. */
   overlay: OverlayView;
   solveMs: number;

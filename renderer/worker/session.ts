@@ -14,7 +14,7 @@ import type { ContractReviewView, FromWorker, NamedText, PlanChoice, PlanSetting
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
-import { laneRefsOf, onBaseLanes, overlayTransferables, pathOf, routeChanges, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
+import { onBaseLanes, rebuiltLanesOf, overlayTransferables, pathOf, routeChanges, scenarioSolveInput, solveFor, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -169,10 +169,11 @@ export class WorkerSession {
     if (input.rebuilt) {
       // The scenario changes which rows are planned (added lanes, validity, a class copy): the
       // engine plans the overlay's network, and the answer is mapped back onto the base lanes.
-      const laneRefs = laneRefsOf(input.rebuilt, this.laneOfRow);
+      const lanes = rebuiltLanesOf(input.rebuilt, this.laneOfRow, this.imported!, scenario!);
+      const laneRefs = lanes.laneRefs;
       this.solved = solveFor(input.rebuilt.network, settings);
       this.solvedOn = { network: input.rebuilt.network, laneRefs };
-      view = onBaseLanes(solveView(input.rebuilt.network, settings, this.solved, performance.now() - started, driveLimit, input.overlay), laneRefs);
+      view = onBaseLanes(solveView(input.rebuilt.network, settings, this.solved, performance.now() - started, driveLimit, input.overlay), lanes);
     } else {
       this.solved = solveFor(network, settings, input.weights);
       this.solvedOn = null;

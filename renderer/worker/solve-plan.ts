@@ -10,7 +10,8 @@ import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/index';
 import { routePath } from '../../engine/index';
 import type { ImportResult, OverlayIndex, OverlayNetwork } from '../../engine/index';
 import { buildOverlay, describeChanges, overlayNetwork, overlayPlanAmounts, overlayRowAmounts, planRequestOf } from '../../engine/index';
-import { addedLaneRef } from '../model/added-lanes';
+import { addedLaneRef, type AddedLane } from '../model/added-lanes';
+import { laneKeyId } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
 import type { OverlayView, PlanSettings, RouteView, SolveView } from './protocol';
@@ -106,6 +107,7 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     treeLanes: Int32Array.from(treeLaneList),
     loops: solved.loops.map((loop) => ({ depots: loop.depots, lanes: loop.lanes, netPerLap: loop.netPerLap })),
     base: null,
+    extraLanes: [],
     overlay,
     solveMs,
   };
@@ -133,22 +135,70 @@ export function routeChanges(baseNetwork: Network, base: Solved, network: Networ
   return changed;
 }
 
+/** How the UI names the lanes of a network the scenario rebuilt, and the lanes the base plan lacks. */
+export interface RebuiltLanes {
+  /** Per rebuilt lane: the base network lane of its row, or `addedLaneRef(k)` for `extra[k]`. */
+  laneRefs: Int32Array;
+  /** Lanes in the plan only because of the scenario: added lanes and rows brought into the date. */
+  extra: AddedLane[];
+}
+
 /**
- * How the UI names each lane of a network the scenario rebuilt: the base network lane of its row
- * (`laneOfRow`), or for a lane the scenario added `addedLaneRef(change index)`; -1 for a row the
- * base plan does not have (e.g. one a validity change brings into the date).
+ * Names each lane of a network the scenario rebuilt (see RebuiltLanes). A lane whose row the base
+ * plan has is that base lane; every other lane (one the scenario adds, or a file row a validity
+ * change brings into the date) is listed in `extra` with its values from the overlay's network.
  */
-export function laneRefsOf(rebuilt: OverlayNetwork, laneOfRow: Int32Array): Int32Array {
-  return Int32Array.from(rebuilt.baseRow, (row, e) => (row >= 0 ? laneOfRow[row] : rebuilt.addedBy[e] >= 0 ? addedLaneRef(rebuilt.addedBy[e]) : -1));
+export function rebuiltLanesOf(rebuilt: OverlayNetwork, laneOfRow: Int32Array, imported: ImportResult, scenario: Scenario): RebuiltLanes {
+  const net = rebuilt.network;
+  const baseIndex = imported.network?.depotIndex ?? net.depotIndex;
+  const validityChange = new Map<string, number>();
+  scenario.changes.forEach((c, i) => {
+    if (c.kind === 'set-validity') validityChange.set(laneKeyId(c.lane), i);
+  });
+  const extra: AddedLane[] = [];
+  const laneRefs = Int32Array.from(rebuilt.baseRow, (row, e) => {
+    if (row >= 0 && laneOfRow[row] >= 0) return laneOfRow[row];
+    const ref = addedLaneRef(extra.length);
+    const key = rebuilt.keys[e];
+    const added = rebuilt.addedBy[e];
+    const change = added >= 0 ? added : (validityChange.get(laneKeyId(key)) ?? -1);
+    const found = change >= 0 ? scenario.changes[change] : undefined;
+    const validity = found && found.kind !== 'close-lane' && found.kind !== 'set-amount' ? (found.kind === 'add-lane' ? found.lane : found) : null;
+    extra.push({
+      ref,
+      kind: added >= 0 ? 'added' : 'row',
+      changeIndex: change,
+      sourceRow: added >= 0 || row < 0 ? null : imported.lanes.sourceRow[row],
+      lane: {
+        from: key.from,
+        to: key.to,
+        ref: key.ref,
+        tollMinor: net.laneToll[e],
+        fuelMinor: net.laneFuel[e],
+        feesMinor: net.laneFees[e],
+        rebateMinor: net.laneRebate[e],
+        validFrom: validity?.validFrom ?? null,
+        validTo: validity?.validTo ?? null,
+        distanceKm: Number.isNaN(net.laneDistanceKm[e]) ? null : net.laneDistanceKm[e],
+        driveMinutes: Number.isNaN(net.laneDriveMinutes[e]) ? null : net.laneDriveMinutes[e],
+      },
+      from: baseIndex.get(key.from) ?? -1,
+      to: baseIndex.get(key.to) ?? -1,
+      netMinor: net.laneNet[e],
+    });
+    return ref;
+  });
+  return { laneRefs, extra };
 }
 
 /**
  * A solve made on a network the scenario rebuilt, with its lanes renamed as the UI knows them
- * (`laneRefsOf`); an added lane that cannot be traced (-1) is left out of the tree.
+ * (`rebuiltLanesOf`) and the lanes only the scenario plans listed with it.
  */
-export function onBaseLanes(view: SolveView, laneRefs: Int32Array): SolveView {
+export function onBaseLanes(view: SolveView, { laneRefs, extra }: RebuiltLanes): SolveView {
   return {
     ...view,
+    extraLanes: extra,
     treeLanes: Int32Array.from(view.treeLanes, (e) => laneRefs[e]).filter((e) => e !== -1),
     loops: view.loops.map((loop) => ({ ...loop, lanes: loop.lanes.map((e) => laneRefs[e]) })),
   };

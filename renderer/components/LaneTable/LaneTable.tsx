@@ -17,7 +17,7 @@ import { AmountCell } from './AmountCell';
 export interface LaneTableProps {
   network: NetworkView;
   amounts: OverlayView;
-  /** Lanes the scenario adds (not in the network). */
+  /** Lanes only the scenario plans (added, or a file row a validity change brings in), from the solve. */
   added: readonly AddedLane[];
   scenario: Scenario;
   onScenario(next: Scenario): void;
@@ -90,7 +90,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
           </label>
         )}
         <span className="lw-muted" aria-live="polite">
-          {counted(shown.length, 'lane')}{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
+          {counted(shown.length, 'lane')}{addedShown.length > 0 ? ` + ${addedShown.length} only in the scenario's plan` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
         </span>
         <button type="button" disabled={current === 0} onClick={() => setPage(current - 1)}>
           Previous page
@@ -104,6 +104,36 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
         <tbody>
           {addedShown.map((a) => {
             const name = addedLaneName(a.lane);
+            if (a.kind === 'row') {
+              // A file row the scenario's validity change brings into the date: its amounts are edited
+              // like any row of the file (under "Every row of the file"); Undo drops the validity change.
+              return (
+                <tr key={`row-${a.ref}`} data-scenario-row={a.sourceRow ?? ''} className="lw-changed-row lw-added-row">
+                  <td>
+                    <span className="lw-badge lw-badge-added" title="This row of the lanes file is not valid on the date; the scenario's validity change puts it in the plan">
+                      row {a.sourceRow} valid by scenario
+                    </span>
+                  </td>
+                  <th scope="row">
+                    {a.lane.from} → {a.lane.to}
+                  </th>
+                  <td>{a.lane.ref ?? '—'}</td>
+                  {EDITABLE_FIELDS.map((field) => (
+                    <td key={field} className="lw-num">
+                      {formatMoney(addedAmount(a.lane, field), network.exponent)}
+                    </td>
+                  ))}
+                  <td className="lw-num">{formatMoney(a.netMinor, network.exponent)}</td>
+                  <td>
+                    {a.changeIndex >= 0 && (
+                      <button type="button" aria-label={`Undo the validity change of ${name}`} onClick={() => onScenario(withoutChange(scenario, a.changeIndex))}>
+                        Undo
+                      </button>
+                    )}
+                  </td>
+                </tr>
+              );
+            }
             return (
               <tr key={`added-${a.changeIndex}`} data-added-lane={a.changeIndex} className="lw-changed-row lw-added-row">
                 <td>

@@ -113,7 +113,7 @@ function LoopBanner({ network, solve, amounts, added, onReview }: LoopAlertProps
                       <td>
                         {l.from} → {l.to}
                       </td>
-                      <td>added by the scenario (change {extra.changeIndex + 1})</td>
+                      <td>{extra.kind === 'added' ? `added by the scenario (change ${extra.changeIndex + 1})` : `${extra.sourceRow}, valid by the scenario (change ${extra.changeIndex + 1})`}</td>
                       <td>{l.ref ?? '—'}</td>
                       <td className="lw-num">{formatMoneyWithCode(extra.netMinor, network.currency, network.exponent)}</td>
                       <td className="lw-num">{formatMoneyWithCode(l.rebateMinor, network.currency, network.exponent)}</td>

@@ -42,14 +42,16 @@ interface Leg {
   rebate: number;
 }
 
-// One lane of the route with its amounts under the scenario; a lane the scenario adds reads its
-// amounts from its change. Null for an added lane that could not be traced (cost in the total only).
+// One lane of the route with its amounts under the scenario; a lane only the scenario plans (added,
+// or a file row its validity change brings in) reads them from the solve's list. Null for a lane that
+// could not be traced (cost in the total only).
 function legOf(network: NetworkView, amounts: LaneAmounts, added: readonly AddedLane[], e: number): Leg | null {
   if (e < 0) {
     const a = addedLaneOf(added, e);
     if (!a) return null;
     const l = a.lane;
-    return { name: `${l.from} → ${l.to}`, title: `Added by the scenario (change ${a.changeIndex + 1})${l.ref ? `, ref ${l.ref}` : ''}`, mark: ' + added', toll: l.tollMinor, fuel: l.fuelMinor, fees: l.feesMinor, rebate: l.rebateMinor };
+    const title = a.kind === 'added' ? `Added by the scenario (change ${a.changeIndex + 1})` : `Lanes file row ${a.sourceRow}, valid on the date only by the scenario (change ${a.changeIndex + 1})`;
+    return { name: `${l.from} → ${l.to}`, title: `${title}${l.ref ? `, ref ${l.ref}` : ''}`, mark: a.kind === 'added' ? ' + added' : ' + valid by scenario', toll: l.tollMinor, fuel: l.fuelMinor, fees: l.feesMinor, rebate: l.rebateMinor };
   }
   return {
     name: `${network.depotIds[network.laneFrom[e]]} → ${network.depotIds[network.laneTo[e]]}`,
