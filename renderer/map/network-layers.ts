@@ -24,7 +24,7 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: reado
   const out: Segments = [];
   for (let i = 0; i < lanes.length; i++) {
     const e = lanes[i];
-    // A lane the scenario adds is not in the network: its ends come from its change.
+    // A lane only the scenario plans is not in the network: its ends come from the solve's list.
     const extra = e < 0 ? addedLaneOf(added, e) : undefined;
     const known = e >= 0 && e < network.laneFrom.length;
     const a = extra ? extra.from : known ? network.laneFrom[e] : -1;
@@ -71,7 +71,7 @@ export function loopLayer(network: NetworkView, solve: SolveView, added: readonl
   return group;
 }
 
-/** Lanes the scenario adds: dotted lines over a casing, each with a permanent "added" label. */
+/** Lanes only the scenario plans: dotted lines over a casing, each with a permanent label ("Added", "Valid by scenario"). */
 export function addedLaneLayer(network: NetworkView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer | null {
   const drawable = added.filter((a) => a.from >= 0 && a.to >= 0);
   if (drawable.length === 0) return null;
