@@ -184,6 +184,9 @@ describe('workspace in the browser', () => {
     expect(await compare.getByRole('button', { name: /^Undo change 1: .*rebate \d+\.\d\d → 0\.00$/ }).count()).toBe(1);
     expect(await compare.locator('[data-moved-depot]').count()).toBeGreaterThan(0);
     expect(await compare.innerText()).toMatch(/unbounded → reachable/);
+    // Whether each depot's route changed, as lanewright compare says it: a depot freed from the loop has a route again.
+    expect(await compare.locator('thead').innerText()).toMatch(/Route/);
+    expect(await compare.locator('[data-moved-depot][data-route-changed="yes"]').count()).toBeGreaterThan(0);
     await snap(page, 'scenario-edit');
     await page.getByRole('tab', { name: 'Results' }).click();
     expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
