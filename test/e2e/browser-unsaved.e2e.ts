@@ -8,16 +8,14 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseScenarioDocument } from '../../engine/index';
 import { WORKSPACE_KEY } from '../../renderer/host/browser-store';
-import { offsiteRequests, openApp, solveCount, waitForPlan, type Session } from './support/browser';
+import { editLaneAmount, offsiteRequests, openReadyApp, waitForPlan, type Session } from './support/browser';
 
 let session: Session;
 let page: Page;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 900 });
+  session = await openReadyApp({ width: 1440, height: 900 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {
@@ -28,14 +26,7 @@ const message = () => page.locator('.lw-status').innerText();
 const changedBadge = () => page.getByRole('tab', { name: /Lanes & scenario/ }).innerText();
 const prompt = () => page.getByRole('dialog', { name: 'Unsaved changes' });
 
-async function editRebate(nth: number, amount: string): Promise<void> {
-  await page.getByRole('tab', { name: /Lanes/ }).click();
-  const cell = page.locator('[data-testid="lane-table"] input[aria-label^="rebate of lane"]').nth(nth);
-  const before = await solveCount(page);
-  await cell.fill(amount);
-  await cell.press('Enter');
-  await waitForPlan(page, before);
-}
+const editRebate = (nth: number, amount: string) => editLaneAmount(page, 'rebate', nth, amount);
 
 async function keptLanesFile(): Promise<string> {
   return page.evaluate((key) => (JSON.parse(localStorage.getItem(key) ?? '{}') as { files?: { lanes?: string } }).files?.lanes ?? '', WORKSPACE_KEY);

@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { importNetwork } from '../../engine/planning/import-network';
-import { offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { editLaneAmount, offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
 import { sample } from './support/expected';
 
 let session: Session;
@@ -79,12 +79,7 @@ describe('exports', () => {
   });
 
   it('exports the scenario comparison and the contract review as CSV in the chosen format', async () => {
-    await page.getByRole('tab', { name: /Lanes/ }).click();
-    const rebate = page.locator('[data-testid="lane-table"] input[aria-label^="rebate of lane"]').first();
-    const before = await solveCount(page);
-    await rebate.fill('1.00');
-    await rebate.press('Enter');
-    await waitForPlan(page, before);
+    await editLaneAmount(page, 'rebate', 0, '1.00');
     const date = await page.getByLabel('Dispatch date').inputValue();
     const comparison = await downloaded(() => page.getByRole('button', { name: 'Export comparison (CSV)' }).click());
     expect(comparison.name).toMatch(new RegExp(`^comparison-RTM-${date}-2axle-.+\\.csv$`));

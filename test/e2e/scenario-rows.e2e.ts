@@ -5,16 +5,14 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { serializeScenarioDocument } from '../../engine/index';
-import { offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
 
 let session: Session;
 let page: Page;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 900 });
+  session = await openReadyApp({ width: 1440, height: 900 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

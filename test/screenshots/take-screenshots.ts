@@ -7,7 +7,7 @@ import { mkdirSync, readdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { serializeScenarioDocument } from '../../engine/index';
-import { offsiteRequests, openApp, solveCount, waitForPlan } from '../e2e/support/browser';
+import { editLaneAmount, offsiteRequests, openReadyApp, solveCount, waitForPlan } from '../e2e/support/browser';
 import { sample } from '../e2e/support/expected';
 
 const OUT = 'docs/screenshots';
@@ -30,14 +30,7 @@ async function sampleCarrier(page: Page, loop: boolean): Promise<void> {
   await waitForPlan(page, before);
 }
 
-async function editRebate(page: Page, nth: number, amount: string): Promise<void> {
-  await tab(page, /Lanes/);
-  const cell = page.locator('[data-testid="lane-table"] input[aria-label^="rebate of lane"]').nth(nth);
-  const before = await solveCount(page);
-  await cell.fill(amount);
-  await cell.press('Enter');
-  await waitForPlan(page, before);
-}
+const editRebate = (page: Page, nth: number, amount: string) => editLaneAmount(page, 'rebate', nth, amount);
 
 /** Each scene starts from a fresh page (a new browser profile) with the first-run notice read. */
 const SCENES: Scene[] = [
@@ -182,11 +175,9 @@ async function main(): Promise<void> {
   const made = new Set<string>();
   for (const size of SIZES) {
     for (const scene of SCENES) {
-      const session = await openApp(size);
+      const session = await openReadyApp(size);
       try {
         const page = session.page;
-        await page.getByRole('button', { name: 'I understand' }).click();
-        await waitForPlan(page);
         await scene.run(page);
         await page.waitForTimeout(250); // let the map's canvases finish drawing
         const file = `${scene.name}-${size.width}x${size.height}.png`;

@@ -91,3 +91,21 @@ export async function chooseFile(page: Page, click: () => Promise<void>, name: s
   const [chooser] = await Promise.all([page.waitForEvent('filechooser'), click()]);
   await chooser.setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(text, 'utf8') });
 }
+
+/** openApp with the first-run notice read and the first plan on screen. */
+export async function openReadyApp(viewport?: { width: number; height: number }): Promise<Session> {
+  const session = await openApp(viewport);
+  await session.page.getByRole('button', { name: 'I understand' }).click();
+  await waitForPlan(session.page);
+  return session;
+}
+
+/** Types an amount into the nth lane table cell of `field` ("rebate", "toll", ...) and waits for the re-plan. */
+export async function editLaneAmount(page: Page, field: string, nth: number, amount: string): Promise<void> {
+  await page.getByRole('tab', { name: /Lanes/ }).click();
+  const cell = page.locator(`[data-testid="lane-table"] input[aria-label^="${field} of lane"]`).nth(nth);
+  const before = await solveCount(page);
+  await cell.fill(amount);
+  await cell.press('Enter');
+  await waitForPlan(page, before);
+}
