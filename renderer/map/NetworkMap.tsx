@@ -20,6 +20,7 @@ import { DEPOT_CANVAS_THRESHOLD, depotCanvas, type DepotCanvas } from './depot-c
 import { STYLE } from './map-style';
 import { useDepotCursor } from './use-depot-cursor';
 import './map.css';
+import { counted } from '../../engine/index';
 
 export interface NetworkMapProps {
   network: NetworkView | null;
@@ -242,7 +243,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         className="lw-map"
         ref={element}
         role="region"
-        aria-label={`Network map: ${depotCount} depots (${inView} in view), ${network?.laneFrom.length ?? 0} lanes${addedDrawn ? `, ${addedDrawn} lane(s) the scenario adds drawn dotted and labelled` : ''}${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
+        aria-label={`Network map: ${counted(depotCount, 'depot')} (${inView} in view), ${counted(network?.laneFrom.length ?? 0, 'lane')}${addedDrawn ? `, ${counted(addedDrawn, 'lane')} only the scenario plans drawn dotted and labelled` : ''}${loopCount ? `, ${counted(loopCount, 'rebate loop')} drawn dashed, ${counted(unbounded, 'unbounded depot')} marked with a diamond` : ''}`}
         data-loops={loopCount}
         data-unbounded={unbounded}
         data-added-lanes={addedDrawn}

@@ -36,7 +36,7 @@ describe('calendar review and its report', () => {
     const expected = calendarReport(imported, reviewCalendar(imported));
     expect(expected.loops.length).toBe(2);
 
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     await waitForPlan(page);
     await page.getByLabel('Dispatch date').fill('2026-11-01');
     await waitForPlan(page);

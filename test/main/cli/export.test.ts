@@ -47,7 +47,7 @@ describe('lanewright export', () => {
     const routes = join(dir, 'routes.csv');
     const run = await runCli(['export', '--depots', join(dir, 'depots.csv'), '--lanes', join(dir, 'lanes.csv'), '--vehicle-class', '2axle', '--date', '2026-08-15', '--scenario', join(dir, 's.json'), '--from', 'A', '--lanes-out', out, '--routes-out', routes]);
     expect(run.status).toBe(0);
-    expect(run.stderr).toMatch(/C>A\|\|1/);
+    expect(run.stderr).toMatch(/C → A, no ref/);
     const [header, ...rows] = parseCsvText(readFileSync(out, 'utf8')).rows;
     expect(rows[1][header.indexOf('toll_2axle')]).toBe('15.00');
     expect(rows[1][header.indexOf('toll_5axle')]).toBe('19.00');
