@@ -64,7 +64,7 @@ describe('lanewright export', () => {
     const b = await runCli(['routes', ...common, '--out', routed]);
     expect([a.status, b.status]).toEqual([0, 0]);
     expect(readFileSync(exported, 'utf8')).toBe(readFileSync(routed, 'utf8'));
-    expect(a.stdout).toMatch(/^wrote routes from RTM: .*export-routes\.csv \(\d+ depot\(s\)\)$/m);
+    expect(a.stdout).toMatch(/^wrote routes from RTM: .*export-routes\.csv \(\d+ depots\)$/m);
     expect(a.stderr).toContain('CAUTION: ');
 
     // The command asks for a streamed file; a whole-text file for the routes would hold the output in memory.
