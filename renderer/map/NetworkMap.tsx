@@ -138,6 +138,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     if (corner.current) resize.observe(corner.current);
     const stopAutoFit = () => (autoFit.current = false);
     element.current.addEventListener('wheel', stopAutoFit, { passive: true });
+    // Any pan or zoom by pointer or key (drag, the zoom buttons, +/-) is the user taking the view:
+    // a later resize of the box or the key must not fit the network again over it.
+    element.current.addEventListener('pointerdown', stopAutoFit);
+    element.current.addEventListener('keydown', stopAutoFit);
     element.current.addEventListener('mousedown', stopAutoFit);
     element.current.addEventListener('keydown', stopAutoFit);
     return () => {

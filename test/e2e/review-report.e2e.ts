@@ -123,7 +123,7 @@ describe('calendar review and its report', () => {
     await page.getByRole('button', { name: 'Apply this fix plan (by clause) as a scenario' }).click();
     // The review runs again under the what-if: no loop in any period.
     await expect.poll(() => review.innerText(), { timeout: 60_000 }).toMatch(/Rebate loops in the whole contract, 2026-01-01 to 2027-06-30 \(scenario “[^”]+”\): 0/);
-    expect(await review.innerText()).toMatch(/the contract as the scenario “[^”]+” changes it \(3 of 3 change\(s\) applied\)/);
+    expect(await review.innerText()).toMatch(/the contract as the scenario “[^”]+” changes it \(3 of 3 changes applied\)/);
     // The Export menu's review report is the calendar under the same what-if.
     const [exported] = await Promise.all([page.waitForEvent('download'), page.getByLabel('Export', { exact: true }).selectOption('review-html')]);
     expect(exported.suggestedFilename()).toMatch(/^contract-review-2026-01-01-2027-06-30.*\.html$/);
