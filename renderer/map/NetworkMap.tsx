@@ -15,7 +15,8 @@ import { depotLabelLayer } from './depot-labels';
 import { fitNetwork, depotsInView } from './fit-view';
 import { addedLaneLayer, depotMarkers, loopLayer, routeLayer, solveMarkers, styleDepots } from './network-layers';
 import { loadRouteLayer, type LoadRouteDrawing } from './load-route-layer';
-import { allLanesLayer, laneSetLayer, LANE_DETAIL_THRESHOLD, type LaneCounts, type PaintLayer } from './lane-canvas';
+import { allLanesLayer, laneSetLayer, type LaneLayer, type LaneSetLayer } from './lane-layers';
+import { LANE_DETAIL_THRESHOLD, type LaneCounts } from './lane-paint';
 import { DEPOT_CANVAS_THRESHOLD, depotCanvas, type DepotCanvas } from './depot-canvas';
 import { STYLE } from './map-style';
 import { useDepotCursor } from './use-depot-cursor';
@@ -59,6 +60,8 @@ function useSameLanes(lanes: Int32Array | null): Int32Array | null {
   return lanes;
 }
 
+const NO_LANES = new Int32Array(0);
+
 interface Renderers {
   /** Pane of the painted basemap. */
   basePane: string;
@@ -91,11 +94,12 @@ function makeRenderers(map: L.Map): Renderers {
 }
 
 /** A painted canvas layer rebuilt when `deps` change. */
-function usePaintLayer(map: L.Map | null, build: (() => PaintLayer) | null, deps: unknown[]) {
+function usePaintLayer(map: L.Map | null, build: (() => LaneLayer) | null, deps: unknown[]) {
   useEffect(() => {
     if (!map || !build) return;
-    const layer = build().addTo(map);
-    return () => layer.remove();
+    const layer = build();
+    layer.addTo(map);
+    return () => void layer.remove();
   }, [map, ...deps]);
 }
 
@@ -181,9 +185,22 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const onDepotCounts = useCallback((drawn: number, inView: number) => setDepotCounts((now) => (now && now.drawn === drawn && now.inView === inView ? now : { drawn, inView })), []);
   const onCounts = useCallback((next: LaneCounts) => setLaneCounts((now) => (now && now.drawn === next.drawn && now.inView === next.inView && now.total === next.total ? now : next)), []);
   usePaintLayer(map, network && renderers ? () => allLanesLayer(renderers.lanesPane, network, STYLE.lane, onCounts) : null, [network]);
-  // Most edits leave the route tree as it was: the same lanes keep the painted layer.
+  // Most edits leave the route tree as it was: the same lanes keep the painted picture. The tree's
+  // canvas lives as long as the network; a new tree is new content for it, so the old picture stays
+  // until the new one is painted.
   const tree = useSameLanes(solve?.treeLanes ?? null);
-  usePaintLayer(map, network && tree && renderers ? () => laneSetLayer(renderers.treePane, network, tree, added, STYLE.tree) : null, [network, tree, added]);
+  const treeLayer = useRef<LaneSetLayer | null>(null);
+  useEffect(() => {
+    if (!map || !network || !renderers) return;
+    const layer = laneSetLayer(renderers.treePane, network, NO_LANES, [], STYLE.tree);
+    layer.addTo(map);
+    treeLayer.current = layer;
+    return () => {
+      layer.remove();
+      treeLayer.current = null;
+    };
+  }, [map, network, renderers]);
+  useEffect(() => treeLayer.current?.setLanes(tree ?? NO_LANES, added), [map, network, renderers, tree, added]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
   useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, renderers.overlay) : null, [network, route, added]);
   useLayer(map, network && loadRoutes && renderers ? () => loadRouteLayer(network, loadRoutes, renderers.overlay) : null, [network, loadRoutes]);

@@ -9,6 +9,7 @@ import { feature, mesh } from 'topojson-client';
 import type { GeometryCollection, Topology } from 'topojson-specification';
 import countries from 'world-atlas/countries-50m.json';
 import { layerTransform, PaintLayer, viewBoxOf } from './lane-canvas';
+import { mercatorX, mercatorY } from './mercator';
 
 const LAND = '#ece8dc';
 const BORDER = { color: '#b4ab96', weight: 0.8 };
@@ -22,17 +23,12 @@ interface Ring {
   east: number;
 }
 
-const R = 6378137;
-const LIMIT = 85.0511287798;
-const RAD = Math.PI / 180;
-
 function ringOf(points: number[][]): Ring {
   const xy = new Float64Array(points.length * 2);
   let south = Infinity, west = Infinity, north = -Infinity, east = -Infinity;
   points.forEach(([lon, lat], i) => {
-    const sin = Math.sin(Math.max(Math.min(LIMIT, lat), -LIMIT) * RAD);
-    xy[2 * i] = R * lon * RAD;
-    xy[2 * i + 1] = (R * Math.log((1 + sin) / (1 - sin))) / 2;
+    xy[2 * i] = mercatorX(lon);
+    xy[2 * i + 1] = mercatorY(lat);
     south = Math.min(south, lat);
     north = Math.max(north, lat);
     west = Math.min(west, lon);
