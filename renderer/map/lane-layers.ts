@@ -31,7 +31,7 @@ function addedEndsOf(added: readonly AddedLane[]): AddedLaneEnds[] {
 
 /** Every lane of the network, grey, culled to the view and thinned above the threshold; `onCounts` hears what each frame drew. */
 export function allLanesLayer(pane: string, network: NetworkView, style: LineStyle, onCounts: (counts: LaneCounts) => void): LaneLayer {
-  if (offscreenPaintAvailable()) return new OffscreenPaintLayer(pane, network, { kind: 'all-lanes', style }, onCounts);
+  if (offscreenPaintAvailable()) return new OffscreenPaintLayer(pane, network, { kind: 'all-lanes', style }, (answer) => onCounts(answer.counts));
   const data = paintDataOf(network);
   return new PaintLayer(pane, (ctx, bounds, map) => onCounts(paintAllLanes(ctx, layerTransform(map), data, viewBoxOf(map, bounds), style)));
 }

@@ -7,9 +7,8 @@
 
 import L from 'leaflet';
 import type { NetworkView } from '../worker/protocol';
-import type { LaneCounts } from './lane-paint';
 import { layerTransform, viewBoxOf } from './lane-canvas';
-import { paintClient, type CanvasContent } from './paint/paint-client';
+import { paintClient, type CanvasContent, type PaintedAnswer } from './paint/paint-client';
 
 // Leaflet internals this layer uses (not in its type declarations).
 interface MapInternals {
@@ -38,9 +37,9 @@ export class OffscreenPaintLayer extends L.Layer {
 
   constructor(
     pane: string,
-    private readonly network: NetworkView,
+    private readonly network: NetworkView | null,
     private content: CanvasContent,
-    private readonly onCounts: ((counts: LaneCounts) => void) | null = null,
+    private readonly onPainted: ((answer: PaintedAnswer) => void) | null = null,
   ) {
     super();
     L.Util.setOptions(this, { pane });
@@ -56,7 +55,7 @@ export class OffscreenPaintLayer extends L.Layer {
     const canvas = L.DomUtil.create('canvas', 'leaflet-zoom-animated lw-offscreen-canvas');
     this.getPane()!.appendChild(canvas);
     this.canvas = canvas;
-    this.id = paintClient().open(canvas, this.network, this.content, (answer) => this.painted(answer.seq, answer.counts));
+    this.id = paintClient().open(canvas, this.network, this.content, (answer) => this.painted(answer));
     this.update(map);
     return this;
   }
@@ -109,13 +108,13 @@ export class OffscreenPaintLayer extends L.Layer {
     });
   }
 
-  private painted(seq: number, counts: LaneCounts): void {
-    const placed = this.sent.get(seq);
+  private painted(answer: PaintedAnswer): void {
+    const placed = this.sent.get(answer.seq);
     if (!placed) return;
-    for (const s of this.sent.keys()) if (s <= seq) this.sent.delete(s);
+    for (const s of this.sent.keys()) if (s <= answer.seq) this.sent.delete(s);
     this.shown = placed;
     this.place();
-    this.onCounts?.(counts);
+    this.onPainted?.(answer);
   }
 
   /** Puts the painted frame where it belongs in the map's view now (or at the end of a zoom animation). */

@@ -3,22 +3,22 @@
 // transferred once, and from then on the map sends frames and gets back what was painted.
 
 import type { NetworkView } from '../../worker/protocol';
-import type { AddedLaneEnds, CanvasContent, FromPaint, PaintFrame, ToPaint } from './protocol';
+import type { CanvasContent, FromPaint, PaintedAnswer, PaintFrame, ToPaint } from './protocol';
 
-export type { AddedLaneEnds, CanvasContent, PaintFrame } from './protocol';
+export type { AddedLaneEnds, CanvasContent, PaintedAnswer, PaintFrame } from './protocol';
 
 /** Whether canvases can be painted off the UI thread here (Electron and Chromium: yes). */
 export function offscreenPaintAvailable(): boolean {
   return typeof Worker !== 'undefined' && typeof OffscreenCanvas !== 'undefined' && typeof HTMLCanvasElement !== 'undefined' && 'transferControlToOffscreen' in HTMLCanvasElement.prototype;
 }
 
-type OnPainted = (answer: Extract<FromPaint, { kind: 'painted' }>) => void;
+type OnPainted = (answer: PaintedAnswer) => void;
 
 class PaintClient {
   private worker: Worker | null = null;
   private nextId = 1;
   private readonly networkIds = new WeakMap<NetworkView, { id: number; users: number }>();
-  private readonly listeners = new Map<number, { network: NetworkView; onPainted: OnPainted }>();
+  private readonly listeners = new Map<number, { network: NetworkView | null; onPainted: OnPainted }>();
 
   private send(message: ToPaint, transfer: Transferable[] = []): void {
     if (!this.worker) {
@@ -63,10 +63,10 @@ class PaintClient {
   }
 
   /** Hands `canvas` to the worker (it cannot be drawn on from this thread afterwards); returns its id. */
-  open(canvas: HTMLCanvasElement, network: NetworkView, content: CanvasContent, onPainted: OnPainted): number {
+  open(canvas: HTMLCanvasElement, network: NetworkView | null, content: CanvasContent, onPainted: OnPainted): number {
     const id = this.nextId++;
     const target = canvas.transferControlToOffscreen();
-    const networkId = this.use(network);
+    const networkId = network ? this.use(network) : null;
     this.listeners.set(id, { network, onPainted });
     this.send({ kind: 'open', canvas: id, target, network: networkId, content }, [target]);
     return id;
@@ -85,7 +85,7 @@ class PaintClient {
     if (!listener) return;
     this.listeners.delete(canvas);
     this.send({ kind: 'close', canvas });
-    this.release(listener.network);
+    if (listener.network) this.release(listener.network);
   }
 }
 

@@ -3,12 +3,14 @@
 // with its latest frame, so frames that queue up while a paint runs are painted once. No DOM and no
 // Leaflet: tests drive it under Node with recording canvases.
 
-import { paintAllLanes, strokeLanes, type AddedEnds, type LanePaintData, type PathContext } from '../lane-paint';
+import { paintBasemap, type ShapeContext } from '../basemap-paint';
+import { paintDepots, type CircleContext } from '../depot-paint';
+import { paintAllLanes, strokeLanes, type AddedEnds, type LaneCounts, type LanePaintData, type PathContext } from '../lane-paint';
 import { projectPoints } from '../mercator';
 import type { CanvasContent, FromPaint, NetworkPaintArrays, PaintFrame, ToPaint } from './protocol';
 
 /** The 2D context calls a paint makes (OffscreenCanvasRenderingContext2D has them all). */
-export interface PaintContext extends PathContext {
+export interface PaintContext extends PathContext, ShapeContext, CircleContext {
   setTransform(a: number, b: number, c: number, d: number, e: number, f: number): void;
   clearRect(x: number, y: number, w: number, h: number): void;
 }
@@ -22,7 +24,7 @@ export interface PaintTarget {
 
 interface Slot {
   target: PaintTarget;
-  network: number;
+  network: number | null;
   content: CanvasContent;
   added: AddedEnds;
   frame: PaintFrame | null;
@@ -95,8 +97,8 @@ export class PaintScene {
   private paint(id: number): void {
     const slot = this.slots.get(id);
     if (!slot || !slot.frame) return;
-    const data = this.networks.get(slot.network);
-    if (!data) return this.post({ kind: 'failed', canvas: id, message: `paint: network ${slot.network} was not sent` });
+    const data = slot.network === null ? null : this.networks.get(slot.network);
+    if (data === undefined || (data === null && slot.content.kind !== 'basemap')) return this.post({ kind: 'failed', canvas: id, message: `paint: network ${slot.network} was not sent` });
     const frame = slot.frame;
     const target = slot.target;
     const width = Math.max(1, Math.round(frame.width * frame.pixelRatio));
@@ -109,15 +111,21 @@ export class PaintScene {
     ctx.setTransform(1, 0, 0, 1, 0, 0);
     ctx.clearRect(0, 0, width, height);
     ctx.setTransform(frame.pixelRatio, 0, 0, frame.pixelRatio, 0, 0);
-    const total = data.laneFrom.length;
-    let counts;
-    if (slot.content.kind === 'all-lanes') counts = paintAllLanes(ctx, frame.transform, data, frame.view, slot.content.style);
-    else {
+    const content = slot.content;
+    let counts: LaneCounts = { drawn: 0, inView: 0, total: 0 };
+    let shown: Int32Array | undefined;
+    if (content.kind === 'basemap') paintBasemap(ctx, frame.transform, frame.view);
+    else if (data && content.kind === 'all-lanes') counts = paintAllLanes(ctx, frame.transform, data, frame.view, content.style);
+    else if (data && content.kind === 'lane-set') {
       // A lane set is drawn whole, culled to the view: every lane of it in view is drawn.
-      const drawn = strokeLanes(ctx, frame.transform, data, slot.content.lanes, slot.content.style, frame.view, slot.added);
-      counts = { drawn, inView: drawn, total };
+      const drawn = strokeLanes(ctx, frame.transform, data, content.lanes, content.style, frame.view, slot.added);
+      counts = { drawn, inView: drawn, total: data.laneFrom.length };
+    } else if (data && content.kind === 'depots') {
+      const painted = paintDepots(ctx, frame.transform, data, frame.view, content.look, content.scale);
+      shown = painted.shown;
+      counts = { drawn: shown.length, inView: painted.inView, total: data.lat.length };
     }
-    this.post({ kind: 'painted', canvas: id, seq: frame.seq, counts });
+    this.post({ kind: 'painted', canvas: id, seq: frame.seq, counts, ...(shown ? { shown } : {}) });
   }
 }
 

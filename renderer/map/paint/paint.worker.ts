@@ -5,9 +5,9 @@
 import { PaintScene } from './paint-scene';
 import type { FromPaint, ToPaint } from './protocol';
 
-const scope = self as unknown as { postMessage(message: FromPaint): void; onmessage: ((event: MessageEvent<ToPaint>) => void) | null };
+const scope = self as unknown as { postMessage(message: FromPaint, transfer: Transferable[]): void; onmessage: ((event: MessageEvent<ToPaint>) => void) | null };
 const scene = new PaintScene(
-  (message) => scope.postMessage(message),
+  (message) => scope.postMessage(message, message.kind === 'painted' && message.shown ? [message.shown.buffer] : []),
   (run) => setTimeout(run, 0),
 );
 scope.onmessage = (event) => scene.handle(event.data);

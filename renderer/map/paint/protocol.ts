@@ -3,6 +3,7 @@
 // that a frame is a few numbers (size, pixel ratio, the metres-to-pixels transform, the view box).
 // Everything is structured-clone data; the canvases themselves are transferred.
 
+import type { DepotLook } from '../depot-paint';
 import type { LaneGrid, ViewBox } from '../lane-grid';
 import type { LaneCounts, LineStyle } from '../lane-paint';
 import type { ViewTransform } from '../mercator';
@@ -30,7 +31,11 @@ export type CanvasContent =
   /** Every lane, culled to the view and thinned above the threshold (lane-paint.ts `paintAllLanes`). */
   | { kind: 'all-lanes'; style: LineStyle }
   /** A set of lanes (the route tree), culled to the view; negative refs are lanes in `added`. */
-  | { kind: 'lane-set'; lanes: Int32Array; added: AddedLaneEnds[]; style: LineStyle };
+  | { kind: 'lane-set'; lanes: Int32Array; added: AddedLaneEnds[]; style: LineStyle }
+  /** Land and borders (basemap-paint.ts); needs no network. */
+  | { kind: 'basemap' }
+  /** The network's depots styled by `look` (depot-paint.ts), circles shrunk by `scale`. */
+  | { kind: 'depots'; look: DepotLook & { status: Uint8Array | null }; scale: number };
 
 /** One frame of a canvas: its CSS size, device pixels per CSS pixel, and where the map looks. */
 export interface PaintFrame {
@@ -48,13 +53,25 @@ export interface PaintFrame {
 export type ToPaint =
   | { kind: 'network'; network: number; arrays: NetworkPaintArrays }
   | { kind: 'drop-network'; network: number }
-  | { kind: 'open'; canvas: number; target: OffscreenCanvas; network: number; content: CanvasContent }
+  /** `network` null: content that needs none (the basemap). */
+  | { kind: 'open'; canvas: number; target: OffscreenCanvas; network: number | null; content: CanvasContent }
   | { kind: 'content'; canvas: number; content: CanvasContent }
   | { kind: 'frame'; canvas: number; frame: PaintFrame }
   | { kind: 'close'; canvas: number };
 
+/**
+ * Frame `seq` is on the canvas. `counts` says what it drew: lanes (or depots) drawn, in view, of the
+ * network; zeros for the basemap. `shown`: the depots drawn, for the map's hit tests.
+ */
+export interface PaintedAnswer {
+  kind: 'painted';
+  canvas: number;
+  seq: number;
+  counts: LaneCounts;
+  shown?: Int32Array;
+}
+
 export type FromPaint =
-  /** Frame `seq` is on the canvas; `counts` says what it drew (lanes drawn, in view, of the network). */
-  | { kind: 'painted'; canvas: number; seq: number; counts: LaneCounts }
+  | PaintedAnswer
   /** The canvas could not be painted (no 2D context, a message for an unknown network). */
   | { kind: 'failed'; canvas: number; message: string };
