@@ -51,13 +51,19 @@ function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps:
   }, [map, ...deps]);
 }
 
-/** `lanes`, or the previous array when it holds the same lanes (so effects keyed on it do not rerun). */
+/**
+ * `lanes`, or the previous array when it holds the same lanes (so effects keyed on it do not rerun).
+ * Compared only when a new array arrives: the map renders again on every painted frame's counts,
+ * and comparing 50,000 tree lanes each time was the map's largest piece of UI-thread work.
+ */
 function useSameLanes(lanes: Int32Array | null): Int32Array | null {
-  const last = useRef<Int32Array | null>(null);
-  const prev = last.current;
-  if (lanes && prev && prev.length === lanes.length && prev.every((e, i) => e === lanes[i])) return prev;
-  last.current = lanes;
-  return lanes;
+  const last = useRef<{ input: Int32Array | null; output: Int32Array | null }>({ input: null, output: null });
+  const { input, output } = last.current;
+  if (lanes === input) return output;
+  let same = lanes !== null && output !== null && output.length === lanes.length;
+  for (let i = 0; same && i < lanes!.length; i++) same = lanes![i] === output![i];
+  last.current = { input: lanes, output: same ? output : lanes };
+  return last.current.output;
 }
 
 const NO_LANES = new Int32Array(0);
@@ -254,7 +260,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
 
   const loopCount = solve?.loops.length ?? 0;
   const addedDrawn = added.filter((a) => a.from >= 0 && a.to >= 0).length;
-  const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
+  const unbounded = useMemo(() => (solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0), [solve]);
   const depotCount = network?.depotIds.length ?? 0;
   const laneTotal = network?.laneFrom.length ?? 0;
   const thinned = laneTotal > LANE_DETAIL_THRESHOLD && laneCounts !== null && laneCounts.total === laneTotal;
