@@ -16,6 +16,8 @@ export interface RowWindow {
   /** Rendered rows are [start, end). */
   start: number;
   end: number;
+  /** Height of one row (px), measured from a rendered row. */
+  rowPx: number;
   /** Heights of the spacer rows before and after the rendered rows (px). */
   padTop: number;
   padBottom: number;
@@ -85,5 +87,5 @@ export function useRowWindow(count: number): RowWindow {
 
   const start = windowed ? Math.min(range.start, count) : 0;
   const end = windowed ? Math.min(Math.max(range.end, start), count) : count;
-  return { bodyRef, windowed, start, end, padTop: start * rowPx.current, padBottom: (count - end) * rowPx.current, scrollToIndex };
+  return { bodyRef, windowed, start, end, rowPx: rowPx.current, padTop: start * rowPx.current, padBottom: (count - end) * rowPx.current, scrollToIndex };
 }
