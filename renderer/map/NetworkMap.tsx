@@ -18,6 +18,7 @@ import { loadRouteLayer, type LoadRouteDrawing } from './load-route-layer';
 import { allLanesLayer, laneSetLayer, type LaneLayer, type LaneSetLayer } from './lane-layers';
 import { LANE_DETAIL_THRESHOLD, type LaneCounts } from './lane-paint';
 import { DEPOT_CANVAS_THRESHOLD, depotCanvas, type DepotCanvas } from './depot-canvas';
+import { leavingCanvas } from './lane-canvas';
 import { STYLE } from './map-style';
 import { useDepotCursor } from './use-depot-cursor';
 import './map.css';
@@ -93,8 +94,8 @@ function makeRenderers(map: L.Map): Renderers {
     basePane: pane('lw-base', 250),
     lanesPane: pane('lw-lanes', 350),
     treePane: pane('lw-tree', 390),
-    overlay: L.canvas({ padding: 0.2 }),
-    depots: L.canvas({ pane: depotsPane, padding: 0.2, tolerance: 4 }),
+    overlay: leavingCanvas({ padding: 0.2 }),
+    depots: leavingCanvas({ pane: depotsPane, padding: 0.2, tolerance: 4 }),
     depotsPane,
   };
 }

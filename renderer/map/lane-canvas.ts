@@ -113,3 +113,24 @@ export class PaintLayer {
     schedulePaint(this.job);
   }
 }
+
+// `_drawFirst` heads Leaflet's list of the canvas's paths in drawing order (null once empty).
+type CanvasWithPaths = L.Canvas & { _map: L.Map | null; _drawFirst: unknown; _removePath(layer: L.Path): void };
+const canvasRemovePath = (L.Canvas.prototype as unknown as CanvasWithPaths)._removePath;
+
+/**
+ * Leaflet's canvas renderer that leaves the map when its last path is removed (Leaflet adds it back
+ * with the next path). An empty canvas stayed on the map and was still resized and handed to the
+ * compositor at full size on every move: in software rendering, tens of milliseconds of UI thread
+ * for nothing (the sample network's depot canvas, after a large network replaced it).
+ */
+const LeavingCanvas = L.Canvas.extend({
+  _removePath(this: CanvasWithPaths, layer: L.Path) {
+    canvasRemovePath.call(this, layer);
+    if (this._map && !this._drawFirst) this._map.removeLayer(this);
+  },
+}) as unknown as new (options: L.RendererOptions & { tolerance?: number }) => L.Canvas;
+
+export function leavingCanvas(options: L.RendererOptions & { tolerance?: number }): L.Canvas {
+  return new LeavingCanvas(options);
+}
