@@ -19,7 +19,7 @@ export interface ResultRow {
   legs: number;
   driveMinutes: number;
   flags: number;
-  flagText: string[];
+  flagText: readonly string[];
   /** Cost change against the scenario's base (minor units), NaN when not comparable or no scenario. */
   deltaMinor: number;
 }
@@ -64,47 +64,73 @@ export function resultRows(network: NetworkView, solve: SolveView): ResultRow[] 
 
 // Missing numbers (NaN, -1 legs) always sort last, whatever the direction, so unbounded and
 // unreachable depots never hide between real figures.
-function numeric(a: number, b: number, descending: boolean): number {
-  const aMissing = !Number.isFinite(a) || a < -1e300;
-  const bMissing = !Number.isFinite(b) || b < -1e300;
-  if (aMissing || bMissing) return aMissing === bMissing ? 0 : aMissing ? 1 : -1;
-  return descending ? b - a : a - b;
-}
+const present = (v: number) => (Number.isFinite(v) && v >= -1e300 ? v : NaN);
 
 const STATUS_ORDER: Record<StatusWord, number> = { origin: 0, unbounded: 1, reachable: 2, unreachable: 3 };
 
-function compare(a: ResultRow, b: ResultRow, key: SortKey, descending: boolean): number {
-  const text = (x: string, y: string) => (descending ? y.localeCompare(x) : x.localeCompare(y));
+/**
+ * A row's number for a numeric sort key (NaN = missing, sorted last), signed so that ascending
+ * order of the number is the column's ascending order: "cautions" ascending lists the most first.
+ */
+function numberOf(row: ResultRow, key: Exclude<SortKey, 'id' | 'name'>): number {
   switch (key) {
-    case 'id':
-      return text(a.id, b.id);
-    case 'name':
-      return text(a.name, b.name);
     case 'status':
-      return descending ? STATUS_ORDER[b.status] - STATUS_ORDER[a.status] : STATUS_ORDER[a.status] - STATUS_ORDER[b.status];
+      return STATUS_ORDER[row.status];
     case 'cost':
-      return numeric(a.costMinor, b.costMinor, descending);
+      return present(row.costMinor);
     case 'legs':
-      return numeric(a.legs < 0 ? NaN : a.legs, b.legs < 0 ? NaN : b.legs, descending);
+      return row.legs < 0 ? NaN : row.legs;
     case 'drive':
-      return numeric(a.driveMinutes, b.driveMinutes, descending);
+      return present(row.driveMinutes);
     case 'flags':
-      return descending ? a.flagText.length - b.flagText.length : b.flagText.length - a.flagText.length;
+      return -row.flagText.length;
     case 'delta':
-      return numeric(a.deltaMinor, b.deltaMinor, descending);
+      return present(row.deltaMinor);
   }
+}
+
+// Text compares as String.prototype.localeCompare does (same default locale and options), but one
+// collator serves every comparison: a sort of 50,000 depots by id made 800,000 localeCompare calls.
+const collator = new Intl.Collator();
+
+/**
+ * Sorts rows by the query's key; ties keep depot order, so the result is stable. Keys are read once
+ * per row into an array and the sort compares those (a comparator reading each row's fields through
+ * a switch per comparison held the UI thread for a fifth of a second at 50,000 depots).
+ */
+function sortRows(rows: ResultRow[], key: SortKey, descending: boolean): ResultRow[] {
+  const order = rows.map((_, i) => i);
+  const byDepot = (i: number, j: number) => rows[i].depot - rows[j].depot;
+  if (key === 'id' || key === 'name') {
+    const text = rows.map((row) => row[key]);
+    order.sort((i, j) => (descending ? collator.compare(text[j], text[i]) : collator.compare(text[i], text[j])) || byDepot(i, j));
+  } else {
+    const value = Float64Array.from(rows, (row) => numberOf(row, key));
+    order.sort((i, j) => {
+      const x = value[i];
+      const y = value[j];
+      const xMissing = Number.isNaN(x);
+      const yMissing = Number.isNaN(y);
+      if (xMissing || yMissing) return xMissing === yMissing ? byDepot(i, j) : xMissing ? 1 : -1;
+      return (descending ? y - x : x - y) || byDepot(i, j);
+    });
+  }
+  return order.map((i) => rows[i]);
 }
 
 /** Filters and sorts rows; ties keep depot order, so the result is stable. */
 export function queryRows(rows: readonly ResultRow[], query: TableQuery): ResultRow[] {
   const needle = query.text.trim().toLowerCase();
-  const kept = rows.filter(
-    (row) =>
-      (query.status === 'all' || row.status === query.status || (query.status === 'unbounded' && row.unbounded)) &&
-      (!query.flaggedOnly || row.flags !== 0) &&
-      (needle === '' || row.id.toLowerCase().includes(needle) || row.name.toLowerCase().includes(needle) || row.flagText.some((f) => f.includes(needle))),
-  );
-  return kept.sort((a, b) => compare(a, b, query.sortKey, query.descending) || a.depot - b.depot);
+  const everything = needle === '' && query.status === 'all' && !query.flaggedOnly;
+  const kept = everything
+    ? rows.slice()
+    : rows.filter(
+        (row) =>
+          (query.status === 'all' || row.status === query.status || (query.status === 'unbounded' && row.unbounded)) &&
+          (!query.flaggedOnly || row.flags !== 0) &&
+          (needle === '' || row.id.toLowerCase().includes(needle) || row.name.toLowerCase().includes(needle) || row.flagText.some((f) => f.includes(needle))),
+      );
+  return sortRows(kept, query.sortKey, query.descending);
 }
 
 /** The status words a row shows, each with its badge kind: an unbounded origin is both. */
