@@ -45,6 +45,31 @@ function notPlannedReason(network: NetworkView, r: number): string {
   return 'not in the plan on screen';
 }
 
+// The unfiltered lists (rows of the plan; every row of the file), made once per network: the table
+// is made again each time its tab is shown, and a pass over 500,000 rows was most of that.
+const unfiltered = new WeakMap<NetworkView, { planned?: number[]; every?: number[] }>();
+
+/** Rows of the file listed for a filter text (lower case, '' for none), with or without the rows not planned. */
+function rowsMatching(network: NetworkView, needle: string, everyRow: boolean): number[] {
+  const rows = network.rows;
+  let cached = unfiltered.get(network);
+  if (needle === '' && cached?.[everyRow ? 'every' : 'planned']) return cached[everyRow ? 'every' : 'planned']!;
+  const out: number[] = [];
+  for (let r = 0; r < rows.lane.length; r++) {
+    if (rows.lane[r] === -1 && !everyRow) continue;
+    if (needle !== '') {
+      const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rowRef(network, r) ?? ''}`.toLowerCase();
+      if (!hay.includes(needle)) continue;
+    }
+    out.push(r);
+  }
+  if (needle === '') {
+    if (!cached) unfiltered.set(network, (cached = {}));
+    cached[everyRow ? 'every' : 'planned'] = out;
+  }
+  return out;
+}
+
 export function LaneTable({ network, amounts, added, scenario, onScenario }: LaneTableProps) {
   const [text, setText] = useState('');
   const [changedOnly, setChangedOnly] = useState(false);
@@ -57,20 +82,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
   const tollClass = viewedClass === null || tollForEveryClass ? null : viewedClass;
   // Rows matching the text, made again only when the network or the filter changes; a solve only
   // re-filters them when "changed only" is on (500,000 rows per recompute held up the page).
-  const matching = useMemo(() => {
-    const needle = text.trim().toLowerCase();
-    const out: number[] = [];
-    for (let r = 0; r < rows.lane.length; r++) {
-      const e = rows.lane[r];
-      if (e === -1 && !everyRow) continue;
-      if (needle !== '') {
-        const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rowRef(network, r) ?? ''}`.toLowerCase();
-        if (!hay.includes(needle)) continue;
-      }
-      out.push(r);
-    }
-    return out;
-  }, [network, rows, text, everyRow]);
+  const matching = useMemo(() => rowsMatching(network, text.trim().toLowerCase(), everyRow), [network, text, everyRow]);
   const shown = useMemo(() => (changedOnly ? matching.filter((r) => (rows.lane[r] >= 0 ? amounts.changed[rows.lane[r]] : amounts.rows.changed[r])) : matching), [matching, rows, amounts, changedOnly]);
   const addedShown = useMemo(() => {
     const needle = text.trim().toLowerCase();
@@ -80,7 +92,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
   const current = Math.min(page, pages - 1);
   const id = (d: number) => network.depotIds[d];
   const base: Record<EditableField, Float64Array> = { toll: network.laneToll, fuel: network.laneFuel, fees: network.laneFees, rebate: network.laneRebate };
-  const planned = useMemo(() => rows.lane.reduce((n, e) => n + (e >= 0 ? 1 : 0), 0), [rows]);
+  const planned = useMemo(() => rowsMatching(network, '', false).length, [network]);
   // One list for the window: the scenario's lanes, then this page's rows of the file.
   const pageRows = useMemo(() => shown.slice(current * PAGE, current * PAGE + PAGE), [shown, current]);
   const count = addedShown.length + pageRows.length;
