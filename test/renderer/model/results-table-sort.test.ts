@@ -1,10 +1,12 @@
 // The results table's keyed sort against brute force: on random depots (missing and infinite
 // figures, repeated values, mixed-case ids, every caution combination) every sort key in both
 // directions gives the order of a plain comparator written from the rules (String.prototype
-// .localeCompare for text, missing figures last either way, most cautions first, ties by depot).
+// .localeCompare for text, missing figures last either way, most cautions first, ties by depot);
+// and the table's in-place order over a solve's arrays lists the same depots as the rows would.
 
 import { describe, expect, it } from 'vitest';
-import { queryRows, type ResultRow, type SortKey, type StatusWord } from '../../../renderer/model/results-table';
+import { DEFAULT_QUERY, queryDepots, queryRows, resultRows, type ResultRow, type SortKey, type StatusWord, type TableQuery } from '../../../renderer/model/results-table';
+import type { NetworkView, SolveView } from '../../../renderer/worker/protocol';
 import { flagLabels } from '../../../renderer/model/flags';
 import { seededRandom } from '../../support/seeded-random';
 
@@ -56,5 +58,29 @@ describe('queryRows sorting', () => {
         const got = queryRows(rows, { text: '', status: 'all', flaggedOnly: false, sortKey, descending }).map((r) => r.depot);
         expect(got, `${sortKey} ${descending ? 'descending' : 'ascending'}`).toEqual(reference(rows, sortKey, descending).map((r) => r.depot));
       }
+  });
+});
+
+describe('queryDepots', () => {
+  it.each([4, 5])('lists the depots queryRows lists for every key, direction and filter, without making rows (seed %i)', (seed) => {
+    const next = seededRandom(seed);
+    const n = 300;
+    const figure = () => [NaN, Infinity, 0, 120, 120, Math.round(next() * 1000), -40][Math.floor(next() * 7)];
+    const network = { depotIds: Array.from({ length: n }, (_, d) => ['D', 'd', 'É', 'e'][d % 4] + String(Math.floor(next() * 50))), depotNames: Array.from({ length: n }, () => ['Lyon', 'lyon', 'Łódź hub', 'Aachen'][Math.floor(next() * 4)]) } as unknown as NetworkView;
+    const status = Uint8Array.from({ length: n }, () => Math.floor(next() * 3));
+    const solve = {
+      origin: 3,
+      status,
+      cost: Float64Array.from({ length: n }, figure),
+      legs: Int32Array.from({ length: n }, () => Math.floor(next() * 5) - 1),
+      driveMinutes: Float64Array.from({ length: n }, figure),
+      flags: Uint8Array.from({ length: n }, () => Math.floor(next() * 32)),
+      base: { status: Uint8Array.from({ length: n }, () => (next() < 0.8 ? 1 : 0)), cost: Float64Array.from({ length: n }, figure), legs: new Int32Array(n), routeChanged: new Uint8Array(n) },
+    } as unknown as SolveView;
+    const rows = resultRows(network, solve);
+    const queries: TableQuery[] = [];
+    for (const sortKey of KEYS) for (const descending of [false, true]) queries.push({ ...DEFAULT_QUERY, sortKey, descending });
+    queries.push({ ...DEFAULT_QUERY, text: 'hub' }, { ...DEFAULT_QUERY, text: 'd1' }, { ...DEFAULT_QUERY, status: 'unbounded' }, { ...DEFAULT_QUERY, flaggedOnly: true, sortKey: 'flags' }, { ...DEFAULT_QUERY, text: 'loop', status: 'reachable' });
+    for (const query of queries) expect(Array.from(queryDepots(network, solve, query)), JSON.stringify(query)).toEqual(queryRows(rows, query).map((r) => r.depot));
   });
 });
