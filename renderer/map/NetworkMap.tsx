@@ -117,6 +117,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const [labelsOn, setLabelsOn] = useState(true);
   // Bumped when the view moves or resizes: labels and the in-view count follow it.
   const [view, setView] = useState(0);
+  // The zoom the view settled at (read when a move or zoom ends). map.getZoom() during a render is
+  // already the target of a zoom animation still running, and Leaflet ignores a zoom asked for then:
+  // data-zoom said "zoomed" before the map would take the next zoom.
+  const [settledZoom, setSettledZoom] = useState<number | null>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
@@ -137,7 +141,11 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     addBasemap(map, renderers.basePane);
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
-    map.on('moveend zoomend resize', () => setView((n) => n + 1));
+    setSettledZoom(map.getZoom());
+    map.on('moveend zoomend resize', () => {
+      setView((n) => n + 1);
+      setSettledZoom(map.getZoom());
+    });
     // The panels around the map resize (loop banner, window, splitter), and so does the key when it
     // is opened or closed; Leaflet must re-measure its box. Until the user pans or zooms, the map
     // keeps the whole network in view as its box changes.
@@ -280,7 +288,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         data-depot-labels={labelCount}
         data-lanes-drawn={laneCounts?.drawn ?? ''}
         data-depot-canvas={bigNetwork ? 'yes' : 'no'}
-        data-zoom={map && view >= 0 ? map.getZoom() : ''}
+        data-zoom={settledZoom ?? ''}
       />
       <div className="lw-map-corner" ref={corner}>
         <div className="lw-map-tools" role="group" aria-label="Map view">
