@@ -3,7 +3,13 @@
 
 import { flagLabels } from './flags';
 import { formatMoney } from './format';
-import type { NetworkView, SolveView } from '../worker/protocol';
+import type { SolveView } from '../worker/protocol';
+
+/** What the table reads of a network: the depots' ids and names (a NetworkView, or the engine's network in the worker). */
+export interface DepotNames {
+  depotIds: readonly string[];
+  depotNames: readonly string[];
+}
 
 export type StatusWord = 'origin' | 'reachable' | 'unreachable' | 'unbounded';
 
@@ -40,7 +46,7 @@ export const DEFAULT_QUERY: TableQuery = { text: '', status: 'all', flaggedOnly:
 const STATUS_WORDS: readonly StatusWord[] = ['unreachable', 'reachable', 'unbounded'];
 
 /** The row of depot `d`, read from the network and the solve. */
-export function resultRow(network: NetworkView, solve: SolveView, d: number): ResultRow {
+export function resultRow(network: DepotNames, solve: SolveView, d: number): ResultRow {
   return {
     depot: d,
     id: network.depotIds[d],
@@ -66,7 +72,7 @@ function deltaOf(solve: SolveView, d: number): number {
 }
 
 /** One row per depot. */
-export function resultRows(network: NetworkView, solve: SolveView): ResultRow[] {
+export function resultRows(network: DepotNames, solve: SolveView): ResultRow[] {
   return Array.from({ length: network.depotIds.length }, (_, d) => resultRow(network, solve, d));
 }
 
@@ -218,7 +224,10 @@ export function queryRows(rows: readonly ResultRow[], query: TableQuery): Result
  * row per depot: the windowed table makes rows only for what it shows (`resultRow`). 50,000 row
  * objects per solve, and their garbage, were most of the UI thread's work after a solve.
  */
-export function queryDepots(network: NetworkView, solve: SolveView, query: TableQuery): Int32Array {
+export function queryDepots(network: DepotNames, solve: SolveView, query: TableQuery): Int32Array {
+  // The worker sorts the first order with each solve (SolveView.tableOrder).
+  const first = query.text.trim() === '' && query.status === 'all' && !query.flaggedOnly && query.sortKey === DEFAULT_QUERY.sortKey && query.descending === DEFAULT_QUERY.descending;
+  if (first && solve.tableOrder && solve.tableOrder.length === network.depotIds.length) return solve.tableOrder;
   const source: RowSource = {
     count: network.depotIds.length,
     row: (d) => resultRow(network, solve, d),

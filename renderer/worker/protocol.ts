@@ -164,6 +164,11 @@ export interface SolveView {
   flags: Uint8Array;
   /** Lanes drawn as the cheapest-route tree (each reachable depot's last lane). */
   treeLanes: Int32Array;
+  /**
+   * The depots in the results table's first order (model/results-table.ts `DEFAULT_QUERY`: cost,
+   * cheapest first), sorted here in the worker so a solve costs the UI thread no sort of every depot.
+   */
+  tableOrder?: Int32Array;
   loops: LoopView[];
   /**
    * Same arrays for the scenario's base (no edits), when the scenario has edits, and per depot

@@ -14,6 +14,7 @@ import type { ContractReviewView, FromWorker, NamedText, PlanChoice, PlanSetting
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
+import { DEFAULT_QUERY, queryDepots } from '../model/results-table';
 import { onBaseLanes, rebuiltLanesOf, pathOf, routeChanges, scenarioSolveInput, solveFor, solveTransferables, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
@@ -190,6 +191,7 @@ export class WorkerSession {
       const routeChanged = routeChanges(network, this.base.solved, on ? on.network : network, this.solved, on ? on.laneRefs : null);
       view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice(), routeChanged };
     }
+    view.tableOrder = queryDepots(network, view, DEFAULT_QUERY);
     this.post({ kind: 'solved', id, result: view }, solveTransferables(view));
   }
 }

@@ -58,7 +58,7 @@ export function scenarioSolveInput(imported: ImportResult, network: Network, sce
 
 /** The typed arrays of a solve view (its own copies, overlay included), for postMessage's transfer list. */
 export function solveTransferables(view: SolveView): ArrayBuffer[] {
-  const own = [view.status, view.cost, view.legs, view.driveMinutes, view.flags, view.treeLanes, ...(view.base ? [view.base.status, view.base.cost, view.base.legs] : [])];
+  const own = [view.status, view.cost, view.legs, view.driveMinutes, view.flags, view.treeLanes, ...(view.tableOrder ? [view.tableOrder] : []), ...(view.base ? [view.base.status, view.base.cost, view.base.legs] : [])];
   return [...own.map((a) => a.buffer as ArrayBuffer), ...overlayTransferables(view.overlay)];
 }
 

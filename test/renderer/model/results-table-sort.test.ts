@@ -91,5 +91,10 @@ describe('queryDepots', () => {
     for (const sortKey of KEYS) for (const descending of [false, true]) queries.push({ ...DEFAULT_QUERY, sortKey, descending });
     queries.push({ ...DEFAULT_QUERY, text: 'hub' }, { ...DEFAULT_QUERY, text: 'd1' }, { ...DEFAULT_QUERY, status: 'unbounded' }, { ...DEFAULT_QUERY, flaggedOnly: true, sortKey: 'flags' }, { ...DEFAULT_QUERY, text: 'loop', status: 'reachable' });
     for (const query of queries) expect(Array.from(queryDepots(network, solve, query)), JSON.stringify(query)).toEqual(queryRows(rows, query).map((r) => r.depot));
+    // The worker sends the first order with the solve; the table takes it as it is for that query only.
+    const tableOrder = queryDepots(network, solve, DEFAULT_QUERY);
+    const sent = { ...solve, tableOrder } as SolveView;
+    expect(queryDepots(network, sent, DEFAULT_QUERY)).toBe(tableOrder);
+    expect(Array.from(queryDepots(network, sent, { ...DEFAULT_QUERY, descending: true }))).toEqual(queryRows(rows, { ...DEFAULT_QUERY, descending: true }).map((r) => r.depot));
   });
 });
