@@ -106,6 +106,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const [labelsOn, setLabelsOn] = useState(true);
   // Bumped when the view moves or resizes: labels and the in-view count follow it.
   const [view, setView] = useState(0);
+  // The zoom the view has settled at. During Leaflet's zoom animation getZoom() already gives the
+  // target while a second zoom request is still ignored, so what the page states (data-zoom) is
+  // taken only when the zoom has ended: a reader that waits for it can zoom again at once.
+  const [settledZoom, setSettledZoom] = useState<number | null>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
@@ -127,6 +131,8 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
     map.on('moveend zoomend resize', () => setView((n) => n + 1));
+    map.on('zoomend', () => setSettledZoom(map.getZoom()));
+    setSettledZoom(map.getZoom());
     // The panels around the map resize (loop banner, window, splitter), and so does the key when it
     // is opened or closed; Leaflet must re-measure its box. Until the user pans or zooms, the map
     // keeps the whole network in view as its box changes.
@@ -256,7 +262,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         data-depot-labels={labelCount}
         data-lanes-drawn={laneCounts?.drawn ?? ''}
         data-depot-canvas={bigNetwork ? 'yes' : 'no'}
-        data-zoom={map && view >= 0 ? map.getZoom() : ''}
+        data-zoom={settledZoom ?? ''}
       />
       <div className="lw-map-corner" ref={corner}>
         <div className="lw-map-tools" role="group" aria-label="Map view">
