@@ -1,5 +1,5 @@
 // Module shapes vite provides at build time: `?raw` imports give the file's text (the bundled
-// sample scenario), and `*.css` imports are side effects.
+// the sample carrier), and `*.css` imports are side effects.
 declare module '*?raw' {
   const text: string;
   export default text;

@@ -11,6 +11,7 @@ import type { Network } from '../network/types';
 import type { PlanningSettings } from '../planning/types';
 import type { LaneOverlay } from '../scenario/overlay';
 import { overlayPlan } from '../scenario/overlay-network';
+import { counted } from '../text/plural';
 
 export interface PricingKey {
   date: string;
@@ -38,7 +39,7 @@ export interface PricedDay {
 export class DispatchPlanError extends LanewrightError {
   constructor(readonly key: PricingKey, readonly problems: readonly ValidationItem[]) {
     super(
-      `dispatch: planning ${key.date} for vehicle class ${key.vehicleClass ?? '(default)'} has ${problems.length} error(s); nothing was planned (--skip-invalid plans with the lanes that are fine):\n` +
+      `dispatch: planning ${key.date} for vehicle class ${key.vehicleClass ?? '(default)'} has ${counted(problems.length, 'error')}; nothing was planned (--skip-invalid plans with the lanes that are fine):\n` +
         problems.slice(0, 20).map((p) => `  ${p.file}, row ${p.row}, column "${p.column}": ${p.message}`).join('\n'),
     );
   }

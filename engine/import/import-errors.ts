@@ -5,11 +5,12 @@ import { LanewrightError } from '../errors';
 import { shownText } from '../text/shown-text';
 import { formatReport } from './report-collector';
 import type { ValidationReport } from './types';
+import { counted, plural } from '../text/plural';
 
 /** The caller's signal asked the import to stop. */
 export class ImportCancelledError extends LanewrightError {
   constructor(readonly file: string, readonly rowsRead: number) {
-    super(`import: cancelled while reading ${file} after ${rowsRead} row(s)`);
+    super(`import: cancelled while reading ${file} after ${counted(rowsRead, 'row')}`);
   }
 }
 
@@ -17,7 +18,7 @@ export class ImportCancelledError extends LanewrightError {
 export class InvalidInputError extends LanewrightError {
   constructor(readonly report: ValidationReport) {
     super(
-      `the input has ${report.errors.length + (report.omitted > 0 ? '+' : '')} error(s); nothing was planned (--skip-invalid plans with the ${report.accepted} accepted row(s)):\n` +
+      `the input has ${report.errors.length}${report.omitted > 0 ? '+' : ''} ${plural(report.errors.length + report.omitted, 'error')}; nothing was planned (--skip-invalid plans with the ${counted(report.accepted, 'accepted row')}):\n` +
         formatReport(report).join('\n'),
     );
   }

@@ -6,6 +6,7 @@ import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
 import type { ReportCollector } from './report-collector';
 import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
 import type { FileCounts } from './types';
+import { counted } from '../text/plural';
 
 /** True when every cell is empty or white space (a blank line, or a line of delimiters). */
 export function isBlankRecord(cells: readonly string[]): boolean {
@@ -82,7 +83,7 @@ export abstract class RecordFileReader implements CsvRecordSink {
   private warnShortRow(fields: number, row: number): void {
     const missing = this.headerCells.slice(fields);
     const named = missing.slice(0, 5).map((h) => `"${h}"`).join(', ') + (missing.length > 5 ? `, … (${missing.length} in all)` : '');
-    this.report.warning(this.file, row, missing[0] || `(column ${fields + 1})`, null, 'too-few-fields', `the row has ${fields} field(s) but the header has ${this.headerCells.length}; ${named} read as empty`);
+    this.report.warning(this.file, row, missing[0] || `(column ${fields + 1})`, null, 'too-few-fields', `the row has ${counted(fields, 'field')} but the header has ${this.headerCells.length}; ${named} read as empty`);
   }
 
   /** A quote inside an unquoted field (an inch mark, say) is read as itself, and named. */

@@ -3,6 +3,7 @@
 
 import { fileLocationText } from '../errors';
 import type { FileCounts, IssueCode, ValidationItem, ValidationReport } from './types';
+import { counted } from '../text/plural';
 
 export class ReportCollector {
   readonly errors: ValidationItem[] = [];
@@ -55,7 +56,7 @@ export function formatItem(item: ValidationItem, severity: 'error' | 'warning'):
 /** Every line of a report: errors first, then warnings, then the counts. */
 export function formatReport(report: ValidationReport): string[] {
   const lines = [...report.errors.map((e) => formatItem(e, 'error')), ...report.warnings.map((w) => formatItem(w, 'warning'))];
-  if (report.omitted > 0) lines.push(`... ${report.omitted} more problem(s) not listed`);
-  for (const f of report.files) lines.push(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
+  if (report.omitted > 0) lines.push(`... ${counted(report.omitted, 'more problem')} not listed`);
+  for (const f of report.files) lines.push(`${f.file}: ${counted(f.total, 'row')}, ${f.accepted} accepted, ${f.rejected} rejected`);
   return lines;
 }

@@ -4,6 +4,7 @@
 import type { CsvStreamIssue } from '../io/csv-record-stream';
 import type { ReportCollector } from './report-collector';
 import type { FileCounts } from './types';
+import { counted } from '../text/plural';
 
 function streamIssueToReport(report: ReportCollector, file: string, issue: CsvStreamIssue, header: readonly string[]): void {
   if (issue.code === 'not-text') {
@@ -17,7 +18,7 @@ function streamIssueToReport(report: ReportCollector, file: string, issue: CsvSt
     column,
     issue.value,
     'unbalanced-quotes',
-    `a quoted field opens here and never closes; ${issue.linesLost} line(s) from here to the end of the file could not be read`,
+    `a quoted field opens here and never closes; ${counted(issue.linesLost, 'line')} from here to the end of the file could not be read`,
   );
 }
 

@@ -15,6 +15,7 @@ import { LanesReader } from '../import/lanes-reader';
 import { ReportCollector } from '../import/report-collector';
 import type { TextSource, ValidationReport } from '../import/types';
 import type { ImportOptions, ImportResult } from './import-types';
+import { counted } from '../text/plural';
 
 /** A streaming import: depots first, then lanes, then `result()`. */
 export interface ImportSession {
@@ -123,7 +124,7 @@ function assemble(collector: ReportCollector, depots: DepotsReader, lanes: Lanes
     collector.warning(lanesFile, table.sourceRow[dup.lane], null, null, 'duplicate-lane', `repeats the lane at row ${table.sourceRow[dup.first]} (same from, to, reference, class and validity)`);
   }
   const notes: string[] = [];
-  for (const [code, rows] of lanes.converted) notes.push(`${rows} lane row(s) converted from ${code} to ${lanes.currency} at ${options.exchangeRates?.[code]}.`);
+  for (const [code, rows] of lanes.converted) notes.push(`${counted(rows, 'lane row')} converted from ${code} to ${lanes.currency} at ${options.exchangeRates?.[code]}.`);
   const importReport = collector.report();
   // The reader's id index is exactly the depots' positions; every plan's network reuses it.
   rememberDepotIndex(depots.depots, depots.index);

@@ -12,6 +12,7 @@ import { netCostOrNull } from '../money/net-cost';
 import { buildPlannedNetwork, plannedLanes, type PlannedColumns } from './planned-columns';
 import { planningSettings } from './settings';
 import type { PlannedLane, PlannedNetwork, PlanRequest } from './types';
+import { counted } from '../text/plural';
 
 // Items past this are dropped before the report's own cap; counting them is not worth the strings.
 const MAX_PLAN_ITEMS = 100_000;
@@ -250,8 +251,8 @@ export function planLanes(input: PlanInput, request: PlanRequest, build: (planEr
     estimated[n] = (distanceEstimated ? 1 : 0) | (fuelEstimated ? 2 : 0) | (driveEstimated ? 4 : 0);
     n++;
   }
-  if (closedRows > 0) notes.push(`${closedRows} lane row(s) closed by the scenario.`);
-  if (excluded > 0) notes.push(`${excluded} lane row(s) left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
+  if (closedRows > 0) notes.push(`${counted(closedRows, 'lane row')} closed by the scenario.`);
+  if (excluded > 0) notes.push(`${counted(excluded, 'lane row')} left out: not valid on ${request.date ?? 'the date'} or for another vehicle class.`);
 
   // Trimmed to the planned lanes; a view when nearly every row is planned, so the columns are not held twice.
   const rows = <T extends Int32Array | Float64Array | Uint8Array>(a: T): T => (n >= cap * 0.9 ? a.subarray(0, n) : a.slice(0, n)) as T;

@@ -8,6 +8,7 @@ import type { LoopSearchStop } from '../audit/distinct-loops';
 import { formatMinor, type Minor } from '../money/minor';
 import type { Network } from '../network/types';
 import { LANE_AMOUNT_COLUMNS, laneAmountCells } from './lane-amount-cells';
+import { counted } from '../text/plural';
 
 export interface AuditLoopLane {
   row: number;
@@ -93,9 +94,9 @@ export function loopSearchNote(found: number, search: NetworkAudit['loopSearch']
     case 'cap-unsettled':
       return `${found} loops reported, the loop cap; the search for one more stopped at its budget (${figures}), so more may exist`;
     case 'work-budget':
-      return `the loop search stopped at its work budget of ${search.workBudget.toLocaleString('en')} (${figures}) with ${found} loop(s) found, before the loop cap of ${search.cap}; more loops may exist`;
+      return `the loop search stopped at its work budget of ${search.workBudget.toLocaleString('en')} (${figures}) with ${counted(found, 'loop')} found, before the loop cap of ${search.cap}; more loops may exist`;
     case 'memory-bound':
-      return `the loop search stopped at its memory bound of ${search.memoryBound.toLocaleString('en')} kept lane positions (${figures}) with ${found} loop(s) found, before the loop cap of ${search.cap}; more loops may exist`;
+      return `the loop search stopped at its memory bound of ${search.memoryBound.toLocaleString('en')} kept lane positions (${figures}) with ${counted(found, 'loop')} found, before the loop cap of ${search.cap}; more loops may exist`;
   }
 }
 

@@ -4,6 +4,7 @@
 
 import { formatMinor, type Minor } from '../money/minor';
 import type { CalendarReport, DateRange } from './calendar-report';
+import { counted } from '../text/plural';
 
 export interface ReviewedFile {
   /** File name as the user gave it. */
@@ -53,7 +54,7 @@ export function calendarReviewHtml(report: CalendarReport, options: CalendarHtml
   const parts: string[] = [];
 
   parts.push(`<h1>Contract review across the calendar</h1>`);
-  parts.push(`<p>Window reviewed: <b>${e(range(report.window))}</b>, ${report.periods.length} period(s) in which the valid lane rows do not change; vehicle classes: ${e(report.classes.map(cls).join(', '))}. Amounts in ${e(report.currency)}.${options.madeAt ? ` Made ${e(options.madeAt)}.` : ''}</p>`);
+  parts.push(`<p>Window reviewed: <b>${e(range(report.window))}</b>, ${counted(report.periods.length, 'period')} in which the valid lane rows do not change; vehicle classes: ${e(report.classes.map(cls).join(', '))}. Amounts in ${e(report.currency)}.${options.madeAt ? ` Made ${e(options.madeAt)}.` : ''}</p>`);
   if (report.scenario) {
     const sc = report.scenario;
     parts.push(`<p><b>Under the what-if scenario “${e(sc.name)}”</b>: every figure below is the contract as these changes make it, not the files as loaded.</p>`);
@@ -113,7 +114,7 @@ export function calendarReviewHtml(report: CalendarReport, options: CalendarHtml
       [0, 6, 7, 8],
     ),
   );
-  if (shown.length > cap) parts.push(`<p class="note">${shown.length - cap} more row(s) not listed here; the JSON output has them all.</p>`);
+  if (shown.length > cap) parts.push(`<p class="note">${counted(shown.length - cap, 'more row')} not listed here; the JSON output has them all.</p>`);
   parts.push(`<div class="caution"><b>Caution.</b> ${e(report.caution)}</div>`);
 
   return `<!DOCTYPE html><html lang="en"><head><meta charset="utf-8"><meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'"><title>Contract review ${e(range(report.window))}</title><style>${STYLE}</style></head><body>${parts.join('\n')}</body></html>\n`;

@@ -5,7 +5,7 @@
 
 import { classKey } from '../import/headers';
 import { isoDateText } from '../import/cells';
-import { laneKeyId, laneKeyText, type LaneKey } from '../import/lane-key';
+import { laneKeyId, laneKeyText, laneKeyWords, type LaneKey } from '../import/lane-key';
 import { formatMinor, type Minor } from '../money/minor';
 import type { LaneOverlay, OverlayBase, OverlayIndex } from './overlay';
 import type { Scenario, ScenarioChange } from './types';
@@ -44,7 +44,7 @@ export function overlayRowAmounts(overlay: LaneOverlay, className: string | null
 export interface ChangeView {
   /** Position in `scenario.changes`. */
   index: number;
-  /** "LUX>SXB|BFH-L-014|1: toll 2axle 8.19 → 9.00". */
+  /** "LUX → SXB, ref BFH-L-014: toll 2axle 8.19 → 9.00" (lanes named in words, never by key text). */
   text: string;
   applied: boolean;
   /** Why it was not applied (it stays in the scenario), else null. */
@@ -81,7 +81,7 @@ export function describeChanges(base: OverlayBase, overlay: LaneOverlay, scenari
       text = `new lane ${l.from} → ${l.to}${l.ref ? ` (${l.ref})` : ''}: toll ${money(l.tollMinor)}, fuel ${money(l.fuelMinor)}, fees ${money(l.feesMinor)}, rebate ${money(l.rebateMinor)}`;
     } else {
       const r = rowOf(c.lane);
-      const lane = laneKeyText(c.lane);
+      const lane = laneKeyWords(c.lane);
       if (c.kind === 'set-amount') {
         const field = c.field === 'toll' ? `toll ${c.vehicleClass ?? 'every class'}` : c.field;
         text = `${lane}: ${field} ${before(c, r)} → ${money(c.amountMinor)}`;

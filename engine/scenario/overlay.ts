@@ -5,7 +5,7 @@
 
 import { classKey } from '../import/headers';
 import { readIsoDate } from '../import/cells';
-import { laneGroupText, laneKeyId, laneKeysOfTable, laneKeyText, type LaneKey } from '../import/lane-key';
+import { laneGroupText, laneKeyId, laneKeysOfTable, laneKeyWords, type LaneKey } from '../import/lane-key';
 import type { LaneTable } from '../import/types';
 import { netCostOrNull } from '../money/net-cost';
 import { TableCopy } from './overlay-table';
@@ -219,9 +219,9 @@ class OverlayBuilder {
     if (change.kind === 'add-lane') return this.addLane(change, changeIndex);
     const row = this.rowOfKey(change.lane);
     if (row === undefined) {
-      const near = (this.keys ?? this.shared.keys).filter((k) => k.from === change.lane.from && k.to === change.lane.to).map(laneKeyText);
-      const hint = near.length > 0 ? ` (lanes ${change.lane.from} > ${change.lane.to} in the file now: ${near.slice(0, 5).join(', ')})` : '';
-      this.problem(changeIndex, 'lane-missing', change.lane, `change ${changeIndex + 1} (${change.kind}) names lane ${laneKeyText(change.lane)}, which the lanes file no longer has${hint}`);
+      const near = (this.keys ?? this.shared.keys).filter((k) => k.from === change.lane.from && k.to === change.lane.to).map(laneKeyWords);
+      const hint = near.length > 0 ? ` (lanes ${change.lane.from} → ${change.lane.to} in the file now: ${near.slice(0, 5).join('; ')})` : '';
+      this.problem(changeIndex, 'lane-missing', change.lane, `change ${changeIndex + 1} (${change.kind}) names lane ${laneKeyWords(change.lane)}, which the lanes file no longer has${hint}`);
       return;
     }
     const c = this.copy;
@@ -247,7 +247,7 @@ class OverlayBuilder {
         const bad = rows.find((r) => !this.netFits(r));
         if (bad !== undefined) {
           c.undo(undo);
-          this.problem(changeIndex, 'amount-overflow', change.lane, `change ${changeIndex + 1}: the new ${change.field} makes the net cost of lane ${laneKeyText(change.lane)} leave the exact range; not applied`);
+          this.problem(changeIndex, 'amount-overflow', change.lane, `change ${changeIndex + 1}: the new ${change.field} makes the net cost of lane ${laneKeyWords(change.lane)} leave the exact range; not applied`);
           return;
         }
         c.endUndo();
@@ -280,7 +280,7 @@ class OverlayBuilder {
     const k = wide ? t.classTolls.findIndex((x) => x.key === key) : t.classNames.findIndex((x) => classKey(x) === key);
     if (k === -1) {
       const names = wide ? t.classTolls.map((x) => x.name) : t.classNames;
-      this.problem(changeIndex, 'unknown-class', lane, `change ${changeIndex + 1} sets the toll of vehicle class "${className}" on lane ${laneKeyText(lane)}, but the lanes file ${names.length === 0 ? 'has no tolls per vehicle class' : `has no such class (classes: ${names.join(', ')})`}`);
+      this.problem(changeIndex, 'unknown-class', lane, `change ${changeIndex + 1} sets the toll of vehicle class "${className}" on lane ${laneKeyWords(lane)}, but the lanes file ${names.length === 0 ? 'has no tolls per vehicle class' : `has no such class (classes: ${names.join(', ')})`}`);
       return null;
     }
     if (wide) {

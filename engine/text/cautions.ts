@@ -54,4 +54,4 @@ export function aboutText(version: string): string {
 
 /** Notice on the demo data, so nobody mistakes it for a real carrier or contract. */
 export const SAMPLE_DATA_NOTICE =
-  'The sample scenario uses the fictional carrier Brightwater & Fennick Haulage; its depots sit in real cities but its lanes, tolls and rebates are invented.';
+  'The sample carrier is the fictional Brightwater & Fennick Haulage; its depots sit in real cities but its lanes, tolls and rebates are invented.';

@@ -12,6 +12,7 @@ import type { PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
 import { readTextChunks } from './read-chunks';
 import { printError } from './terminal-text';
+import { counted } from '../../engine/index';
 
 /** Today's calendar date in the local time zone, as ISO 8601 (YYYY-MM-DD). */
 export function todayIso(now: Date = new Date()): string {
@@ -109,12 +110,12 @@ export function loadImport(args: ParsedArgs, extra: Partial<ImportOptions> = {},
   const lines = [
     ...result.report.errors.map((e) => formatItem(e, 'error')),
     ...result.report.warnings.map((w) => formatItem(w, 'warning')),
-    ...(result.report.omitted > 0 ? [`... ${result.report.omitted} more problem(s) not listed (see lanewright check)`] : []),
+    ...(result.report.omitted > 0 ? [`... ${counted(result.report.omitted, 'more problem')} not listed (see lanewright check)`] : []),
     ...result.notes.map((n) => `note: ${n}`),
   ];
   if (result.report.errors.length > 0) {
-    for (const f of result.report.files) lines.push(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
-    lines.push(`note: --skip-invalid: planning with the ${result.report.accepted} accepted row(s); ${result.report.rejected} rejected`);
+    for (const f of result.report.files) lines.push(`${f.file}: ${counted(f.total, 'row')}, ${f.accepted} accepted, ${f.rejected} rejected`);
+    lines.push(`note: --skip-invalid: planning with the ${counted(result.report.accepted, 'accepted row')}; ${result.report.rejected} rejected`);
   }
   for (const line of lines) printError(line);
   return result as ImportResult & { network: Network };

@@ -18,7 +18,7 @@ import { Splitter } from '../components/Splitter/Splitter';
 import { StatusBar } from '../components/StatusBar/StatusBar';
 import { TopBar } from '../components/TopBar/TopBar';
 import { NetworkMap } from '../map/NetworkMap';
-import { addedLanes, sameAddedLanes, type AddedLane } from '../model/added-lanes';
+import { sameAddedLanes, type AddedLane } from '../model/added-lanes';
 import { hasChanges } from '../model/scenario-edits';
 import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { LowerPanel } from './LowerPanel';
@@ -41,13 +41,6 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const { exportFile } = useCommands(bench, ui);
   const { layout, limits, setLowerPx, setSidePx } = useLayout();
 
-  // An edit elsewhere in the scenario keeps the same list, so the map does not redraw layers built on it.
-  const addedRef = useRef<AddedLane[]>([]);
-  const added = useMemo(() => {
-    const next = network ? addedLanes(network.depotIds, scenario) : [];
-    if (!sameAddedLanes(next, addedRef.current)) addedRef.current = next;
-    return addedRef.current;
-  }, [network, scenario]);
 
   // A newly imported network without the chosen origin starts from its first depot.
   useEffect(() => {
@@ -60,6 +53,15 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
     setSelected(null);
   };
   const solve = plan.solve && network && plan.solvedFor === network ? plan.solve : null;
+  // Lanes only the scenario plans come with each solve (the engine's overlay, in the worker). A solve
+  // that lists the same ones keeps the same list, so the map does not redraw layers built on it.
+  const addedRef = useRef<AddedLane[]>([]);
+  const extraLanes = solve?.extraLanes;
+  const added = useMemo(() => {
+    const next = extraLanes ?? [];
+    if (!sameAddedLanes(next, addedRef.current)) addedRef.current = next;
+    return addedRef.current;
+  }, [extraLanes]);
   const route = solve ? plan.route : null;
   // Amounts under the scenario and lane keys come from the engine's overlay in the worker.
   const amounts = solve?.overlay ?? null;
@@ -115,7 +117,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           current={dataset.files}
           pending={dataset.pending}
           onImport={bench.importFiles}
-          onContinue={dataset.continueWithAccepted}
+          onContinue={bench.continueImport}
           onFix={dataset.dismissPending}
           onClose={() => setImportOpen(false)}
           progress={bench.progress}
@@ -123,7 +125,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
           importing={dataset.importing}
         />
       )}
-      {bench.discardPrompt && <DiscardPrompt action={bench.discardPrompt.action} onAnswer={bench.answerDiscard} />}
+      {bench.discardPrompt && <DiscardPrompt action={bench.discardPrompt.action} onAnswer={bench.answerDiscard} browser={host.kind === 'web'} />}
     </div>
   );
 }

@@ -33,17 +33,19 @@ export interface LowerPanelProps {
 export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, onExport, onDrawLoad }: LowerPanelProps) {
   const { scenario, setScenario, selected, setSelected, dataset } = bench;
   const onScenario = (next: Scenario) => setScenario(next);
-  const loadScenarioFile = async () => {
-    const picked = await bench.host.pickFile('scenario');
-    if (!picked.ok) return bench.setMessage(`Scenario not read: ${picked.failure.message}`);
-    if (!picked.value) return;
-    try {
-      setScenario(parseScenarioDocument(picked.value.text, picked.value.name));
-      bench.setMessage(`Loaded scenario file ${picked.value.name}.`);
-    } catch (error) {
-      bench.setMessage(`Scenario not read: ${(error as Error).message}`);
-    }
-  };
+  // A scenario file replaces the what-if edits on screen: unsaved ones are asked about first.
+  const loadScenarioFile = () =>
+    bench.replaceWith('Loading a scenario file', async () => {
+      const picked = await bench.host.pickFile('scenario');
+      if (!picked.ok) return bench.setMessage(`Scenario not read: ${picked.failure.message}`);
+      if (!picked.value) return;
+      try {
+        bench.scenarioFromFile(parseScenarioDocument(picked.value.text, picked.value.name));
+        bench.setMessage(`Loaded scenario file ${picked.value.name}.`);
+      } catch (error) {
+        bench.setMessage(`Scenario not read: ${(error as Error).message}`);
+      }
+    });
   const issues = dataset.report?.issues.length ?? 0;
   const tabs = [
     { id: 'results', label: 'Results' },
@@ -58,7 +60,7 @@ export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, 
       {tab === 'lanes' && (
         <div className="lw-split">
           <LaneTable network={network} amounts={amounts} added={added} scenario={scenario} onScenario={onScenario} />
-          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} />
+          <ScenarioCompare network={network} solve={solve} scenario={scenario} onScenario={onScenario} onLoadFile={() => void loadScenarioFile()} onSaveFile={() => onExport('scenario-json')} onExport={() => onExport('compare-csv')} />
         </div>
       )}
       {tab === 'review' && (
@@ -69,6 +71,7 @@ export function LowerPanel({ bench, network, solve, amounts, added, tab, onTab, 
           onScenario={onScenario}
           host={bench.host}
           onMessage={bench.setMessage}
+          onExport={onExport}
           onDate={(dispatchDate, vehicleClass) => bench.setSettings((now) => ({ ...now, dispatchDate, ...(vehicleClass === undefined ? {} : { vehicleClass: vehicleClass ?? '' }) }))}
         />
       )}

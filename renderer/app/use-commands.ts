@@ -3,9 +3,9 @@
 
 import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
-import { exportFileName, serializeScenarioDocument } from '../../engine/index';
+import { exportFileName } from '../../engine/index';
 import { hasChanges } from '../model/scenario-edits';
-import { scenarioFileName, type ExportChoice } from '../model/export-file';
+import type { ExportChoice } from '../model/export-file';
 import { csvDialect } from './csv-dialect-store';
 import type { Workbench } from './use-workbench';
 
@@ -15,7 +15,7 @@ export interface CommandHandlers {
 }
 
 export function useCommands(bench: Workbench, ui: CommandHandlers) {
-  const { host, engine, setMessage, save, openWorkspace, openSample, scenario } = bench;
+  const { host, engine, setMessage, save, openWorkspace, openSample, saveScenarioFile, scenario } = bench;
 
   // The printable review of the whole calendar under the active scenario (fixed by lane), as the
   // Contract review tab makes it; the worker keeps the calendar review while only the date changes.
@@ -31,21 +31,18 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
     async (what: ExportChoice) => {
       try {
         // The scenario file is the scenario as held here (every change, including ones the loaded
-        // files no longer match), in the versioned format `lanewright compare --scenario` reads.
-        const file =
-          what === 'scenario-json'
-            ? { fileName: scenarioFileName(scenario.name), text: serializeScenarioDocument(scenario) }
-            : what === 'review-html'
-              ? await reviewReport()
-              : await engine.client.request('export', { what, dialect: csvDialect() });
-        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'scenario-json' ? 'scenario' : what === 'review-html' ? 'html' : 'csv');
+        // files no longer match), in the versioned format `lanewright compare --scenario` reads;
+        // once written, browser mode no longer counts its edits as unsaved.
+        if (what === 'scenario-json') return void (await saveScenarioFile());
+        const file = what === 'review-html' ? await reviewReport() : await engine.client.request('export', { what, dialect: csvDialect() });
+        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'review-html' ? 'html' : 'csv');
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);
       } catch (error) {
         setMessage(`Export failed: ${(error as Error).message}`);
       }
     },
-    [engine, host, setMessage, scenario, reviewReport],
+    [engine, host, setMessage, saveScenarioFile, reviewReport],
   );
 
   // Subscribed again only when a handler changes (the workbench object itself is new every render).

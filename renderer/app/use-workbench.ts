@@ -5,8 +5,9 @@
 
 import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from 'react';
 import type { LanewrightHost } from '../../main/ipc/contract';
-import { samePlanningChoices, workspaceFingerprint } from '../../engine/index';
-import { emptyScenario, type Scenario } from '../model/scenario-edits';
+import { samePlanningChoices, serializeScenarioDocument, workspaceFingerprint } from '../../engine/index';
+import { scenarioFileName } from '../model/export-file';
+import { emptyScenario, hasChanges, type Scenario } from '../model/scenario-edits';
 import { isDirty, LifecycleStore } from '../model/workspace-lifecycle';
 import { SAMPLE_DATE, SAMPLE_ORIGIN, sampleFiles } from '../sample/sample';
 import type { PlanChoice, PlanSettings } from '../worker/protocol';
@@ -30,15 +31,29 @@ export function useWorkbench(host: LanewrightHost) {
   // The Loads panel's files belong to the workspace: saved with it and reopened with it.
   const [loadFiles, setLoadFiles] = useState<LoadFiles | null>(null);
   const [selected, setSelected] = useState<number | null>(null);
-  const [message, setMessage] = useState<string | null>(null);
+  // The status line's message belongs to the action that set it: it stands until the next action
+  // (new settings, a scenario edit, a selection, loads files), then it is gone ("Opened the sample
+  // carrier." stayed on screen through later edits). A message is tied to the action state of the
+  // first render that shows it (`at` null until then), so it survives the render its own action makes.
+  const [posted, setPosted] = useState<{ text: string; at: object | null } | null>(null);
+  const setMessage = useCallback((text: string | null) => setPosted(text === null ? null : { text, at: null }), []);
   const lifecycle = useMemo(() => new LifecycleStore(), []);
   const life = useSyncExternalStore(lifecycle.subscribe, lifecycle.snapshot);
-  // Browser mode keeps the workspace as it changes (below), so it is never dirty and never asks.
-  const dirty = host.kind !== 'web' && isDirty(life);
+  // Browser mode keeps the workspace as it changes (below), but a sample, an import or a scenario
+  // file replacing it drops the what-if edits for good: there "unsaved" means edits not yet written
+  // to a scenario file (saved, or loaded from one). A reload reopens the kept edits still unsaved.
+  const [savedScenario, setSavedScenario] = useState<string | null>(null);
+  const scenarioText = useMemo(() => serializeScenarioDocument(scenario), [scenario]);
+  const dirty = host.kind === 'web' ? hasChanges(scenario) && scenarioText !== savedScenario : isDirty(life);
   const savedPath = life.savedPath;
   const settingsRef = useRef(settings);
   settingsRef.current = settings;
   const plan = usePlan(engine, dataset.network, settings, scenario, selected, generation);
+  const actionState = useMemo(() => ({}), [settings, scenario, selected, loadFiles]);
+  useEffect(() => {
+    if (posted && posted.at === null) setPosted({ ...posted, at: actionState });
+  }, [posted, actionState]);
+  const message = posted && (posted.at === null || posted.at === actionState) ? posted.text : null;
 
   const loadSample = useCallback(
     async (loop: boolean) => {
@@ -53,7 +68,7 @@ export function useWorkbench(host: LanewrightHost) {
         setSelected(null);
         // A new workspace: Save must ask where, not overwrite the workspace opened before.
         lifecycle.dispatch({ type: 'opened', savedPath: null, key: workspaceFingerprint(documentOf(files, next, fresh)) });
-        setMessage(loop ? 'Opened the sample with a rebate loop.' : 'Opened the sample scenario.');
+        setMessage(loop ? 'Opened the sample carrier with a rebate loop.' : 'Opened the sample carrier.');
       }
     },
     [load, lifecycle],
@@ -167,9 +182,30 @@ export function useWorkbench(host: LanewrightHost) {
     [host, document, docKey, lifecycle],
   );
 
+  /** Writes the scenario as a scenario file (the versioned JSON `lanewright compare` reads); true when written. */
+  const saveScenarioFile = useCallback(async (): Promise<boolean> => {
+    const text = serializeScenarioDocument(scenario);
+    const result = await host.saveExport(scenarioFileName(scenario.name), text, 'scenario');
+    if (!result.ok) {
+      setMessage(`Scenario file not saved: ${result.failure.message}`);
+      return false;
+    }
+    if (!result.value) return false;
+    setSavedScenario(text);
+    setMessage(`Saved the scenario file ${result.value.path}.`);
+    return true;
+  }, [host, scenario, setMessage]);
+
+  /** A scenario read from a scenario file: it is saved as it stands. */
+  const scenarioFromFile = useCallback((next: Scenario) => {
+    setScenario(next);
+    setSavedScenario(serializeScenarioDocument(next));
+  }, []);
+
   // Every action that replaces the workspace goes through `replaceWith`: none starts while an
-  // import runs (a second one would race the first), and unsaved changes are asked about first.
-  const { discardPrompt, confirmDiscard, answerDiscard } = useDiscardGuard(dirty, () => save(false));
+  // import runs (a second one would race the first), and unsaved changes are asked about first
+  // (Save: the workspace file on the desktop, a scenario file in browser mode).
+  const { discardPrompt, confirmDiscard, answerDiscard } = useDiscardGuard(dirty, () => (host.kind === 'web' ? saveScenarioFile() : save(false)));
   const replaceWith = useCallback(
     async (action: string, run: () => void | Promise<void>): Promise<void> => {
       if (lifecycle.state.phase === 'importing') return setMessage(`${action} must wait: an import is running (cancel it or let it finish).`);
@@ -184,7 +220,7 @@ export function useWorkbench(host: LanewrightHost) {
   );
 
   const openSample = useCallback(
-    (loop: boolean) => replaceWith(loop ? 'Opening the sample with a rebate loop' : 'Opening the sample plan', () => loadSample(loop)),
+    (loop: boolean) => replaceWith(loop ? 'Opening the sample carrier with a rebate loop' : 'Opening the sample carrier', () => loadSample(loop)),
     [replaceWith, loadSample],
   );
 
@@ -219,10 +255,24 @@ export function useWorkbench(host: LanewrightHost) {
       }
       return ok;
     },
-    [load],
+    [load, setMessage],
   );
 
-  return { host, engine, progress, dataset, settings, setSettings, scenario, setScenario, loadFiles, setLoadFiles, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
+  // "Continue with the accepted rows" finishes an import: like a clean one it starts without what-if
+  // edits (they named rows of the files before and stayed over the new network).
+  const { continueWithAccepted, pending } = dataset;
+  const continueImport = useCallback(async () => {
+    const files = pending?.files;
+    const ok = await continueWithAccepted();
+    if (ok && files) {
+      setSelected(null);
+      setScenario(emptyScenario());
+      setMessage(`Imported the accepted rows of ${files.depots.name} and ${files.lanes.name}.`);
+    }
+    return ok;
+  }, [continueWithAccepted, pending, setMessage]);
+
+  return { host, continueImport, engine, progress, dataset, settings, setSettings, scenario, setScenario, saveScenarioFile, scenarioFromFile, loadFiles, setLoadFiles, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
 }
 
 export type Workbench = ReturnType<typeof useWorkbench>;

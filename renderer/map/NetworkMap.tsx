@@ -20,6 +20,7 @@ import { DEPOT_CANVAS_THRESHOLD, depotCanvas, type DepotCanvas } from './depot-c
 import { STYLE } from './map-style';
 import { useDepotCursor } from './use-depot-cursor';
 import './map.css';
+import { counted } from '../../engine/index';
 
 export interface NetworkMapProps {
   network: NetworkView | null;
@@ -105,6 +106,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const [labelsOn, setLabelsOn] = useState(true);
   // Bumped when the view moves or resizes: labels and the in-view count follow it.
   const [view, setView] = useState(0);
+  // The zoom the view has settled at. During Leaflet's zoom animation getZoom() already gives the
+  // target while a second zoom request is still ignored, so what the page states (data-zoom) is
+  // taken only when the zoom has ended: a reader that waits for it can zoom again at once.
+  const [settledZoom, setSettledZoom] = useState<number | null>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
@@ -126,6 +131,8 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
     map.on('moveend zoomend resize', () => setView((n) => n + 1));
+    map.on('zoomend', () => setSettledZoom(map.getZoom()));
+    setSettledZoom(map.getZoom());
     // The panels around the map resize (loop banner, window, splitter), and so does the key when it
     // is opened or closed; Leaflet must re-measure its box. Until the user pans or zooms, the map
     // keeps the whole network in view as its box changes.
@@ -137,6 +144,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     if (corner.current) resize.observe(corner.current);
     const stopAutoFit = () => (autoFit.current = false);
     element.current.addEventListener('wheel', stopAutoFit, { passive: true });
+    // Any pan or zoom by pointer or key (drag, the zoom buttons, +/-) is the user taking the view:
+    // a later resize of the box or the key must not fit the network again over it.
+    element.current.addEventListener('pointerdown', stopAutoFit);
+    element.current.addEventListener('keydown', stopAutoFit);
     element.current.addEventListener('mousedown', stopAutoFit);
     element.current.addEventListener('keydown', stopAutoFit);
     return () => {
@@ -242,7 +253,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         className="lw-map"
         ref={element}
         role="region"
-        aria-label={`Network map: ${depotCount} depots (${inView} in view), ${network?.laneFrom.length ?? 0} lanes${addedDrawn ? `, ${addedDrawn} lane(s) the scenario adds drawn dotted and labelled` : ''}${loopCount ? `, ${loopCount} rebate loop(s) drawn dashed, ${unbounded} unbounded depot(s) marked with a diamond` : ''}`}
+        aria-label={`Network map: ${counted(depotCount, 'depot')} (${inView} in view), ${counted(network?.laneFrom.length ?? 0, 'lane')}${addedDrawn ? `, ${counted(addedDrawn, 'lane')} only the scenario plans drawn dotted and labelled` : ''}${loopCount ? `, ${counted(loopCount, 'rebate loop')} drawn dashed, ${counted(unbounded, 'unbounded depot')} marked with a diamond` : ''}`}
         data-loops={loopCount}
         data-unbounded={unbounded}
         data-added-lanes={addedDrawn}
@@ -251,7 +262,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         data-depot-labels={labelCount}
         data-lanes-drawn={laneCounts?.drawn ?? ''}
         data-depot-canvas={bigNetwork ? 'yes' : 'no'}
-        data-zoom={map && view >= 0 ? map.getZoom() : ''}
+        data-zoom={settledZoom ?? ''}
       />
       <div className="lw-map-corner" ref={corner}>
         <div className="lw-map-tools" role="group" aria-label="Map view">

@@ -3,7 +3,7 @@
 // painted on canvases of their own (lane-canvas.ts), with level of detail.
 
 import L from 'leaflet';
-import { addedLaneName, addedLaneOf, type AddedLane } from '../model/added-lanes';
+import { addedLaneLabel, addedLaneOf, type AddedLane } from '../model/added-lanes';
 import type { NetworkView, RouteView, SolveView } from '../worker/protocol';
 import { textNode } from './dom-text';
 import { MAX_DIAMONDS, STYLE } from './map-style';
@@ -28,7 +28,7 @@ function segmentsOf(network: NetworkView, lanes: ArrayLike<number>, added: reado
   const out: Segments = [];
   for (let i = 0; i < lanes.length; i++) {
     const e = lanes[i];
-    // A lane the scenario adds is not in the network: its ends come from its change.
+    // A lane only the scenario plans is not in the network: its ends come from the solve's list.
     const extra = e < 0 ? addedLaneOf(added, e) : undefined;
     const known = e >= 0 && e < network.laneFrom.length;
     const a = extra ? extra.from : known ? network.laneFrom[e] : -1;
@@ -65,7 +65,7 @@ export function loopLayer(network: NetworkView, solve: SolveView, added: readonl
   return group;
 }
 
-/** Lanes the scenario adds: dotted lines over a casing, each with a permanent "added" label. */
+/** Lanes only the scenario plans: dotted lines over a casing, each with a permanent label ("Added", "Valid by scenario"). */
 export function addedLaneLayer(network: NetworkView, added: readonly AddedLane[], renderer: L.Renderer): L.Layer | null {
   const drawable = added.filter((a) => a.from >= 0 && a.to >= 0);
   if (drawable.length === 0) return null;
@@ -78,7 +78,7 @@ export function addedLaneLayer(network: NetworkView, added: readonly AddedLane[]
     group.addLayer(L.polyline(ends, { ...STYLE.addedCasing, renderer, interactive: false }));
     group.addLayer(L.polyline(ends, { ...STYLE.added, renderer, interactive: false }));
     const middle: L.LatLngExpression = [(network.lat[a.from] + network.lat[a.to]) / 2, (network.lon[a.from] + network.lon[a.to]) / 2];
-    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(textNode(`Added: ${addedLaneName(a.lane)}`)));
+    group.addLayer(L.tooltip({ permanent: true, direction: 'center', className: 'lw-added-label' }).setLatLng(middle).setContent(textNode(addedLaneLabel(a))));
   }
   return group;
 }

@@ -1,15 +1,25 @@
-// Lanes the active scenario adds ("add-lane" changes). They are not in the imported network, so the
-// map and the lane table read them from the scenario itself; an edit rewrites the change in place.
+// Lanes the active scenario puts into the plan that the base plan does not have: lanes it adds
+// ("add-lane") and lanes-file rows a validity change brings into the date. They are not in the
+// drawn network, so the worker lists them with each solve from the engine's overlay (the network it
+// rebuilt), like every other row's amounts; the map draws them and the lane table lists them. An
+// added lane's edit rewrites its change in place.
 
-import { netCostOrNull, type NewLane } from '../../engine/index';
+import type { NewLane } from '../../engine/index';
 import type { EditableField, Scenario } from './scenario-edits';
 
-/** One lane the scenario adds, as the map and the lane table show it. */
+/** One lane in the plan only because of the scenario, as the map and the lane table show it. */
 export interface AddedLane {
-  /** Position of its change in `scenario.changes` (what an edit or removal names). */
+  /** How solve results (tree, route, loop lanes) name it: `addedLaneRef(index in the solve's list)`. */
+  ref: number;
+  /** 'added': an add-lane change; 'row': a lanes-file row a validity change brings into the date. */
+  kind: 'added' | 'row';
+  /** Position of the change that brings it in `scenario.changes` (what an edit or removal names); -1 when none is found. */
   changeIndex: number;
+  /** Lanes-file row as a spreadsheet numbers it, for kind 'row'; null for an added lane. */
+  sourceRow: number | null;
+  /** Its values under the scenario, as the overlay planned them (amounts for the class on screen). */
   lane: NewLane;
-  /** Depot indices in the network; -1 when the file has no such depot (the change is a problem). */
+  /** Depot indices in the network. */
   from: number;
   to: number;
   netMinor: number;
@@ -22,23 +32,9 @@ const FIELD_OF: Record<EditableField, 'tollMinor' | 'fuelMinor' | 'feesMinor' | 
   rebate: 'rebateMinor',
 };
 
-/** The scenario's added lanes in change order, located on the network's depots. */
-export function addedLanes(depotIds: readonly string[], scenario: Scenario | null): AddedLane[] {
-  if (!scenario || !scenario.changes.some((c) => c.kind === 'add-lane')) return [];
-  // Made only when the scenario adds a lane: a map of 50,000 depot ids on every edit froze the page.
-  const index = new Map(depotIds.map((id, d) => [id, d]));
-  const out: AddedLane[] = [];
-  scenario.changes.forEach((change, changeIndex) => {
-    if (change.kind !== 'add-lane') return;
-    const l = change.lane;
-    out.push({ changeIndex, lane: l, from: index.get(l.from) ?? -1, to: index.get(l.to) ?? -1, netMinor: netCostOrNull(l.tollMinor, l.fuelMinor, l.feesMinor, l.rebateMinor) ?? NaN });
-  });
-  return out;
-}
-
-/** True when both lists name the same changes with the same lanes (so map layers built on them stay). */
+/** True when both lists name the same lanes with the same values (so map layers built on them stay). */
 export function sameAddedLanes(a: readonly AddedLane[], b: readonly AddedLane[]): boolean {
-  return a.length === b.length && a.every((x, i) => x.changeIndex === b[i].changeIndex && x.lane === b[i].lane && x.from === b[i].from && x.to === b[i].to);
+  return a.length === b.length && a.every((x, i) => x.ref === b[i].ref && x.changeIndex === b[i].changeIndex && x.from === b[i].from && x.to === b[i].to && x.netMinor === b[i].netMinor && JSON.stringify(x.lane) === JSON.stringify(b[i].lane));
 }
 
 /** One amount of an added lane (minor units). */
@@ -56,19 +52,24 @@ export function setAddedLaneAmount(scenario: Scenario, changeIndex: number, fiel
 }
 
 /**
- * How solve results (route lanes, tree lanes, loop lanes) name a lane the scenario adds: -2 minus the
- * index of its change. -1 stays "an added lane not traced to its change"; 0 and up are network lanes.
+ * How solve results name the k-th lane of the solve's `extraLanes`: -2 - k. -1 stays "a lane not
+ * traced"; 0 and up are network lanes.
  */
-export function addedLaneRef(changeIndex: number): number {
-  return -2 - changeIndex;
+export function addedLaneRef(index: number): number {
+  return -2 - index;
 }
 
 /** The added lane a result lane names, or undefined for a network lane or an untraced one. */
 export function addedLaneOf(added: readonly AddedLane[], lane: number): AddedLane | undefined {
-  return lane <= -2 ? added.find((a) => a.changeIndex === -2 - lane) : undefined;
+  return lane <= -2 ? added.find((a) => a.ref === lane) : undefined;
 }
 
-/** "RTM → MIL (WHATIF-1)": how the map label and the table name an added lane. */
+/** "RTM → MIL (WHATIF-1)": how the map label and the table name such a lane. */
 export function addedLaneName(lane: NewLane): string {
   return `${lane.from} → ${lane.to}${lane.ref ? ` (${lane.ref})` : ''}`;
+}
+
+/** The map's label: "Added: RTM → MIL (WHATIF-1)", or "Valid by scenario: ..." for a file row. */
+export function addedLaneLabel(a: AddedLane): string {
+  return `${a.kind === 'added' ? 'Added' : 'Valid by scenario'}: ${addedLaneName(a.lane)}`;
 }

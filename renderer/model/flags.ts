@@ -7,9 +7,13 @@ export const FLAG_LONG_DRIVE = 4;
 export const FLAG_NEGATIVE_COST = 8;
 export const FLAG_DRIVE_UNKNOWN = 16;
 
+/** What "limit hides loop" means, for the help line under the results table and the flag's title. */
+export const LIMIT_HIDES_LOOP_HELP =
+  'the cost shown is finite only because of the Maximum legs limit; without the limit a rebate loop (a circuit whose rebates exceed its costs) makes this depot unbounded, so the contract still needs fixing.';
+
 const NAMES: readonly [number, string, string][] = [
   [FLAG_UNBOUNDED, 'rebate loop', 'Cost unbounded: reachable through a rebate loop with negative net cost'],
-  [FLAG_LIMIT_HIDES_LOOP, 'limit hides loop', 'Cost is finite only because of the leg limit; without it a rebate loop makes it unbounded'],
+  [FLAG_LIMIT_HIDES_LOOP, 'limit hides loop', `Limit hides loop: ${LIMIT_HIDES_LOOP_HELP}`],
   [FLAG_LONG_DRIVE, 'over daily driving limit', 'Drive time exceeds the daily driving limit of the planning settings; a rest or a second driver is needed'],
   [FLAG_NEGATIVE_COST, 'earns money', 'Net route cost below zero: rebates exceed costs; check the contract terms'],
   [FLAG_DRIVE_UNKNOWN, 'drive time unknown', 'At least one lane on the route has no drive time'],

@@ -23,7 +23,7 @@ export function routeSheetOf(network: NetworkView, solve: SolveView, amounts: La
       if (!a) return;
       const l = a.lane;
       legs.push({
-        from: l.from, to: l.to, ref: l.ref, row: null, distanceKm: l.distanceKm, driveMinutes: l.driveMinutes,
+        from: l.from, to: l.to, ref: l.ref, row: a.sourceRow, distanceKm: l.distanceKm, driveMinutes: l.driveMinutes,
         tollMinor: l.tollMinor, fuelMinor: l.fuelMinor, feesMinor: l.feesMinor, rebateMinor: l.rebateMinor,
         validFrom: l.validFrom, validTo: l.validTo, clause: null, distanceEstimated: false, fuelEstimated: false, driveEstimated: false,
       });

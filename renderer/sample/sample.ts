@@ -1,4 +1,4 @@
-// The bundled sample scenario (fictional carrier Brightwater & Fennick Haulage) so a first run shows
+// The bundled sample carrier (fictional carrier Brightwater & Fennick Haulage) so a first run shows
 // a working plan at once, offline, and the loop variant for seeing the rebate-loop warning.
 
 import depotsText from '../../sample-data/depots.csv?raw';

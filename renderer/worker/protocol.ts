@@ -1,7 +1,8 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { ChangeView, CsvDialect, EstimateRules, PlanAmounts, PlanningChoices } from '../../engine/index';
+import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
+import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
@@ -139,8 +140,8 @@ export interface LoopView {
   netPerLap: number;
 }
 
-// Lanes in results (loop lanes, tree lanes, route lanes) are network lane indices; a lane the
-// scenario adds is -2 minus its change's index (model/added-lanes.ts), -1 when it cannot be traced.
+// Lanes in results (loop lanes, tree lanes, route lanes) are network lane indices; a lane only the
+// scenario plans is -2 minus its index in `SolveView.extraLanes` (model/added-lanes.ts).
 
 /** Result of one solve, per depot (index = depot index). */
 export interface SolveView {
@@ -158,8 +159,16 @@ export interface SolveView {
   /** Lanes drawn as the cheapest-route tree (each reachable depot's last lane). */
   treeLanes: Int32Array;
   loops: LoopView[];
-  /** Same arrays for the scenario's base (no edits), when the scenario has edits. */
-  base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null;
+  /**
+   * Same arrays for the scenario's base (no edits), when the scenario has edits, and per depot
+   * whether its cheapest route changed (1) as `lanewright compare` says it: other lanes, or another status.
+   */
+  base: { status: Uint8Array; cost: Float64Array; legs: Int32Array; routeChanged: Uint8Array } | null;
+  /**
+   * Lanes in the plan only because of the scenario (added lanes, rows a validity change brings into
+   * the date), from the engine's overlay; results name the k-th as `addedLaneRef(k)`.
+   */
+  extraLanes: AddedLane[];
   /** The lane amounts and changes the solve was made with. */
   overlay: OverlayView;
   solveMs: number;
@@ -186,7 +195,11 @@ export interface RouteView {
   estimateRules?: EstimateRules;
 }
 
-export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson';
+/**
+ * What the worker exports. `review-csv` and `calendar-review-csv` are the contract review last made
+ * (the Contract review tab); `compare-csv` compares the active scenario with the base from the origin.
+ */
+export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson' | 'review-csv' | 'calendar-review-csv' | 'compare-csv';
 
 export interface WorkerErrorView {
   name: string;

@@ -10,11 +10,11 @@ import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { exportText } from './exports';
 import { currencyKey, importTexts, replanImport, reportOf } from './import-texts';
 import { laneOfRows, networkView, transferablesOf } from './network-view';
-import type { FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
+import type { ContractReviewView, FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
-import { laneRefsOf, onBaseLanes, pathOf, scenarioSolveInput, solveFor, solveTransferables, solveView, type Solved } from './solve-plan';
+import { onBaseLanes, rebuiltLanesOf, pathOf, routeChanges, scenarioSolveInput, solveFor, solveTransferables, solveView, type Solved } from './solve-plan';
 
 export type Post = (message: FromWorker, transfer?: ArrayBuffer[]) => void;
 
@@ -36,12 +36,14 @@ export class WorkerSession {
   private rowIndex: OverlayIndex | null = null;
   /** The texts of the last accepted import: a new currency or rates means reading them again. */
   private texts: { depots: NamedText; lanes: NamedText } | null = null;
-  private base: { status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
+  private base: { solved: Solved; status: Uint8Array; cost: Float64Array; legs: Int32Array } | null = null;
   /** Names and SHA-256 of the texts last loaded, for the printable review (hashed as they arrive). */
   private files: ReviewedFile[] = [];
   /** Settles once the loaded files' SHA-256 (named in the review report) are known. */
   filesHashed: Promise<void> = Promise.resolve();
   private loads = 0;
+  /** The contract review last made, for its CSV exports; a new import or plan drops it. */
+  private reviewed: { scenario: Scenario | null; report: ContractReviewView } | null = null;
 
   constructor(private readonly post: Post) {}
 
@@ -74,7 +76,7 @@ export class WorkerSession {
       }
       case 'export': {
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
-        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name) };
+        const ctx = { imported: this.imported, network: this.need(), settings: this.settings, scenario: this.scenario, date: this.plan.date || null, vehicleClass: this.plan.vehicleClass || null, files: this.files.map((f) => f.name), review: this.reviewed };
         const file = exportText(ctx, message.what, message.dialect);
         this.post({ kind: 'exported', id: message.id, ...file });
         return;
@@ -89,7 +91,9 @@ export class WorkerSession {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
         const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
-        this.post({ kind: 'reviewed', id: message.id, review: reviewContract(this.imported, this.need(), message.scenario, progress, context) });
+        const review = reviewContract(this.imported, this.need(), message.scenario, progress, context);
+        this.reviewed = { scenario: message.scenario, report: review };
+        this.post({ kind: 'reviewed', id: message.id, review });
         return;
       }
       default: {
@@ -115,6 +119,7 @@ export class WorkerSession {
     this.solvedId = null;
     this.base = null;
     this.baseKey = '';
+    this.reviewed = null;
     const view = networkView(result, plan, this.rowIndex!.keys);
     this.post({ kind: 'loaded', id, network: view, report: reportOf(result) }, transferablesOf(view));
   }
@@ -164,10 +169,11 @@ export class WorkerSession {
     if (input.rebuilt) {
       // The scenario changes which rows are planned (added lanes, validity, a class copy): the
       // engine plans the overlay's network, and the answer is mapped back onto the base lanes.
-      const laneRefs = laneRefsOf(input.rebuilt, this.laneOfRow);
+      const lanes = rebuiltLanesOf(input.rebuilt, this.laneOfRow, this.imported!, scenario!);
+      const laneRefs = lanes.laneRefs;
       this.solved = solveFor(input.rebuilt.network, settings);
       this.solvedOn = { network: input.rebuilt.network, laneRefs };
-      view = onBaseLanes(solveView(input.rebuilt.network, settings, this.solved, performance.now() - started, driveLimit, input.overlay), laneRefs);
+      view = onBaseLanes(solveView(input.rebuilt.network, settings, this.solved, performance.now() - started, driveLimit, input.overlay), lanes);
     } else {
       this.solved = solveFor(network, settings, input.weights);
       this.solvedOn = null;
@@ -177,10 +183,12 @@ export class WorkerSession {
       const key = JSON.stringify(settings);
       if (key !== this.baseKey || !this.base) {
         const base = solveFor(network, settings);
-        this.base = { status: base.status.slice(), cost: base.cost.slice(), legs: base.legs.slice() };
+        this.base = { solved: base, status: base.status.slice(), cost: base.cost.slice(), legs: base.legs.slice() };
         this.baseKey = key;
       }
-      view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice() };
+      const on = this.solvedOn;
+      const routeChanged = routeChanges(network, this.base.solved, on ? on.network : network, this.solved, on ? on.laneRefs : null);
+      view.base = { status: this.base.status.slice(), cost: this.base.cost.slice(), legs: this.base.legs.slice(), routeChanged };
     }
     this.post({ kind: 'solved', id, result: view }, solveTransferables(view));
   }

@@ -10,7 +10,8 @@ import { legLimitedRoutes, type LegLimitedRoutes } from '../../engine/index';
 import { routePath } from '../../engine/index';
 import type { ImportResult, OverlayIndex, OverlayNetwork } from '../../engine/index';
 import { buildOverlay, describeChanges, overlayNetwork, overlayPlanAmounts, overlayRowAmounts, planRequestOf } from '../../engine/index';
-import { addedLaneRef } from '../model/added-lanes';
+import { addedLaneRef, type AddedLane } from '../model/added-lanes';
+import { laneKeyId } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
 import { FLAG_DRIVE_UNKNOWN, FLAG_LIMIT_HIDES_LOOP, FLAG_LONG_DRIVE, FLAG_NEGATIVE_COST, FLAG_UNBOUNDED } from '../model/flags';
 import type { OverlayView, PlanSettings, RouteView, SolveView } from './protocol';
@@ -114,8 +115,9 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
   const anyDriveData = network.laneDriveMinutes.some((m) => !Number.isNaN(m));
   for (let d = 0; d < n; d++) {
     if (solved.status[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_UNBOUNDED;
-    if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
     if (solved.status[d] !== STATUS_REACHABLE) continue;
+    // Only a cost on screen can be hidden: a depot the limit leaves unreachable shows no cost at all.
+    if (limited && solved.unlimitedStatus[d] === STATUS_UNBOUNDED) flags[d] |= FLAG_LIMIT_HIDES_LOOP;
     if (solved.cost[d] < 0) flags[d] |= FLAG_NEGATIVE_COST;
     let last = -1;
     if (limited) {
@@ -145,27 +147,126 @@ export function solveView(network: Network, settings: PlanSettings, solved: Solv
     treeLanes: Int32Array.from(treeLaneList),
     loops: solved.loops.map((loop) => ({ depots: loop.depots, lanes: loop.lanes, netPerLap: loop.netPerLap })),
     base: null,
+    extraLanes: [],
     overlay,
     solveMs,
   };
 }
 
 /**
- * How the UI names each lane of a network the scenario rebuilt: the base network lane of its row
- * (`laneOfRow`), or for a lane the scenario added `addedLaneRef(change index)`; -1 for a row the
- * base plan does not have (e.g. one a validity change brings into the date).
+ * Per depot, 1 when its cheapest route under the scenario differs from the base's: another status,
+ * or other lanes (a re-priced lane is the same lane), as `compareImport` decides it for the CLI.
+ * `laneRefs` names the scenario network's lanes as base lanes when it was rebuilt (else null).
  */
-export function laneRefsOf(rebuilt: OverlayNetwork, laneOfRow: Int32Array): Int32Array {
-  return Int32Array.from(rebuilt.baseRow, (row, e) => (row >= 0 ? laneOfRow[row] : rebuilt.addedBy[e] >= 0 ? addedLaneRef(rebuilt.addedBy[e]) : -1));
+export function routeChanges(baseNetwork: Network, base: Solved, network: Network, solved: Solved, laneRefs: Int32Array | null): Uint8Array {
+  if (!('maxLegs' in base) && !('maxLegs' in solved)) return treeRouteChanges(baseNetwork, base, solved, laneRefs);
+  const n = baseNetwork.depotCount;
+  const changed = new Uint8Array(n);
+  for (let d = 0; d < n; d++) {
+    if (base.status[d] !== solved.status[d]) {
+      changed[d] = 1;
+      continue;
+    }
+    if (solved.status[d] !== STATUS_REACHABLE) continue;
+    const before = pathOf(baseNetwork, base, d)?.lanes ?? [];
+    const after = pathOf(network, solved, d)?.lanes ?? [];
+    const same = before.length === after.length && after.every((e, i) => (laneRefs ? laneRefs[e] : e) === before[i]);
+    if (!same) changed[d] = 1;
+  }
+  return changed;
+}
+
+/**
+ * routeChanges on two route trees in one pass down the tree (depots in order of legs): a route
+ * changed when its last lane differs or the route to that lane's start changed. Equal to comparing
+ * whole paths (route-changed.test.ts), without walking one per depot.
+ */
+function treeRouteChanges(baseNetwork: Network, base: RouteTree, solved: RouteTree, laneRefs: Int32Array | null): Uint8Array {
+  const n = baseNetwork.depotCount;
+  const changed = new Uint8Array(n);
+  // Depots reachable on both sides, bucketed by their legs in the base tree.
+  let maxLegs = 0;
+  for (let d = 0; d < n; d++) if (base.status[d] === STATUS_REACHABLE && base.legs[d] > maxLegs) maxLegs = base.legs[d];
+  const buckets: number[][] = Array.from({ length: maxLegs + 1 }, () => []);
+  for (let d = 0; d < n; d++) {
+    if (base.status[d] !== solved.status[d]) changed[d] = 1;
+    else if (solved.status[d] === STATUS_REACHABLE) buckets[base.legs[d]].push(d);
+  }
+  for (const bucket of buckets) {
+    for (const d of bucket) {
+      const before = base.viaLane[d];
+      const after = solved.viaLane[d] < 0 ? solved.viaLane[d] : laneRefs ? laneRefs[solved.viaLane[d]] : solved.viaLane[d];
+      if (before !== after) changed[d] = 1;
+      else if (before >= 0) changed[d] = changed[baseNetwork.laneFrom[before]];
+    }
+  }
+  return changed;
+}
+
+/** How the UI names the lanes of a network the scenario rebuilt, and the lanes the base plan lacks. */
+export interface RebuiltLanes {
+  /** Per rebuilt lane: the base network lane of its row, or `addedLaneRef(k)` for `extra[k]`. */
+  laneRefs: Int32Array;
+  /** Lanes in the plan only because of the scenario: added lanes and rows brought into the date. */
+  extra: AddedLane[];
+}
+
+/**
+ * Names each lane of a network the scenario rebuilt (see RebuiltLanes). A lane whose row the base
+ * plan has is that base lane; every other lane (one the scenario adds, or a file row a validity
+ * change brings into the date) is listed in `extra` with its values from the overlay's network.
+ */
+export function rebuiltLanesOf(rebuilt: OverlayNetwork, laneOfRow: Int32Array, imported: ImportResult, scenario: Scenario): RebuiltLanes {
+  const net = rebuilt.network;
+  const baseIndex = imported.network?.depotIndex ?? net.depotIndex;
+  const validityChange = new Map<string, number>();
+  scenario.changes.forEach((c, i) => {
+    if (c.kind === 'set-validity') validityChange.set(laneKeyId(c.lane), i);
+  });
+  const extra: AddedLane[] = [];
+  const laneRefs = Int32Array.from(rebuilt.baseRow, (row, e) => {
+    if (row >= 0 && laneOfRow[row] >= 0) return laneOfRow[row];
+    const ref = addedLaneRef(extra.length);
+    const key = rebuilt.keys[e];
+    const added = rebuilt.addedBy[e];
+    const change = added >= 0 ? added : (validityChange.get(laneKeyId(key)) ?? -1);
+    const found = change >= 0 ? scenario.changes[change] : undefined;
+    const validity = found && found.kind !== 'close-lane' && found.kind !== 'set-amount' ? (found.kind === 'add-lane' ? found.lane : found) : null;
+    extra.push({
+      ref,
+      kind: added >= 0 ? 'added' : 'row',
+      changeIndex: change,
+      sourceRow: added >= 0 || row < 0 ? null : imported.lanes.sourceRow[row],
+      lane: {
+        from: key.from,
+        to: key.to,
+        ref: key.ref,
+        tollMinor: net.laneToll[e],
+        fuelMinor: net.laneFuel[e],
+        feesMinor: net.laneFees[e],
+        rebateMinor: net.laneRebate[e],
+        validFrom: validity?.validFrom ?? null,
+        validTo: validity?.validTo ?? null,
+        distanceKm: Number.isNaN(net.laneDistanceKm[e]) ? null : net.laneDistanceKm[e],
+        driveMinutes: Number.isNaN(net.laneDriveMinutes[e]) ? null : net.laneDriveMinutes[e],
+      },
+      from: baseIndex.get(key.from) ?? -1,
+      to: baseIndex.get(key.to) ?? -1,
+      netMinor: net.laneNet[e],
+    });
+    return ref;
+  });
+  return { laneRefs, extra };
 }
 
 /**
  * A solve made on a network the scenario rebuilt, with its lanes renamed as the UI knows them
- * (`laneRefsOf`); an added lane that cannot be traced (-1) is left out of the tree.
+ * (`rebuiltLanesOf`) and the lanes only the scenario plans listed with it.
  */
-export function onBaseLanes(view: SolveView, laneRefs: Int32Array): SolveView {
+export function onBaseLanes(view: SolveView, { laneRefs, extra }: RebuiltLanes): SolveView {
   return {
     ...view,
+    extraLanes: extra,
     treeLanes: Int32Array.from(view.treeLanes, (e) => laneRefs[e]).filter((e) => e !== -1),
     loops: view.loops.map((loop) => ({ ...loop, lanes: loop.lanes.map((e) => laneRefs[e]) })),
   };

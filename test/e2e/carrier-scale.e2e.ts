@@ -220,6 +220,9 @@ describe('50,000 depots and 500,000 lanes', () => {
       const before = Number(await map(page).getAttribute('data-zoom'));
       await page.getByRole('button', { name: 'Zoom in' }).click();
       await expect.poll(async () => Number(await map(page).getAttribute('data-zoom'))).toBeGreaterThan(before);
+      // The zoom the map states is the settled one: its animation is over, so the next "Zoom in"
+      // is taken (Leaflet ignores a zoom asked for while one is animating).
+      expect(await page.locator('.leaflet-map-pane.leaflet-zoom-anim').count()).toBe(0);
     }
     const zoomProbe = await takeProbe(page);
     figures.longest_ui_task_while_panning_ms = longest(panProbe.longTasks);

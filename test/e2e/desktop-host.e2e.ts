@@ -84,7 +84,7 @@ describe('renderer under the desktop host', () => {
     expect(await saves(page)).toEqual([]);
     const before = await solveCount(page);
     await menu(page, { command: 'new-workspace' });
-    await expect.poll(() => statusMessage(page)).toMatch(/Opened the sample scenario/);
+    await expect.poll(() => statusMessage(page)).toMatch(/Opened the sample carrier\./);
     await waitForPlan(page, before);
     await menu(page, { command: 'save', thenQuit: false });
     await expect.poll(() => saves(page)).toHaveLength(1);
@@ -104,17 +104,17 @@ describe('renderer under the desktop host', () => {
     expect(await dataset(page)).not.toMatch(/unsaved/);
     await makeEdit(page, '2');
     const solves = await solveCount(page);
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     await prompt(page).waitFor();
     expect(await prompt(page).getAttribute('aria-describedby')).toBeTruthy();
     const description = await page.locator(`#${await prompt(page).getAttribute('aria-describedby')}`).innerText();
-    expect(description).toMatch(/sample with a rebate loop.*replaces the workspace/i);
+    expect(description).toMatch(/sample carrier with a rebate loop.*replaces the workspace/i);
     expect(await page.evaluate(() => document.activeElement?.textContent)).toBe('Cancel');
     await page.keyboard.press('Escape');
     await expect.poll(() => prompt(page).count()).toBe(0);
     expect(await dataset(page)).toMatch(/sample:lanes\.csv • unsaved/);
 
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     await prompt(page).getByRole('button', { name: 'Cancel' }).click();
     await expect.poll(() => prompt(page).count()).toBe(0);
     expect(await dataset(page)).toMatch(/sample:lanes\.csv • unsaved/);
@@ -125,7 +125,7 @@ describe('renderer under the desktop host', () => {
 
   it('Discard replaces the workspace without saving', async () => {
     const before = await solveCount(page);
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     await prompt(page).getByRole('button', { name: 'Discard' }).click();
     await expect.poll(() => dataset(page)).toMatch(/sample:lanes-rebate-loop\.csv$/);
     await waitForPlan(page, before);
@@ -135,14 +135,14 @@ describe('renderer under the desktop host', () => {
   it('Save saves through the host first, then replaces; a failed save keeps the workspace', async () => {
     await makeEdit(page, '');
     await failNextSave(page);
-    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await page.getByRole('button', { name: 'Sample carrier', exact: true }).click();
     await prompt(page).getByRole('button', { name: 'Save' }).click();
     await expect.poll(() => statusMessage(page)).toMatch(/Not saved: .*disk full/);
     expect(await dataset(page)).toMatch(/sample:lanes-rebate-loop\.csv • unsaved/);
     expect(await saves(page)).toHaveLength(2);
 
     const before = await solveCount(page);
-    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await page.getByRole('button', { name: 'Sample carrier', exact: true }).click();
     await prompt(page).getByRole('button', { name: 'Save' }).click();
     await expect.poll(() => dataset(page)).toMatch(/sample:lanes\.csv$/);
     await waitForPlan(page, before);

@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { importNetwork } from '../../engine/planning/import-network';
-import { offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { editLaneAmount, offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
 import { sample } from './support/expected';
 
 let session: Session;
@@ -26,7 +26,11 @@ afterAll(async () => {
 });
 
 async function exportMenu(value: string): Promise<{ name: string; text: string }> {
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByLabel('Export', { exact: true }).selectOption(value)]);
+  return downloaded(() => page.getByLabel('Export', { exact: true }).selectOption(value));
+}
+
+async function downloaded(click: () => Promise<unknown>): Promise<{ name: string; text: string }> {
+  const [download] = await Promise.all([page.waitForEvent('download'), click()]);
   return { name: download.suggestedFilename(), text: readFileSync(await download.path(), 'utf8') };
 }
 
@@ -72,6 +76,29 @@ describe('exports', () => {
     const json = JSON.parse(geo.text) as { caution: string; settings: { date: string; vehicle_class: string; files: string[]; scenario: string | null } };
     expect(json.settings).toEqual({ date, vehicle_class: '2axle', files: ['sample:depots.csv', 'sample:lanes.csv'], scenario: null });
     expect(json.caution).toMatch(/estimate/i);
+  });
+
+  it('exports the scenario comparison and the contract review as CSV in the chosen format', async () => {
+    await editLaneAmount(page, 'rebate', 0, '1.00');
+    const date = await page.getByLabel('Dispatch date').inputValue();
+    const comparison = await downloaded(() => page.getByRole('button', { name: 'Export comparison (CSV)' }).click());
+    expect(comparison.name).toMatch(new RegExp(`^comparison-RTM-${date}-2axle-.+\\.csv$`));
+    expect(comparison.text.charCodeAt(0)).toBe(0xfeff); // the semicolon / comma / BOM choice made above
+    const head = comparison.text.slice(1).split('\r\n')[0];
+    expect(head).toBe('id;name;base_status;scenario_status;base_cost;scenario_cost;change;route_changed;base_route;scenario_route');
+    expect(comparison.text).toMatch(/;(yes|no);/);
+
+    await page.getByRole('tab', { name: /Contract review/ }).click();
+    await page.getByTestId('contract-review').waitFor();
+    // One name pair for the same figures in the app, the CSV (floor, headroom) and the JSON (floor_minor, headroom_minor).
+    const headroomHead = await page.locator('table[aria-label="Rebate headroom per lane"] thead').innerText();
+    expect(headroomHead).toMatch(/Floor\s+Headroom/);
+    const review = await downloaded(() => page.getByRole('button', { name: 'Export one-day review (CSV)' }).click());
+    expect(review.name).toMatch(new RegExp(`^contract-review-${date}-2axle-.+\\.csv$`));
+    expect(review.text.slice(1).split('\r\n')[0]).toMatch(/^row;from;to;ref;.*;floor;headroom$/);
+    const calendar = await downloaded(() => page.getByRole('button', { name: 'Export calendar review (CSV)' }).click());
+    expect(calendar.name).toMatch(/^calendar-review-.*\.csv$/);
+    expect(parseCsvText(calendar.text.slice(1)).delimiter).toBe(';');
   });
 
   it('made no request outside localhost and logged no errors', () => {

@@ -55,7 +55,7 @@ describe('5,000 depots and 50,000 lanes', () => {
     const importButton = dialog.getByRole('button', { name: 'Import', exact: true });
     expect(await importButton.getAttribute('aria-disabled')).toBe('true');
     expect(await importButton.getAttribute('title')).toMatch(/import is running/);
-    for (const name of ['Sample plan', 'Sample with rebate loop', 'Import CSV…']) expect(await page.getByRole('button', { name, includeHidden: true }).getAttribute('aria-disabled'), name).toBe('true');
+    for (const name of ['Sample carrier', 'Sample carrier with rebate loop', 'Import CSV…']) expect(await page.getByRole('button', { name, exact: true, includeHidden: true }).getAttribute('aria-disabled'), name).toBe('true');
     const solvesBeforeCancel = await solveCount(page);
     await dialog.getByRole('button', { name: 'Import', exact: true }).focus();
     await page.keyboard.press('Tab');

@@ -41,7 +41,7 @@ describe.each([
     page = session.page;
     await page.getByRole('button', { name: 'I understand' }).click();
     await waitForPlan(page);
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     const banner = page.getByRole('alert').filter({ hasText: 'Rebate loop' });
     await banner.waitFor();
     await waitForPlan(page);
@@ -106,7 +106,7 @@ describe.each([
   });
 
   it('keeps the heights of map and panel when a route is selected', async () => {
-    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await page.getByRole('button', { name: 'Sample carrier', exact: true }).click();
     await waitForPlan(page);
     await page.getByRole('tab', { name: 'Results' }).click();
     const before = await heights(page);

@@ -67,7 +67,7 @@ describe('Loads panel', () => {
 
   it('shows alternatives for a planned load on request', async () => {
     await page.locator('tr[data-load="L-0815-05"]').click();
-    await page.getByLabel(/alternative route\(s\) on the map/).check();
+    await page.getByLabel(/alternative routes? on the map/).check();
     const detail = page.locator('[data-testid="load-detail"]');
     expect(await detail.locator('ol li').count()).toBeGreaterThan(0);
     expect(await detail.innerText()).toMatch(/Alt 1: .* \(\+/);

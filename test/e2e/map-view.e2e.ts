@@ -95,7 +95,7 @@ describe.each([
   });
 
   it('keeps the key clear of the loop label, and folds the key away', async () => {
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     await page.getByRole('alert').filter({ hasText: 'Rebate loop' }).waitFor();
     await waitForPlan(page);
     const toggle = page.getByRole('button', { name: /^Map key/ });

@@ -36,7 +36,7 @@ describe('calendar review and its report', () => {
     const expected = calendarReport(imported, reviewCalendar(imported));
     expect(expected.loops.length).toBe(2);
 
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     await waitForPlan(page);
     await page.getByLabel('Dispatch date').fill('2026-11-01');
     await waitForPlan(page);
@@ -123,7 +123,7 @@ describe('calendar review and its report', () => {
     await page.getByRole('button', { name: 'Apply this fix plan (by clause) as a scenario' }).click();
     // The review runs again under the what-if: no loop in any period.
     await expect.poll(() => review.innerText(), { timeout: 60_000 }).toMatch(/Rebate loops in the whole contract, 2026-01-01 to 2027-06-30 \(scenario “[^”]+”\): 0/);
-    expect(await review.innerText()).toMatch(/the contract as the scenario “[^”]+” changes it \(3 of 3 change\(s\) applied\)/);
+    expect(await review.innerText()).toMatch(/the contract as the scenario “[^”]+” changes it \(3 of 3 changes applied\)/);
     // The Export menu's review report is the calendar under the same what-if.
     const [exported] = await Promise.all([page.waitForEvent('download'), page.getByLabel('Export', { exact: true }).selectOption('review-html')]);
     expect(exported.suggestedFilename()).toMatch(/^contract-review-2026-01-01-2027-06-30.*\.html$/);

@@ -110,7 +110,7 @@ describe('workspace in the browser', () => {
   });
 
   it('warns about the rebate loop, marks unbounded depots and draws the loop on the map', async () => {
-    await page.getByRole('button', { name: 'Sample with rebate loop' }).click();
+    await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     const alert = page.getByRole('alert').filter({ hasText: 'Rebate loop' });
     await alert.waitFor();
     await waitForPlan(page);
@@ -184,6 +184,9 @@ describe('workspace in the browser', () => {
     expect(await compare.getByRole('button', { name: /^Undo change 1: .*rebate \d+\.\d\d → 0\.00$/ }).count()).toBe(1);
     expect(await compare.locator('[data-moved-depot]').count()).toBeGreaterThan(0);
     expect(await compare.innerText()).toMatch(/unbounded → reachable/);
+    // Whether each depot's route changed, as lanewright compare says it: a depot freed from the loop has a route again.
+    expect(await compare.locator('thead').innerText()).toMatch(/Route/);
+    expect(await compare.locator('[data-moved-depot][data-route-changed="yes"]').count()).toBeGreaterThan(0);
     await snap(page, 'scenario-edit');
     await page.getByRole('tab', { name: 'Results' }).click();
     expectCostsMatch(await shownCosts(page), expected.cost, expected.unbounded);
@@ -199,7 +202,11 @@ describe('workspace in the browser', () => {
     };
     await page.getByRole('tab', { name: /Lanes/ }).click();
     const before = await solveCount(page);
-    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Load a scenario file…' }).click()]);
+    // The rebate edit of the test before is in no scenario file: browser mode asks before replacing it.
+    await page.getByRole('button', { name: 'Load a scenario file…' }).click();
+    const asked = page.getByRole('dialog', { name: 'Unsaved changes' });
+    await asked.waitFor();
+    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), asked.getByRole('button', { name: 'Discard' }).click()]);
     await chooser.setFiles({ name: 'direct-milan.json', mimeType: 'application/json', buffer: Buffer.from(serializeScenarioDocument(scenario), 'utf8') });
     await waitForPlan(page, before);
     const compare = page.locator('[data-testid="scenario-compare"]');
@@ -265,6 +272,8 @@ describe('workspace in the browser', () => {
     expect(engineReport.errors.length).toBeGreaterThanOrEqual(5);
 
     await page.getByRole('button', { name: 'Import CSV…' }).click();
+    // Removing the added lane left an edit no scenario file holds: asked first.
+    await page.getByRole('dialog', { name: 'Unsaved changes' }).getByRole('button', { name: 'Discard' }).click();
     const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'depots.csv', sample('depots.csv'));
     await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'lanes-broken.csv', broken);
@@ -286,13 +295,15 @@ describe('workspace in the browser', () => {
     await expect.poll(() => page.locator('.lw-status').innerText()).toContain(`${planned.depotCount} depots · ${planned.laneCount} lanes`);
     await waitForPlan(page);
     expect(await page.locator('.lw-dataset').innerText()).toContain('lanes-broken.csv');
+    // A new import starts without what-if edits (they named rows of the files before and stayed).
+    expect(await page.getByRole('tab', { name: /Lanes & scenario/ }).innerText()).not.toMatch(/changed/);
     // The rejected rows stay listed in the import report tab.
     await page.getByRole('tab', { name: /Import report/ }).click();
     expect(await page.locator('[data-testid="import-report"] table tbody tr').count()).toBe(engineReport.errors.length);
   });
 
   it('exports the routes CSV, which re-reads to the costs the engine gives', async () => {
-    await page.getByRole('button', { name: 'Sample plan' }).click();
+    await page.getByRole('button', { name: 'Sample carrier', exact: true }).click();
     await waitForPlan(page);
     await page.getByRole('tab', { name: 'Results' }).click();
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export routes CSV' }).click()]);

@@ -17,6 +17,7 @@ import { clauseOf } from '../../import/lane-clause';
 import type { CalendarFixPlan, CalendarFixChange } from './lane-fix-plan';
 import type { PeriodNetwork } from './period-networks';
 import { firstLoopUnder } from './period-weights';
+import { counted } from '../../text/plural';
 
 export interface ClauseFixOptions {
   /** Per LaneTable row: 1 when negotiable. A clause is negotiable when any of its rows is. */
@@ -137,8 +138,8 @@ export function clauseFixPlan(table: LaneTable, nets: readonly PeriodNetwork[], 
       }
     }
     method = budgetOut
-      ? `exhaustive search over the ${candidates.length} clause(s) on loops stopped by its budget of ${budget} checks; greedy used instead`
-      : `fewest clauses: exhaustive over the ${candidates.length} clause(s) on loops (${subsets} subset(s) checked), so no plan cuts fewer clauses`;
+      ? `exhaustive search over the ${counted(candidates.length, 'clause')} on loops stopped by its budget of ${budget} checks; greedy used instead`
+      : `fewest clauses: exhaustive over the ${counted(candidates.length, 'clause')} on loops (${counted(subsets, 'subset')} checked), so no plan cuts fewer clauses`;
   } else {
     method = `fewest clauses: greedy (${candidates.length} clauses on loops, more than ${exhaustiveUpTo} for an exhaustive search); no chosen clause can be dropped`;
   }

@@ -4,11 +4,13 @@
 
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import { calendarFixChanges, calendarLaneRows, calendarLoopRows, calendarReport, calendarReportScenario, calendarReviewHtml, formatCsvRows, reviewCalendarUnder, serializeScenarioDocument, withChange, type Scenario } from '../../../engine/index';
+import { calendarFixChanges, calendarLoopRows, calendarReport, calendarReportScenario, calendarReviewCsv, calendarReviewHtml, formatCsvRows, reviewCalendarUnder, serializeScenarioDocument, withChange, type Scenario } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
+import { inCsvDialect } from '../csv-dialect-option';
 import { loadImport } from '../load-network';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
+import { counted, plural } from '../../../engine/index';
 
 /** Value options only the calendar review reads (kept together so the option table can take them as they are). */
 export const CALENDAR_AUDIT_OPTIONS = ['from-date', 'to-date', 'fix-by', 'report', 'fix-scenario-out'] as const;
@@ -68,10 +70,10 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   const report = calendarReport({ ...imported, lanes: reviewed.overlay.table }, review, fixBy, what ? calendarReportScenario(what.scenario, reviewed) : null);
   const exponent = imported.exponent;
   const window = report.window.from === null ? 'every date (the lanes file names none)' : `${report.window.from} to ${report.window.to}`;
-  out.warn(`calendar review${what ? ` under scenario "${what.scenario.name}" (${what.path})` : ''}: ${window}, ${report.periods.length} period(s), vehicle class(es) ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
+  out.warn(`calendar review${what ? ` under scenario "${what.scenario.name}" (${what.path})` : ''}: ${window}, ${counted(report.periods.length, 'period')}, ${plural(report.classes.length, 'vehicle class', 'vehicle classes')} ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
   for (const name of review.negotiableUnmatched) out.warn(`--negotiable: no lane has the contract reference, clause or lane key "${name}"; it marks nothing`);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : formatCsvRows(calendarLaneRows(report, exponent)));
-  if (loopsCsv) out.writeFile(loopsCsv, formatCsvRows(calendarLoopRows(report, exponent)));
+  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : inCsvDialect(args, calendarReviewCsv(report, exponent)));
+  if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(calendarLoopRows(report, exponent))));
   if (reportPath) {
     const files = ['depots', 'lanes'].map((k) => args.values.get(k)!).map((path) => ({ name: path, sha256: sha256(path) }));
     out.writeFile(reportPath, calendarReviewHtml(report, { files, exponent, madeAt: new Date().toISOString().slice(0, 16) + 'Z' }));
@@ -89,7 +91,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   }
 
   if (report.loops.length > 0) {
-    out.warn(`WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate loop(s) in the contract over the window: costs through them are unbounded and the contract terms need fixing`);
+    out.warn(`WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate ${plural(report.loops.length, 'loop')} in the contract over the window: costs through them are unbounded and the contract terms need fixing`);
     for (const loop of report.loops) {
       const when = loop.ranges.map((r) => (r.from === null ? 'every date' : `${r.from} to ${r.to}`)).join(', ');
       out.warn(`  loop ${loop.id}: ${[...loop.depots, loop.depots[0]].join(' > ')}, clauses ${loop.clauses.join(', ') || 'none'}, ${when}`);
@@ -97,9 +99,9 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
     // What stopped the search, truthfully: "more loops exist" only when one more was found.
     if (report.loop_search_note !== null) out.warn(`WARNING: ${report.loop_search_note}`);
     if (report.fix_plan_verified) {
-      out.warn(`fix plan by ${report.fix_by}: ${report.fix_plan.length} rebate cut(s) remove every loop in every period (checked by solving every period network); headroom is computed after the fix plan`);
+      out.warn(`fix plan by ${report.fix_by}: ${counted(report.fix_plan.length, 'rebate cut')} ${plural(report.fix_plan.length, 'removes', 'remove')} every loop in every period (checked by solving every period network); headroom is computed after the fix plan`);
     } else if (report.unfixable_loops.length > 0) {
-      out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
+      out.warn(`WARNING: no rebate cut can fix ${counted(report.unfixable_loops.length, 'loop')} (no lane on them carries a rebate); headroom is not available`);
     } else {
       out.warn(`WARNING: the fix plan stopped with loops left${report.fix_plan_method ? ` (${report.fix_plan_method})` : ''}; headroom is not available`);
     }

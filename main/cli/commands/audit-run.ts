@@ -6,7 +6,7 @@
 
 import { auditNetwork, overlayKeys, parseScenarioDocument, scenarioImport, type Scenario } from '../../../engine/index';
 import { readDocumentFile } from '../files';
-import { auditLaneRows, auditLoopRows, auditReport } from '../../../engine/index';
+import { auditLoopRows, auditReport, reviewCsv } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
@@ -14,6 +14,7 @@ import { loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
+import { counted, plural } from '../../../engine/index';
 
 /** The --scenario file, read before any work; null without one. */
 export function auditScenario(args: ParsedArgs): { path: string; scenario: Scenario } | null {
@@ -75,22 +76,22 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
   const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, ...report };
-  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, formatCsvRows(auditLaneRows(network, report))));
+  out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, reviewCsv(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });
 
   if (report.loops.length > 0) {
     out.warn(
-      `WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate loop(s) in the network: costs through them are unbounded and the contract terms need fixing`,
+      `WARNING: ${report.loops.length}${report.loop_search.stopped_by === 'cap' ? '+' : ''} rebate ${plural(report.loops.length, 'loop')} in the network: costs through them are unbounded and the contract terms need fixing`,
     );
     // What stopped the search, truthfully: "more loops exist" only when one more was found.
     if (report.loop_search_note !== null) out.warn(`WARNING: ${report.loop_search_note}`);
     if (report.fix_plan_verified) {
-      out.warn(`fix plan: ${report.fix_plan.length} rebate cut(s) remove every loop (checked by solving the changed network); headroom is computed after the fix plan`);
+      out.warn(`fix plan: ${counted(report.fix_plan.length, 'rebate cut')} ${plural(report.fix_plan.length, 'removes', 'remove')} every loop (checked by solving the changed network); headroom is computed after the fix plan`);
     } else if (report.fix_plan_incomplete) {
-      out.warn(`WARNING: the fix plan stopped after ${report.fix_plan.length} lane change(s) with loops left; headroom is not available`);
+      out.warn(`WARNING: the fix plan stopped after ${counted(report.fix_plan.length, 'lane change')} with loops left; headroom is not available`);
     } else {
-      out.warn(`WARNING: no rebate cut can fix ${report.unfixable_loops.length} loop(s) (no lane on them carries a rebate); headroom is not available`);
+      out.warn(`WARNING: no rebate cut can fix ${counted(report.unfixable_loops.length, 'loop')} (no lane on them carries a rebate); headroom is not available`);
     }
   }
   return 0;

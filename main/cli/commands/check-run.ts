@@ -6,6 +6,7 @@ import { formatReport } from '../../../engine/index';
 import type { ParsedArgs } from '../args';
 import { planDateOf, readImport } from '../load-network';
 import type { CommandOutput } from '../run';
+import { counted } from '../../../engine/index';
 
 export function runCheck(args: ParsedArgs, out: CommandOutput): number {
   // Every problem is found by reading and planning; the network itself is not needed for the report.
@@ -31,7 +32,7 @@ export function runCheck(args: ParsedArgs, out: CommandOutput): number {
     );
   } else {
     const lines = formatReport(report);
-    lines.push(`total ${report.total} row(s): ${report.accepted} accepted, ${report.rejected} rejected; ${report.errors.length} error(s), ${report.warnings.length} warning(s)`);
+    lines.push(`total ${counted(report.total, 'row')}: ${report.accepted} accepted, ${report.rejected} rejected; ${counted(report.errors.length, 'error')}, ${counted(report.warnings.length, 'warning')}`);
     for (const note of result.notes) lines.push(`note: ${note}`);
     out.write(lines.join('\n') + '\n');
   }

@@ -6,8 +6,7 @@
 
 import { compareImport } from '../../../engine/index';
 import { parseScenarioDocument } from '../../../engine/index';
-import { compareReport, compareReportRows } from '../../../engine/index';
-import { formatCsvRows } from '../../../engine/index';
+import { compareCsv, compareReport } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readDocumentFile } from '../files';
 import { loadImport, planDateOf } from '../load-network';
@@ -25,7 +24,7 @@ export function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const network = imported.network;
   const comparison = compareImport(imported, scenario, originId, { loopCap });
   const report = compareReport(comparison);
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, formatCsvRows(compareReportRows(report, network.exponent))));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, compareCsv(report, network.exponent)));
 
   for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
   for (const loop of report.loops_appeared) {

@@ -11,6 +11,7 @@ import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
 import { inCsvDialect } from '../csv-dialect-option';
 import { readTextChunks } from '../read-chunks';
 import type { CommandOutput } from '../run';
+import { counted, plural } from '../../../engine/index';
 
 /** Most alternatives per load the command computes (each costs up to a few hundred Dijkstra runs). */
 const MAX_ALTERNATIVES = 20;
@@ -24,8 +25,8 @@ function reportFile(report: ValidationReport, args: ParsedArgs, out: CommandOutp
   if (report.errors.length > 0 && !args.flags.has('skip-invalid')) throw new InvalidInputError(report);
   for (const e of report.errors) out.warn(formatItem(e, 'error'));
   for (const w of report.warnings) out.warn(formatItem(w, 'warning'));
-  if (report.omitted > 0) out.warn(`... ${report.omitted} more problem(s) not listed`);
-  if (report.errors.length > 0) for (const f of report.files) out.warn(`${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`);
+  if (report.omitted > 0) out.warn(`... ${counted(report.omitted, 'more problem')} not listed`);
+  if (report.errors.length > 0) for (const f of report.files) out.warn(`${f.file}: ${counted(f.total, 'row')}, ${f.accepted} accepted, ${f.rejected} rejected`);
 }
 
 export function runDispatch(args: ParsedArgs, out: CommandOutput): number {
@@ -75,9 +76,9 @@ export function runDispatch(args: ParsedArgs, out: CommandOutput): number {
   for (const w of report.warnings) out.warn(`warning: ${w}`);
   for (const n of report.notes) out.warn(`note: ${n}`);
   const t = report.totals.all;
-  out.warn(`${t.loads} load(s): ${t.planned} planned, ${t.blocked} blocked, ${t.unbounded} unbounded, ${t.no_route} without a route; planned cost ${t.cost} ${report.currency}`);
-  if (t.unbounded > 0) out.warn(`WARNING: ${t.unbounded} load(s) are reached by a rebate loop; their cost is unbounded and the contract terms need fixing (see the loop column)`);
-  if (t.over_drive_limit > 0) out.warn(`CAUTION: ${t.over_drive_limit} route(s) exceed the daily driving limit. ${report.drive_limit_caution}`);
+  out.warn(`${counted(t.loads, 'load')}: ${t.planned} planned, ${t.blocked} blocked, ${t.unbounded} unbounded, ${t.no_route} without a route; planned cost ${t.cost} ${report.currency}`);
+  if (t.unbounded > 0) out.warn(`WARNING: ${counted(t.unbounded, 'load')} ${plural(t.unbounded, 'is', 'are')} reached by a rebate loop; their cost is unbounded and the contract terms need fixing (see the loop column)`);
+  if (t.over_drive_limit > 0) out.warn(`CAUTION: ${counted(t.over_drive_limit, 'route')} ${plural(t.over_drive_limit, 'exceeds', 'exceed')} the daily driving limit. ${report.drive_limit_caution}`);
   out.warn(`CAUTION: ${report.caution}`);
   if (args.flags.has('timings')) {
     out.timing({ read_ms: readMs, plan_ms: solveMs, loads: loads.loads.length, groups: plan.stats.groups, restricted_solves: plan.stats.restrictedSolves, plain_solves: plan.stats.plainSolves });

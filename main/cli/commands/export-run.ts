@@ -20,6 +20,7 @@ import { readTextFile } from '../files';
 import { loadImport } from '../load-network';
 import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
+import { counted } from '../../../engine/index';
 
 export function runExport(args: ParsedArgs, out: CommandOutput): number {
   const lanesOut = args.values.get('lanes-out');
@@ -56,17 +57,17 @@ export function runExport(args: ParsedArgs, out: CommandOutput): number {
   const loops = findDistinctLoops(network).loops;
   if (lanesOut) {
     const rows = lanes.lanes.count - (lanes.leaveOut ? lanes.leaveOut.reduce((n, x) => n + x, 0) : 0);
-    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${rows} lane row(s), ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
+    out.writeFile(lanesOut, inCsvDialect(args, lanesCsv(lanes, loops)), `lanes: ${lanesOut} (${counted(rows, 'lane row')}, ${network.laneCount} planned for ${imported.plan.date ?? 'any date'})`);
   }
   if (routesOut && routes) {
-    const file = out.openFile(routesOut, `routes from ${originId}: ${routesOut} (${routes.depots.length} depot(s))`);
+    const file = out.openFile(routesOut, `routes from ${originId}: ${routesOut} (${counted(routes.depots.length, 'depot')})`);
     // Another dialect re-writes the whole table (its numeric columns are judged over every row).
     if (!args.values.has('csv-dialect')) for (const chunk of routesCsvChunks(routes)) file.write(chunk);
     else file.write(inCsvDialect(args, [...routesCsvChunks(routes)].join('')));
   }
   if ((routesOut || lanesOut || geojsonOut) && routes) out.afterOutput(`CAUTION: ${routes.tail.caution}`);
-  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${loops.length} loop(s))`);
+  if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${counted(loops.length, 'loop')})`);
   if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
-  if (loops.length > 0) out.warn(`WARNING: ${loops.length} rebate loop(s) in the network; the contract terms need fixing (see the loops export)`);
+  if (loops.length > 0) out.warn(`WARNING: ${counted(loops.length, 'rebate loop')} in the network; the contract terms need fixing (see the loops export)`);
   return 0;
 }

@@ -14,6 +14,7 @@ import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
+import { counted, plural } from '../../../engine/index';
 
 /** Depot indices named by --to (comma-separated ids, in the order given, repeats dropped); undefined = all. */
 function targetDepots(network: Network, args: ParsedArgs): number[] | undefined {
@@ -70,12 +71,12 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const { over_drive_limit: over, caution, loops } = report.tail;
   if (over > 0) {
     const limit = settings.drivingLimit;
-    out.warn(`CAUTION: ${over} route(s) exceed the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
+    out.warn(`CAUTION: ${counted(over, 'route')} ${plural(over, 'exceeds', 'exceed')} the ${limit.rule.toUpperCase()} daily driving limit of ${limit.dailyDrivingMinutes / 60} h (over_drive_limit column). ${report.tail.drive_limit_caution}`);
   }
   // The CSV's companion text: the caution goes with every output, on stderr beside the CSV.
   out.afterOutput(`CAUTION: ${caution}`);
   if (loops.length > 0) {
-    out.warn(`WARNING: ${loops.length} rebate loop(s) make costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
+    out.warn(`WARNING: ${counted(loops.length, 'rebate loop')} ${plural(loops.length, 'makes', 'make')} costs from ${originId} unbounded; the contract terms need fixing (see loops in --json output)`);
   }
   return 0;
 }

@@ -9,6 +9,7 @@ import { formatMoney } from '../../model/format';
 import { DataTable, type Column } from '../DataTable/DataTable';
 import { CalendarStrip } from './CalendarStrip';
 import { ClauseLanes } from './ClauseLanes';
+import { counted } from '../../../engine/index';
 
 type Fix = CalendarReport['fix_plan'][number];
 
@@ -46,8 +47,8 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
         {calendar.loop_cap_reached ? ' (list capped)' : ''}
       </h3>
       <p className="lw-muted">
-        {calendar.periods.length} period(s) in which the valid lane rows do not change, every vehicle class ({calendar.classes.map(className).join(', ')}),{' '}
-        {what ? `the contract as the scenario “${what.name}” changes it (${what.changes.filter((c) => c.applied).length} of ${what.changes.length} change(s) applied)` : 'the files as loaded'}. Choose a period or a loop's dates to plan that day.{' '}
+        {counted(calendar.periods.length, 'period')} in which the valid lane rows do not change, every vehicle class ({calendar.classes.map(className).join(', ')}),{' '}
+        {what ? `the contract as the scenario “${what.name}” changes it (${what.changes.filter((c) => c.applied).length} of ${counted(what.changes.length, 'change')} applied)` : 'the files as loaded'}. Choose a period or a loop's dates to plan that day.{' '}
         <button type="button" onClick={onSaveReport}>
           Save review report (HTML)
         </button>
@@ -63,7 +64,7 @@ export function CalendarReview({ calendar, exponent, fixBy, onFixBy, onSaveRepor
       {calendar.loops.length > 0 && (
         <section aria-label="Calendar fix plan">
           <h3>
-            Fix plan for every date: cut {calendar.fix_plan.length} rebate(s){calendar.fix_plan_verified ? ' (checked in every period: no loop remains)' : ' (not verified)'}{' '}
+            Fix plan for every date: cut {counted(calendar.fix_plan.length, 'rebate')}{calendar.fix_plan_verified ? ' (checked in every period: no loop remains)' : ' (not verified)'}{' '}
             <label>
               by{' '}
               <select aria-label="Fix plan by lane or by clause" value={fixBy} onChange={(e) => onFixBy(e.currentTarget.value === 'clause' ? 'clause' : 'lane')}>

@@ -92,7 +92,7 @@ export function ClauseLanes({ calendar, exponent }: { calendar: CalendarReport; 
     { label: 'Net', numeric: true, cell: (l) => money(l.net) },
     { label: 'Loops', cell: (l) => (l.loops.length === 0 ? '' : l.loops.join(' ')) },
     { label: 'Fix plan cut', numeric: true, cell: (l) => (l.cut === null ? '' : money(l.cut)) },
-    { label: 'Lowest safe net', numeric: true, cell: (l) => (l.floor === null ? (l.net === null ? '—' : 'no limit') : money(l.floor)) },
+    { label: 'Floor', numeric: true, cell: (l) => (l.floor === null ? (l.net === null ? '—' : 'no limit') : money(l.floor)) },
     { label: 'Set by', cell: (l) => (l.setBy ? range(l.setBy) : '') },
   ];
   return (

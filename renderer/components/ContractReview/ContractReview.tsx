@@ -12,8 +12,9 @@ import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { CalendarReview } from './CalendarReview';
-import { FixPlanTable, HeadroomTable, LoopLanes } from './ReviewTables';
+import { FixPlanTable, HeadroomTable, LoopLanes, ReviewExports } from './ReviewTables';
 import { laneKey } from '../../model/lane-names';
+import { counted, plural } from '../../../engine/index';
 
 export interface ContractReviewProps {
   /** Sets the dispatch date (from the calendar strip), and the vehicle class when given (null = as priced in the lanes file). */
@@ -24,9 +25,11 @@ export interface ContractReviewProps {
   onScenario(next: Scenario): void;
   host: LanewrightHost;
   onMessage(text: string): void;
+  /** Exports the review on screen as CSV (the worker keeps the review it last made). */
+  onExport(kind: 'review-csv' | 'calendar-review-csv'): void;
 }
 
-export function ContractReview({ engine, network, scenario, onScenario, host, onMessage, onDate }: ContractReviewProps) {
+export function ContractReview({ engine, network, scenario, onScenario, host, onMessage, onDate, onExport }: ContractReviewProps) {
   const [fixBy, setFixBy] = useState<'lane' | 'clause'>('lane');
   const [review, setReview] = useState<ContractReviewView | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -85,6 +88,7 @@ export function ContractReview({ engine, network, scenario, onScenario, host, on
   return (
     <div className="lw-review" data-testid="contract-review">
       <CautionLine kind="review" testId="review-caution" />
+      <ReviewExports calendar={review.calendar !== null} onExport={onExport} />
       {review.calendar && (
         <CalendarReview
           calendar={review.calendar}
@@ -105,30 +109,30 @@ export function ContractReview({ engine, network, scenario, onScenario, host, on
       {review.loops.length === 0 && (
         <p>
           No loop of lanes has a negative net cost {day}: every cheapest route is well defined
-          {review.calendar && review.calendar.loops.length > 0 ? ` that day, but the contract has ${review.calendar.loops.length} loop(s) on other dates (above)` : ''}.
+          {review.calendar && review.calendar.loops.length > 0 ? ` that day, but the contract has ${counted(review.calendar.loops.length, 'loop')} on other dates (above)` : ''}.
         </p>
       )}
       {review.loops.map((loop, i) => (
         <section key={i} className="lw-review-loop" aria-label={`Loop ${i + 1}`}>
           <h4>
-            ⚠ Loop {i + 1}: {loop.depots.join(' → ')} → {loop.depots[0]} · net per lap {formatMoneyWithCode(loop.net_per_lap_minor, review.currency, network.exponent)} · makes {loop.unbounded_depots.length} depot(s) unbounded
+            ⚠ Loop {i + 1}: {loop.depots.join(' → ')} → {loop.depots[0]} · net per lap {formatMoneyWithCode(loop.net_per_lap_minor, review.currency, network.exponent)} · makes {counted(loop.unbounded_depots.length, 'depot')} unbounded
           </h4>
           <LoopLanes loop={loop} money={money} />
         </section>
       ))}
       {review.fix_plan.length > 0 && (
         <section aria-label="Fix plan">
-          <h3>Fix plan: cut {review.fix_plan.length} rebate(s){review.fix_plan_verified ? ' (checked: no loop remains)' : ' (not verified)'}</h3>
+          <h3>Fix plan: cut {counted(review.fix_plan.length, 'rebate')}{review.fix_plan_verified ? ' (checked: no loop remains)' : ' (not verified)'}</h3>
           <FixPlanTable rows={review.fix_plan} money={money} />
           <button type="button" onClick={() => onScenario(fixPlanScenario(scenario, network, (e) => laneKey(network, e), review.fix_plan, (row) => `one-day fix plan ${day} (vehicle class ${network.plan.vehicleClass ?? 'as priced in the lanes file'}): lanes-file row ${row}; the rebate holds for every vehicle class`))}>
             Try the fix plan as a scenario
           </button>
         </section>
       )}
-      {review.unfixable_loops.length > 0 && <p className="lw-warn">{review.unfixable_loops.length} loop(s) carry no rebate at all; no rebate cut fixes them — check the amounts on their lanes.</p>}
+      {review.unfixable_loops.length > 0 && <p className="lw-warn">{counted(review.unfixable_loops.length, 'loop')} {plural(review.unfixable_loops.length, 'carries', 'carry')} no rebate at all; no rebate cut fixes them — check the amounts on their lanes.</p>}
       <section aria-label="Rebate headroom">
         <h3>Rebate headroom per lane{review.headroom_after_fix_plan ? ' (after the fix plan)' : ''}</h3>
-        <p className="lw-muted">How much more rebate each lane could carry before some loop of lanes pays for itself.</p>
+        <p className="lw-muted">Floor: the lowest net a lane can have before some loop of lanes pays for itself. Headroom: net minus floor, how much more rebate the lane could carry.</p>
         {review.headroom.length > 0 ? <HeadroomTable rows={review.headroom} exponent={network.exponent} /> : <p>Not available while a loop has no fix.</p>}
       </section>
     </div>

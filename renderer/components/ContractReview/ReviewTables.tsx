@@ -45,8 +45,9 @@ export function HeadroomTable({ rows, exponent }: { rows: HeadroomRow[]; exponen
   const columns: Column<HeadroomRow>[] = [
     ...laneColumns<HeadroomRow>(),
     { label: 'Net', numeric: true, cell: (r) => money(r.net_minor) },
-    { label: 'Lowest safe net', numeric: true, cell: (r) => money(r.floor_minor) },
-    { label: 'Extra rebate possible', numeric: true, cell: (r) => money(r.headroom_minor) },
+    // The same names as the CSV columns (floor, headroom) and the JSON fields (floor_minor, headroom_minor).
+    { label: 'Floor', numeric: true, cell: (r) => money(r.floor_minor) },
+    { label: 'Headroom', numeric: true, cell: (r) => money(r.headroom_minor) },
   ];
   return (
     <>
@@ -54,5 +55,24 @@ export function HeadroomTable({ rows, exponent }: { rows: HeadroomRow[]; exponen
       <DataTable columns={columns} rows={sorted.slice(0, SHOWN)} rowKey={(r) => r.row} label="Rebate headroom per lane" />
       {sorted.length > SHOWN && <p className="lw-muted">Showing the {SHOWN} tightest of {sorted.length} lanes; filter to find others.</p>}
     </>
+  );
+}
+
+/** The review's CSV exports (the tables `lanewright audit` writes), in the chosen CSV format. */
+export function ReviewExports({ calendar, onExport }: { calendar: boolean; onExport(kind: 'review-csv' | 'calendar-review-csv'): void }) {
+  return (
+    <p className="lw-review-exports">
+      <button type="button" onClick={() => onExport('review-csv')}>
+        Export one-day review (CSV)
+      </button>
+      {calendar && (
+        <>
+          {' '}
+          <button type="button" onClick={() => onExport('calendar-review-csv')}>
+            Export calendar review (CSV)
+          </button>
+        </>
+      )}
+    </p>
   );
 }

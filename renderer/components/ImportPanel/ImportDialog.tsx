@@ -5,6 +5,7 @@
 
 import { useState } from 'react';
 import type { LanewrightHost } from '../../../main/ipc/contract';
+import { counted, plural } from '../../../engine/index';
 import type { DatasetFiles, PendingImport } from '../../app/use-dataset';
 import type { Progress } from '../../app/use-engine';
 import type { NamedText } from '../../worker/protocol';
@@ -48,7 +49,7 @@ export function ImportDialog({ host, current, pending, onImport, onContinue, onF
     return (
       <Dialog title="Import report" onClose={onFix} className="lw-wide">
         <p role="status">
-          {rejected} row{rejected === 1 ? ' was' : 's were'} rejected ({pending.report.issues.length} problem{pending.report.issues.length === 1 ? '' : 's'} listed). Nothing has changed yet.
+          {counted(rejected, 'row')} {plural(rejected, 'was', 'were')} rejected ({counted(pending.report.issues.length, 'problem')} listed). Nothing has changed yet.
         </p>
         <ImportReportTable report={pending.report} />
         <div className="lw-dialog-buttons">

@@ -1,6 +1,7 @@
 // The validation report of an import: counts per file (accepted + rejected = total) and one line
 // per problem with file, row (as a spreadsheet numbers it), column, value and reason.
 
+import { counted } from '../../../engine/index';
 import type { ImportIssue, ImportReport } from '../../worker/protocol';
 import { DataTable, type Column } from '../DataTable/DataTable';
 
@@ -18,7 +19,7 @@ export function ImportReportTable({ report }: { report: ImportReport }) {
       <ul className="lw-counts">
         {report.files.map((f) => (
           <li key={`${f.kind}-${f.file}`}>
-            <strong>{f.file}</strong> ({f.kind}): {f.total} rows, {f.accepted} accepted, {f.rejected} rejected
+            <strong>{f.file}</strong> ({f.kind}): {counted(f.total, 'row')}, {f.accepted} accepted, {f.rejected} rejected
           </li>
         ))}
         {report.excluded > 0 && <li>{report.excluded} lane rows are not part of this plan (not valid on the dispatch date, or priced for another vehicle class).</li>}
@@ -38,7 +39,7 @@ export function ImportReportTable({ report }: { report: ImportReport }) {
       )}
       {report.warnings.length > 0 && (
         <details>
-          <summary>{report.warnings.length} warnings (rows kept)</summary>
+          <summary>{counted(report.warnings.length, 'warning')} (rows kept)</summary>
           <ul>
             {report.warnings.map((w, i) => (
               <li key={i}>

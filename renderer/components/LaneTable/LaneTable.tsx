@@ -6,7 +6,7 @@
 // Lanes the scenario adds are listed first. Filtered and paged so 50,000 lanes stay responsive.
 
 import { useMemo, useState } from 'react';
-import { netCost, withoutChange } from '../../../engine/index';
+import { counted, netCost, withoutChange } from '../../../engine/index';
 import { addedAmount, addedLaneName, setAddedLaneAmount, type AddedLane } from '../../model/added-lanes';
 import { EDITABLE_FIELDS, setLaneAmount, setLaneClosed, type EditableField, type Scenario } from '../../model/scenario-edits';
 import { formatMoney } from '../../model/format';
@@ -18,7 +18,7 @@ import { rowClass, rowKey, rowRef, rowValidity } from '../../model/lane-names';
 export interface LaneTableProps {
   network: NetworkView;
   amounts: OverlayView;
-  /** Lanes the scenario adds (not in the network). */
+  /** Lanes only the scenario plans (added, or a file row a validity change brings in), from the solve. */
   added: readonly AddedLane[];
   scenario: Scenario;
   onScenario(next: Scenario): void;
@@ -91,7 +91,7 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
           </label>
         )}
         <span className="lw-muted" aria-live="polite">
-          {shown.length} lanes{addedShown.length > 0 ? ` + ${addedShown.length} added by the scenario` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
+          {counted(shown.length, 'lane')}{addedShown.length > 0 ? ` + ${addedShown.length} only in the scenario's plan` : ''} · page {current + 1} of {pages} · toll edits apply to {tollClass ?? 'every class'}
         </span>
         <button type="button" disabled={current === 0} onClick={() => setPage(current - 1)}>
           Previous page
@@ -105,6 +105,36 @@ export function LaneTable({ network, amounts, added, scenario, onScenario }: Lan
         <tbody>
           {addedShown.map((a) => {
             const name = addedLaneName(a.lane);
+            if (a.kind === 'row') {
+              // A file row the scenario's validity change brings into the date: its amounts are edited
+              // like any row of the file (under "Every row of the file"); Undo drops the validity change.
+              return (
+                <tr key={`row-${a.ref}`} data-scenario-row={a.sourceRow ?? ''} className="lw-changed-row lw-added-row">
+                  <td>
+                    <span className="lw-badge lw-badge-added" title="This row of the lanes file is not valid on the date; the scenario's validity change puts it in the plan">
+                      row {a.sourceRow} valid by scenario
+                    </span>
+                  </td>
+                  <th scope="row">
+                    {a.lane.from} → {a.lane.to}
+                  </th>
+                  <td>{a.lane.ref ?? '—'}</td>
+                  {EDITABLE_FIELDS.map((field) => (
+                    <td key={field} className="lw-num">
+                      {formatMoney(addedAmount(a.lane, field), network.exponent)}
+                    </td>
+                  ))}
+                  <td className="lw-num">{formatMoney(a.netMinor, network.exponent)}</td>
+                  <td>
+                    {a.changeIndex >= 0 && (
+                      <button type="button" aria-label={`Undo the validity change of ${name}`} onClick={() => onScenario(withoutChange(scenario, a.changeIndex))}>
+                        Undo
+                      </button>
+                    )}
+                  </td>
+                </tr>
+              );
+            }
             return (
               <tr key={`added-${a.changeIndex}`} data-added-lane={a.changeIndex} className="lw-changed-row lw-added-row">
                 <td>

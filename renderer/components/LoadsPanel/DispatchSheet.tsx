@@ -3,6 +3,7 @@
 // printed page of that date. Shown only when printing (styles in loads.css).
 
 import type { DispatchReport } from '../../../engine/index';
+import { counted } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { loadCautions, sheetPages } from '../../model/loads-table';
 
@@ -22,7 +23,7 @@ export function DispatchSheet({ report, exponent, title }: DispatchSheetProps) {
             <thead>
               <tr>
                 <th colSpan={9} className="lw-sheet-head">
-                  {title} — dispatch sheet for {page.date} ({page.loads.length} load{page.loads.length === 1 ? '' : 's'}, amounts in {report.currency})
+                  {title} — dispatch sheet for {page.date} ({counted(page.loads.length, 'load')}, amounts in {report.currency})
                 </th>
               </tr>
               <tr>

@@ -20,6 +20,7 @@ import { applyCsvDialect, PRODUCT_NAME } from '../../../engine/index';
 import type { LoadRouteDrawing } from '../../map/load-route-layer';
 import type { LoadFiles } from '../../app/workspace-doc';
 import './loads.css';
+import { counted } from '../../../engine/index';
 
 /** A component whose own sum is outside the exact range (engine RouteBreakdown); the cost stands. */
 const OUT_OF_RANGE = 'out of range';
@@ -62,7 +63,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, files, onFil
       .then((answer) => {
         setView(answer.result);
         const t = answer.result.report?.totals.all;
-        if (t) onMessage(`Planned ${t.loads} load(s): ${t.planned} planned, ${t.blocked} blocked, ${t.unbounded} unbounded, ${t.no_route} without a route.`);
+        if (t) onMessage(`Planned ${counted(t.loads, 'load')}: ${t.planned} planned, ${t.blocked} blocked, ${t.unbounded} unbounded, ${t.no_route} without a route.`);
       })
       .catch((error: Error) => setProblem(error instanceof WorkCancelledError ? 'Planning the loads was stopped.' : error.message))
       .finally(() => setBusy(false));
@@ -146,7 +147,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, files, onFil
       {view && (view.files.issues.length > 0 || view.files.warnings.length > 0) && (
         <details className="lw-loads-report" open={view.files.fatal}>
           <summary>
-            {view.files.files.map((f) => `${f.file}: ${f.total} row(s), ${f.accepted} accepted, ${f.rejected} rejected`).join(' · ')}
+            {view.files.files.map((f) => `${f.file}: ${counted(f.total, 'row')}, ${f.accepted} accepted, ${f.rejected} rejected`).join(' · ')}
           </summary>
           <ul>
             {[...view.files.issues.map((i) => ({ ...i, level: 'error' })), ...view.files.warnings.map((i) => ({ ...i, level: 'warning' }))].map((i, k) => (
@@ -177,7 +178,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, files, onFil
               <option value="no-route">No route</option>
             </select>
             <span className="lw-muted" aria-live="polite">
-              {rows.length} of {report.loads.length} loads
+              {rows.length} of {counted(report.loads.length, 'load')}
             </span>
           </div>
           <LoadsTable rows={rows} exponent={network.exponent} query={query} onQuery={setQuery} selected={selected} onSelect={setSelected} />
@@ -216,7 +217,7 @@ export function LoadsPanel({ engine, host, network, date, scenario, files, onFil
               ))}
               {current.alternatives.length > 0 && (
                 <label className="lw-check">
-                  <input type="checkbox" checked={showAlternatives} onChange={(e) => setShowAlternatives(e.target.checked)} /> Show {current.alternatives.length} alternative route(s) on the map
+                  <input type="checkbox" checked={showAlternatives} onChange={(e) => setShowAlternatives(e.target.checked)} /> Show {counted(current.alternatives.length, 'alternative route')} on the map
                 </label>
               )}
               {showAlternatives && (

@@ -7,7 +7,7 @@ import { useEffect, useRef, useState } from 'react';
 import { FLAG_LIMIT_HIDES_LOOP } from '../../model/flags';
 import { formatMoneyWithCode } from '../../model/format';
 import { addedLaneOf, type AddedLane } from '../../model/added-lanes';
-import { netCost } from '../../../engine/index';
+import { counted, netCost, plural } from '../../../engine/index';
 import type { LaneAmounts } from '../../model/scenario-edits';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 import { TableHead } from '../DataTable/DataTable';
@@ -91,8 +91,8 @@ function LoopBanner({ network, solve, amounts, added, onReview }: LoopAlertProps
       <p>
         {solve.loops.length === 1 ? 'A loop of lanes' : `${solve.loops.length} loops of lanes`} from origin {id(solve.origin)} earn more in rebates than they cost, so a truck could circle forever and “cheapest” has no answer.{' '}
         {limited
-          ? `With the ${solve.settings.maxLegs}-leg limit every cost shown is finite, but without it ${hidden} depot${hidden === 1 ? ' is' : 's are'} unbounded (flag “limit hides loop”).`
-          : `${unbounded} depot${unbounded === 1 ? ' is' : 's are'} marked unbounded (∞ diamond on the map, “unbounded” in the table); no route is given for them.`}
+          ? `With the ${solve.settings.maxLegs}-leg limit every cost shown is finite, but without it ${counted(hidden, 'depot')} ${plural(hidden, 'is', 'are')} unbounded (flag “limit hides loop”).`
+          : `${counted(unbounded, 'depot')} ${plural(unbounded, 'is', 'are')} marked unbounded (∞ diamond on the map, “unbounded” in the table); no route is given for them.`}
       </p>
       {solve.loops.map((loop, i) => (
         <details key={i} className="lw-loop" open={i === 0}>
@@ -114,7 +114,7 @@ function LoopBanner({ network, solve, amounts, added, onReview }: LoopAlertProps
                       <td>
                         {l.from} → {l.to}
                       </td>
-                      <td>added by the scenario (change {extra.changeIndex + 1})</td>
+                      <td>{extra.kind === 'added' ? `added by the scenario (change ${extra.changeIndex + 1})` : `${extra.sourceRow}, valid by the scenario (change ${extra.changeIndex + 1})`}</td>
                       <td>{l.ref ?? '—'}</td>
                       <td className="lw-num">{formatMoneyWithCode(extra.netMinor, network.currency, network.exponent)}</td>
                       <td className="lw-num">{formatMoneyWithCode(l.rebateMinor, network.currency, network.exponent)}</td>

@@ -52,7 +52,7 @@ function MapKey() {
           <line x1="0" y1="5" x2="28" y2="5" stroke="#fff" strokeWidth="6" />
           <line x1="2" y1="5" x2="28" y2="5" stroke="#5b2a86" strokeWidth="4" strokeDasharray="0.1 8" strokeLinecap="round" />
         </svg>
-        lane a scenario adds (“Added”)
+        lane only the scenario plans (labelled)
       </li>
       <li>
         <span className="lw-legend-diamond" aria-hidden="true">

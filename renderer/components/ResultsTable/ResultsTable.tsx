@@ -4,11 +4,12 @@
 // Long tables are windowed: only rows near the view are in the DOM.
 
 import { useEffect, useMemo, useRef, useState } from 'react';
+import { counted } from '../../../engine/index';
 import { CautionLine } from '../CautionLine/CautionLine';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { useRowKeys } from '../DataTable/use-row-keys';
-import { ALL_FLAG_LABELS, flagExplanations } from '../../model/flags';
+import { ALL_FLAG_LABELS, FLAG_LIMIT_HIDES_LOOP, flagExplanations, LIMIT_HIDES_LOOP_HELP } from '../../model/flags';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { costText, DEFAULT_QUERY, queryRows, resultRows, statusBadges, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
 import type { NetworkView, SolveView } from '../../worker/protocol';
@@ -54,13 +55,18 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
           <input type="checkbox" checked={query.flaggedOnly} onChange={(e) => setQuery({ ...query, flaggedOnly: e.target.checked })} /> With cautions only
         </label>
         <span className="lw-muted" aria-live="polite">
-          {visible.length} of {rows.length} depots
+          {visible.length} of {counted(rows.length, 'depot')}
         </span>
         <button type="button" onClick={onExport}>
           Export routes CSV
         </button>
       </div>
       <CautionLine testId="results-caution" />
+      {solve.flags.some((f) => (f & FLAG_LIMIT_HIDES_LOOP) !== 0) && (
+        <p className="lw-muted" data-testid="limit-hides-loop-help">
+          “limit hides loop”: {LIMIT_HIDES_LOOP_HELP}
+        </p>
+      )}
       <table className="lw-table" aria-label={`Routes from ${network.depotIds[solve.origin]}`} aria-rowcount={visible.length + 1} data-testid="results-table">
         <thead>
           <tr aria-rowindex={1}>

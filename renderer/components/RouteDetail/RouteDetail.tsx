@@ -3,7 +3,7 @@
 // own as CSV or as a printed sheet, and a button to plan from this depot instead.
 
 import type { LanewrightHost } from '../../../main/ipc/contract';
-import { applyCsvDialect, exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
+import { applyCsvDialect, counted, exportFileName, netCost, ROUTE_CAUTION, routeSheetCsv } from '../../../engine/index';
 import { csvDialect } from '../../app/csv-dialect-store';
 import { formatDriveMinutes, formatMoney, formatMoneyWithCode, depotLabel } from '../../model/format';
 import { flagExplanations } from '../../model/flags';
@@ -43,14 +43,16 @@ interface Leg {
   rebate: number;
 }
 
-// One lane of the route with its amounts under the scenario; a lane the scenario adds reads its
-// amounts from its change. Null for an added lane that could not be traced (cost in the total only).
+// One lane of the route with its amounts under the scenario; a lane only the scenario plans (added,
+// or a file row its validity change brings in) reads them from the solve's list. Null for a lane that
+// could not be traced (cost in the total only).
 function legOf(network: NetworkView, amounts: LaneAmounts, added: readonly AddedLane[], e: number): Leg | null {
   if (e < 0) {
     const a = addedLaneOf(added, e);
     if (!a) return null;
     const l = a.lane;
-    return { name: `${l.from} → ${l.to}`, title: `Added by the scenario (change ${a.changeIndex + 1})${l.ref ? `, ref ${l.ref}` : ''}`, mark: ' + added', toll: l.tollMinor, fuel: l.fuelMinor, fees: l.feesMinor, rebate: l.rebateMinor };
+    const title = a.kind === 'added' ? `Added by the scenario (change ${a.changeIndex + 1})` : `Lanes file row ${a.sourceRow}, valid on the date only by the scenario (change ${a.changeIndex + 1})`;
+    return { name: `${l.from} → ${l.to}`, title: `${title}${l.ref ? `, ref ${l.ref}` : ''}`, mark: a.kind === 'added' ? ' + added' : ' + valid by scenario', toll: l.tollMinor, fuel: l.fuelMinor, fees: l.feesMinor, rebate: l.rebateMinor };
   }
   return {
     name: `${network.depotIds[network.laneFrom[e]]} → ${network.depotIds[network.laneTo[e]]}`,
@@ -97,7 +99,7 @@ export function RouteDetail({ network, solve, amounts, depot, route, added, onPl
       {status === 1 && route && route.lanes.length > 0 && (
         <>
           <p>
-            <strong>{formatMoneyWithCode(solve.cost[depot], network.currency, network.exponent)}</strong> over {route.lanes.length} leg{route.lanes.length === 1 ? '' : 's'}, drive time {formatDriveMinutes(solve.driveMinutes[depot])}.
+            <strong>{formatMoneyWithCode(solve.cost[depot], network.currency, network.exponent)}</strong> over {counted(route.lanes.length, 'leg')}, drive time {formatDriveMinutes(solve.driveMinutes[depot])}.
           </p>
           <p className="lw-muted" data-testid="route-caution">
             {ROUTE_CAUTION}

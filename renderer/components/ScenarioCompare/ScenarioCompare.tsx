@@ -22,22 +22,27 @@ export interface ScenarioCompareProps {
   onLoadFile(): void;
   /** Saves the scenario as a scenario file (for `lanewright compare --scenario`). */
   onSaveFile(): void;
+  /** Exports the comparison (one row per depot, as `lanewright compare` writes it) as CSV. */
+  onExport(): void;
 }
 
 const STATUS = ['unreachable', 'reachable', 'unbounded'];
 
 /**
- * Depots whose status or cost differs from the base, largest change first (status changes on top).
- * The words are made per row on screen (`movedText`): formatting 50,000 moved depots per edit held
- * up the page.
+ * Depots whose status, cost or route differs from the base, largest change first (status changes on
+ * top, then cost changes, then depots whose route changed at the same cost). The words are made per
+ * row on screen (`movedText`): formatting 50,000 moved depots per edit held up the page.
  */
-function movedDepots(network: NetworkView, solve: SolveView): { d: number; delta: number }[] {
+function movedDepots(network: NetworkView, solve: SolveView): { d: number; delta: number; routeChanged: boolean }[] {
   const base = solve.base;
   if (!base) return [];
-  const moved: { d: number; delta: number }[] = [];
+  const moved: { d: number; delta: number; routeChanged: boolean }[] = [];
   for (let d = 0; d < network.depotIds.length; d++) {
-    if (base.status[d] !== solve.status[d]) moved.push({ d, delta: Infinity });
-    else if (solve.status[d] === 1 && base.cost[d] !== solve.cost[d]) moved.push({ d, delta: Math.abs(solve.cost[d] - base.cost[d]) });
+    // Whether the cheapest route changed: the worker decides it as `lanewright compare` does.
+    const routeChanged = base.routeChanged[d] === 1;
+    if (base.status[d] !== solve.status[d]) moved.push({ d, delta: Infinity, routeChanged });
+    else if (solve.status[d] === 1 && base.cost[d] !== solve.cost[d]) moved.push({ d, delta: Math.abs(solve.cost[d] - base.cost[d]), routeChanged });
+    else if (routeChanged) moved.push({ d, delta: 0, routeChanged });
   }
   return moved.sort((a, b) => b.delta - a.delta || a.d - b.d);
 }
@@ -48,10 +53,11 @@ function movedText(network: NetworkView, solve: SolveView, d: number): string {
   if (base.status[d] !== solve.status[d]) return `${STATUS[base.status[d]]} → ${STATUS[solve.status[d]]}`;
   const money = (v: number) => formatMoney(v, network.exponent);
   const delta = solve.cost[d] - base.cost[d];
+  if (delta === 0) return `${money(solve.cost[d])}, same cost`;
   return `${money(base.cost[d])} → ${money(solve.cost[d])} (${delta > 0 ? '+' : ''}${money(delta)})`;
 }
 
-export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile, onSaveFile }: ScenarioCompareProps) {
+export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFile, onSaveFile, onExport }: ScenarioCompareProps) {
   const money = (v: number) => formatMoney(v, network.exponent);
   const moved = useMemo(() => movedDepots(network, solve), [network, solve]);
   const rowWindow = useRowWindow(moved.length);
@@ -106,28 +112,33 @@ export function ScenarioCompare({ network, solve, scenario, onScenario, onLoadFi
       </button>{' '}
       <button type="button" onClick={onSaveFile}>
         Save as scenario file…
+      </button>{' '}
+      <button type="button" onClick={onExport}>
+        Export comparison (CSV)
       </button>
       {scenario.changes.some((c) => c.kind === 'add-lane') && <p className="lw-muted">Lanes the scenario adds are listed first in the lane table and drawn dotted, labelled “Added”, on the map.</p>}
       <h3>What moved from {network.depotIds[solve.origin]}</h3>
       {moved.length === 0 ? (
-        <p>No depot’s status or cost changed.</p>
+        <p>No depot’s status, cost or route changed.</p>
       ) : (
-        <table className="lw-compact" aria-label={`Depots whose cost or status changed (${moved.length})`} aria-rowcount={moved.length + 1}>
+        <table className="lw-compact" aria-label={`Depots whose cost, status or route changed (${moved.length})`} aria-rowcount={moved.length + 1}>
           <thead>
             <tr aria-rowindex={1}>
               <th scope="col">Depot</th>
               <th scope="col">Base → scenario</th>
+              <th scope="col">Route</th>
             </tr>
           </thead>
           <tbody ref={rowWindow.bodyRef}>
-            <SpacerRow heightPx={rowWindow.padTop} columns={2} />
+            <SpacerRow heightPx={rowWindow.padTop} columns={3} />
             {moved.slice(rowWindow.start, rowWindow.end).map((m, k) => (
-              <tr key={m.d} aria-rowindex={rowWindow.start + k + 2} data-moved-depot={network.depotIds[m.d]}>
+              <tr key={m.d} aria-rowindex={rowWindow.start + k + 2} data-moved-depot={network.depotIds[m.d]} data-route-changed={m.routeChanged ? 'yes' : 'no'}>
                 <th scope="row">{network.depotIds[m.d]}</th>
                 <td>{movedText(network, solve, m.d)}</td>
+                <td>{m.routeChanged ? 'changed' : 'same'}</td>
               </tr>
             ))}
-            <SpacerRow heightPx={rowWindow.padBottom} columns={2} />
+            <SpacerRow heightPx={rowWindow.padBottom} columns={3} />
           </tbody>
         </table>
       )}

@@ -2,6 +2,7 @@
 // A polite live region, so screen readers hear results without losing their place.
 
 import { useMemo } from 'react';
+import { counted } from '../../../engine/index';
 import { formatMs } from '../../model/format';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 
@@ -29,7 +30,7 @@ export function StatusBar({ network, solve, roundTripMs, solving, message }: Sta
     <footer className="lw-status" role="status" aria-live="polite">
       {network && (
         <span>
-          {network.depotIds.length} depots · {network.laneFrom.length} lanes
+          {counted(network.depotIds.length, 'depot')} · {counted(network.laneFrom.length, 'lane')}
         </span>
       )}
       {solve && (

@@ -1,4 +1,4 @@
-// The header: product name, what is loaded, and the commands (sample scenarios, import, save,
+// The header: product name, what is loaded, and the commands (the sample carrier, import, save,
 // exports, about). In the desktop app the same commands are also in the application menu.
 
 import type { ExportChoice } from '../../model/export-file';
@@ -36,10 +36,10 @@ export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImp
       </div>
       <nav className="lw-commands" aria-label="Commands">
         <button type="button" {...busy} onClick={() => !importing && onSample(false)}>
-          Sample plan
+          Sample carrier
         </button>
         <button type="button" {...busy} onClick={() => !importing && onSample(true)}>
-          Sample with rebate loop
+          Sample carrier with rebate loop
         </button>
         <button type="button" {...busy} onClick={() => !importing && onImport()}>
           Import CSV…
@@ -69,6 +69,8 @@ export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImp
             <option value="geojson">Network and routes (GeoJSON)</option>
             <option value="review-html">Contract review report (HTML)</option>
             <option value="scenario-json">Scenario file (JSON)</option>
+            <option value="compare-csv">Scenario comparison (CSV)</option>
+            <option value="review-csv">Contract review, one day (CSV)</option>
           </select>
         </label>
         <CsvDialectPicker />

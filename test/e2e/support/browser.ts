@@ -106,3 +106,21 @@ export function recordTimings(key: string, figures: Record<string, unknown>): vo
   all[key] = figures;
   writeFileSync(TIMINGS_FILE, JSON.stringify(all, null, 2) + '\n');
 }
+
+/** openApp with the first-run notice read and the first plan on screen. */
+export async function openReadyApp(viewport?: { width: number; height: number }): Promise<Session> {
+  const session = await openApp(viewport);
+  await session.page.getByRole('button', { name: 'I understand' }).click();
+  await waitForPlan(session.page);
+  return session;
+}
+
+/** Types an amount into the nth lane table cell of `field` ("rebate", "toll", ...) and waits for the re-plan. */
+export async function editLaneAmount(page: Page, field: string, nth: number, amount: string): Promise<void> {
+  await page.getByRole('tab', { name: /Lanes/ }).click();
+  const cell = page.locator(`[data-testid="lane-table"] input[aria-label^="${field} of lane"]`).nth(nth);
+  const before = await solveCount(page);
+  await cell.fill(amount);
+  await cell.press('Enter');
+  await waitForPlan(page, before);
+}

@@ -1,4 +1,4 @@
-// The demo scenario stays what sample-data/README.md says it is: the clean lanes file has no errors,
+// The sample carrier stays what sample-data/README.md says it is: the clean lanes file has no errors,
 // warnings or rebate loop; the loop variant has the FRA/SXB loop (-1.40 per lap) only on dates when
 // both rebate clauses are valid, and the seasonal MHG/KRL loop (clause 8.1) only for the 2-axle class
 // from June to August; RTM plans as an origin for both vehicle classes.

@@ -32,9 +32,9 @@ describe('describeChanges', () => {
     const fresh = describeChanges(imported, overlay, scenario, 2);
     expect(describeChanges(imported, overlay, scenario, 2, index)).toEqual(fresh);
     expect(fresh.map((c) => [c.text, c.applied])).toEqual([
-      ['A>B|R1|2: toll 5axle 7.50 → 9.00', true],
-      ['B>C||1: closed', true],
-      ['C>A||1: fees ? → 1.00', false],
+      ['A → B, ref R1, 2nd row: toll 5axle 7.50 → 9.00', true],
+      ['B → C, no ref: closed', true],
+      ['C → A, no ref: fees ? → 1.00', false],
     ]);
   });
 });

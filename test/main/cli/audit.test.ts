@@ -122,7 +122,7 @@ describe('lanewright audit', () => {
       expect(report.fix_plan_verified).toBe(true);
       const head = report.headroom.find((h: { row: number }) => h.row === 2);
       expect(head).toMatchObject({ floor_minor: 1000, set_by: { from: '2026-03-01', to: '2026-09-30' } });
-      expect(stderr).toMatch(/calendar review: 2026-01-01 to 2026-12-31, 3 period\(s\)/);
+      expect(stderr).toMatch(/calendar review: 2026-01-01 to 2026-12-31, 3 periods/);
       expect(stderr).toMatch(/loop 1: A > B > A, clauses 7.2, 2026-03-01 to 2026-09-30/);
     });
 

@@ -31,7 +31,9 @@ describe('lanewright compare', () => {
     ]);
     expect(report.loops_appeared).toMatchObject([{ depots: ['B', 'C'], rows: [3, 5], net_per_lap_minor: -300, reached_from_origin: true }]);
     expect(report.problems).toMatchObject([{ change: 3, code: 'lane-missing', lane: 'C>A||1' }]);
-    expect(stderr).toMatch(/C>A\|\|1/);
+    // The message names the lane in words; the key text stays in the JSON's lane field (for files).
+    expect(stderr).toMatch(/names lane C → A, no ref, which/);
+    expect(stderr).not.toMatch(/C>A\|\|1/);
     expect(stderr).toMatch(/creates a rebate loop B > C/);
 
     const csv = await runCli([...args, '--out', join(dir, 'compare.csv')]);

@@ -50,7 +50,7 @@ describe('lanewright dispatch', () => {
     expect(r.stderr).toContain('row 3, column "to", value "RTM"');
     const skipped = await runCli([...BASE.slice(0, 5), '--loads', join(dir, 'loads.csv'), '--date', '2026-08-15', '--skip-invalid']);
     expect(skipped.status).toBe(0);
-    expect(skipped.stderr).toContain('2 row(s), 0 accepted, 2 rejected');
+    expect(skipped.stderr).toContain('2 rows, 0 accepted, 2 rejected');
   });
 
   it('refuses too many alternatives', async () => {

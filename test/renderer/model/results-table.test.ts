@@ -16,7 +16,7 @@ function fixture(): { network: NetworkView; solve: SolveView } {
     legs: Int32Array.from([0, 2, -1, -1, 1]),
     driveMinutes: Float64Array.from([0, 600, NaN, NaN, 90]),
     flags: Uint8Array.from([0, FLAG_LONG_DRIVE, FLAG_UNBOUNDED, 0, 0]),
-    base: { status: Uint8Array.from([1, 1, 1, 0, 1]), cost: Float64Array.from([0, 450, 300, NaN, 200]), legs: Int32Array.from([0, 2, 1, -1, 1]) },
+    base: { status: Uint8Array.from([1, 1, 1, 0, 1]), cost: Float64Array.from([0, 450, 300, NaN, 200]), legs: Int32Array.from([0, 2, 1, -1, 1]), routeChanged: new Uint8Array(5) },
   } as unknown as SolveView;
   return { network, solve };
 }

@@ -55,7 +55,7 @@ describe('worker session on the overlay', () => {
     const scenario = setLaneAmount(emptyScenario(), laneKeys(view)[e], 'toll', 900, 819, view.plannedClass);
     const [, onLight] = drive([load(sample('depots.csv'), sample('lanes.csv'), light), solve('LUX', light, scenario)]);
     expect(solvedView(onLight).overlay.toll[e]).toBe(900);
-    expect(solvedView(onLight).overlay.changes[0].text).toBe('LUX>SXB|BFH-L-014|1: toll 2axle 8.19 → 9.00');
+    expect(solvedView(onLight).overlay.changes[0].text).toBe('LUX → SXB, ref BFH-L-014: toll 2axle 8.19 → 9.00');
     const [heavyLoaded, onHeavy] = drive([load(sample('depots.csv'), sample('lanes.csv'), heavy), solve('LUX', heavy, scenario)]);
     const h = laneKeys(loadedView(heavyLoaded)).findIndex((k) => k.from === 'LUX' && k.to === 'SXB');
     expect(solvedView(onHeavy).overlay.toll[h]).toBe(1820);
@@ -67,7 +67,8 @@ describe('worker session on the overlay', () => {
     const [, solved] = drive([load(sample('depots.csv'), sample('lanes.csv'), plan), solve('RTM', plan, scenario)]);
     const change = solvedView(solved).overlay.changes[0];
     expect(change.applied).toBe(false);
-    expect(change.problem).toMatch(/RTM>ANR\|NO-SUCH-REF\|1/);
+    expect(change.problem).toMatch(/RTM → ANR, ref NO-SUCH-REF/);
+    expect(change.problem).not.toMatch(/RTM>ANR\|/);
     expect(scenario.changes).toHaveLength(1);
   });
 

@@ -226,8 +226,12 @@ describe('scenarios that change the lane set', () => {
     const first = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }]);
     const mil = (first[0] as { network: NetworkView }).network.depotIds.indexOf('MIL');
     expect((first[1] as { result: SolveView }).result.cost[mil]).toBe(6000);
-    const [, , route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil, solveId: 2 }]);
-    expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([addedLaneRef(2)]);
+    const [, solved, route] = drive([load('lanes.csv'), { kind: 'solve', id: 2, settings, scenario }, { kind: 'route', id: 3, target: mil, solveId: 2 }]);
+    // Results name a lane only the scenario plans by its place in the solve's list, which says its change.
+    const extra = (solved as { result: SolveView }).result.extraLanes;
+    expect(extra.map((a) => a.changeIndex)).toEqual([1, 2]);
+    expect((route as { route: { lanes: number[] } }).route.lanes).toEqual([addedLaneRef(1)]);
+    expect(extra[1].changeIndex).toBe(2);
   });
   it('answers a route only for the solve the UI shows, not for a newer one it dropped', () => {
     const lane = { from: 'RTM', to: 'MIL', ref: 'WHATIF-3', tollMinor: 1000, feesMinor: 0, fuelMinor: 5000, rebateMinor: 0, validFrom: null, validTo: null, distanceKm: null, driveMinutes: null };
