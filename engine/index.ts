@@ -62,6 +62,7 @@ export * from './export/route-sheet-csv';
 export * from './export/review-csv';
 export * from './export/compare-csv';
 export * from './export/file-name';
+export * from './export/export-menu';
 export * from './export/csv-dialect';
 export * from './export/export-settings';
 export * from './export/lanes-csv';
