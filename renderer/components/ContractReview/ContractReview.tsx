@@ -145,7 +145,7 @@ export function ContractReview({ engine, network, scenario, onScenario, host, on
 function HeadroomThreads({ threads }: { threads: HeadroomThreadsView }) {
   if (threads.runs === 0) return null;
   return (
-    <p className="lw-muted" data-testid="review-threads" data-threads={threads.used} data-available={threads.available}>
+    <p className="lw-muted" data-testid="review-threads" data-threads={threads.used} data-available={threads.available} data-pairs={threads.pairs} data-ms={threads.ms}>
       Headroom {plural(threads.runs, 'search', 'searches')}: {counted(threads.runs, 'network')}, {threads.pairs.toLocaleString('en')} lane {plural(threads.pairs, 'pair')} in {formatMs(threads.ms)}; threads used: {threads.used} of {threads.available}
       {threads.oneThreadBecause !== null ? ` (one thread: ${threads.oneThreadBecause})` : ''}.
     </p>
