@@ -22,6 +22,8 @@ export * from './audit/neutralise';
 export * from './audit/fix-plan';
 export * from './audit/headroom';
 export * from './audit/headroom-buckets';
+export * from './audit/headroom-shared-jobs';
+export * from './audit/headroom-shared-runner';
 export * from './audit/network-audit';
 export * from './report/audit-report';
 export { reviewCalendar, reviewCalendarOf, type CalendarReview, type CalendarReviewOptions, type CalendarPhase } from './audit/calendar/calendar-review';
