@@ -15,6 +15,7 @@ import { LaneLimitsBuilder } from './lane-limits';
 import { LaneTableBuilder } from './lane-table';
 import { PlainLaneRows } from './lane-row-fast';
 import { DepotIdIndex } from './depot-id-index';
+import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { isBlankRecord, RecordFileReader } from './record-file-reader';
@@ -238,8 +239,20 @@ export class LanesReader extends RecordFileReader {
   }
 
   protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    const fast = this.fastRows();
+    return fast !== null && fast !== undefined && fast.read(text, start, end, row, delimiter);
+  }
+
+  protected override readPlainBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    const fast = this.fastRows();
+    if (fast === undefined) return PLAIN_LATER;
+    return fast === null ? PLAIN_NEVER : fast.readBytes(bytes, start, limit, row, delimiter);
+  }
+
+  // The fast path, made once the header and the currency are known (undefined until then, null = not for this file).
+  private fastRows(): PlainLaneRows | null | undefined {
     if (this.fast === undefined) {
-      if (this.currency === null || this.header === null) return false;
+      if (this.currency === null || this.header === null) return undefined;
       this.fast = PlainLaneRows.forFile({
         header: this.header,
         columnCount: this.headerCells.length,
@@ -250,7 +263,7 @@ export class LanesReader extends RecordFileReader {
         table: this.table,
       });
     }
-    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
+    return this.fast;
   }
 
   /**

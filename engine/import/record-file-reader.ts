@@ -3,6 +3,7 @@
 // flagged, and the file-level problems (empty file, not text, header without rows).
 
 import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
+import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import type { ReportCollector } from './report-collector';
 import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
 import type { FileCounts } from './types';
@@ -71,6 +72,18 @@ export abstract class RecordFileReader implements CsvRecordSink {
     return true;
   }
 
+  /** The byte stream's fast path (PlainBytesTaker): the offset of the line's LF when the reader took the plain row. */
+  plainBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    if (!this.headerRead) return PLAIN_LATER;
+    if (this.unusable) return PLAIN_NEVER;
+    const lf = this.readPlainBytes(bytes, start, limit, row, delimiter);
+    if (lf >= 0) {
+      this.counts.total++;
+      this.counts.accepted++;
+    }
+    return lf;
+  }
+
   issue(issue: CsvStreamIssue): void {
     if (issue.code === 'not-text') this.notText = true;
     takeStreamIssue(this.report, this.file, this.counts, issue, this.headerRead, this.headerCells);
@@ -112,6 +125,10 @@ export abstract class RecordFileReader implements CsvRecordSink {
   /** Reads a plain row straight from the text, or returns false to get it as cells in readRow. */
   protected readPlainRow(_text: string, _start: number, _end: number, _row: number, _delimiter: string): boolean {
     return false;
+  }
+  /** Reads a plain row straight from UTF-8 bytes: the offset of its LF, or PLAIN_LATER / PLAIN_NEVER. */
+  protected readPlainBytes(_bytes: Uint8Array, _start: number, _limit: number, _row: number, _delimiter: number): number {
+    return PLAIN_NEVER;
   }
   /** Called with each block before its data rows are read. */
   protected beforeRows(_records: string[][], _start: number): void {}

@@ -100,7 +100,8 @@ export class Utf8ChunkDecoder {
       end = joined.length;
     }
     const cut = final ? end : utf8Cut(bytes, start, end);
-    if (cut < end) this.carried = bytes.slice(cut, end);
+    // A copy (a Node Buffer's slice would be a view of a buffer the reader reuses).
+    if (cut < end) this.carried = Uint8Array.prototype.slice.call(bytes, cut, end);
     return cut > start ? this.textOf(bytes, start, cut) : '';
   }
 
