@@ -13,7 +13,7 @@ import { byteDelimiter } from '../io/csv-byte-stream';
 import { asciiText } from '../text/utf8';
 import type { DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
-import { byteClasses, CELL_BYTE } from './plain-cells';
+import { APOSTROPHE_BYTE, byteClasses, CELL_BYTE } from './plain-cells';
 import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-cells';
 import type { LaneTableBuilder } from './lane-table';
 
@@ -48,6 +48,8 @@ export class PlainLaneRows {
   private readonly kinds: Uint8Array;
   /** Per column: the value a parsed cell read (NaN or 0 for an empty one, as the general reader). */
   private readonly values: Float64Array;
+  /** Per text column: 1 when the cell holds an apostrophe (the exporter's formula guard may be there). */
+  private readonly apostrophes: Uint8Array;
   private readonly col: Partial<Record<LaneField, number>> = {};
   private readonly classColumns: number[];
   private readonly unknownColumns: number[];
@@ -66,6 +68,7 @@ export class PlainLaneRows {
     this.ends = new Int32Array(n);
     this.kinds = new Uint8Array(n);
     this.values = new Float64Array(n);
+    this.apostrophes = new Uint8Array(n);
     for (const [field, column] of setup.header.columns) this.col[field] = column.index;
     this.classColumns = setup.header.classTolls.map((c) => c.index);
     this.unknownColumns = setup.header.unknown.map((u) => u.index);
@@ -108,7 +111,7 @@ export class PlainLaneRows {
   }
 
   /**
-   * Reads the line of UTF-8 bytes from `start` (ended by LF or CRLF before `limit`) into the lane
+   * Reads the line of UTF-8 bytes from `start` (ended by LF or CRLF; bytes[limit - 1] is an LF) into the lane
    * table and returns the offset of its LF, or returns -1 without touching anything when the row is
    * not plain. `delimiter` is a `byteDelimiter` code.
    */
@@ -157,7 +160,8 @@ export class PlainLaneRows {
   // bounded in `starts`/`ends` (text cells: printable ASCII, no quote, nothing to trim, no leading
   // apostrophe). Every byte is looked at once; any other byte ends a parsed cell, and a cell must end
   // at the delimiter (the last at LF or CRLF), so a quote, a control or non-ASCII byte, a stray space
-  // or a wrong number of cells refuses the line. Returns the offset of the LF, or REFUSED.
+  // or a wrong number of cells refuses the line. bytes[limit - 1] is an LF (every reader's contract),
+  // which ends every cell, so the loops need no bound of their own. Returns the offset of the LF, or REFUSED.
   private cut(bytes: Uint8Array, start: number, limit: number, delimiter: number): number {
     const kinds = this.kinds;
     const values = this.values;
@@ -168,62 +172,70 @@ export class PlainLaneRows {
       this.classesOf = delimiter;
     }
     const classes = this.classes;
+    const apostrophes = this.apostrophes;
+    const markDigit = this.decimalCode - 48;
+    const exponent = this.exponent;
     const last = kinds.length - 1;
     let i = start;
     for (let k = 0; ; k++) {
       const s = i;
       switch (kinds[k]) {
         case TEXT: {
-          while (i < limit && classes[bytes[i]] === CELL_BYTE) i++;
+          let apostrophe = 0;
+          for (;;) {
+            const kind = classes[bytes[i]];
+            if (kind === CELL_BYTE) i++;
+            else if (kind === APOSTROPHE_BYTE) {
+              apostrophe = 1;
+              i++;
+            } else break;
+          }
           if (i > s) {
             const first = bytes[s];
             if (first === 32 || first === 39 || bytes[i - 1] === 32) return REFUSED;
           }
           starts[k] = s;
           ends[k] = i;
+          apostrophes[k] = apostrophe;
           break;
         }
         case AMOUNT: {
+          // Digits with at most one decimal mark after the first digit; the counts come from positions.
           let value = 0;
-          let digits = 0;
-          let fraction = -1;
-          for (; i < limit; i++) {
-            const c = bytes[i];
-            const d = c - 48;
-            if (d >= 0 && d <= 9) {
-              value = value * 10 + d;
-              digits++;
-              if (fraction >= 0) fraction++;
-            } else if (c === this.decimalCode && fraction === -1 && digits > 0) fraction = 0;
+          let mark = -1;
+          for (;;) {
+            const d = bytes[i] - 48;
+            if (d >>> 0 <= 9) value = value * 10 + d;
+            else if (d === markDigit && mark === -1 && i > s) mark = i;
             else break;
+            i++;
           }
           if (i === s) values[k] = NaN;
           else {
-            if (digits === 0 || fraction === 0 || fraction > this.exponent) return REFUSED;
-            const scale = this.exponent - Math.max(fraction, 0);
+            const fraction = mark === -1 ? 0 : i - mark - 1;
+            if (mark !== -1 && (fraction === 0 || fraction > exponent)) return REFUSED;
+            const scale = exponent - fraction;
             // Fifteen digits in minor units stay exact and far inside the safe range; longer goes the general way.
-            if (digits + scale > 15) return REFUSED;
+            if (i - s - (mark === -1 ? 0 : 1) + scale > 15) return REFUSED;
             values[k] = value * POW10[scale];
           }
           break;
         }
         case DISTANCE: {
           let value = 0;
-          let whole = 0;
-          let fraction = -1;
-          for (; i < limit; i++) {
-            const c = bytes[i];
-            const d = c - 48;
-            if (d >= 0 && d <= 9) {
-              value = value * 10 + d;
-              if (fraction >= 0) fraction++;
-              else whole++;
-            } else if (c === this.decimalCode && fraction === -1 && whole > 0) fraction = 0;
+          let mark = -1;
+          for (;;) {
+            const d = bytes[i] - 48;
+            if (d >>> 0 <= 9) value = value * 10 + d;
+            else if (d === markDigit && mark === -1 && i > s) mark = i;
             else break;
+            i++;
           }
           if (i === s) values[k] = NaN;
           else {
-            if (whole === 0 || whole > 5 || fraction === 0 || fraction > 6) return REFUSED;
+            const whole = (mark === -1 ? i : mark) - s;
+            const fraction = mark === -1 ? 0 : i - mark - 1;
+            if (whole > 5 || (mark !== -1 && (fraction === 0 || fraction > 6))) return REFUSED;
             // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
             const read = fraction > 0 ? value / POW10[fraction] : value;
             const km = this.miles ? read * KM_PER_MILE : read;
@@ -236,10 +248,11 @@ export class PlainLaneRows {
         case DRIVE: {
           // Whole minutes within the plausible bound; hours per the header go the general way.
           let value = 0;
-          for (; i < limit; i++) {
+          for (;;) {
             const d = bytes[i] - 48;
-            if (d < 0 || d > 9) break;
+            if (d >>> 0 > 9) break;
             value = value * 10 + d;
+            i++;
           }
           if (i === s) values[k] = NaN;
           else {
@@ -280,8 +293,9 @@ export class PlainLaneRows {
 
   private kept(bytes: Uint8Array, column: number | undefined): string | undefined {
     if (column === undefined || this.starts[column] === this.ends[column]) return undefined;
+    const text = asciiText(bytes, this.starts[column], this.ends[column]);
     // The exporter's formula guard may also sit after a separator inside the cell ("a;'=b"): removed as cellText does.
-    return withoutFormulaGuard(asciiText(bytes, this.starts[column], this.ends[column]));
+    return this.apostrophes[column] === 1 ? withoutFormulaGuard(text) : text;
   }
 }
 

@@ -42,6 +42,8 @@ function plainCell(text: string, start: number, end: number): boolean {
 // cell ends there, and a line holding any of the last three is decoded and read as text).
 /** A byte that may stand in a plain cell: printable ASCII but the quote and the file's delimiter. */
 export const CELL_BYTE = 0;
+/** The apostrophe, a cell byte the reader notes (a kept cell holding one may carry the formula guard). */
+export const APOSTROPHE_BYTE = 2;
 const tables = new Map<number, Uint8Array>();
 
 /** Per byte value, CELL_BYTE or not, for lines cut at `delimiter` (a `byteDelimiter` code). */
@@ -50,6 +52,7 @@ export function byteClasses(delimiter: number): Uint8Array {
   if (table === undefined) {
     table = new Uint8Array(256).fill(1);
     for (let c = 32; c < 127; c++) if (c !== 34) table[c] = CELL_BYTE;
+    table[39] = APOSTROPHE_BYTE;
     table[delimiter] = 1;
     tables.set(delimiter, table);
   }
