@@ -149,7 +149,16 @@ export class PlainLaneRows {
     t.driveMinutes[i] = col.drive === undefined ? NaN : values[col.drive];
     t.validFrom[i] = validFrom;
     t.validTo[i] = validTo;
-    if (col.ref !== undefined) t.ref.push(this.kept(bytes, col.ref));
+    if (col.ref !== undefined) {
+      // A plain ref stays bytes until the table's refs are read; one with an apostrophe (a formula
+      // guard to take off) is made now.
+      const r = col.ref;
+      if (this.starts[r] === this.ends[r] || this.apostrophes[r] === 1) t.ref.push(this.kept(bytes, r));
+      else {
+        t.ref.push(undefined);
+        t.addRefBytes(i, bytes, this.starts[r], this.ends[r]);
+      }
+    }
     if (col.notes !== undefined) t.notes.push(this.kept(bytes, col.notes));
     if (t.clause) t.clause.push(this.kept(bytes, col.clause));
     for (let k = 0; k < this.unknownColumns.length; k++) t.extra[k].values.push(this.kept(bytes, this.unknownColumns[k]));

@@ -32,7 +32,7 @@ function readLanes(text: string, fast: boolean, chunk: number) {
     rows: reader.rows,
     columns: [t.from, t.to, t.sourceRow, t.toll, t.fuel, t.fees, t.rebate, t.distanceKm, t.driveMinutes, t.validFrom, t.validTo].map(column),
     classTolls: t.classTolls.map((c) => column(c.toll)),
-    ref: t.ref.slice(0, n),
+    ref: t.build().ref.slice(0, n),
     notes: t.notes.slice(0, n),
     clause: t.clause?.slice(0, n),
     extra: t.extra.map((x) => x.values.slice(0, n)),

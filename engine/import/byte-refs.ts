@@ -1,0 +1,67 @@
+// Lane refs the byte reader kept as bytes: a million refs as a million strings cost the import about
+// a sixth of its time (made, then copied by every young collection), and `check` never reads them.
+// The bytes sit in one growing array; the lane table's `ref` column is made from them on first read,
+// and the duplicate-lane check compares them where they lie.
+
+import { asciiText } from '../text/utf8';
+
+export class ByteRefs {
+  private bytes = new Uint8Array(1 << 16);
+  private used = 0;
+  /** Per row: offset + 1 of its ref's bytes, 0 when the ref is in the text column (or blank). */
+  at: Int32Array;
+  end: Int32Array;
+
+  constructor(capacity: number) {
+    this.at = new Int32Array(capacity);
+    this.end = new Int32Array(capacity);
+  }
+
+  /** Keeps row `row`'s ref, the ASCII bytes[start, end) (never blank). */
+  add(row: number, bytes: Uint8Array, start: number, end: number): void {
+    const n = end - start;
+    if (this.used + n > this.bytes.length) {
+      const next = new Uint8Array(Math.max(this.bytes.length * 2, this.used + n));
+      next.set(this.bytes.subarray(0, this.used));
+      this.bytes = next;
+    }
+    this.bytes.set(bytes.subarray(start, end), this.used);
+    this.at[row] = this.used + 1;
+    this.used += n;
+    this.end[row] = this.used;
+  }
+
+  /** Room for `capacity` rows (the lane table grew). */
+  resize(capacity: number): void {
+    const at = new Int32Array(capacity);
+    at.set(this.at.subarray(0, Math.min(capacity, this.at.length)));
+    const end = new Int32Array(capacity);
+    end.set(this.end.subarray(0, Math.min(capacity, this.end.length)));
+    this.at = at;
+    this.end = end;
+  }
+
+  /** Puts the strings of the rows kept here into `column` (rows 0..count-1). */
+  fill(column: (string | undefined)[], count: number): void {
+    for (let r = 0; r < count; r++) if (this.at[r] > 0) column[r] = asciiText(this.bytes, this.at[r] - 1, this.end[r]);
+  }
+
+  /** Whether rows a and b have the same ref, `column` holding those not kept here. */
+  same(column: readonly (string | undefined)[], a: number, b: number): boolean {
+    const sa = this.at[a];
+    const sb = this.at[b];
+    if (sa === 0 && sb === 0) return column[a] === column[b];
+    if (sa > 0 && sb > 0) {
+      const n = this.end[a] - (sa - 1);
+      if (this.end[b] - (sb - 1) !== n) return false;
+      for (let k = 0; k < n; k++) if (this.bytes[sa - 1 + k] !== this.bytes[sb - 1 + k]) return false;
+      return true;
+    }
+    const [kept, text] = sa > 0 ? [a, b] : [b, a];
+    const other = column[text];
+    const from = this.at[kept] - 1;
+    if (other === undefined || other.length !== this.end[kept] - from) return false;
+    for (let k = 0; k < other.length; k++) if (other.charCodeAt(k) !== this.bytes[from + k]) return false;
+    return true;
+  }
+}
