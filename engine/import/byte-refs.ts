@@ -25,10 +25,13 @@ export class ByteRefs {
       next.set(this.bytes.subarray(0, this.used));
       this.bytes = next;
     }
-    this.bytes.set(bytes.subarray(start, end), this.used);
+    // A loop, not set(subarray): a view per ref cost more than the few bytes it copies.
+    const into = this.bytes;
+    let at = this.used;
+    for (let k = start; k < end; k++) into[at++] = bytes[k];
     this.at[row] = this.used + 1;
-    this.used += n;
-    this.end[row] = this.used;
+    this.used = at;
+    this.end[row] = at;
   }
 
   /** Room for `capacity` rows (the lane table grew). */
