@@ -111,6 +111,30 @@ export class PlainLaneRows {
   }
 
   /**
+   * Reads a row already cut into cells (by the text stream) as the line they make joined by
+   * `delimiter` (a comma or, in decimal-comma files, a semicolon); false when a cell holds the
+   * delimiter, a line break or anything not ASCII, or the row is not plain.
+   */
+  readCells(cells: readonly string[], row: number, delimiter: number): boolean {
+    let n = cells.length;
+    for (const cell of cells) n += cell.length;
+    if (this.scratch.length <= n) this.scratch = new Uint8Array(2 * n + 1);
+    const bytes = this.scratch;
+    let at = 0;
+    for (let k = 0; k < cells.length; k++) {
+      if (k > 0) bytes[at++] = delimiter;
+      const cell = cells[k];
+      for (let j = 0; j < cell.length; j++) {
+        const c = cell.charCodeAt(j);
+        if (c > 126 || c === delimiter || c === 10 || c === 13) return false;
+        bytes[at++] = c;
+      }
+    }
+    bytes[at++] = 10;
+    return this.readBytes(bytes, 0, at, row, delimiter) !== REFUSED;
+  }
+
+  /**
    * Reads the line of UTF-8 bytes from `start` (ended by LF or CRLF; bytes[limit - 1] is an LF) into the lane
    * table and returns the offset of its LF, or returns -1 without touching anything when the row is
    * not plain. `delimiter` is a `byteDelimiter` code.

@@ -59,8 +59,8 @@ export abstract class RecordFileReader implements CsvRecordSink {
       if (cells.length < this.headerCells.length && !this.unusable) this.warnShortRow(cells.length, firstRow + i);
       while (stray < strayQuotes.length && strayQuotes[stray].row < i) stray++;
       for (; stray < strayQuotes.length && strayQuotes[stray].row === i; stray++) this.warnStrayQuote(cells, strayQuotes[stray].column, firstRow + i);
-      if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
-      else this.counts.accepted++;
+      if (!this.unusable && (this.readPlainCells(cells, firstRow + i) || this.readRow(cells, firstRow + i))) this.counts.accepted++;
+      else this.counts.rejected++;
     }
   }
 
@@ -124,6 +124,10 @@ export abstract class RecordFileReader implements CsvRecordSink {
   protected abstract noDataRows(): void;
   /** Reads a plain row straight from the text, or returns false to get it as cells in readRow. */
   protected readPlainRow(_text: string, _start: number, _end: number, _row: number, _delimiter: string): boolean {
+    return false;
+  }
+  /** Reads a row already cut into cells by the fast path's rules, or returns false to get it in readRow. */
+  protected readPlainCells(_cells: readonly string[], _row: number): boolean {
     return false;
   }
   /** Reads a plain row straight from UTF-8 bytes: the offset of its LF, or PLAIN_LATER / PLAIN_NEVER. */
