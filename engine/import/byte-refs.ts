@@ -1,18 +1,25 @@
 // Lane refs the byte reader kept as bytes: a million refs as a million strings cost the import about
 // a sixth of its time (made, then copied by every young collection), and `check` never reads them.
 // The bytes sit in one growing array; the lane table's `ref` column is made from them on first read,
-// and the duplicate-lane check compares them where they lie.
+// and the duplicate-lane check compares them where they lie. Rows before the first byte ref keep
+// their refs in the builder's column; later refs read as text (the general reader's) wait in a Map.
 
 import { asciiText } from '../text/utf8';
 
 export class ByteRefs {
   private bytes = new Uint8Array(1 << 16);
   private used = 0;
-  /** Per row: offset + 1 of its ref's bytes, 0 when the ref is in the text column (or blank). */
-  at: Int32Array;
-  end: Int32Array;
+  /** Per row: offset + 1 of its ref's bytes, 0 when the ref is text (or blank). */
+  private at: Int32Array;
+  private end: Int32Array;
+  /** Text refs of rows from `firstRow` on. */
+  private readonly texts = new Map<number, string>();
 
-  constructor(capacity: number) {
+  /** `head`: the refs of rows 0 .. head.length - 1 (the builder's column so far). */
+  constructor(
+    private readonly head: readonly (string | undefined)[],
+    capacity: number,
+  ) {
     this.at = new Int32Array(capacity);
     this.end = new Int32Array(capacity);
   }
@@ -34,6 +41,11 @@ export class ByteRefs {
     this.end[row] = at;
   }
 
+  /** Row `row`'s ref as text (blank: undefined, nothing kept). */
+  addText(row: number, ref: string | undefined): void {
+    if (ref !== undefined) this.texts.set(row, ref);
+  }
+
   /** Room for `capacity` rows (the lane table grew). */
   resize(capacity: number): void {
     const at = new Int32Array(capacity);
@@ -44,27 +56,33 @@ export class ByteRefs {
     this.end = end;
   }
 
-  /** Puts the strings of the rows kept here into `column` (rows 0..count-1). */
-  fill(column: (string | undefined)[], count: number): void {
-    for (let r = 0; r < count; r++) if (this.at[r] > 0) column[r] = asciiText(this.bytes, this.at[r] - 1, this.end[r]);
+  /** The ref column of rows 0 .. count - 1, every ref a string. */
+  column(count: number): (string | undefined)[] {
+    const column: (string | undefined)[] = [];
+    for (let r = 0; r < count; r++) column.push(this.at[r] > 0 ? asciiText(this.bytes, this.at[r] - 1, this.end[r]) : this.text(r));
+    return column;
   }
 
-  /** Whether rows a and b have the same ref, `column` holding those not kept here. */
-  same(column: readonly (string | undefined)[], a: number, b: number): boolean {
+  /** Whether rows a and b have the same ref, without making strings of byte refs. */
+  same(a: number, b: number): boolean {
     const sa = this.at[a];
     const sb = this.at[b];
-    if (sa === 0 && sb === 0) return column[a] === column[b];
+    if (sa === 0 && sb === 0) return this.text(a) === this.text(b);
     if (sa > 0 && sb > 0) {
       const n = this.end[a] - (sa - 1);
       if (this.end[b] - (sb - 1) !== n) return false;
       for (let k = 0; k < n; k++) if (this.bytes[sa - 1 + k] !== this.bytes[sb - 1 + k]) return false;
       return true;
     }
-    const [kept, text] = sa > 0 ? [a, b] : [b, a];
-    const other = column[text];
+    const [kept, other] = sa > 0 ? [a, b] : [b, a];
+    const text = this.text(other);
     const from = this.at[kept] - 1;
-    if (other === undefined || other.length !== this.end[kept] - from) return false;
-    for (let k = 0; k < other.length; k++) if (other.charCodeAt(k) !== this.bytes[from + k]) return false;
+    if (text === undefined || text.length !== this.end[kept] - from) return false;
+    for (let k = 0; k < text.length; k++) if (text.charCodeAt(k) !== this.bytes[from + k]) return false;
     return true;
+  }
+
+  private text(row: number): string | undefined {
+    return row < this.head.length ? this.head[row] : this.texts.get(row);
   }
 }

@@ -177,11 +177,8 @@ export class PlainLaneRows {
       // A plain ref stays bytes until the table's refs are read; one with an apostrophe (a formula
       // guard to take off) is made now.
       const r = col.ref;
-      if (this.starts[r] === this.ends[r] || this.apostrophes[r] === 1) t.ref.push(this.kept(bytes, r));
-      else {
-        t.ref.push(undefined);
-        t.addRefBytes(i, bytes, this.starts[r], this.ends[r]);
-      }
+      if (this.starts[r] === this.ends[r] || this.apostrophes[r] === 1) t.setRef(i, this.kept(bytes, r));
+      else t.addRefBytes(i, bytes, this.starts[r], this.ends[r]);
     }
     if (col.notes !== undefined) t.notes.push(this.kept(bytes, col.notes));
     if (t.clause) t.clause.push(this.kept(bytes, col.clause));

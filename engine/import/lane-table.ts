@@ -39,8 +39,9 @@ export class LaneTableBuilder {
   vehicleClass: Int16Array | null = null;
   classTolls: { name: string; key: string; toll: Float64Array; header?: string }[] = [];
   classNames: string[] = [];
+  /** Refs of the rows before the first the byte reader kept as bytes (all of them without one); set with `setRef`. */
   ref: (string | undefined)[] = [];
-  /** Refs the byte reader kept as bytes (their `ref` entries stay undefined until the table is read). */
+  /** Refs from the first the byte reader kept as bytes on: made strings when the table's `ref` is read. */
   private byteRefs: ByteRefs | null = null;
   /** Null until the header has a clause column. */
   clause: (string | undefined)[] | null = null;
@@ -83,9 +84,15 @@ export class LaneTableBuilder {
     this.capacity = size;
   }
 
-  /** Row `row`'s ref as ASCII bytes (not blank, no formula guard), made a string only when read. */
+  /** Row `row`'s ref (the row just added; undefined when blank). */
+  setRef(row: number, ref: string | undefined): void {
+    if (this.byteRefs === null) this.ref.push(ref);
+    else this.byteRefs.addText(row, ref);
+  }
+
+  /** Row `row`'s ref (the row just added) as ASCII bytes (not blank, no formula guard), made a string only when read. */
   addRefBytes(row: number, bytes: Uint8Array, start: number, end: number): void {
-    this.byteRefs ??= new ByteRefs(this.capacity);
+    this.byteRefs ??= new ByteRefs(this.ref, this.capacity);
     this.byteRefs.add(row, bytes, start, end);
   }
 
@@ -118,21 +125,18 @@ export class LaneTableBuilder {
     if (kept === null) return { ...columns, ref: this.ref };
     // The ref strings are made on the first read of `ref` (an accessor from the start, so the
     // table keeps one shape); the duplicate check compares the bytes where they lie.
-    let column = this.ref;
-    let filled = false;
+    let column: (string | undefined)[] | null = null;
     const lazy: LaneTable = {
       ...columns,
       get ref() {
-        if (!filled) kept.fill(column, n);
-        filled = true;
+        column ??= kept.column(n);
         return column;
       },
       set ref(value) {
         column = value;
-        filled = true;
       },
     };
-    byteRefTables.set(lazy, (a, b) => (filled ? column[a] === column[b] : kept.same(column, a, b)));
+    byteRefTables.set(lazy, (a, b) => (column !== null ? column[a] === column[b] : kept.same(a, b)));
     return lazy;
   }
 }

@@ -222,7 +222,7 @@ export class LanesReader extends RecordFileReader {
     // Absent optional columns get no per-row entries (a lookup past the end reads undefined).
     if (col.ref !== undefined) {
       const ref = cellText(cells, col.ref);
-      t.ref.push(ref === '' ? undefined : own(ref));
+      t.setRef(i, ref === '' ? undefined : own(ref));
     }
     if (col.notes !== undefined) {
       const notes = cellText(cells, col.notes);

@@ -13,10 +13,9 @@ function tableOf(rows: { ref: string; asBytes: boolean }[]) {
   for (const { ref, asBytes } of rows) {
     const i = builder.add();
     if (asBytes && ref !== '') {
-      builder.ref.push(undefined);
       const bytes = encoder.encode(`x,${ref},y`);
       builder.addRefBytes(i, bytes, 2, bytes.length - 2);
-    } else builder.ref.push(ref === '' ? undefined : ref);
+    } else builder.setRef(i, ref === '' ? undefined : ref);
   }
   return builder.build();
 }
