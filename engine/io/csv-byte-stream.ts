@@ -30,6 +30,13 @@ export function byteDelimiter(delimiter: string): number {
   return c === 9 || (c >= 32 && c < 127 && c !== 34) ? c : -1;
 }
 
+function joined(head: Uint8Array, chunk: Uint8Array, end: number): Uint8Array {
+  const out = new Uint8Array(head.length + end);
+  out.set(head);
+  out.set(chunk.subarray(0, end), head.length);
+  return out;
+}
+
 export class CsvByteStream {
   private readonly decoder: Utf8ChunkDecoder;
   private bytesMode = false;
@@ -58,27 +65,40 @@ export class CsvByteStream {
       return;
     }
     let data = chunk;
+    let from = 0;
     if (this.carry !== null) {
-      data = new Uint8Array(this.carry.length + chunk.length);
-      data.set(this.carry);
-      data.set(chunk, this.carry.length);
+      // The carried partial line is completed by the chunk's first line; the chunk itself is not copied.
+      const lf = chunk.indexOf(10);
+      if (lf === -1 || this.carry.length + lf + 1 > MAX_LINE) data = joined(this.carry, chunk, chunk.length);
+      else {
+        const line = joined(this.carry, chunk, lf + 1);
+        const stop = this.lines(line, 0, line.length);
+        this.carry = null;
+        if (stop !== -1) {
+          this.toText(this.decoder.decode(line, stop, line.length) + this.decoder.decode(chunk, lf + 1, chunk.length));
+          return;
+        }
+        from = lf + 1;
+      }
       this.carry = null;
     }
     const last = data.lastIndexOf(10);
-    let textFrom = last === -1 ? 0 : this.lines(data, 0, last + 1);
-    if (textFrom === -1) {
-      const rest = last + 1;
+    let textFrom = last < from ? from : this.lines(data, from, last + 1);
+    if (textFrom === -1 || last < from) {
+      const rest = last < from ? from : last + 1;
       if (data.length - rest <= MAX_LINE) {
         if (rest < data.length) this.carry = data.slice(rest);
         return;
       }
       textFrom = rest;
-    } else if (last === -1 && data.length <= MAX_LINE) {
-      this.carry = data === chunk ? chunk.slice() : data;
-      return;
     }
+    this.toText(this.decoder.decode(data, textFrom, data.length));
+  }
+
+  // The text stream reads on from here; bytes resume when it stands between records again.
+  private toText(text: string): void {
     this.bytesMode = false;
-    this.text.feed(this.decoder.decode(data, textFrom, data.length));
+    if (text !== '') this.text.feed(text);
     this.tryBytes();
   }
 
