@@ -92,3 +92,4 @@ export * from './report/dispatch-report';
 export * from './export/dispatch-csv';
 export { formatCsvRows } from './io/csv-papaparse';
 export * from './json/zod-checker';
+export { Utf8ChunkDecoder, type Utf8TextOf } from './text/utf8';

@@ -4,6 +4,7 @@
 // holding them all was optimised inside its first loop and thrown back to the interpreter at each
 // later one ("insufficient type feedback"), which cost more than the work (about 0.4 s per million rows).
 
+import { sameRefOf } from './lane-table';
 import type { LaneTable } from './types';
 
 export interface DuplicateLane {
@@ -43,7 +44,9 @@ function byOrigin(from: Int32Array, to: Int32Array, n: number, start: Int32Array
 // Per origin, lanes to the same destination are chained by position in the origin order; only a
 // lane whose destination repeats is compared (reference, class, validity) with the chain's rows.
 function repeats(table: LaneTable, depotCount: number, start: Int32Array, order: Int32Array, toInOrder: Int32Array): DuplicateLane[] {
-  const { ref, validFrom, validTo } = table;
+  const { validFrom, validTo } = table;
+  // Not `table.ref`: reading it would make every ref the byte reader kept a string.
+  const sameRef = sameRefOf(table);
   const cls = table.vehicleClass;
   const stamp = new Int32Array(depotCount).fill(-1);
   const head = new Int32Array(depotCount);
@@ -62,7 +65,7 @@ function repeats(table: LaneTable, depotCount: number, start: Int32Array, order:
       let match = -1;
       for (let q = head[t]; q !== -1; q = next[q]) {
         const c = order[q];
-        if (validFrom[c] === validFrom[e] && validTo[c] === validTo[e] && (cls === null || cls[c] === cls[e]) && ref[c] === ref[e]) {
+        if (validFrom[c] === validFrom[e] && validTo[c] === validTo[e] && (cls === null || cls[c] === cls[e]) && sameRef(c, e)) {
           match = c;
           break;
         }

@@ -15,6 +15,7 @@ import { LaneLimitsBuilder } from './lane-limits';
 import { LaneTableBuilder } from './lane-table';
 import { PlainLaneRows } from './lane-row-fast';
 import { DepotIdIndex } from './depot-id-index';
+import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { isBlankRecord, RecordFileReader } from './record-file-reader';
@@ -25,6 +26,8 @@ const digitsOf = (code: string) => currencyExponent(code) ?? 2;
 export interface LanesReaderOptions {
   currency?: string;
   exchangeRates?: Record<string, string>;
+  /** False: every row through the general reader (the tests compare the fast path with it). */
+  plainRows?: boolean;
 }
 
 const own = ownText;
@@ -211,7 +214,7 @@ export class LanesReader extends RecordFileReader {
     // Absent optional columns get no per-row entries (a lookup past the end reads undefined).
     if (col.ref !== undefined) {
       const ref = cellText(cells, col.ref);
-      t.ref.push(ref === '' ? undefined : own(ref));
+      t.setRef(i, ref === '' ? undefined : own(ref));
     }
     if (col.notes !== undefined) {
       const notes = cellText(cells, col.notes);
@@ -230,8 +233,28 @@ export class LanesReader extends RecordFileReader {
   }
 
   protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    const fast = this.fastRows();
+    return fast !== null && fast !== undefined && fast.read(text, start, end, row, delimiter);
+  }
+
+  // Rows that arrive as cells (the first block of a file, lines near a quote) still take the fast
+  // path when they are plain: most of a lanes file's first megabyte.
+  protected override readPlainCells(cells: readonly string[], row: number): boolean {
+    const fast = this.fastRows();
+    return fast !== null && fast !== undefined && fast.readCells(cells, row, this.decimalComma ? 59 : 44);
+  }
+
+  protected override readPlainBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    const fast = this.fastRows();
+    if (fast === undefined) return PLAIN_LATER;
+    return fast === null ? PLAIN_NEVER : fast.readBytes(bytes, start, limit, row, delimiter);
+  }
+
+  // The fast path, made once the header and the currency are known (undefined until then, null = not for this file).
+  private fastRows(): PlainLaneRows | null | undefined {
     if (this.fast === undefined) {
-      if (this.currency === null || this.header === null) return false;
+      if (this.currency === null || this.header === null) return undefined;
+      if (this.options.plainRows === false) return (this.fast = null);
       this.fast = PlainLaneRows.forFile({
         header: this.header,
         columnCount: this.headerCells.length,
@@ -242,7 +265,7 @@ export class LanesReader extends RecordFileReader {
         table: this.table,
       });
     }
-    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
+    return this.fast;
   }
 
   /**

@@ -5,6 +5,7 @@
 
 import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
 import type { HeaderMatch } from './headers';
+import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import type { ReportCollector } from './report-collector';
 import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
 import type { FileCounts, IssueCode } from './types';
@@ -60,8 +61,8 @@ export abstract class RecordFileReader implements CsvRecordSink {
       if (cells.length < this.headerCells.length && !this.unusable) this.warnShortRow(cells.length, firstRow + i);
       while (stray < strayQuotes.length && strayQuotes[stray].row < i) stray++;
       for (; stray < strayQuotes.length && strayQuotes[stray].row === i; stray++) this.warnStrayQuote(cells, strayQuotes[stray].column, firstRow + i);
-      if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
-      else this.counts.accepted++;
+      if (!this.unusable && (this.readPlainCells(cells, firstRow + i) || this.readRow(cells, firstRow + i))) this.counts.accepted++;
+      else this.counts.rejected++;
     }
   }
 
@@ -71,6 +72,18 @@ export abstract class RecordFileReader implements CsvRecordSink {
     this.counts.total++;
     this.counts.accepted++;
     return true;
+  }
+
+  /** The byte stream's fast path (PlainBytesTaker): the offset of the line's LF when the reader took the plain row. */
+  plainBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    if (!this.headerRead) return PLAIN_LATER;
+    if (this.unusable) return PLAIN_NEVER;
+    const lf = this.readPlainBytes(bytes, start, limit, row, delimiter);
+    if (lf >= 0) {
+      this.counts.total++;
+      this.counts.accepted++;
+    }
+    return lf;
   }
 
   issue(issue: CsvStreamIssue): void {
@@ -139,6 +152,14 @@ export abstract class RecordFileReader implements CsvRecordSink {
   /** Reads a plain row straight from the text, or returns false to get it as cells in readRow. */
   protected readPlainRow(_text: string, _start: number, _end: number, _row: number, _delimiter: string): boolean {
     return false;
+  }
+  /** Reads a row already cut into cells by the fast path's rules, or returns false to get it in readRow. */
+  protected readPlainCells(_cells: readonly string[], _row: number): boolean {
+    return false;
+  }
+  /** Reads a plain row straight from UTF-8 bytes: the offset of its LF, or PLAIN_LATER / PLAIN_NEVER. */
+  protected readPlainBytes(_bytes: Uint8Array, _start: number, _limit: number, _row: number, _delimiter: number): number {
+    return PLAIN_NEVER;
   }
   /** Called with each block before its data rows are read. */
   protected beforeRows(_records: string[][], _start: number): void {}

@@ -1,6 +1,6 @@
 // The one place the command line turns --depots/--lanes files into a Network. Every command goes
 // through here, so --date, --vehicle-class, --skip-invalid and the planning options work the same
-// for all of them. Files stream in 1 MB chunks into the engine's importer.
+// for all of them. Files stream in 1 MB chunks of bytes into the engine's importer.
 
 import { startImport } from '../../engine/index';
 import { InvalidInputError } from '../../engine/index';
@@ -10,7 +10,7 @@ import type { Network } from '../../engine/index';
 import { drivingLimitOf } from '../../engine/index';
 import type { PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
-import { readTextChunks } from './read-chunks';
+import { nodeUtf8Text, readByteChunks } from './read-chunks';
 import { printError } from './terminal-text';
 import { counted } from '../../engine/index';
 
@@ -90,10 +90,11 @@ export function importOptionsFromArgs(args: ParsedArgs, dated = true): ImportOpt
 export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}, dated = true): ImportResult {
   const depotsPath = required(args, 'depots');
   const lanesPath = required(args, 'lanes');
-  const session = startImport({ ...importOptionsFromArgs(args, dated), ...extra });
-  for (const chunk of readTextChunks(depotsPath)) session.feedDepots(chunk.text, chunk.fraction);
+  // Bytes, not text: plain lane rows are read from them without a string per line.
+  const session = startImport({ ...importOptionsFromArgs(args, dated), utf8Text: nodeUtf8Text, ...extra });
+  for (const chunk of readByteChunks(depotsPath)) session.feedDepotsBytes(chunk.bytes, chunk.fraction);
   session.finishDepots();
-  for (const chunk of readTextChunks(lanesPath)) session.feedLanes(chunk.text, chunk.fraction);
+  for (const chunk of readByteChunks(lanesPath)) session.feedLanesBytes(chunk.bytes, chunk.fraction);
   session.finishLanes();
   return session.result();
 }

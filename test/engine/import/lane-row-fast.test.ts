@@ -12,7 +12,7 @@ const DEPOTS = new Map([['A', 0], ['B', 1], ['C', 2], ['Liège', 3], ['D-4', 4]]
 
 function readLanes(text: string, fast: boolean, chunk: number) {
   const report = new ReportCollector(10_000);
-  const reader = new LanesReader('lanes.csv', report, DEPOTS, {});
+  const reader = new LanesReader('lanes.csv', report, DEPOTS, { plainRows: fast });
   streamInto(reader, text, chunk, fast);
   const t = reader.table;
   const n = t.count;
@@ -22,7 +22,7 @@ function readLanes(text: string, fast: boolean, chunk: number) {
     rows: reader.rows,
     columns: [t.from, t.to, t.sourceRow, t.toll, t.fuel, t.fees, t.rebate, t.distanceKm, t.driveMinutes, t.validFrom, t.validTo].map(column),
     classTolls: t.classTolls.map((c) => column(c.toll)),
-    ref: t.ref.slice(0, n),
+    ref: t.build().ref.slice(0, n),
     notes: t.notes.slice(0, n),
     clause: t.clause?.slice(0, n),
     extra: t.extra.map((x) => x.values.slice(0, n)),
@@ -42,12 +42,12 @@ const values = {
     text: ['R1', '', 'a longer reference text', 'Liège'],
   },
   messy: {
-    depot: ['Z', '', ' A', 'B ', 'a', 'A\u00a0'],
-    amount: ['12.505', '-3.00', '-0.00', '0.00', '1,5', '1.234,56', '€12', '12 EUR', ' 12', '9999999999999999', '.5', '5.', 'x', '1e3'],
+    depot: ['Z', '', ' A', 'B ', 'a', 'A\u00a0', '"A"', '"B,C"'],
+    amount: ['"12.50"', '"1,5"', '12.505', '-3.00', '-0.00', '0.00', '1,5', '1.234,56', '€12', '12 EUR', ' 12', '9999999999999999', '.5', '5.', 'x', '1e3'],
     distance: ['123456.7', '40000.1', '99999.9', '1e3', '12,5', '-1', '1.2345678', 'abc', '.5', ' 3'],
     drive: ['1:30', '9999999', '60001', '999999', 'PT1H', '12.5', '-5', ' 9'],
     date: ['2026-02-29', '2026-13-01', '2026-1-1', '20260101', '2026-00-10', '2026-04-31'],
-    text: ["'=x", '=cmd', ' padded ', '@x'],
+    text: ["'=x", '=cmd', ' padded ', '@x', '"quoted, with comma"', '"quoted; with semicolon"', '"a ""b"""', '"R1"'],
   },
 };
 type Kind = keyof typeof values.plain;
@@ -74,5 +74,20 @@ describe('PlainLaneRows (the lanes reader fast path)', () => {
     expect(read.columns[3].slice(0, 3)).toEqual([100, 100, 100]);
     expect(read.columns[4][49]).toBe(250);
     expect(read.ref[49]).toBe('R49');
+  });
+});
+
+describe('PlainLaneRows on rows cut into cells (first block, quoted records)', () => {
+  it('does not read a short row whose quoted cell holds the delimiter as a whole row', () => {
+    // Cells ["A,B", "R1", "1.00"] joined by the delimiter would look like a plain row of four cells.
+    const text = 'from,to,ref,toll\n"A,B",R1,1.00\nA,B,R2,2.00\n';
+    for (const fast of [true, false]) {
+      const read = readLanes(text, fast, 1000);
+      expect(read.count).toBe(1);
+      expect(read.report.errors.map((e) => [e.row, e.column, e.code])).toEqual([
+        [2, 'from', 'unknown-depot'],
+        [2, 'to', 'unknown-depot'],
+      ]);
+    }
   });
 });
