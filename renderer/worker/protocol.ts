@@ -7,6 +7,7 @@ import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
 import type { LaneGrid } from '../map/lane-grid';
+import type { NetworkPaintArrays } from '../map/paint/protocol';
 
 export type { ContractReviewView } from './review';
 
@@ -92,6 +93,11 @@ export interface NetworkView {
   /** The plan this view was built for, and its daily driving limit (minutes) for the long-drive caution. */
   plan: PlanChoice;
   driveLimitMinutes: number;
+  /**
+   * Copies of the arrays the map's paint worker needs, made here so the UI thread passes them on
+   * without copying (transferred once: empty afterwards; the map copies its own arrays then).
+   */
+  paint?: NetworkPaintArrays;
 }
 
 /** Every accepted row of the lanes file, in file order. */

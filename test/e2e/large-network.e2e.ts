@@ -141,4 +141,33 @@ describe('5,000 depots and 50,000 lanes', () => {
     await expect.poll(() => table.getAttribute('aria-rowcount')).toBe('2');
     expect(await rendered.first().getAttribute('data-depot')).toBe('D4321');
   });
+
+  it('windows the lane table, and keeps a half-typed amount while its row is scrolled away', async () => {
+    const page = session.page;
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    const table = page.locator('[data-testid="lane-table"]');
+    const rowCount = Number(await table.getAttribute('aria-rowcount'));
+    expect(rowCount).toBeGreaterThan(1000);
+    const rendered = table.locator('tbody tr[aria-rowindex]');
+    expect(await rendered.count()).toBeLessThan(200); // windowed: only rows near the view are in the DOM
+    const firstToll = table.locator('tr[aria-rowindex="2"] input[aria-label^="toll of lane"]');
+    await firstToll.fill('7.77');
+    const scrollTableTo = (where: 'bottom' | 'top') =>
+      table.evaluate((t, to) => {
+        let e: HTMLElement | null = t.parentElement;
+        while (e && !['auto', 'scroll'].includes(getComputedStyle(e).overflowY)) e = e.parentElement;
+        e!.scrollTop = to === 'bottom' ? e!.scrollHeight : 0;
+      }, where);
+    await scrollTableTo('bottom');
+    await expect.poll(() => table.locator(`tr[aria-rowindex="${rowCount}"]`).count()).toBe(1);
+    // The row being typed in stays rendered (far above the window), with its text and the focus.
+    expect(await firstToll.inputValue()).toBe('7.77');
+    expect(await firstToll.evaluate((input) => input === document.activeElement)).toBe(true);
+    expect(await rendered.count()).toBeLessThan(200);
+    await scrollTableTo('top');
+    const before = await solveCount(page);
+    await firstToll.press('Enter');
+    await waitForPlan(page, before);
+    await expect.poll(() => table.locator('tr[aria-rowindex="2"]').getAttribute('class')).toContain('lw-changed-row');
+  });
 });
