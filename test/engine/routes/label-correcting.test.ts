@@ -5,7 +5,7 @@
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DETACHED, IN_TREE, UNBOUNDED, labelCorrect } from '../../../engine/routes/label-correcting';
+import { DETACHED, IN_TREE, UNBOUNDED, labelCorrect, type LoopFound } from '../../../engine/routes/label-correcting';
 import type { Network } from '../../../engine/network/types';
 import { anyNetwork, jsBellmanFord, toNetwork, unboundedByReference, type Spec } from './reference-graphs';
 
@@ -42,6 +42,20 @@ const manySources = fc
     }
     return { spec: { n, lanes, origin: sources[0] } as Spec, sources };
   });
+
+/** A recorded loop is a closed walk: each lane leaves the depot before it and enters the next, and one lap nets a rebate. */
+function expectClosedLoop(network: Network, loop: LoopFound): void {
+  const k = loop.positions.length;
+  expect(loop.depots).toHaveLength(k);
+  expect(new Set(loop.depots).size, 'no depot twice in a loop').toBe(k);
+  let lap = 0;
+  loop.positions.forEach((p, i) => {
+    expect(originOf(network, p)).toBe(loop.depots[i]);
+    expect(network.outTo[p]).toBe(loop.depots[(i + 1) % k]);
+    lap += network.outNet[p];
+  });
+  expect(lap).toBeLessThan(0);
+}
 
 /**
  * Brute force for small networks, sharing nothing with the engine: Floyd-Warshall over every pair
@@ -107,15 +121,7 @@ describe('labelCorrect against reference libraries', () => {
         }
         expect(result.loops.length > 0).toBe(unbounded.size > 0);
         for (const loop of result.loops) {
-          const k = loop.positions.length;
-          expect(loop.depots).toHaveLength(k);
-          let lap = 0;
-          loop.positions.forEach((p, i) => {
-            expect(originOf(network, p)).toBe(loop.depots[i]);
-            expect(network.outTo[p]).toBe(loop.depots[(i + 1) % k]);
-            lap += network.outNet[p];
-          });
-          expect(lap).toBeLessThan(0);
+          expectClosedLoop(network, loop);
           for (const d of loop.depots) expect(result.state[d]).toBe(UNBOUNDED);
         }
       }),
@@ -153,17 +159,7 @@ describe('labelCorrect against reference libraries', () => {
           if (s === IN_TREE) expect(result.dist[d], `cost of depot ${d}`).toBe(brute.cost[d]);
         }
         expect(result.loops.length > 0).toBe(brute.unbounded.size > 0);
-        for (const loop of result.loops) {
-          const k = loop.positions.length;
-          expect(loop.depots).toHaveLength(k);
-          let lap = 0;
-          loop.positions.forEach((p, i) => {
-            expect(originOf(network, p)).toBe(loop.depots[i]);
-            expect(network.outTo[p]).toBe(loop.depots[(i + 1) % k]);
-            lap += network.outNet[p];
-          });
-          expect(lap).toBeLessThan(0);
-        }
+        for (const loop of result.loops) expectClosedLoop(network, loop);
       }),
       { seed: SEED, numRuns: 1500 },
     );
@@ -179,17 +175,7 @@ describe('labelCorrect against reference libraries', () => {
         const result = labelCorrect(network, { sources: [spec.origin], onLoop: 'stop' });
         const brute = bruteForce(spec);
         expect(result.loops).toHaveLength(brute.unbounded.size > 0 ? 1 : 0);
-        for (const loop of result.loops) {
-          const k = loop.positions.length;
-          expect(new Set(loop.depots).size).toBe(k);
-          let lap = 0;
-          loop.positions.forEach((p, i) => {
-            expect(originOf(network, p)).toBe(loop.depots[i]);
-            expect(network.outTo[p]).toBe(loop.depots[(i + 1) % k]);
-            lap += network.outNet[p];
-          });
-          expect(lap).toBeLessThan(0);
-        }
+        for (const loop of result.loops) expectClosedLoop(network, loop);
       }),
       { seed: SEED, numRuns: 1000 },
     );
