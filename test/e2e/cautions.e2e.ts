@@ -29,7 +29,8 @@ describe('cautions', () => {
     expect(caution.y).toBeLessThan(head.y); // a line above the table
     await page.locator('[data-testid="results-table"] tr[data-depot="LYS"]').click();
     expect(await visibleText('route-caution')).toContain(ROUTE_CAUTION);
-    expect(await page.locator('.leaflet-control-attribution').innerText()).toContain(MAP_CAUTION);
+    // Its own sentence first in the corner, set apart from the map data's credit.
+    expect(await page.locator('.leaflet-control-attribution').innerText()).toMatch(new RegExp(`^${MAP_CAUTION.replace(/[.;]/g, '\\$&')}\\s*\\|\\s*Land and borders`));
   });
 
   it('comes with the scenario comparison and the contract review', async () => {
