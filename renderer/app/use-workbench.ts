@@ -145,11 +145,14 @@ export function useWorkbench(host: LanewrightHost) {
     });
   }, [network, settings, replan]);
 
-  const document = useMemo(() => documentOf(dataset.files, settings, scenario, loadFiles, panels.chosen), [dataset.files, settings, scenario, loadFiles, panels.chosen]);
+  // The panel sizes are laid on last: dragging a splitter makes a new document to keep, but not a new
+  // fingerprint (they do not count as a change), so the fingerprint is not recomputed per pointer move.
+  const content = useMemo(() => documentOf(dataset.files, settings, scenario, loadFiles), [dataset.files, settings, scenario, loadFiles]);
+  const document = useMemo(() => ({ ...content, layout: { ...panels.chosen } }), [content, panels.chosen]);
 
   // The lifecycle compares this fingerprint with the one last opened or saved ("unsaved" means the
   // document really differs); the first document after an open is the clean one.
-  const docKey = useMemo(() => workspaceFingerprint(document), [document]);
+  const docKey = useMemo(() => workspaceFingerprint(content), [content]);
   useEffect(() => {
     if (dataset.files) lifecycle.dispatch({ type: 'document', key: docKey });
   }, [lifecycle, docKey, dataset.files]);
