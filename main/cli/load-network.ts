@@ -8,7 +8,7 @@ import { formatItem } from '../../engine/index';
 import type { ImportOptions, ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { drivingLimitOf } from '../../engine/index';
-import type { PlanningSettings } from '../../engine/index';
+import type { ExportSettings, PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
 import { nodeUtf8Text, readByteChunks } from './read-chunks';
 import { printError } from './terminal-text';
@@ -29,6 +29,16 @@ export function planDateOf(args: ParsedArgs): { date: string; note: string | nul
   if (given !== undefined) return { date: given, note: null };
   const date = todayIso(args.now);
   return { date, note: `note: planning for ${date} (today); --date to choose` };
+}
+
+/**
+ * What a JSON or GeoJSON output was made from, as the app's exports carry it: the date planned for
+ * (null = the whole calendar), the vehicle class whose tolls applied (null = the file's default), the
+ * input files as given (depots and lanes first, then `more`), and the what-if scenario's name.
+ */
+export function exportSettingsOf(args: ParsedArgs, plan: { date: string | null; vehicleClass: string | null }, scenario: string | null, more: (string | undefined)[] = []): ExportSettings {
+  const files = [args.values.get('depots'), args.values.get('lanes'), ...more].filter((f): f is string => f !== undefined);
+  return { date: plan.date, vehicle_class: plan.vehicleClass, files, scenario };
 }
 
 function positive(args: ParsedArgs, name: string): number | undefined {

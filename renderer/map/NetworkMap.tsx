@@ -135,7 +135,9 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     if (!element.current) return;
     const map = L.map(element.current, { preferCanvas: true, zoomSnap: 0.25, worldCopyJump: false, attributionControl: true });
     // The caution is this app's own constant text (attribution takes HTML, so never file text here).
-    map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)').addAttribution(MAP_CAUTION);
+    // As the prefix it reads as its own sentence, set apart from the data credit ("…(public domain),
+    // Costs are estimates" read as one run-on line when both were attributions).
+    map.attributionControl.setPrefix(MAP_CAUTION).addAttribution('Land and borders: Natural Earth (public domain)');
     map.setView([49.5, 6], 5);
     const renderers = makeRenderers(map);
     addBasemap(map, renderers.basePane);

@@ -10,7 +10,7 @@ import { auditLoopRows, auditReport, reviewCsv } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
-import { loadImport, planDateOf } from '../load-network';
+import { exportSettingsOf, loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
@@ -70,7 +70,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
-  const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, ...report };
+  const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, settings: exportSettingsOf(args, imported.plan, what ? what.scenario.name : null, [what?.path]), ...report };
   out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, reviewCsv(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });
