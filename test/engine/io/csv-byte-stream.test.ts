@@ -6,7 +6,8 @@
 // with accepted + rejected = total, for chunks cut anywhere, inside a multi-byte character too.
 
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
+import { CsvRecordStream } from '../../../engine/io/csv-record-stream';
 import { startImport } from '../../../engine/planning/import-network';
 import { Utf8ChunkDecoder } from '../../../engine/text/utf8';
 import type { ImportResult } from '../../../engine/planning/import-types';
@@ -155,7 +156,12 @@ describe('CsvByteStream (the byte path) against the text path', () => {
   it('takes plain rows from the bytes and the rest the general way', () => {
     const lines = ['from,to,ref,toll,fuel', ...Array.from({ length: 40 }, (_, i) => (i === 20 ? 'Liège,B,"R, 20",1.00,2.5' : `A,B,R${i},1.00,2.5`))];
     const bytes = encoder.encode(lines.join('\r\n') + '\r\n');
+    // Rows read from the bytes are counted by the text stream's rowTaken.
+    const taken = vi.spyOn(CsvRecordStream.prototype, 'rowTaken');
     const result = importWith(cutAt(bytes, [50, 51, 52, 300]), true);
+    // The first chunk is the header and the start of row 2; every later row but the quoted one (row 22) is taken.
+    expect(taken).toHaveBeenCalledTimes(38);
+    taken.mockRestore();
     expect(result.lanes.count).toBe(40);
     expect(result.lanes.ref[20]).toBe('R, 20');
     expect(result.lanes.from[20]).toBe(3);
