@@ -201,4 +201,13 @@ describe('CsvByteStream (the byte path) against the text path', () => {
       [33, 'not-text'],
     ]);
   });
+
+  it('refuses a file fed partly as text and partly as bytes', () => {
+    const session = startImport();
+    session.feedDepotsBytes(encoder.encode(DEPOTS.slice(0, 20)));
+    expect(() => session.feedDepots(DEPOTS.slice(20))).toThrow(/fed as bytes/);
+    session.finishDepots();
+    session.feedLanes('from,to\n');
+    expect(() => session.feedLanesBytes(encoder.encode('A,B\n'))).toThrow(/fed as text/);
+  });
 });
