@@ -253,7 +253,8 @@ export class PlainLaneRows {
           this.hashes[k] = hash;
           break;
         }
-        case AMOUNT: {
+        case AMOUNT:
+        case DISTANCE: {
           // Digits with at most one decimal mark after the first digit; the counts come from positions.
           let value = 0;
           let mark = -1;
@@ -264,32 +265,17 @@ export class PlainLaneRows {
             else break;
             i++;
           }
+          const fraction = mark === -1 ? 0 : i - mark - 1;
           if (i === s) values[k] = NaN;
-          else {
-            const fraction = mark === -1 ? 0 : i - mark - 1;
-            if (mark !== -1 && (fraction === 0 || fraction > exponent)) return REFUSED;
+          else if (mark !== -1 && fraction === 0) return REFUSED;
+          else if (kinds[k] === AMOUNT) {
+            if (fraction > exponent) return REFUSED;
             const scale = exponent - fraction;
             // Fifteen digits in minor units stay exact and far inside the safe range; longer goes the general way.
             if (i - s - (mark === -1 ? 0 : 1) + scale > 15) return REFUSED;
             values[k] = value * POW10[scale];
-          }
-          break;
-        }
-        case DISTANCE: {
-          let value = 0;
-          let mark = -1;
-          for (;;) {
-            const d = bytes[i] - 48;
-            if (d >>> 0 <= 9) value = value * 10 + d;
-            else if (d === markDigit && mark === -1 && i > s) mark = i;
-            else break;
-            i++;
-          }
-          if (i === s) values[k] = NaN;
-          else {
-            const whole = (mark === -1 ? i : mark) - s;
-            const fraction = mark === -1 ? 0 : i - mark - 1;
-            if (whole > 5 || (mark !== -1 && (fraction === 0 || fraction > 6))) return REFUSED;
+          } else {
+            if ((mark === -1 ? i : mark) - s > 5 || fraction > 6) return REFUSED;
             // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
             const read = fraction > 0 ? value / POW10[fraction] : value;
             const km = this.miles ? read * KM_PER_MILE : read;
