@@ -210,4 +210,14 @@ describe('CsvByteStream (the byte path) against the text path', () => {
     session.feedLanes('from,to\n');
     expect(() => session.feedLanesBytes(encoder.encode('A,B\n'))).toThrow(/fed as text/);
   });
+
+  it('gives long lines (past what a byte chunk carries) to the text stream with the same result', () => {
+    const rows = Array.from({ length: 60 }, (_, i) => (i % 20 === 7 ? `A,B,R${i},1.00,2,${'x'.repeat(100_000 + i)}` : i === 31 ? `A,B,R${i},1.00,2,"${'quoted, '.repeat(20_000)}"` : `A,B,R${i},1.00,2,n${i}`));
+    const bytes = encoder.encode(['from,to,ref,toll,fuel,notes', ...rows].join('\n') + '\n');
+    const cuts = Array.from({ length: Math.ceil(bytes.length / 9_000) }, (_, i) => i * 9_000);
+    expectSamePaths(bytes, cuts);
+    const result = importWith(cutAt(bytes, cuts), true);
+    expect(result.lanes.count).toBe(60);
+    expect(result.lanes.notes[7]?.length).toBe(100_007);
+  });
 });
