@@ -95,7 +95,20 @@ export class ByteRefs {
     return true;
   }
 
+  /** Row `row`'s ref hashed as `textRefHash` hashes its text. */
+  refHash(row: number): number {
+    return this.at[row] > 0 ? this.hash[row] : textRefHash(this.text(row));
+  }
+
   private text(row: number): string | undefined {
     return row < this.head.length ? this.head[row] : this.texts.get(row);
   }
+}
+
+/** FNV-1a over a ref's UTF-16 code units (for an ASCII ref, the hash of its bytes); 0 for none. */
+export function textRefHash(ref: string | undefined): number {
+  if (ref === undefined) return 0;
+  let h = 0x811c9dc5 | 0;
+  for (let k = 0; k < ref.length; k++) h = Math.imul(h ^ ref.charCodeAt(k), 0x01000193);
+  return h;
 }
