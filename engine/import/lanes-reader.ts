@@ -89,17 +89,9 @@ export class LanesReader extends RecordFileReader {
     }
     const driveUnit = h.columns.get('drive')?.unit ?? null;
     this.driveUnit = driveUnit === 'hours' || driveUnit === 'hour' ? 'h' : driveUnit;
-    for (const field of ['from', 'to'] as const) {
-      if (!h.columns.has(field)) {
-        this.report.error(this.file, this.headerRow, field, null, 'missing-column', `required column "${field}" is missing; no lane can be read`);
-        this.unusable = true;
-      }
-    }
-    for (const d of h.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
-    for (const u of h.unknown) {
-      this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, kept with the lane but not used');
-      this.table.extra.push({ column: u.header, values: [] });
-    }
+    this.requireColumns(h, [['from', 'from'], ['to', 'to']], 'lane');
+    this.reportColumnProblems(h, 'unknown column, kept with the lane but not used');
+    for (const u of h.unknown) this.table.extra.push({ column: u.header, values: [] });
     for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length), header: c.header });
     for (const field of ['toll', 'fuel', 'rebate', 'vehicle_class'] as const) if (this.name[field] !== undefined) this.table.columnHeaders[field] = this.name[field];
     this.moneyColumns = [this.col.toll, ...h.classTolls.map((c) => c.index), this.col.fuel, this.col.fees, this.col.rebate].filter((c): c is number => c !== undefined);
@@ -125,6 +117,8 @@ export class LanesReader extends RecordFileReader {
     this.report.error(this.file, this.row, column, value, code, message);
     this.rowOk = false;
   }
+  // `fail` as a value, made once rather than a closure per row.
+  private readonly failRow = (column: string | null, value: string | null, code: IssueCode, message: string) => this.fail(column, value, code, message);
 
   private headerOf(field: LaneField): string {
     return this.name[field] ?? field;
@@ -135,9 +129,7 @@ export class LanesReader extends RecordFileReader {
     this.rowOk = true;
     const h = this.header!;
     const col = this.col;
-    if (cells.length > this.headerCells.length) {
-      this.fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
-    }
+    this.refuseSurplusFields(cells, this.failRow);
     const from = this.depot(cells, 'from');
     const to = this.depot(cells, 'to');
 

@@ -1,12 +1,14 @@
-// What the depots and lanes readers share: finding the header, counting every data row as accepted
-// or rejected (so accepted + rejected = total holds by construction), rejecting rows the CSV stream
-// flagged, and the file-level problems (empty file, not text, header without rows).
+// What the depots, lanes, vehicles and loads readers share: finding the header, counting every data
+// row as accepted or rejected (so accepted + rejected = total holds by construction), rejecting rows
+// the CSV stream flagged, the file-level problems (empty file, not text, header without rows), and the
+// header and row problems every reader words alike (missing, repeated and unknown columns, surplus fields).
 
 import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
+import type { HeaderMatch } from './headers';
 import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import type { ReportCollector } from './report-collector';
 import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
-import type { FileCounts } from './types';
+import type { FileCounts, IssueCode } from './types';
 import { counted } from '../text/plural';
 
 /** True when every cell is empty or white space (a blank line, or a line of delimiters). */
@@ -109,6 +111,31 @@ export abstract class RecordFileReader implements CsvRecordSink {
       'stray-quote',
       'a quote inside a field that does not start with one is read as a literal character (RFC 4180 quotes whole fields); quote the field to be sure',
     );
+  }
+
+  /**
+   * A required column the header lacks is an error and makes the file unusable (no row can be read);
+   * `required` pairs each field with the header name the message gives, `item` names a row ("depot").
+   */
+  protected requireColumns<F extends string>(match: HeaderMatch<F>, required: readonly (readonly [F, string])[], item: string): void {
+    for (const [field, header] of required) {
+      if (!match.columns.has(field)) {
+        this.report.error(this.file, this.headerRow, header, null, 'missing-column', `required column "${header}" is missing; no ${item} can be read`);
+        this.unusable = true;
+      }
+    }
+  }
+
+  /** A repeated column is an error (the first is read); an unknown one a warning, `unknownNote` saying what becomes of it. */
+  protected reportColumnProblems(match: HeaderMatch<string>, unknownNote: string): void {
+    for (const d of match.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
+    for (const u of match.unknown) this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', unknownNote);
+  }
+
+  /** A row with more fields than the header: the surplus is given to `fail` as one too-many-fields error. */
+  protected refuseSurplusFields(cells: readonly string[], fail: (column: string, value: string, code: IssueCode, message: string) => void): void {
+    const width = this.headerCells.length;
+    if (cells.length > width) fail(`(column ${width + 1})`, cells.slice(width).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${width}`);
   }
 
   finish(): void {

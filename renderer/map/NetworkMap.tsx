@@ -15,8 +15,10 @@ import { depotLabelLayer } from './depot-labels';
 import { fitNetwork, depotsInView } from './fit-view';
 import { addedLaneLayer, depotMarkers, loopLayer, routeLayer, solveMarkers, styleDepots } from './network-layers';
 import { loadRouteLayer, type LoadRouteDrawing } from './load-route-layer';
-import { allLanesLayer, laneSetLayer, LANE_DETAIL_THRESHOLD, type LaneCounts, type PaintLayer } from './lane-canvas';
+import { allLanesLayer, laneSetLayer, type LaneLayer, type LaneSetLayer } from './lane-layers';
+import { LANE_DETAIL_THRESHOLD, type LaneCounts } from './lane-paint';
 import { DEPOT_CANVAS_THRESHOLD, depotCanvas, type DepotCanvas } from './depot-canvas';
+import { leavingCanvas } from './lane-canvas';
 import { STYLE } from './map-style';
 import { useDepotCursor } from './use-depot-cursor';
 import './map.css';
@@ -50,14 +52,22 @@ function useLayer(map: L.Map | null, build: (() => L.Layer | null) | null, deps:
   }, [map, ...deps]);
 }
 
-/** `lanes`, or the previous array when it holds the same lanes (so effects keyed on it do not rerun). */
+/**
+ * `lanes`, or the previous array when it holds the same lanes (so effects keyed on it do not rerun).
+ * Compared only when a new array arrives: the map renders again on every painted frame's counts,
+ * and comparing 50,000 tree lanes each time was the map's largest piece of UI-thread work.
+ */
 function useSameLanes(lanes: Int32Array | null): Int32Array | null {
-  const last = useRef<Int32Array | null>(null);
-  const prev = last.current;
-  if (lanes && prev && prev.length === lanes.length && prev.every((e, i) => e === lanes[i])) return prev;
-  last.current = lanes;
-  return lanes;
+  const last = useRef<{ input: Int32Array | null; output: Int32Array | null }>({ input: null, output: null });
+  const { input, output } = last.current;
+  if (lanes === input) return output;
+  let same = lanes !== null && output !== null && output.length === lanes.length;
+  for (let i = 0; same && i < lanes!.length; i++) same = lanes![i] === output![i];
+  last.current = { input: lanes, output: same ? output : lanes };
+  return last.current.output;
 }
+
+const NO_LANES = new Int32Array(0);
 
 interface Renderers {
   /** Pane of the painted basemap. */
@@ -84,18 +94,19 @@ function makeRenderers(map: L.Map): Renderers {
     basePane: pane('lw-base', 250),
     lanesPane: pane('lw-lanes', 350),
     treePane: pane('lw-tree', 390),
-    overlay: L.canvas({ padding: 0.2 }),
-    depots: L.canvas({ pane: depotsPane, padding: 0.2, tolerance: 4 }),
+    overlay: leavingCanvas({ padding: 0.2 }),
+    depots: leavingCanvas({ pane: depotsPane, padding: 0.2, tolerance: 4 }),
     depotsPane,
   };
 }
 
 /** A painted canvas layer rebuilt when `deps` change. */
-function usePaintLayer(map: L.Map | null, build: (() => PaintLayer) | null, deps: unknown[]) {
+function usePaintLayer(map: L.Map | null, build: (() => LaneLayer) | null, deps: unknown[]) {
   useEffect(() => {
     if (!map || !build) return;
-    const layer = build().addTo(map);
-    return () => layer.remove();
+    const layer = build();
+    layer.addTo(map);
+    return () => void layer.remove();
   }, [map, ...deps]);
 }
 
@@ -106,6 +117,10 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const [labelsOn, setLabelsOn] = useState(true);
   // Bumped when the view moves or resizes: labels and the in-view count follow it.
   const [view, setView] = useState(0);
+  // The zoom the view has settled at. During Leaflet's zoom animation getZoom() already gives the
+  // target while a second zoom request is still ignored, so what the page states (data-zoom) is
+  // taken only when the zoom has ended: a reader that waits for it can zoom again at once.
+  const [settledZoom, setSettledZoom] = useState<number | null>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
   selectRef.current = onSelect;
@@ -127,6 +142,8 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
     map.on('moveend zoomend resize', () => setView((n) => n + 1));
+    map.on('zoomend', () => setSettledZoom(map.getZoom()));
+    setSettledZoom(map.getZoom());
     // The panels around the map resize (loop banner, window, splitter), and so does the key when it
     // is opened or closed; Leaflet must re-measure its box. Until the user pans or zooms, the map
     // keeps the whole network in view as its box changes.
@@ -181,9 +198,22 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const onDepotCounts = useCallback((drawn: number, inView: number) => setDepotCounts((now) => (now && now.drawn === drawn && now.inView === inView ? now : { drawn, inView })), []);
   const onCounts = useCallback((next: LaneCounts) => setLaneCounts((now) => (now && now.drawn === next.drawn && now.inView === next.inView && now.total === next.total ? now : next)), []);
   usePaintLayer(map, network && renderers ? () => allLanesLayer(renderers.lanesPane, network, STYLE.lane, onCounts) : null, [network]);
-  // Most edits leave the route tree as it was: the same lanes keep the painted layer.
+  // Most edits leave the route tree as it was: the same lanes keep the painted picture. The tree's
+  // canvas lives as long as the network; a new tree is new content for it, so the old picture stays
+  // until the new one is painted.
   const tree = useSameLanes(solve?.treeLanes ?? null);
-  usePaintLayer(map, network && tree && renderers ? () => laneSetLayer(renderers.treePane, network, tree, added, STYLE.tree) : null, [network, tree, added]);
+  const treeLayer = useRef<LaneSetLayer | null>(null);
+  useEffect(() => {
+    if (!map || !network || !renderers) return;
+    const layer = laneSetLayer(renderers.treePane, network, NO_LANES, [], STYLE.tree);
+    layer.addTo(map);
+    treeLayer.current = layer;
+    return () => {
+      layer.remove();
+      treeLayer.current = null;
+    };
+  }, [map, network, renderers]);
+  useEffect(() => treeLayer.current?.setLanes(tree ?? NO_LANES, added), [map, network, renderers, tree, added]);
   useLayer(map, network && added.length > 0 && renderers ? () => addedLaneLayer(network, added, renderers.overlay) : null, [network, added]);
   useLayer(map, network && route && renderers ? () => routeLayer(network, route, added, renderers.overlay) : null, [network, route, added]);
   useLayer(map, network && loadRoutes && renderers ? () => loadRouteLayer(network, loadRoutes, renderers.overlay) : null, [network, loadRoutes]);
@@ -237,7 +267,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
 
   const loopCount = solve?.loops.length ?? 0;
   const addedDrawn = added.filter((a) => a.from >= 0 && a.to >= 0).length;
-  const unbounded = solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0;
+  const unbounded = useMemo(() => (solve ? solve.status.reduce((n, s) => n + (s === 2 ? 1 : 0), 0) : 0), [solve]);
   const depotCount = network?.depotIds.length ?? 0;
   const laneTotal = network?.laneFrom.length ?? 0;
   const thinned = laneTotal > LANE_DETAIL_THRESHOLD && laneCounts !== null && laneCounts.total === laneTotal;
@@ -256,7 +286,7 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
         data-depot-labels={labelCount}
         data-lanes-drawn={laneCounts?.drawn ?? ''}
         data-depot-canvas={bigNetwork ? 'yes' : 'no'}
-        data-zoom={map && view >= 0 ? map.getZoom() : ''}
+        data-zoom={settledZoom ?? ''}
       />
       <div className="lw-map-corner" ref={corner}>
         <div className="lw-map-tools" role="group" aria-label="Map view">

@@ -1,90 +1,19 @@
 // The offline basemap: land and country borders from Natural Earth (world-atlas, 1:50m), painted on
-// one canvas. No tile layer exists anywhere in the app, so no tile server is contacted. Points are
-// projected once (Web Mercator metres) and each paint maps them with one affine step, skipping rings
-// outside the view and points under a pixel apart: as Leaflet vector layers, its 80,000 points were
-// projected again on every zoom and fit, a long task of its own on a busy machine.
+// one canvas (basemap-paint.ts draws it). No tile layer exists anywhere in the app, so no tile
+// server is contacted. Painted by the paint worker where OffscreenCanvas exists (filling the land
+// in software took tens of milliseconds per frame on the UI thread), else on the UI thread.
 
 import type L from 'leaflet';
-import { feature, mesh } from 'topojson-client';
-import type { GeometryCollection, Topology } from 'topojson-specification';
-import countries from 'world-atlas/countries-50m.json';
+import { paintBasemap } from './basemap-paint';
 import { layerTransform, PaintLayer, viewBoxOf } from './lane-canvas';
-
-const LAND = '#ece8dc';
-const BORDER = { color: '#b4ab96', weight: 0.8 };
-
-/** One ring or line: Mercator metres (x, y interleaved) and its latitude / longitude box. */
-interface Ring {
-  xy: Float64Array;
-  south: number;
-  west: number;
-  north: number;
-  east: number;
-}
-
-const R = 6378137;
-const LIMIT = 85.0511287798;
-const RAD = Math.PI / 180;
-
-function ringOf(points: number[][]): Ring {
-  const xy = new Float64Array(points.length * 2);
-  let south = Infinity, west = Infinity, north = -Infinity, east = -Infinity;
-  points.forEach(([lon, lat], i) => {
-    const sin = Math.sin(Math.max(Math.min(LIMIT, lat), -LIMIT) * RAD);
-    xy[2 * i] = R * lon * RAD;
-    xy[2 * i + 1] = (R * Math.log((1 + sin) / (1 - sin))) / 2;
-    south = Math.min(south, lat);
-    north = Math.max(north, lat);
-    west = Math.min(west, lon);
-    east = Math.max(east, lon);
-  });
-  return { xy, south, west, north, east };
-}
-
-function ringsOf(geometry: { type: string; coordinates: unknown }): Ring[] {
-  if (geometry.type === 'Polygon') return (geometry.coordinates as number[][][]).map(ringOf);
-  if (geometry.type === 'MultiPolygon') return (geometry.coordinates as number[][][][]).flat().map(ringOf);
-  if (geometry.type === 'LineString') return [ringOf(geometry.coordinates as number[][])];
-  if (geometry.type === 'MultiLineString') return (geometry.coordinates as number[][][]).map(ringOf);
-  return [];
-}
+import { OffscreenPaintLayer } from './offscreen-layer';
+import { offscreenPaintAvailable } from './paint/paint-client';
 
 /** Adds land and borders to the map in `pane`, under everything else; non-interactive. */
-export function addBasemap(map: L.Map, pane: string): PaintLayer {
-  const topology = countries as unknown as Topology<{ land: GeometryCollection; countries: GeometryCollection }>;
-  const landFeature = feature(topology, topology.objects.land) as unknown as { features?: { geometry: { type: string; coordinates: unknown } }[]; geometry?: { type: string; coordinates: unknown } };
-  const land = (landFeature.features ?? [landFeature as { geometry: { type: string; coordinates: unknown } }]).flatMap((f) => ringsOf(f.geometry));
-  const borders = ringsOf(mesh(topology, topology.objects.countries, (a, b) => a !== b) as unknown as { type: string; coordinates: unknown });
-  const trace = (ctx: CanvasRenderingContext2D, rings: Ring[], t: ReturnType<typeof layerTransform>, view: ReturnType<typeof viewBoxOf>, close: boolean) => {
-    ctx.beginPath();
-    for (const ring of rings) {
-      if (ring.north < view.south || ring.south > view.north || ring.east < view.west || ring.west > view.east) continue;
-      const xy = ring.xy;
-      let lastX = t.sx * xy[0] + t.ox;
-      let lastY = t.sy * xy[1] + t.oy;
-      ctx.moveTo(lastX, lastY);
-      for (let i = 2; i < xy.length; i += 2) {
-        const x = t.sx * xy[i] + t.ox;
-        const y = t.sy * xy[i + 1] + t.oy;
-        // Points under a pixel from the last one drawn add nothing but raster work.
-        if (i < xy.length - 2 && Math.abs(x - lastX) < 0.7 && Math.abs(y - lastY) < 0.7) continue;
-        ctx.lineTo(x, y);
-        lastX = x;
-        lastY = y;
-      }
-      if (close) ctx.closePath();
-    }
-  };
-  return new PaintLayer(pane, (ctx, bounds, m) => {
-    const t = layerTransform(m);
-    const view = viewBoxOf(m, bounds);
-    trace(ctx, land, t, view, true);
-    ctx.fillStyle = LAND;
-    ctx.fill('evenodd');
-    trace(ctx, borders, t, view, false);
-    ctx.strokeStyle = BORDER.color;
-    ctx.lineWidth = BORDER.weight;
-    ctx.lineJoin = 'round';
-    ctx.stroke();
-  }).addTo(map);
+export function addBasemap(map: L.Map, pane: string): void {
+  if (offscreenPaintAvailable()) {
+    new OffscreenPaintLayer(pane, null, { kind: 'basemap' }).addTo(map);
+    return;
+  }
+  new PaintLayer(pane, (ctx, bounds, m) => paintBasemap(ctx, layerTransform(m), viewBoxOf(m, bounds))).addTo(map);
 }

@@ -19,9 +19,15 @@ const NAMES: readonly [number, string, string][] = [
   [FLAG_DRIVE_UNKNOWN, 'drive time unknown', 'At least one lane on the route has no drive time'],
 ];
 
-/** Short labels of the flags set in `bits`, in a fixed order. */
-export function flagLabels(bits: number): string[] {
-  return NAMES.filter(([bit]) => (bits & bit) !== 0).map(([, label]) => label);
+// One shared list per combination of bits (32 of them): the results table asks for every depot's
+// labels on each solve, and 50,000 fresh arrays per solve were garbage to collect on the UI thread.
+const LABELS = new Map<number, readonly string[]>();
+
+/** Short labels of the flags set in `bits`, in a fixed order (a shared list: do not change it). */
+export function flagLabels(bits: number): readonly string[] {
+  let labels = LABELS.get(bits);
+  if (!labels) LABELS.set(bits, (labels = Object.freeze(NAMES.filter(([bit]) => (bits & bit) !== 0).map(([, label]) => label))));
+  return labels;
 }
 
 /** Long explanation of the flags set in `bits` (tooltips and screen readers). */

@@ -79,6 +79,9 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
   const lane = laneOfRows(result);
   const refNames: string[] = [];
   const rows = rowsView(result, lane, keys, refNames);
+  const laneReverse = reverseFlags(network);
+  // Binned here, off the UI thread (the map culls its lanes with it).
+  const grid = laneGrid(network);
   return {
     currency: network.currency,
     exponent: network.exponent,
@@ -96,9 +99,8 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
     laneRecord: result.plan.laneRecord.slice(),
     laneDistanceKm: network.laneDistanceKm.slice(),
     laneDriveMinutes: network.laneDriveMinutes.slice(),
-    laneReverse: reverseFlags(network),
-    // Binned here, off the UI thread (the map culls its lanes with it).
-    laneGrid: laneGrid(network),
+    laneReverse,
+    laneGrid: grid,
     refNames,
     rowClassNames: result.lanes.classNames.slice(),
     rows,
@@ -106,13 +108,23 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
     plannedClass: result.plan.vehicleClass,
     plan,
     driveLimitMinutes: result.plan.settings.drivingLimit.dailyDrivingMinutes,
+    paint: {
+      lat: network.lat.slice(),
+      lon: network.lon.slice(),
+      laneFrom: network.laneFrom.slice(),
+      laneTo: network.laneTo.slice(),
+      laneReverse: laneReverse.slice(),
+      laneGrid: { ...grid, start: grid.start.slice(), lanes: grid.lanes.slice(), long: grid.long.slice() },
+    },
   };
 }
 
 /** The typed arrays of a view, for postMessage's transfer list. */
 export function transferablesOf(view: NetworkView): ArrayBuffer[] {
   const r = view.rows;
-  return [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, view.laneGrid.start, view.laneGrid.lanes, view.laneGrid.long, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
+  const p = view.paint;
+  const paint = p ? [p.lat, p.lon, p.laneFrom, p.laneTo, p.laneReverse, p.laneGrid.start, p.laneGrid.lanes, p.laneGrid.long] : [];
+  return [...paint, view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, view.laneGrid.start, view.laneGrid.lanes, view.laneGrid.long, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
     (a) => a.buffer as ArrayBuffer,
   );
 }

@@ -1,12 +1,13 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
+import type { ChangeView, CsvDialect, EstimateRules, ExportChoice, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
 import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
 import type { ContractReviewView } from './review';
 import type { LaneGrid } from '../map/lane-grid';
+import type { NetworkPaintArrays } from '../map/paint/protocol';
 
 export type { ContractReviewView } from './review';
 
@@ -92,6 +93,11 @@ export interface NetworkView {
   /** The plan this view was built for, and its daily driving limit (minutes) for the long-drive caution. */
   plan: PlanChoice;
   driveLimitMinutes: number;
+  /**
+   * Copies of the arrays the map's paint worker needs, made here so the UI thread passes them on
+   * without copying (transferred once: empty afterwards; the map copies its own arrays then).
+   */
+  paint?: NetworkPaintArrays;
 }
 
 /** Every accepted row of the lanes file, in file order. */
@@ -196,10 +202,12 @@ export interface RouteView {
 }
 
 /**
- * What the worker exports. `review-csv` and `calendar-review-csv` are the contract review last made
- * (the Contract review tab); `compare-csv` compares the active scenario with the base from the origin.
+ * What the worker exports: every Export menu entry but the two the UI makes (the scenario file, and
+ * the review report from a `review` request). `review-csv` and `calendar-review-csv` are the contract
+ * review last made (the Contract review tab); `compare-csv` compares the active scenario with the base
+ * from the origin.
  */
-export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson' | 'review-csv' | 'calendar-review-csv' | 'compare-csv';
+export type ExportKind = Exclude<ExportChoice, 'scenario-json' | 'review-html'>;
 
 export interface WorkerErrorView {
   name: string;

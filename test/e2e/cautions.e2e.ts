@@ -5,16 +5,14 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MAP_CAUTION, REVIEW_CAUTION, ROUTE_CAUTION } from '../../engine/text/cautions';
-import { offsiteRequests, openApp, solveCount, waitForPlan, type Session } from './support/browser';
+import { editLaneAmount, offsiteRequests, openReadyApp, type Session } from './support/browser';
 
 let session: Session;
 let page: Page;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1024, height: 700 });
+  session = await openReadyApp({ width: 1024, height: 700 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {
@@ -35,12 +33,7 @@ describe('cautions', () => {
   });
 
   it('comes with the scenario comparison and the contract review', async () => {
-    await page.getByRole('tab', { name: /Lanes/ }).click();
-    const rebate = page.locator('[data-testid="lane-table"] input[aria-label^="rebate of lane"]').first();
-    const before = await solveCount(page);
-    await rebate.fill('1.00');
-    await rebate.press('Enter');
-    await waitForPlan(page, before);
+    await editLaneAmount(page, 'rebate', 0, '1.00');
     expect(await visibleText('compare-caution')).toContain(ROUTE_CAUTION);
     await page.getByRole('tab', { name: /Contract review/ }).click();
     await page.getByTestId('contract-review').waitFor();

@@ -5,7 +5,7 @@
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bigNetwork } from './support/big-network';
-import { chooseFile, offsiteRequests, openApp, recordTimings, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, pickImportFiles, recordTimings, snap, solveCount, timedEdit, tollCell, waitForPlan, type Session } from './support/browser';
 import { expectedPlan } from './support/expected';
 
 const DEPOTS = 5_000;
@@ -15,9 +15,7 @@ const EDITS = 5;
 let session: Session;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 1000 });
-  await session.page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(session.page);
+  session = await openReadyApp({ width: 1440, height: 1000 });
 });
 
 afterAll(async () => {
@@ -42,10 +40,7 @@ describe('5,000 depots and 50,000 lanes', () => {
     const huge = bigNetwork(DEPOTS * 4, LANES_PER_DEPOT, 7);
     const statusBefore = await page.locator('.lw-status').innerText();
     await page.getByRole('button', { name: 'Import CSV…' }).click();
-    let dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'huge-depots.csv', huge.depotsText);
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'huge-lanes.csv', huge.lanesText);
-    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('huge-lanes.csv');
+    let dialog = await pickImportFiles(page, { name: 'huge-depots.csv', text: huge.depotsText }, { name: 'huge-lanes.csv', text: huge.lanesText });
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
     // The progress sits inside the modal dialog, so the keyboard reaches its Cancel: Tab from Import.
     const progress = dialog.getByRole('group', { name: 'Work in progress' });
@@ -67,10 +62,7 @@ describe('5,000 depots and 50,000 lanes', () => {
     await expect.poll(() => page.getByRole('dialog').count()).toBe(0);
 
     await page.getByRole('button', { name: 'Import CSV…' }).click();
-    dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'synthetic-depots.csv', depotsText);
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'synthetic-lanes.csv', lanesText);
-    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('synthetic-lanes.csv');
+    dialog = await pickImportFiles(page, { name: 'synthetic-depots.csv', text: depotsText }, { name: 'synthetic-lanes.csv', text: lanesText });
     await expect.poll(() => dialog.getByTestId('import-depots-name').innerText()).toBe('synthetic-depots.csv');
     const importStart = Date.now();
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
@@ -93,16 +85,10 @@ describe('5,000 depots and 50,000 lanes', () => {
     const engineMs: number[] = [];
     const editToScreen: number[] = [];
     for (let i = 0; i < EDITS; i++) {
-      const cell = page.locator('[data-testid="lane-table"] tbody tr').nth(i).locator('input[aria-label^="toll of lane"]');
-      const before = await solveCount(page);
-      await cell.fill(`${100 + i}.00`);
-      const started = Date.now();
-      await cell.press('Enter');
-      await waitForPlan(page, before);
-      editToScreen.push(Date.now() - started);
-      const status = page.locator('[data-testid="recompute-ms"]');
-      roundTrips.push(Number(await status.getAttribute('data-round-trip-ms')));
-      engineMs.push(Number(await status.getAttribute('data-solve-ms')));
+      const edit = await timedEdit(page, tollCell(page, i), `${100 + i}.00`);
+      editToScreen.push(edit.editToScreenMs);
+      roundTrips.push(edit.roundTripMs);
+      engineMs.push(edit.solveMs);
     }
     expect(await page.locator('[data-testid="lane-table"] tbody tr.lw-changed-row').count()).toBe(EDITS);
     const longTasks = await longTasksOf();
@@ -154,5 +140,34 @@ describe('5,000 depots and 50,000 lanes', () => {
     await page.getByLabel('Filter depots by id, name or caution').fill('Synthetic depot 4321');
     await expect.poll(() => table.getAttribute('aria-rowcount')).toBe('2');
     expect(await rendered.first().getAttribute('data-depot')).toBe('D4321');
+  });
+
+  it('windows the lane table, and keeps a half-typed amount while its row is scrolled away', async () => {
+    const page = session.page;
+    await page.getByRole('tab', { name: /Lanes/ }).click();
+    const table = page.locator('[data-testid="lane-table"]');
+    const rowCount = Number(await table.getAttribute('aria-rowcount'));
+    expect(rowCount).toBeGreaterThan(1000);
+    const rendered = table.locator('tbody tr[aria-rowindex]');
+    expect(await rendered.count()).toBeLessThan(200); // windowed: only rows near the view are in the DOM
+    const firstToll = table.locator('tr[aria-rowindex="2"] input[aria-label^="toll of lane"]');
+    await firstToll.fill('7.77');
+    const scrollTableTo = (where: 'bottom' | 'top') =>
+      table.evaluate((t, to) => {
+        let e: HTMLElement | null = t.parentElement;
+        while (e && !['auto', 'scroll'].includes(getComputedStyle(e).overflowY)) e = e.parentElement;
+        e!.scrollTop = to === 'bottom' ? e!.scrollHeight : 0;
+      }, where);
+    await scrollTableTo('bottom');
+    await expect.poll(() => table.locator(`tr[aria-rowindex="${rowCount}"]`).count()).toBe(1);
+    // The row being typed in stays rendered (far above the window), with its text and the focus.
+    expect(await firstToll.inputValue()).toBe('7.77');
+    expect(await firstToll.evaluate((input) => input === document.activeElement)).toBe(true);
+    expect(await rendered.count()).toBeLessThan(200);
+    await scrollTableTo('top');
+    const before = await solveCount(page);
+    await firstToll.press('Enter');
+    await waitForPlan(page, before);
+    await expect.poll(() => table.locator('tr[aria-rowindex="2"]').getAttribute('class')).toContain('lw-changed-row');
   });
 });

@@ -10,6 +10,7 @@ import { inCsvDialect } from '../csv-dialect-option';
 import { loadImport } from '../load-network';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
+import { auditProgress, negotiableOption } from './audit-shared';
 import { counted, plural } from '../../../engine/index';
 
 /** Value options only the calendar review reads (kept together so the option table can take them as they are). */
@@ -27,7 +28,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const threads = wholeNumberOption(args, 'threads', 1);
   const fixBy = fixByOption(args);
-  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const negotiable = negotiableOption(args);
   const loopsCsv = args.values.get('loops-csv');
   const reportPath = args.values.get('report');
 
@@ -36,7 +37,6 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   const imported = loadImport(args, {}, false);
   const readMs = performance.now() - readStart;
 
-  let lastLine = '';
   const solveStart = performance.now();
   // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
   const pool = createHeadroomThreadPool({ threads });
@@ -51,12 +51,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
       negotiable,
       fixBy,
       skipInvalid: args.flags.has('skip-invalid'),
-      onProgress: args.flags.has('progress')
-        ? ({ phase, done, total }) => {
-            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-            if (line !== lastLine) out.warn((lastLine = line));
-          }
-        : undefined,
+      onProgress: auditProgress(args, out),
     });
   } finally {
     pool.close();

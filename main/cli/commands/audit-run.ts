@@ -14,6 +14,7 @@ import { loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
+import { auditProgress, negotiableOption } from './audit-shared';
 import { counted, plural } from '../../../engine/index';
 
 /** The --scenario file, read before any work; null without one. */
@@ -30,7 +31,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const threads = wholeNumberOption(args, 'threads', 1);
-  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const negotiable = negotiableOption(args);
   const loopsCsv = args.values.get('loops-csv');
   csvDialectOption(args);
 
@@ -49,7 +50,6 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   }
   const readMs = performance.now() - readStart;
 
-  let lastLine = '';
   const solveStart = performance.now();
   // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
   const pool = createHeadroomThreadPool({ threads });
@@ -60,12 +60,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
       loopCap,
       negotiable,
       laneKeys,
-      onProgress: args.flags.has('progress')
-        ? ({ phase, done, total }) => {
-            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-            if (line !== lastLine) out.warn((lastLine = line));
-          }
-        : undefined,
+      onProgress: auditProgress(args, out),
     });
   } finally {
     pool.close();

@@ -7,6 +7,8 @@ import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react
 /** Tables with at least this many rows are windowed. */
 export const WINDOW_FROM_ROWS = 400;
 const OVERSCAN_ROWS = 12;
+// Rows rendered before the first measure (a lower panel shows about twenty).
+const INITIAL_ROWS = 40;
 const DEFAULT_ROW_PX = 26;
 
 export interface RowWindow {
@@ -16,6 +18,8 @@ export interface RowWindow {
   /** Rendered rows are [start, end). */
   start: number;
   end: number;
+  /** Height of one row (px), measured from a rendered row. */
+  rowPx: number;
   /** Heights of the spacer rows before and after the rendered rows (px). */
   padTop: number;
   padBottom: number;
@@ -36,14 +40,22 @@ export function useRowWindow(count: number): RowWindow {
   const bodyRef = useRef<HTMLTableSectionElement | null>(null);
   const windowed = count >= WINDOW_FROM_ROWS;
   const rowPx = useRef(DEFAULT_ROW_PX);
-  const [range, setRange] = useState({ start: 0, end: Math.min(count, windowed ? 60 : count) });
+  const [range, setRange] = useState({ start: 0, end: Math.min(count, windowed ? INITIAL_ROWS : count) });
+
+  // The scrolling ancestor, found once per body (getComputedStyle up the tree on every scroll
+  // event recalculated style each time).
+  const scrollerRef = useRef<{ body: HTMLElement; scroller: HTMLElement } | null>(null);
+  const scrollerOf = (body: HTMLElement): HTMLElement => {
+    if (scrollerRef.current?.body !== body) scrollerRef.current = { body, scroller: scrollParent(body) };
+    return scrollerRef.current.scroller;
+  };
 
   const measure = useCallback(() => {
     const body = bodyRef.current;
     if (!body || !windowed) return;
     const row = body.querySelector<HTMLElement>('tr[aria-rowindex]');
     if (row && row.offsetHeight > 0) rowPx.current = row.offsetHeight;
-    const scroller = scrollParent(body);
+    const scroller = scrollerOf(body);
     const bodyTop = body.getBoundingClientRect().top - scroller.getBoundingClientRect().top + scroller.scrollTop;
     const first = Math.floor((scroller.scrollTop - bodyTop) / rowPx.current);
     const shown = Math.ceil(scroller.clientHeight / rowPx.current);
@@ -52,11 +64,17 @@ export function useRowWindow(count: number): RowWindow {
     setRange((r) => (r.start === start && r.end === end ? r : { start, end }));
   }, [count, windowed]);
 
-  useLayoutEffect(measure, [measure]);
+  // Measured in the next animation frame, not in the commit: reading sizes right after React
+  // changed the rows forced style and layout of the whole page inside the click or solve that
+  // caused it (a long task); in the frame they are computed once, as the frame needs them anyway.
+  useLayoutEffect(() => {
+    const frame = requestAnimationFrame(measure);
+    return () => cancelAnimationFrame(frame);
+  }, [measure]);
   useEffect(() => {
     const body = bodyRef.current;
     if (!body || !windowed) return;
-    const scroller = scrollParent(body);
+    const scroller = scrollerOf(body);
     const target: HTMLElement | Window = scroller === document.documentElement ? window : scroller;
     target.addEventListener('scroll', measure, { passive: true });
     const resize = new ResizeObserver(measure);
@@ -71,7 +89,7 @@ export function useRowWindow(count: number): RowWindow {
     (index: number) => {
       const body = bodyRef.current;
       if (!body || !windowed) return;
-      const scroller = scrollParent(body);
+      const scroller = scrollerOf(body);
       const head = body.parentElement?.querySelector('thead')?.getBoundingClientRect().height ?? 0;
       const bodyTop = body.getBoundingClientRect().top - scroller.getBoundingClientRect().top + scroller.scrollTop;
       const rowTop = bodyTop + index * rowPx.current;
@@ -85,5 +103,5 @@ export function useRowWindow(count: number): RowWindow {
 
   const start = windowed ? Math.min(range.start, count) : 0;
   const end = windowed ? Math.min(Math.max(range.end, start), count) : count;
-  return { bodyRef, windowed, start, end, padTop: start * rowPx.current, padBottom: (count - end) * rowPx.current, scrollToIndex };
+  return { bodyRef, windowed, start, end, rowPx: rowPx.current, padTop: start * rowPx.current, padBottom: (count - end) * rowPx.current, scrollToIndex };
 }

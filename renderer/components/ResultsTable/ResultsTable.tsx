@@ -6,12 +6,13 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { counted } from '../../../engine/index';
 import { CautionLine } from '../CautionLine/CautionLine';
+import { SortHeader, sortOf } from '../DataTable/SortHeader';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { useRowKeys } from '../DataTable/use-row-keys';
 import { ALL_FLAG_LABELS, FLAG_LIMIT_HIDES_LOOP, flagExplanations, LIMIT_HIDES_LOOP_HELP } from '../../model/flags';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
-import { costText, DEFAULT_QUERY, queryRows, resultRows, statusBadges, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
+import { costText, DEFAULT_QUERY, queryDepots, resultRow, statusBadges, toggleSort, type SortKey, type StatusWord, type TableQuery } from '../../model/results-table';
 import type { NetworkView, SolveView } from '../../worker/protocol';
 
 export interface ResultsTableProps {
@@ -34,11 +35,11 @@ const COLUMNS: { key: SortKey; label: string; numeric?: boolean }[] = [
 
 export function ResultsTable({ network, solve, selected, onSelect, onExport }: ResultsTableProps) {
   const [query, setQuery] = useState<TableQuery>(DEFAULT_QUERY);
-  const rows = useMemo(() => resultRows(network, solve), [network, solve]);
-  const visible = useMemo(() => queryRows(rows, query), [rows, query]);
+  // Depots in table order; a row is made only for what the window shows.
+  const visible = useMemo(() => queryDepots(network, solve, query), [network, solve, query]);
   const rowWindow = useRowWindow(visible.length);
   // The table is one Tab stop; the keys move between rows by index (rows outside the window too).
-  const keys = useRowKeys(rowWindow, visible.length, (i) => onSelect(visible[i].depot));
+  const keys = useRowKeys(rowWindow, visible.length, (i) => onSelect(visible[i]));
   const columns = solve.base ? [...COLUMNS, { key: 'delta' as SortKey, label: 'Change vs base', numeric: true }] : COLUMNS;
   return (
     <div className="lw-results">
@@ -55,7 +56,7 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
           <input type="checkbox" checked={query.flaggedOnly} onChange={(e) => setQuery({ ...query, flaggedOnly: e.target.checked })} /> With cautions only
         </label>
         <span className="lw-muted" aria-live="polite">
-          {visible.length} of {counted(rows.length, 'depot')}
+          {visible.length} of {counted(network.depotIds.length, 'depot')}
         </span>
         <button type="button" onClick={onExport}>
           Export routes CSV
@@ -71,18 +72,14 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
         <thead>
           <tr aria-rowindex={1}>
             {columns.map((c) => (
-              <th key={c.key} scope="col" aria-sort={query.sortKey === c.key ? (query.descending ? 'descending' : 'ascending') : 'none'} className={c.numeric ? 'lw-num' : undefined}>
-                <button type="button" className="lw-sort" onClick={() => setQuery(toggleSort(query, c.key))}>
-                  {c.label}
-                  <span aria-hidden="true">{query.sortKey === c.key ? (query.descending ? ' ▼' : ' ▲') : ''}</span>
-                </button>
-              </th>
+              <SortHeader key={c.key} label={c.label} numeric={c.numeric} sort={sortOf(query, c.key)} onSort={() => setQuery(toggleSort(query, c.key))} />
             ))}
           </tr>
         </thead>
         <tbody ref={rowWindow.bodyRef}>
           <SpacerRow heightPx={rowWindow.padTop} columns={columns.length} />
-          {visible.slice(rowWindow.start, rowWindow.end).map((row, k) => {
+          {Array.from(visible.subarray(rowWindow.start, rowWindow.end), (depot, k) => {
+            const row = resultRow(network, solve, depot);
             const i = rowWindow.start + k;
             return (
             <tr

@@ -7,7 +7,7 @@ import { importNetwork } from '../../../engine/planning/import-network';
 import { overlayKeys } from '../../../engine/scenario/overlay';
 import { reverseLookup } from '../../../renderer/map/two-way';
 import { laneKey, rowClass, rowKey, rowRef, rowValidity } from '../../../renderer/model/lane-names';
-import { networkView, reverseFlags } from '../../../renderer/worker/network-view';
+import { networkView, reverseFlags, transferablesOf } from '../../../renderer/worker/network-view';
 import { seededRandom } from '../../support/seeded-random';
 
 function files(seed: number) {
@@ -55,5 +55,25 @@ describe('networkView', () => {
       twoWay += flags[e];
     }
     expect(twoWay).toBeGreaterThan(0);
+  });
+
+  it('carries its own copies of what the paint worker needs, each transferable once', () => {
+    const f = files(4);
+    const imported = importNetwork(f.depots, f.lanes, { plan: { date: '2026-08-15', vehicleClass: '2axle' }, skipInvalid: true });
+    const view = networkView(imported, { date: '2026-08-15', vehicleClass: '2axle' });
+    const paint = view.paint!;
+    for (const key of ['lat', 'lon', 'laneFrom', 'laneTo', 'laneReverse'] as const) {
+      expect(Array.from(paint[key]), key).toEqual(Array.from(view[key]));
+      expect(paint[key].buffer).not.toBe(view[key].buffer);
+    }
+    expect(Array.from(paint.laneGrid.lanes)).toEqual(Array.from(view.laneGrid.lanes));
+    // postMessage refuses a transfer list naming one buffer twice.
+    const buffers = transferablesOf(view);
+    expect(new Set(buffers).size).toBe(buffers.length);
+    // And the whole view goes through a transfer as the worker sends it.
+    const { port1, port2 } = new MessageChannel();
+    expect(() => port1.postMessage(view, buffers)).not.toThrow();
+    port1.close();
+    port2.close();
   });
 });
