@@ -12,6 +12,8 @@ export class ByteRefs {
   /** Per row: offset + 1 of its ref's bytes, 0 when the ref is text (or blank). */
   private at: Int32Array;
   private end: Int32Array;
+  /** Per row kept here: FNV-1a of its bytes, so two different refs mostly differ at the first look. */
+  private hash: Int32Array;
   /** Text refs of rows from `firstRow` on. */
   private readonly texts = new Map<number, string>();
 
@@ -22,6 +24,7 @@ export class ByteRefs {
   ) {
     this.at = new Int32Array(capacity);
     this.end = new Int32Array(capacity);
+    this.hash = new Int32Array(capacity);
   }
 
   /** Keeps row `row`'s ref, the ASCII bytes[start, end) (never blank). */
@@ -35,10 +38,16 @@ export class ByteRefs {
     // A loop, not set(subarray): a view per ref cost more than the few bytes it copies.
     const into = this.bytes;
     let at = this.used;
-    for (let k = start; k < end; k++) into[at++] = bytes[k];
+    let hash = 0x811c9dc5 | 0;
+    for (let k = start; k < end; k++) {
+      const c = bytes[k];
+      into[at++] = c;
+      hash = Math.imul(hash ^ c, 0x01000193);
+    }
     this.at[row] = this.used + 1;
     this.used = at;
     this.end[row] = at;
+    this.hash[row] = hash;
   }
 
   /** Row `row`'s ref as text (blank: undefined, nothing kept). */
@@ -52,8 +61,11 @@ export class ByteRefs {
     at.set(this.at.subarray(0, Math.min(capacity, this.at.length)));
     const end = new Int32Array(capacity);
     end.set(this.end.subarray(0, Math.min(capacity, this.end.length)));
+    const hash = new Int32Array(capacity);
+    hash.set(this.hash.subarray(0, Math.min(capacity, this.hash.length)));
     this.at = at;
     this.end = end;
+    this.hash = hash;
   }
 
   /** The ref column of rows 0 .. count - 1, every ref a string. */
@@ -69,6 +81,7 @@ export class ByteRefs {
     const sb = this.at[b];
     if (sa === 0 && sb === 0) return this.text(a) === this.text(b);
     if (sa > 0 && sb > 0) {
+      if (this.hash[a] !== this.hash[b]) return false;
       const n = this.end[a] - (sa - 1);
       if (this.end[b] - (sb - 1) !== n) return false;
       for (let k = 0; k < n; k++) if (this.bytes[sa - 1 + k] !== this.bytes[sb - 1 + k]) return false;
@@ -82,7 +95,20 @@ export class ByteRefs {
     return true;
   }
 
+  /** Row `row`'s ref hashed as `textRefHash` hashes its text. */
+  refHash(row: number): number {
+    return this.at[row] > 0 ? this.hash[row] : textRefHash(this.text(row));
+  }
+
   private text(row: number): string | undefined {
     return row < this.head.length ? this.head[row] : this.texts.get(row);
   }
+}
+
+/** FNV-1a over a ref's UTF-16 code units (for an ASCII ref, the hash of its bytes); 0 for none. */
+export function textRefHash(ref: string | undefined): number {
+  if (ref === undefined) return 0;
+  let h = 0x811c9dc5 | 0;
+  for (let k = 0; k < ref.length; k++) h = Math.imul(h ^ ref.charCodeAt(k), 0x01000193);
+  return h;
 }

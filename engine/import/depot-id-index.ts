@@ -59,9 +59,17 @@ export class DepotIdIndex {
 
   /** The depot whose id is exactly bytes[start, end), or -1 (always for an id not printable ASCII). */
   find(bytes: Uint8Array, start: number, end: number): number {
-    this.key(bytes, start, end);
-    const hash = this.hash;
-    const inline = this.inline;
+    let h = FNV_OFFSET;
+    for (let i = start; i < end; i++) h = Math.imul(h ^ bytes[i], FNV_PRIME);
+    return this.findHashed(h, bytes, start, end);
+  }
+
+  /**
+   * `find` for a caller that hashed the range as it read it (`FNV_OFFSET`, then per byte
+   * `Math.imul(h ^ byte, FNV_PRIME)`): the bytes are looked at again only on a hash match.
+   */
+  findHashed(hash: number, bytes: Uint8Array, start: number, end: number): number {
+    const inline = end - start <= INLINE_MAX;
     const slots = this.slots;
     let slot = hash & this.mask;
     for (;;) {
@@ -71,7 +79,7 @@ export class DepotIdIndex {
       if (slots[b + 1] === hash) {
         if ((entry & 1) === 1) {
           // Packed with zero padding: equal words mean equal length and characters.
-          if (inline && slots[b + 2] === this.low && slots[b + 3] === this.high) return entry >> 1;
+          if (inline && slots[b + 2] === packed(bytes, start, Math.min(end, start + 4)) && slots[b + 3] === packed(bytes, start + 4, end)) return entry >> 1;
         } else if (!inline && this.sameBytes(entry >> 1, bytes, start, end)) return entry >> 1;
       }
       slot = (slot + 1) & this.mask;
@@ -90,22 +98,24 @@ export class DepotIdIndex {
   // FNV-1a over the range, and its bytes packed four to a word when the id can sit in a slot (at
   // most 8 bytes; a zero byte, never part of a held id, is the padding).
   private key(bytes: Uint8Array, start: number, end: number): void {
-    let h = 0x811c9dc5 | 0;
-    let low = 0;
-    let high = 0;
-    const inline = end - start <= INLINE_MAX;
-    for (let i = start; i < end; i++) {
-      const c = bytes[i];
-      h = Math.imul(h ^ c, 0x01000193);
-      const k = i - start;
-      if (k < 4) low |= c << (8 * k);
-      else if (k < 8) high |= c << (8 * (k - 4));
-    }
+    let h = FNV_OFFSET;
+    for (let i = start; i < end; i++) h = Math.imul(h ^ bytes[i], FNV_PRIME);
     this.hash = h;
-    this.low = low;
-    this.high = high;
-    this.inline = inline;
+    this.low = packed(bytes, start, Math.min(end, start + 4));
+    this.high = packed(bytes, start + 4, end);
+    this.inline = end - start <= INLINE_MAX;
   }
+}
+
+/** FNV-1a (32 bits) over a depot id's bytes: start from the offset, then per byte xor and multiply. */
+export const FNV_OFFSET = 0x811c9dc5 | 0;
+export const FNV_PRIME = 0x01000193;
+
+// Up to four bytes from `from` (before `to`) in one word, the first lowest; 0 when the range is empty.
+function packed(bytes: Uint8Array, from: number, to: number): number {
+  let word = 0;
+  for (let i = from; i < to; i++) word |= bytes[i] << (8 * (i - from));
+  return word;
 }
 
 function printableAscii(id: string): boolean {

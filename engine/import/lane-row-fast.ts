@@ -11,7 +11,7 @@ import { isoDateNumber } from '../text/iso-date';
 import { withoutFormulaGuard } from '../io/csv-cell-safety';
 import { byteDelimiter } from '../io/csv-byte-stream';
 import { asciiText } from '../text/utf8';
-import type { DepotIdIndex } from './depot-id-index';
+import { FNV_OFFSET, FNV_PRIME, type DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
 import { APOSTROPHE_BYTE, byteClasses, CELL_BYTE } from './plain-cells';
 import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-cells';
@@ -29,6 +29,7 @@ const AMOUNT = 1;
 const DISTANCE = 2;
 const DRIVE = 3;
 const DATE = 4;
+const DEPOT = 5;
 
 export interface FastLaneSetup {
   header: HeaderMatch<LaneField>;
@@ -50,6 +51,8 @@ export class PlainLaneRows {
   private readonly values: Float64Array;
   /** Per text column: 1 when the cell holds an apostrophe (the exporter's formula guard may be there). */
   private readonly apostrophes: Uint8Array;
+  /** Per depot column: the FNV-1a hash of its cell, taken while cutting (depot-id-index.ts). */
+  private readonly hashes: Int32Array;
   private readonly col: Partial<Record<LaneField, number>> = {};
   private readonly classColumns: number[];
   private readonly unknownColumns: number[];
@@ -69,6 +72,7 @@ export class PlainLaneRows {
     this.kinds = new Uint8Array(n);
     this.values = new Float64Array(n);
     this.apostrophes = new Uint8Array(n);
+    this.hashes = new Int32Array(n);
     for (const [field, column] of setup.header.columns) this.col[field] = column.index;
     this.classColumns = setup.header.classTolls.map((c) => c.index);
     this.unknownColumns = setup.header.unknown.map((u) => u.index);
@@ -79,12 +83,14 @@ export class PlainLaneRows {
     const kindOf: [LaneField, number][] = [['toll', AMOUNT], ['fuel', AMOUNT], ['fees', AMOUNT], ['rebate', AMOUNT], ['distance', DISTANCE], ['drive', DRIVE], ['valid_from', DATE], ['valid_to', DATE]];
     for (const [field, kind] of kindOf) if (this.col[field] !== undefined) this.kinds[this.col[field]] = kind;
     for (const c of this.classColumns) this.kinds[c] = AMOUNT;
+    this.kinds[this.col.from!] = DEPOT;
+    this.kinds[this.col.to!] = DEPOT;
   }
 
   /** The fast path for this file, or null when its columns need the general reader throughout. */
   static forFile(setup: FastLaneSetup): PlainLaneRows | null {
     const h = setup.header;
-    if (h.duplicates.length > 0 || setup.table.limits || setup.table.vehicleClass) return null;
+    if (h.duplicates.length > 0 || setup.table.limits || setup.table.vehicleClass || !h.columns.has('from') || !h.columns.has('to')) return null;
     for (const field of h.columns.keys()) if (!FAST_FIELDS.has(field)) return null;
     return new PlainLaneRows(setup);
   }
@@ -147,8 +153,8 @@ export class PlainLaneRows {
     const values = this.values;
     const col = this.col;
     const depots = this.setup.depots;
-    const from = depots.find(bytes, starts[col.from!], ends[col.from!]);
-    const to = depots.find(bytes, starts[col.to!], ends[col.to!]);
+    const from = depots.findHashed(this.hashes[col.from!], bytes, starts[col.from!], ends[col.from!]);
+    const to = depots.findHashed(this.hashes[col.to!], bytes, starts[col.to!], ends[col.to!]);
     if (from === -1 || to === -1 || from === to) return REFUSED;
     const toll = col.toll === undefined ? NaN : values[col.toll];
     const fuel = col.fuel === undefined ? NaN : values[col.fuel];
@@ -229,7 +235,26 @@ export class PlainLaneRows {
           apostrophes[k] = apostrophe;
           break;
         }
-        case AMOUNT: {
+        case DEPOT: {
+          let hash = FNV_OFFSET;
+          for (;;) {
+            const c = bytes[i];
+            const kind = classes[c];
+            if (kind !== CELL_BYTE && kind !== APOSTROPHE_BYTE) break;
+            hash = Math.imul(hash ^ c, FNV_PRIME);
+            i++;
+          }
+          if (i > s) {
+            const first = bytes[s];
+            if (first === 32 || first === 39 || bytes[i - 1] === 32) return REFUSED;
+          }
+          starts[k] = s;
+          ends[k] = i;
+          this.hashes[k] = hash;
+          break;
+        }
+        case AMOUNT:
+        case DISTANCE: {
           // Digits with at most one decimal mark after the first digit; the counts come from positions.
           let value = 0;
           let mark = -1;
@@ -240,32 +265,17 @@ export class PlainLaneRows {
             else break;
             i++;
           }
+          const fraction = mark === -1 ? 0 : i - mark - 1;
           if (i === s) values[k] = NaN;
-          else {
-            const fraction = mark === -1 ? 0 : i - mark - 1;
-            if (mark !== -1 && (fraction === 0 || fraction > exponent)) return REFUSED;
+          else if (mark !== -1 && fraction === 0) return REFUSED;
+          else if (kinds[k] === AMOUNT) {
+            if (fraction > exponent) return REFUSED;
             const scale = exponent - fraction;
             // Fifteen digits in minor units stay exact and far inside the safe range; longer goes the general way.
             if (i - s - (mark === -1 ? 0 : 1) + scale > 15) return REFUSED;
             values[k] = value * POW10[scale];
-          }
-          break;
-        }
-        case DISTANCE: {
-          let value = 0;
-          let mark = -1;
-          for (;;) {
-            const d = bytes[i] - 48;
-            if (d >>> 0 <= 9) value = value * 10 + d;
-            else if (d === markDigit && mark === -1 && i > s) mark = i;
-            else break;
-            i++;
-          }
-          if (i === s) values[k] = NaN;
-          else {
-            const whole = (mark === -1 ? i : mark) - s;
-            const fraction = mark === -1 ? 0 : i - mark - 1;
-            if (whole > 5 || (mark !== -1 && (fraction === 0 || fraction > 6))) return REFUSED;
+          } else {
+            if ((mark === -1 ? i : mark) - s > 5 || fraction > 6) return REFUSED;
             // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
             const read = fraction > 0 ? value / POW10[fraction] : value;
             const km = this.miles ? read * KM_PER_MILE : read;

@@ -4,7 +4,7 @@
 import { formatMinor, type Minor } from '../money/minor';
 import { textKeyedRecord } from '../text/lookup-table';
 import { isoDateText } from './cells';
-import { ByteRefs } from './byte-refs';
+import { ByteRefs, textRefHash } from './byte-refs';
 import type { LaneLimitsBuilder } from './lane-limits';
 import type { DepotRecord, LaneRecord, LaneTable } from './types';
 
@@ -134,18 +134,30 @@ export class LaneTableBuilder {
       },
       set ref(value) {
         column = value;
+        byteRefTables.delete(lazy);
       },
     };
-    byteRefTables.set(lazy, (a, b) => (column !== null ? column[a] === column[b] : kept.same(a, b)));
+    byteRefTables.set(lazy, kept);
     return lazy;
   }
 }
 
-const byteRefTables = new WeakMap<LaneTable, (a: number, b: number) => boolean>();
+const byteRefTables = new WeakMap<LaneTable, ByteRefs>();
 
 /** Whether rows a and b of `table` have the same ref, without making ref strings the table has not made yet. */
 export function sameRefOf(table: LaneTable): (a: number, b: number) => boolean {
-  return byteRefTables.get(table) ?? ((a, b) => table.ref[a] === table.ref[b]);
+  const kept = byteRefTables.get(table);
+  if (kept !== undefined) return (a, b) => kept.same(a, b);
+  const ref = table.ref;
+  return (a, b) => ref[a] === ref[b];
+}
+
+/** A hash of each row's ref (equal refs, equal hashes), without making ref strings. */
+export function refHashOf(table: LaneTable): (row: number) => number {
+  const kept = byteRefTables.get(table);
+  if (kept !== undefined) return (row) => kept.refHash(row);
+  const ref = table.ref;
+  return (row) => textRefHash(ref[row]);
 }
 
 /** Row `i` of a lane table as an object, amounts formatted in the network currency. */

@@ -56,6 +56,9 @@ export function startImport(options: ImportOptions = {}): ImportSession {
   });
   // The depots file is small: its bytes are decoded and read as text (no byte taker).
   let depotBytes: CsvByteStream | null = null;
+  // One file is fed one way (text or bytes): the byte stream may hold a partial line.
+  let depotText = false;
+  let laneText = false;
   let lanes: LanesReader | null = null;
   let laneStream: CsvRecordStream | null = null;
   let laneBytes: CsvByteStream | null = null;
@@ -102,12 +105,15 @@ export function startImport(options: ImportOptions = {}): ImportSession {
   const session: ImportSession = {
     feedDepots(chunk, fraction) {
       if (phase !== 'depots') throw new Error('import: depots are finished; feed lanes now');
+      if (depotBytes !== null) throw new Error('import: the depots file is fed as bytes');
       check(depotsFile, depots.rows);
+      depotText = true;
       depotStream.feed(chunk);
       progress('depots', depots.rows, fraction);
     },
     feedDepotsBytes(chunk, fraction) {
       if (phase !== 'depots') throw new Error('import: depots are finished; feed lanes now');
+      if (depotText) throw new Error('import: the depots file is fed as text');
       check(depotsFile, depots.rows);
       depotBytes ??= new CsvByteStream(depotStream, undefined, options.utf8Text);
       depotBytes.feed(chunk);
@@ -124,11 +130,14 @@ export function startImport(options: ImportOptions = {}): ImportSession {
     feedLanes(chunk, fraction) {
       const { reader, stream } = openLanes();
       if (phase !== 'lanes') throw new Error('import: lanes are finished');
+      if (laneBytes !== null) throw new Error('import: the lanes file is fed as bytes');
       check(lanesFile, reader.rows);
+      laneText = true;
       stream.feed(chunk);
       afterLaneChunk(reader, fraction);
     },
     feedLanesBytes(chunk, fraction) {
+      if (laneText) throw new Error('import: the lanes file is fed as text');
       const { reader, bytes } = lanesAsBytes();
       if (phase !== 'lanes') throw new Error('import: lanes are finished');
       check(lanesFile, reader.rows);

@@ -6,7 +6,8 @@
 // with accepted + rejected = total, for chunks cut anywhere, inside a multi-byte character too.
 
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
+import { CsvRecordStream } from '../../../engine/io/csv-record-stream';
 import { startImport } from '../../../engine/planning/import-network';
 import { Utf8ChunkDecoder } from '../../../engine/text/utf8';
 import type { ImportResult } from '../../../engine/planning/import-types';
@@ -155,7 +156,12 @@ describe('CsvByteStream (the byte path) against the text path', () => {
   it('takes plain rows from the bytes and the rest the general way', () => {
     const lines = ['from,to,ref,toll,fuel', ...Array.from({ length: 40 }, (_, i) => (i === 20 ? 'Liège,B,"R, 20",1.00,2.5' : `A,B,R${i},1.00,2.5`))];
     const bytes = encoder.encode(lines.join('\r\n') + '\r\n');
+    // Rows read from the bytes are counted by the text stream's rowTaken.
+    const taken = vi.spyOn(CsvRecordStream.prototype, 'rowTaken');
     const result = importWith(cutAt(bytes, [50, 51, 52, 300]), true);
+    // The first chunk is the header and the start of row 2; every later row but the quoted one (row 22) is taken.
+    expect(taken).toHaveBeenCalledTimes(38);
+    taken.mockRestore();
     expect(result.lanes.count).toBe(40);
     expect(result.lanes.ref[20]).toBe('R, 20');
     expect(result.lanes.from[20]).toBe(3);
@@ -194,5 +200,24 @@ describe('CsvByteStream (the byte path) against the text path', () => {
       [32, 'not-text'],
       [33, 'not-text'],
     ]);
+  });
+
+  it('refuses a file fed partly as text and partly as bytes', () => {
+    const session = startImport();
+    session.feedDepotsBytes(encoder.encode(DEPOTS.slice(0, 20)));
+    expect(() => session.feedDepots(DEPOTS.slice(20))).toThrow(/fed as bytes/);
+    session.finishDepots();
+    session.feedLanes('from,to\n');
+    expect(() => session.feedLanesBytes(encoder.encode('A,B\n'))).toThrow(/fed as text/);
+  });
+
+  it('gives long lines (past what a byte chunk carries) to the text stream with the same result', () => {
+    const rows = Array.from({ length: 60 }, (_, i) => (i % 20 === 7 ? `A,B,R${i},1.00,2,${'x'.repeat(100_000 + i)}` : i === 31 ? `A,B,R${i},1.00,2,"${'quoted, '.repeat(20_000)}"` : `A,B,R${i},1.00,2,n${i}`));
+    const bytes = encoder.encode(['from,to,ref,toll,fuel,notes', ...rows].join('\n') + '\n');
+    const cuts = Array.from({ length: Math.ceil(bytes.length / 9_000) }, (_, i) => i * 9_000);
+    expectSamePaths(bytes, cuts);
+    const result = importWith(cutAt(bytes, cuts), true);
+    expect(result.lanes.count).toBe(60);
+    expect(result.lanes.notes[7]?.length).toBe(100_007);
   });
 });
