@@ -157,6 +157,8 @@ function ordered(source: RowSource, query: TableQuery): Int32Array {
     order.sort((a, b) => (descending ? collator.compare(text[b], text[a]) : collator.compare(text[a], text[b])) || byDepot(a, b));
   } else {
     const value = Float64Array.from(kept, (i) => source.number(i, key));
+    const packed = inDepotOrder(source, kept) ? packedOrder(value, descending) : null;
+    if (packed) return Int32Array.from(packed, (k) => kept[k]);
     order.sort((a, b) => {
       const x = value[a];
       const y = value[b];
@@ -167,6 +169,42 @@ function ordered(source: RowSource, query: TableQuery): Int32Array {
     });
   }
   return Int32Array.from(order, (k) => kept[k]);
+}
+
+function inDepotOrder(source: RowSource, kept: readonly number[]): boolean {
+  for (let k = 1; k < kept.length; k++) if (source.depot(kept[k]) <= source.depot(kept[k - 1])) return false;
+  return true;
+}
+
+// 2^17: positions below it fit beside an integer key under 2^35 in a double's 53 exact bits.
+const PACK = 131072;
+
+/**
+ * The order of `value` (ascending, or descending) with missing values (NaN) last and ties by
+ * position, by the typed array's own numeric sort of `key * 2^17 + position`: no comparator call per
+ * comparison, a few milliseconds for 50,000 depots where a comparator sort took tens to a hundred
+ * on a loaded machine. Null when a key is not an integer under 2^35 or there are 2^17 positions or
+ * more (the comparator sort then runs); every figure of a solve is whole minor units or minutes.
+ */
+function packedOrder(value: Float64Array, descending: boolean): number[] | null {
+  if (value.length >= PACK) return null;
+  const keys = new Float64Array(value.length);
+  const missing: number[] = [];
+  let n = 0;
+  for (let k = 0; k < value.length; k++) {
+    const v = value[k];
+    if (Number.isNaN(v)) {
+      missing.push(k);
+      continue;
+    }
+    const signed = descending ? -v : v;
+    if (!Number.isInteger(signed) || Math.abs(signed) >= 2 ** 35) return null;
+    keys[n++] = signed * PACK + k;
+  }
+  const sorted = keys.subarray(0, n).sort();
+  const out: number[] = [];
+  for (let j = 0; j < n; j++) out.push(sorted[j] - Math.floor(sorted[j] / PACK) * PACK);
+  return out.concat(missing);
 }
 
 /** Filters and sorts rows; ties keep depot order, so the result is stable. */

@@ -6,6 +6,7 @@
 import { overlayKeys } from '../../engine/index';
 import type { ImportResult, LaneKey, Network } from '../../engine/index';
 import { laneGrid } from '../map/lane-grid';
+import { copyPaintArrays, paintBuffers } from '../map/paint/paint-arrays';
 import type { LaneRowsView, NetworkView, PlanChoice } from './protocol';
 
 /** Base network lane of each lanes-file row, -1 for a row the plan leaves out. */
@@ -108,23 +109,16 @@ export function networkView(result: ImportResult, plan: PlanChoice, keys: readon
     plannedClass: result.plan.vehicleClass,
     plan,
     driveLimitMinutes: result.plan.settings.drivingLimit.dailyDrivingMinutes,
-    paint: {
-      lat: network.lat.slice(),
-      lon: network.lon.slice(),
-      laneFrom: network.laneFrom.slice(),
-      laneTo: network.laneTo.slice(),
-      laneReverse: laneReverse.slice(),
-      laneGrid: { ...grid, start: grid.start.slice(), lanes: grid.lanes.slice(), long: grid.long.slice() },
-    },
+    // The paint worker's own copies, handed on by the UI thread without copying (map/paint/).
+    paint: copyPaintArrays({ lat: network.lat, lon: network.lon, laneFrom: network.laneFrom, laneTo: network.laneTo, laneReverse, laneGrid: grid }),
   };
 }
 
 /** The typed arrays of a view, for postMessage's transfer list. */
 export function transferablesOf(view: NetworkView): ArrayBuffer[] {
   const r = view.rows;
-  const p = view.paint;
-  const paint = p ? [p.lat, p.lon, p.laneFrom, p.laneTo, p.laneReverse, p.laneGrid.start, p.laneGrid.lanes, p.laneGrid.long] : [];
-  return [...paint, view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, view.laneGrid.start, view.laneGrid.lanes, view.laneGrid.long, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
+  const own = [view.lat, view.lon, view.laneFrom, view.laneTo, view.laneToll, view.laneFuel, view.laneFees, view.laneRebate, view.laneRow, view.laneDistanceKm, view.laneDriveMinutes, view.laneReverse, view.laneRecord, view.laneGrid.start, view.laneGrid.lanes, view.laneGrid.long, r.from, r.to, r.sourceRow, r.refIndex, r.occurrence, r.validFrom, r.validTo, r.classIndex, r.lane].map(
     (a) => a.buffer as ArrayBuffer,
   );
+  return view.paint ? [...own, ...paintBuffers(view.paint)] : own;
 }

@@ -6,9 +6,9 @@ import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react
 
 /** Tables with at least this many rows are windowed. */
 export const WINDOW_FROM_ROWS = 400;
-const OVERSCAN_ROWS = 12;
+const OVERSCAN_ROWS = 8;
 // Rows rendered before the first measure (a lower panel shows about twenty).
-const INITIAL_ROWS = 40;
+const INITIAL_ROWS = 32;
 const DEFAULT_ROW_PX = 26;
 
 export interface RowWindow {

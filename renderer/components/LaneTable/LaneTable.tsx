@@ -45,29 +45,32 @@ function notPlannedReason(network: NetworkView, r: number): string {
   return 'not in the plan on screen';
 }
 
-// The unfiltered lists (rows of the plan; every row of the file), made once per network: the table
-// is made again each time its tab is shown, and a pass over 500,000 rows was most of that.
-const unfiltered = new WeakMap<NetworkView, { planned?: number[]; every?: number[] }>();
+// The unfiltered lists (rows of the plan; every row of the file), made once per network into typed
+// arrays: the table is made again each time its tab is shown, and a pass over 500,000 rows pushing
+// into a plain array was most of that.
+const unfiltered = new WeakMap<NetworkView, { planned?: Int32Array; every?: Int32Array }>();
 
-/** Rows of the file listed for a filter text (lower case, '' for none), with or without the rows not planned. */
-function rowsMatching(network: NetworkView, needle: string, everyRow: boolean): number[] {
+/** Rows of the file listed for a filter text (lower case, '' for none), with or without the rows not planned; in file order. */
+function rowsMatching(network: NetworkView, needle: string, everyRow: boolean): Int32Array {
   const rows = network.rows;
   let cached = unfiltered.get(network);
   if (needle === '' && cached?.[everyRow ? 'every' : 'planned']) return cached[everyRow ? 'every' : 'planned']!;
-  const out: number[] = [];
+  const out = new Int32Array(rows.lane.length);
+  let n = 0;
   for (let r = 0; r < rows.lane.length; r++) {
     if (rows.lane[r] === -1 && !everyRow) continue;
     if (needle !== '') {
       const hay = `${network.depotIds[rows.from[r]]} ${network.depotIds[rows.to[r]]} ${rowRef(network, r) ?? ''}`.toLowerCase();
       if (!hay.includes(needle)) continue;
     }
-    out.push(r);
+    out[n++] = r;
   }
+  const list = out.slice(0, n);
   if (needle === '') {
     if (!cached) unfiltered.set(network, (cached = {}));
-    cached[everyRow ? 'every' : 'planned'] = out;
+    cached[everyRow ? 'every' : 'planned'] = list;
   }
-  return out;
+  return list;
 }
 
 export function LaneTable({ network, amounts, added, scenario, onScenario }: LaneTableProps) {

@@ -3,6 +3,7 @@
 // transferred once, and from then on the map sends frames and gets back what was painted.
 
 import type { NetworkView } from '../../worker/protocol';
+import { copyPaintArrays, paintBuffers } from './paint-arrays';
 import type { CanvasContent, FromPaint, NetworkPaintArrays, PaintedAnswer, PaintFrame, ToPaint } from './protocol';
 
 export type { AddedLaneEnds, CanvasContent, PaintedAnswer, PaintFrame } from './protocol';
@@ -38,8 +39,7 @@ class PaintClient {
       entry = { id: this.nextId++, users: 0 };
       this.networkIds.set(network, entry);
       const arrays = paintArraysOf(network);
-      const { lat, lon, laneFrom, laneTo, laneReverse, laneGrid } = arrays;
-      this.send({ kind: 'network', network: entry.id, arrays }, [lat, lon, laneFrom, laneTo, laneReverse, laneGrid.start, laneGrid.lanes, laneGrid.long].map((a) => a.buffer));
+      this.send({ kind: 'network', network: entry.id, arrays }, paintBuffers(arrays));
     }
     entry.users++;
     return entry.id;
@@ -90,15 +90,7 @@ function paintArraysOf(network: NetworkView): NetworkPaintArrays {
     handedOn.add(network);
     return network.paint;
   }
-  const g = network.laneGrid;
-  return {
-    lat: network.lat.slice(),
-    lon: network.lon.slice(),
-    laneFrom: network.laneFrom.slice(),
-    laneTo: network.laneTo.slice(),
-    laneReverse: network.laneReverse.slice(),
-    laneGrid: { ...g, start: g.start.slice(), lanes: g.lanes.slice(), long: g.long.slice() },
-  };
+  return copyPaintArrays(network);
 }
 
 let client: PaintClient | null = null;

@@ -28,10 +28,14 @@ function reference(rows: readonly ResultRow[], key: SortKey, descending: boolean
   return [...rows].sort((a, b) => by(a, b) || a.depot - b.depot);
 }
 
-function randomRows(seed: number, n: number): ResultRow[] {
+/**
+ * Random rows; with `odd`, some figures are not whole or are past 2^35 (the sort's packed fast path
+ * then steps aside for the comparator), else every present figure is whole and small (the fast path).
+ */
+function randomRows(seed: number, n: number, odd: 'fractions' | 'huge' | null = null): ResultRow[] {
   const next = seededRandom(seed);
   const pick = <T>(xs: readonly T[]) => xs[Math.floor(next() * xs.length)];
-  const figure = () => pick([NaN, Infinity, -Infinity, -1e301, 0, -5, 120, 120, Math.round(next() * 1000)]);
+  const figure = () => pick([NaN, Infinity, -Infinity, -1e301, 0, -5, 120, 120, Math.round(next() * 1000), odd === 'fractions' ? 12.5 : odd === 'huge' ? 2 ** 40 : -7]);
   return Array.from({ length: n }, (_, depot) => {
     const flags = Math.floor(next() * 32);
     return {
@@ -51,8 +55,13 @@ function randomRows(seed: number, n: number): ResultRow[] {
 }
 
 describe('queryRows sorting', () => {
-  it.each([1, 2, 3])('orders random depots as the plain comparator does, every key both ways (seed %i)', (seed) => {
-    const rows = randomRows(seed, 400);
+  it.each([
+    [1, null],
+    [2, null],
+    [3, 'fractions'],
+    [4, 'huge'],
+  ] as const)('orders random depots as the plain comparator does, every key both ways (seed %i, odd figures: %s)', (seed, odd) => {
+    const rows = randomRows(seed, 400, odd);
     for (const sortKey of KEYS)
       for (const descending of [false, true]) {
         const got = queryRows(rows, { text: '', status: 'all', flaggedOnly: false, sortKey, descending }).map((r) => r.depot);
