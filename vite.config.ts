@@ -3,6 +3,7 @@
 import { defineConfig, type Plugin } from 'vite';
 import react from '@vitejs/plugin-react';
 import { CONTENT_SECURITY_POLICY_META } from './main/ipc/content-security-policy';
+import { CROSS_ORIGIN_ISOLATION_HEADERS } from './main/ipc/cross-origin-isolation';
 
 // The page carries the same policy main sends as a header, so browser mode runs under it too.
 const contentSecurityPolicy: Plugin = {
@@ -21,5 +22,7 @@ export default defineConfig({
     chunkSizeWarningLimit: 2000,
   },
   worker: { format: 'es' },
-  server: { port: 5178, strictPort: false },
+  // Isolated as the served app and the desktop window are, so the headroom workers run in development too.
+  server: { port: 5178, strictPort: false, headers: { ...CROSS_ORIGIN_ISOLATION_HEADERS } },
+  preview: { headers: { ...CROSS_ORIGIN_ISOLATION_HEADERS } },
 });

@@ -45,14 +45,8 @@ export class DepotsReader extends RecordFileReader {
 
   protected readHeader(cells: string[]): void {
     this.header = matchDepotHeaders(cells);
-    for (const field of REQUIRED) {
-      if (!this.header.columns.has(field)) {
-        this.report.error(this.file, this.headerRow, field, null, 'missing-column', `required column "${field}" is missing; no depot can be read`);
-        this.unusable = true;
-      }
-    }
-    for (const d of this.header.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
-    for (const u of this.header.unknown) this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, kept with the depot but not used');
+    this.requireColumns(this.header, REQUIRED.map((field) => [field, field] as const), 'depot');
+    this.reportColumnProblems(this.header, 'unknown column, kept with the depot but not used');
   }
 
   protected readRow(cells: string[], row: number): boolean {
@@ -63,9 +57,7 @@ export class DepotsReader extends RecordFileReader {
       this.report.error(this.file, row, column, value, code, message);
       ok = false;
     };
-    if (cells.length > this.headerCells.length) {
-      fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
-    }
+    this.refuseSurplusFields(cells, fail);
     const idColumn = cols.get('id')!.header;
     const id = cellText(cells, at('id'));
     if (id === '') fail(idColumn, '', 'missing-value', 'depot id is empty');

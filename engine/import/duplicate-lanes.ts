@@ -1,9 +1,11 @@
 // Finds lane rows that repeat an earlier one (same from, to, reference, vehicle class and validity)
-// in linear time: lanes grouped by origin with a counting sort, then matched per destination through
-// short chains, so a million lanes need no string keys. Each loop is its own function: one function
-// holding them all was optimised inside its first loop and thrown back to the interpreter at each
-// later one ("insufficient type feedback"), which cost more than the work (about 0.4 s per million rows).
+// in linear time: each row's key is hashed (the ref by its FNV-1a hash, which refs the byte reader
+// kept carry already) into one open table whose chains hold only rows with distinct keys, so a row is
+// compared with the few rows of its bucket. Chaining by destination alone, as before, compared every
+// pair of rows between the same two depots: a file of many lanes on one pair took quadratic time.
+// No string keys: a million lanes would make a million strings.
 
+import { refHashOf, sameRefOf } from './lane-table';
 import type { LaneTable } from './types';
 
 export interface DuplicateLane {
@@ -12,66 +14,56 @@ export interface DuplicateLane {
   first: number;
 }
 
-export function findDuplicateLanes(table: LaneTable, depotCount: number): DuplicateLane[] {
-  const start = originStarts(table.from, table.count, depotCount);
-  const { order, toInOrder } = byOrigin(table.from, table.to, table.count, start);
-  return repeats(table, depotCount, start, order, toInOrder).sort((a, b) => a.lane - b.lane);
+export function findDuplicateLanes(table: LaneTable, _depotCount: number): DuplicateLane[] {
+  const n = table.count;
+  const keys = rowKeys(table);
+  let size = 16;
+  while (size < n) size *= 2;
+  return repeats(table, keys, new Int32Array(size).fill(-1), new Int32Array(n));
 }
 
-// start[d] .. start[d + 1] - 1: the positions of depot d's lanes in the origin order.
-function originStarts(from: Int32Array, n: number, depotCount: number): Int32Array {
-  const start = new Int32Array(depotCount + 1);
-  for (let e = 0; e < n; e++) start[from[e] + 1]++;
-  for (let d = 0; d < depotCount; d++) start[d + 1] += start[d];
-  return start;
-}
-
-// Lanes in order of origin (a counting sort, stable: file order within an origin), with each lane's
-// destination beside it: the scan then reads both in sequence instead of jumping through the table.
-function byOrigin(from: Int32Array, to: Int32Array, n: number, start: Int32Array): { order: Int32Array; toInOrder: Int32Array } {
-  const fill = start.slice(0, start.length - 1);
-  const order = new Int32Array(n);
-  const toInOrder = new Int32Array(n);
-  for (let e = 0; e < n; e++) {
-    const p = fill[from[e]]++;
-    order[p] = e;
-    toInOrder[p] = to[e];
-  }
-  return { order, toInOrder };
-}
-
-// Per origin, lanes to the same destination are chained by position in the origin order; only a
-// lane whose destination repeats is compared (reference, class, validity) with the chain's rows.
-function repeats(table: LaneTable, depotCount: number, start: Int32Array, order: Int32Array, toInOrder: Int32Array): DuplicateLane[] {
-  const { ref, validFrom, validTo } = table;
+// A 32-bit hash of each row's whole key.
+function rowKeys(table: LaneTable): Int32Array {
+  const { from, to, validFrom, validTo } = table;
   const cls = table.vehicleClass;
-  const stamp = new Int32Array(depotCount).fill(-1);
-  const head = new Int32Array(depotCount);
-  const next = new Int32Array(table.count);
+  const refHash = refHashOf(table);
+  const keys = new Int32Array(table.count);
+  for (let e = 0; e < table.count; e++) {
+    let h = refHash(e);
+    h = Math.imul(h ^ from[e], 0x01000193);
+    h = Math.imul(h ^ to[e], 0x01000193);
+    h = Math.imul(h ^ validFrom[e], 0x01000193);
+    h = Math.imul(h ^ validTo[e], 0x01000193);
+    if (cls !== null) h = Math.imul(h ^ cls[e], 0x01000193);
+    // Spread the high bits into the low ones the table is indexed by.
+    keys[e] = h ^ (h >>> 15);
+  }
+  return keys;
+}
+
+// Rows in file order; a row whose key no earlier row has joins its bucket's chain (newest first),
+// a repeat is matched with the one chained row of its key and reported.
+function repeats(table: LaneTable, keys: Int32Array, heads: Int32Array, next: Int32Array): DuplicateLane[] {
+  const { from, to, validFrom, validTo } = table;
+  const cls = table.vehicleClass;
+  // Not `table.ref`: reading it would make every ref the byte reader kept a string.
+  const sameRef = sameRefOf(table);
+  const mask = heads.length - 1;
   const found: DuplicateLane[] = [];
-  for (let d = 0; d < depotCount; d++) {
-    for (let p = start[d]; p < start[d + 1]; p++) {
-      const t = toInOrder[p];
-      if (stamp[t] !== d) {
-        stamp[t] = d;
-        head[t] = p;
-        next[p] = -1;
-        continue;
+  for (let e = 0; e < table.count; e++) {
+    const key = keys[e];
+    const bucket = key & mask;
+    let match = -1;
+    for (let q = heads[bucket]; q !== -1; q = next[q]) {
+      if (keys[q] === key && from[q] === from[e] && to[q] === to[e] && validFrom[q] === validFrom[e] && validTo[q] === validTo[e] && (cls === null || cls[q] === cls[e]) && sameRef(q, e)) {
+        match = q;
+        break;
       }
-      const e = order[p];
-      let match = -1;
-      for (let q = head[t]; q !== -1; q = next[q]) {
-        const c = order[q];
-        if (validFrom[c] === validFrom[e] && validTo[c] === validTo[e] && (cls === null || cls[c] === cls[e]) && ref[c] === ref[e]) {
-          match = c;
-          break;
-        }
-      }
-      if (match !== -1) found.push({ lane: e, first: match });
-      else {
-        next[p] = head[t];
-        head[t] = p;
-      }
+    }
+    if (match !== -1) found.push({ lane: e, first: match });
+    else {
+      next[e] = heads[bucket];
+      heads[bucket] = e;
     }
   }
   return found;

@@ -1,25 +1,35 @@
-// The lanes reader's fast path for plain rows: a line with no quotes, every cell already trimmed,
-// amounts as plain non-negative decimals, ISO dates, whole-minute drive times and known depots is
-// read straight from the file's text by character codes, with no cell strings (only ref, notes and
-// unknown columns become strings, because they are kept). Anything else, including every row with a
-// problem to report, returns false and goes through the general reader, which owns the messages:
-// the fast path may only ever accept what the general path would accept, with the same values
-// (test/engine/import/lane-row-fast.test.ts checks both on random rows).
+// The lanes reader's fast path for plain rows: a line of printable ASCII with no quotes, every cell
+// already trimmed, amounts as plain non-negative decimals, ISO dates, whole-minute drive times and
+// known depots is read straight from the file's UTF-8 bytes in one pass, each cell parsed as it is
+// cut, with no cell strings (only ref, notes, clause and unknown columns become strings, because
+// they are kept). Text input is copied into bytes line by line, so there is one reader. Anything
+// else, including every row with a problem to report, is refused and goes through the general
+// reader, which owns the messages: the fast path may only ever accept what the general path would
+// accept, with the same values (test/engine/import/lane-row-fast.test.ts checks both on random rows).
 
 import { isoDateNumber } from '../text/iso-date';
 import { withoutFormulaGuard } from '../io/csv-cell-safety';
-import { ownText } from './cells';
-import type { DepotIdIndex } from './depot-id-index';
+import { byteDelimiter } from '../io/csv-byte-stream';
+import { asciiText } from '../text/utf8';
+import { FNV_OFFSET, FNV_PRIME, type DepotIdIndex } from './depot-id-index';
 import type { HeaderMatch, LaneField } from './headers';
-import { cutCells } from './plain-cells';
+import { APOSTROPHE_BYTE, byteClasses, CELL_BYTE } from './plain-cells';
 import { isMilesUnit, KM_PER_MILE, MAX_LANE_KM, MAX_LANE_MINUTES } from './lane-cells';
 import type { LaneTableBuilder } from './lane-table';
 
 /** Columns the fast path reads itself; a file with any other matched column uses the general path. */
 const FAST_FIELDS = new Set<LaneField>(['from', 'to', 'ref', 'clause', 'distance', 'drive', 'toll', 'fuel', 'fees', 'rebate', 'valid_from', 'valid_to', 'notes']);
 
-const SLOW = -1;
+const REFUSED = -1;
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
+
+// How a column's cell is read: kept or looked up as text (bounds only), or parsed as it is cut.
+const TEXT = 0;
+const AMOUNT = 1;
+const DISTANCE = 2;
+const DRIVE = 3;
+const DATE = 4;
+const DEPOT = 5;
 
 export interface FastLaneSetup {
   header: HeaderMatch<LaneField>;
@@ -35,57 +45,124 @@ export interface FastLaneSetup {
 export class PlainLaneRows {
   private readonly starts: Int32Array;
   private readonly ends: Int32Array;
+  /** Per column: its kind (TEXT, AMOUNT, ...). */
+  private readonly kinds: Uint8Array;
+  /** Per column: the value a parsed cell read (NaN or 0 for an empty one, as the general reader). */
+  private readonly values: Float64Array;
+  /** Per text column: 1 when the cell holds an apostrophe (the exporter's formula guard may be there). */
+  private readonly apostrophes: Uint8Array;
+  /** Per depot column: the FNV-1a hash of its cell, taken while cutting (depot-id-index.ts). */
+  private readonly hashes: Int32Array;
   private readonly col: Partial<Record<LaneField, number>> = {};
   private readonly classColumns: number[];
   private readonly unknownColumns: number[];
   private readonly decimalCode: number;
   private readonly miles: boolean;
+  private readonly hours: boolean;
+  private readonly exponent: number;
+  /** A text line copied as bytes (the text path). */
+  private scratch = new Uint8Array(256);
+  private classes = byteClasses(44);
+  private classesOf = 44;
 
   private constructor(private readonly setup: FastLaneSetup) {
-    this.starts = new Int32Array(setup.columnCount);
-    this.ends = new Int32Array(setup.columnCount);
+    const n = setup.columnCount;
+    this.starts = new Int32Array(n);
+    this.ends = new Int32Array(n);
+    this.kinds = new Uint8Array(n);
+    this.values = new Float64Array(n);
+    this.apostrophes = new Uint8Array(n);
+    this.hashes = new Int32Array(n);
     for (const [field, column] of setup.header.columns) this.col[field] = column.index;
     this.classColumns = setup.header.classTolls.map((c) => c.index);
     this.unknownColumns = setup.header.unknown.map((u) => u.index);
     this.decimalCode = setup.decimalComma ? 44 : 46;
     this.miles = isMilesUnit(setup.header.columns.get('distance')?.unit ?? null);
+    this.hours = setup.driveUnit === 'h';
+    this.exponent = setup.exponent;
+    const kindOf: [LaneField, number][] = [['toll', AMOUNT], ['fuel', AMOUNT], ['fees', AMOUNT], ['rebate', AMOUNT], ['distance', DISTANCE], ['drive', DRIVE], ['valid_from', DATE], ['valid_to', DATE]];
+    for (const [field, kind] of kindOf) if (this.col[field] !== undefined) this.kinds[this.col[field]] = kind;
+    for (const c of this.classColumns) this.kinds[c] = AMOUNT;
+    this.kinds[this.col.from!] = DEPOT;
+    this.kinds[this.col.to!] = DEPOT;
   }
 
   /** The fast path for this file, or null when its columns need the general reader throughout. */
   static forFile(setup: FastLaneSetup): PlainLaneRows | null {
     const h = setup.header;
-    if (h.duplicates.length > 0 || setup.table.limits || setup.table.vehicleClass) return null;
+    if (h.duplicates.length > 0 || setup.table.limits || setup.table.vehicleClass || !h.columns.has('from') || !h.columns.has('to')) return null;
     for (const field of h.columns.keys()) if (!FAST_FIELDS.has(field)) return null;
     return new PlainLaneRows(setup);
   }
 
   /**
-   * Reads the row `text[start, end)` into the lane table and returns true, or returns false without
-   * touching anything when the row is not plain.
+   * Reads the text line `text[start, end)` (no line break) into the lane table and returns true, or
+   * returns false without touching anything when the row is not plain. The line is copied into
+   * bytes and read by `readBytes`.
    */
   read(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    const d = byteDelimiter(delimiter);
+    if (d === -1) return false;
+    const n = end - start;
+    if (this.scratch.length <= n) this.scratch = new Uint8Array(2 * n + 1);
+    const bytes = this.scratch;
+    for (let k = 0; k < n; k++) {
+      const c = text.charCodeAt(start + k);
+      // Non-ASCII and line breaks (a CR-only file keeps LFs in its lines) go the general way.
+      if (c > 126 || c === 10 || c === 13) return false;
+      bytes[k] = c;
+    }
+    bytes[n] = 10;
+    return this.readBytes(bytes, 0, n + 1, row, d) !== REFUSED;
+  }
+
+  /**
+   * Reads a row already cut into cells (by the text stream) as the line they make joined by
+   * `delimiter` (a comma or, in decimal-comma files, a semicolon); false when a cell holds the
+   * delimiter, a line break or anything not ASCII, or the row is not plain.
+   */
+  readCells(cells: readonly string[], row: number, delimiter: number): boolean {
+    let n = cells.length;
+    for (const cell of cells) n += cell.length;
+    if (this.scratch.length <= n) this.scratch = new Uint8Array(2 * n + 1);
+    const bytes = this.scratch;
+    let at = 0;
+    for (let k = 0; k < cells.length; k++) {
+      if (k > 0) bytes[at++] = delimiter;
+      const cell = cells[k];
+      for (let j = 0; j < cell.length; j++) {
+        const c = cell.charCodeAt(j);
+        if (c > 126 || c === delimiter || c === 10 || c === 13) return false;
+        bytes[at++] = c;
+      }
+    }
+    bytes[at++] = 10;
+    return this.readBytes(bytes, 0, at, row, delimiter) !== REFUSED;
+  }
+
+  /**
+   * Reads the line of UTF-8 bytes from `start` (ended by LF or CRLF; bytes[limit - 1] is an LF) into the lane
+   * table and returns the offset of its LF, or returns -1 without touching anything when the row is
+   * not plain. `delimiter` is a `byteDelimiter` code.
+   */
+  readBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    const lf = this.cut(bytes, start, limit, delimiter);
+    if (lf === REFUSED) return REFUSED;
     const starts = this.starts;
     const ends = this.ends;
-    if (!cutCells(text, start, end, delimiter.charCodeAt(0), starts, ends)) return false;
-
+    const values = this.values;
     const col = this.col;
     const depots = this.setup.depots;
-    const from = depots.find(text, starts[col.from!], ends[col.from!]);
-    const to = depots.find(text, starts[col.to!], ends[col.to!]);
-    if (from === -1 || to === -1 || from === to) return false;
-    const toll = this.amount(text, col.toll);
-    const fuel = this.amount(text, col.fuel);
-    const fees = this.amount(text, col.fees);
-    const rebate = this.amount(text, col.rebate);
-    if (toll === SLOW || fuel === SLOW || fees === SLOW || rebate === SLOW) return false;
-    const classTolls = this.classColumns;
-    for (let k = 0; k < classTolls.length; k++) if (this.amount(text, classTolls[k]) === SLOW) return false;
-    const distanceKm = this.distance(text, col.distance);
-    const driveMinutes = this.drive(text, col.drive);
-    const validFrom = this.date(text, col.valid_from);
-    const validTo = this.date(text, col.valid_to);
-    if (distanceKm === SLOW || driveMinutes === SLOW || validFrom === SLOW || validTo === SLOW) return false;
-    if (validFrom > 0 && validTo > 0 && validFrom > validTo) return false;
+    const from = depots.findHashed(this.hashes[col.from!], bytes, starts[col.from!], ends[col.from!]);
+    const to = depots.findHashed(this.hashes[col.to!], bytes, starts[col.to!], ends[col.to!]);
+    if (from === -1 || to === -1 || from === to) return REFUSED;
+    const toll = col.toll === undefined ? NaN : values[col.toll];
+    const fuel = col.fuel === undefined ? NaN : values[col.fuel];
+    const fees = col.fees === undefined ? NaN : values[col.fees];
+    const rebate = col.rebate === undefined ? NaN : values[col.rebate];
+    const validFrom = col.valid_from === undefined ? 0 : values[col.valid_from];
+    const validTo = col.valid_to === undefined ? 0 : values[col.valid_to];
+    if (validFrom > 0 && validTo > 0 && validFrom > validTo) return REFUSED;
 
     const t = this.setup.table;
     const i = t.add();
@@ -93,117 +170,180 @@ export class PlainLaneRows {
     t.to[i] = to;
     t.sourceRow[i] = row;
     t.toll[i] = toll;
-    for (let k = 0; k < classTolls.length; k++) t.classTolls[k].toll[i] = this.amount(text, classTolls[k]);
+    const classTolls = this.classColumns;
+    for (let k = 0; k < classTolls.length; k++) t.classTolls[k].toll[i] = values[classTolls[k]];
     t.fuel[i] = fuel;
     t.fees[i] = Number.isNaN(fees) ? 0 : fees;
     t.rebate[i] = Number.isNaN(rebate) ? 0 : rebate;
-    t.distanceKm[i] = distanceKm;
-    t.driveMinutes[i] = driveMinutes;
+    t.distanceKm[i] = col.distance === undefined ? NaN : values[col.distance];
+    t.driveMinutes[i] = col.drive === undefined ? NaN : values[col.drive];
     t.validFrom[i] = validFrom;
     t.validTo[i] = validTo;
-    if (col.ref !== undefined) t.ref.push(this.kept(text, col.ref));
-    if (col.notes !== undefined) t.notes.push(this.kept(text, col.notes));
-    if (t.clause) t.clause.push(this.kept(text, col.clause));
-    for (let k = 0; k < this.unknownColumns.length; k++) t.extra[k].values.push(this.kept(text, this.unknownColumns[k]));
-    return true;
+    if (col.ref !== undefined) {
+      // A plain ref stays bytes until the table's refs are read; one with an apostrophe (a formula
+      // guard to take off) is made now.
+      const r = col.ref;
+      if (this.starts[r] === this.ends[r] || this.apostrophes[r] === 1) t.setRef(i, this.kept(bytes, r));
+      else t.addRefBytes(i, bytes, this.starts[r], this.ends[r]);
+    }
+    if (col.notes !== undefined) t.notes.push(this.kept(bytes, col.notes));
+    if (t.clause) t.clause.push(this.kept(bytes, col.clause));
+    for (let k = 0; k < this.unknownColumns.length; k++) t.extra[k].values.push(this.kept(bytes, this.unknownColumns[k]));
+    return lf;
   }
 
+  // One pass over the line: each cell is cut and, by its column's kind, parsed into `values` or
+  // bounded in `starts`/`ends` (text cells: printable ASCII, no quote, nothing to trim, no leading
+  // apostrophe). Every byte is looked at once; any other byte ends a parsed cell, and a cell must end
+  // at the delimiter (the last at LF or CRLF), so a quote, a control or non-ASCII byte, a stray space
+  // or a wrong number of cells refuses the line. bytes[limit - 1] is an LF (every reader's contract),
+  // which ends every cell, so the loops need no bound of their own. Returns the offset of the LF, or REFUSED.
+  private cut(bytes: Uint8Array, start: number, limit: number, delimiter: number): number {
+    const kinds = this.kinds;
+    const values = this.values;
+    const starts = this.starts;
+    const ends = this.ends;
+    if (delimiter !== this.classesOf) {
+      this.classes = byteClasses(delimiter);
+      this.classesOf = delimiter;
+    }
+    const classes = this.classes;
+    const apostrophes = this.apostrophes;
+    const markDigit = this.decimalCode - 48;
+    const exponent = this.exponent;
+    const last = kinds.length - 1;
+    let i = start;
+    for (let k = 0; ; k++) {
+      const s = i;
+      switch (kinds[k]) {
+        case TEXT: {
+          let apostrophe = 0;
+          for (;;) {
+            const kind = classes[bytes[i]];
+            if (kind === CELL_BYTE) i++;
+            else if (kind === APOSTROPHE_BYTE) {
+              apostrophe = 1;
+              i++;
+            } else break;
+          }
+          if (i > s) {
+            const first = bytes[s];
+            if (first === 32 || first === 39 || bytes[i - 1] === 32) return REFUSED;
+          }
+          starts[k] = s;
+          ends[k] = i;
+          apostrophes[k] = apostrophe;
+          break;
+        }
+        case DEPOT: {
+          let hash = FNV_OFFSET;
+          for (;;) {
+            const c = bytes[i];
+            const kind = classes[c];
+            if (kind !== CELL_BYTE && kind !== APOSTROPHE_BYTE) break;
+            hash = Math.imul(hash ^ c, FNV_PRIME);
+            i++;
+          }
+          if (i > s) {
+            const first = bytes[s];
+            if (first === 32 || first === 39 || bytes[i - 1] === 32) return REFUSED;
+          }
+          starts[k] = s;
+          ends[k] = i;
+          this.hashes[k] = hash;
+          break;
+        }
+        case AMOUNT:
+        case DISTANCE: {
+          // Digits with at most one decimal mark after the first digit; the counts come from positions.
+          let value = 0;
+          let mark = -1;
+          for (;;) {
+            const d = bytes[i] - 48;
+            if (d >>> 0 <= 9) value = value * 10 + d;
+            else if (d === markDigit && mark === -1 && i > s) mark = i;
+            else break;
+            i++;
+          }
+          const fraction = mark === -1 ? 0 : i - mark - 1;
+          if (i === s) values[k] = NaN;
+          else if (mark !== -1 && fraction === 0) return REFUSED;
+          else if (kinds[k] === AMOUNT) {
+            if (fraction > exponent) return REFUSED;
+            const scale = exponent - fraction;
+            // Fifteen digits in minor units stay exact and far inside the safe range; longer goes the general way.
+            if (i - s - (mark === -1 ? 0 : 1) + scale > 15) return REFUSED;
+            values[k] = value * POW10[scale];
+          } else {
+            if ((mark === -1 ? i : mark) - s > 5 || fraction > 6) return REFUSED;
+            // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
+            const read = fraction > 0 ? value / POW10[fraction] : value;
+            const km = this.miles ? read * KM_PER_MILE : read;
+            // Past the plausible bound the general reader refuses it with its reason.
+            if (km > MAX_LANE_KM) return REFUSED;
+            values[k] = km;
+          }
+          break;
+        }
+        case DRIVE: {
+          // Whole minutes within the plausible bound; hours per the header go the general way.
+          let value = 0;
+          for (;;) {
+            const d = bytes[i] - 48;
+            if (d >>> 0 > 9) break;
+            value = value * 10 + d;
+            i++;
+          }
+          if (i === s) values[k] = NaN;
+          else {
+            if (this.hours || i - s > 6 || value > MAX_LANE_MINUTES) return REFUSED;
+            values[k] = value;
+          }
+          break;
+        }
+        default: {
+          // DATE: yyyymmdd of an ISO 8601 date, 0 for an empty cell.
+          const d0 = bytes[i] - 48;
+          if (d0 < 0 || d0 > 9) {
+            values[k] = 0;
+            break;
+          }
+          if (i + 10 >= limit || bytes[i + 4] !== 45 || bytes[i + 7] !== 45) return REFUSED;
+          const year = digitsAt(bytes, i, i + 4);
+          const month = digitsAt(bytes, i + 5, i + 7);
+          const day = digitsAt(bytes, i + 8, i + 10);
+          if (year < 0 || month < 0 || day < 0) return REFUSED;
+          const date = isoDateNumber(year, month, day);
+          if (date === null) return REFUSED;
+          values[k] = date;
+          i += 10;
+        }
+      }
+      if (i >= limit) return REFUSED;
+      const c = bytes[i];
+      if (k < last) {
+        if (c !== delimiter) return REFUSED;
+        i++;
+        continue;
+      }
+      if (c === 10) return i;
+      return c === 13 && i + 1 < limit && bytes[i + 1] === 10 ? i + 1 : REFUSED;
+    }
+  }
 
-  private kept(text: string, column: number | undefined): string | undefined {
+  private kept(bytes: Uint8Array, column: number | undefined): string | undefined {
     if (column === undefined || this.starts[column] === this.ends[column]) return undefined;
+    const text = asciiText(bytes, this.starts[column], this.ends[column]);
     // The exporter's formula guard may also sit after a separator inside the cell ("a;'=b"): removed as cellText does.
-    return ownText(withoutFormulaGuard(text.slice(this.starts[column], this.ends[column])));
-  }
-
-  // Minor units of a plain non-negative amount ("1234", "12.5", "12.50"; decimal comma in semicolon
-  // files), NaN for an empty cell, SLOW for anything else.
-  private amount(text: string, column: number | undefined): number {
-    if (column === undefined) return NaN;
-    const s = this.starts[column];
-    const e = this.ends[column];
-    if (s === e) return NaN;
-    const exponent = this.setup.exponent;
-    let value = 0;
-    let digits = 0;
-    let fraction = -1;
-    for (let i = s; i < e; i++) {
-      const c = text.charCodeAt(i);
-      if (c >= 48 && c <= 57) {
-        value = value * 10 + (c - 48);
-        digits++;
-        if (fraction >= 0) fraction++;
-      } else if (c === this.decimalCode && fraction === -1 && digits > 0) fraction = 0;
-      else return SLOW;
-    }
-    if (digits === 0 || fraction === 0 || fraction > exponent) return SLOW;
-    const scale = exponent - Math.max(fraction, 0);
-    // Fifteen digits in minor units stay exact and far inside the safe range; longer goes the general way.
-    if (digits + scale > 15) return SLOW;
-    return value * POW10[scale];
-  }
-
-  // km of a plain decimal distance within the plausible bound (miles converted as the general reader does).
-  private distance(text: string, column: number | undefined): number {
-    if (column === undefined) return NaN;
-    const s = this.starts[column];
-    const e = this.ends[column];
-    if (s === e) return NaN;
-    let value = 0;
-    let whole = 0;
-    let fraction = -1;
-    for (let i = s; i < e; i++) {
-      const c = text.charCodeAt(i);
-      if (c >= 48 && c <= 57) {
-        value = value * 10 + (c - 48);
-        if (fraction >= 0) fraction++;
-        else whole++;
-      } else if (c === this.decimalCode && fraction === -1 && whole > 0) fraction = 0;
-      else return SLOW;
-    }
-    if (whole === 0 || whole > 5 || fraction === 0 || fraction > 6) return SLOW;
-    // An exact integer divided by an exact power of ten is the correctly rounded decimal: Number()'s value.
-    const read = fraction > 0 ? value / POW10[fraction] : value;
-    const km = this.miles ? read * KM_PER_MILE : read;
-    // Past the plausible bound the general reader refuses it with its reason.
-    return km > MAX_LANE_KM ? SLOW : km;
-  }
-
-  // Whole minutes within the plausible bound; hours per the header go the general way.
-  private drive(text: string, column: number | undefined): number {
-    if (column === undefined) return NaN;
-    const s = this.starts[column];
-    const e = this.ends[column];
-    if (s === e) return NaN;
-    if (this.setup.driveUnit === 'h' || e - s > 6) return SLOW;
-    let value = 0;
-    for (let i = s; i < e; i++) {
-      const c = text.charCodeAt(i) - 48;
-      if (c < 0 || c > 9) return SLOW;
-      value = value * 10 + c;
-    }
-    return value > MAX_LANE_MINUTES ? SLOW : value;
-  }
-
-  // yyyymmdd of an ISO 8601 date, 0 for an empty cell.
-  private date(text: string, column: number | undefined): number {
-    if (column === undefined) return 0;
-    const s = this.starts[column];
-    const e = this.ends[column];
-    if (s === e) return 0;
-    if (e - s !== 10 || text.charCodeAt(s + 4) !== 45 || text.charCodeAt(s + 7) !== 45) return SLOW;
-    const year = digitsAt(text, s, s + 4);
-    const month = digitsAt(text, s + 5, s + 7);
-    const day = digitsAt(text, s + 8, s + 10);
-    if (year < 0 || month < 0 || day < 0) return SLOW;
-    return isoDateNumber(year, month, day) ?? SLOW;
+    return this.apostrophes[column] === 1 ? withoutFormulaGuard(text) : text;
   }
 }
 
-// The whole number written by the digits text[from, to), or -1 when any is not a digit.
-function digitsAt(text: string, from: number, to: number): number {
+// The whole number written by the digits bytes[from, to), or -1 when any is not a digit.
+function digitsAt(bytes: Uint8Array, from: number, to: number): number {
   let v = 0;
   for (let i = from; i < to; i++) {
-    const c = text.charCodeAt(i) - 48;
+    const c = bytes[i] - 48;
     if (c < 0 || c > 9) return -1;
     v = v * 10 + c;
   }

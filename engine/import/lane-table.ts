@@ -4,6 +4,7 @@
 import { formatMinor, type Minor } from '../money/minor';
 import { textKeyedRecord } from '../text/lookup-table';
 import { isoDateText } from './cells';
+import { ByteRefs, textRefHash } from './byte-refs';
 import type { LaneLimitsBuilder } from './lane-limits';
 import type { DepotRecord, LaneRecord, LaneTable } from './types';
 
@@ -38,7 +39,10 @@ export class LaneTableBuilder {
   vehicleClass: Int16Array | null = null;
   classTolls: { name: string; key: string; toll: Float64Array; header?: string }[] = [];
   classNames: string[] = [];
+  /** Refs of the rows before the first the byte reader kept as bytes (all of them without one); set with `setRef`. */
   ref: (string | undefined)[] = [];
+  /** Refs from the first the byte reader kept as bytes on: made strings when the table's `ref` is read. */
+  private byteRefs: ByteRefs | null = null;
   /** Null until the header has a clause column. */
   clause: (string | undefined)[] | null = null;
   notes: (string | undefined)[] = [];
@@ -76,13 +80,26 @@ export class LaneTableBuilder {
     this.validTo = grow(this.validTo, size);
     if (this.vehicleClass) this.vehicleClass = grow(this.vehicleClass, size);
     for (const c of this.classTolls) c.toll = grow(c.toll, size);
+    this.byteRefs?.resize(size);
     this.capacity = size;
+  }
+
+  /** Row `row`'s ref (the row just added; undefined when blank). */
+  setRef(row: number, ref: string | undefined): void {
+    if (this.byteRefs === null) this.ref.push(ref);
+    else this.byteRefs.addText(row, ref);
+  }
+
+  /** Row `row`'s ref (the row just added) as ASCII bytes (not blank, no formula guard), made a string only when read. */
+  addRefBytes(row: number, bytes: Uint8Array, start: number, end: number): void {
+    this.byteRefs ??= new ByteRefs(this.ref, this.capacity);
+    this.byteRefs.add(row, bytes, start, end);
   }
 
   /** The finished table, trimmed to its rows. */
   build(): LaneTable {
     const n = this.count;
-    return {
+    const columns: Omit<LaneTable, 'ref'> = {
       count: n,
       from: rowsOf(this.from, n),
       to: rowsOf(this.to, n),
@@ -98,14 +115,49 @@ export class LaneTableBuilder {
       driveMinutes: rowsOf(this.driveMinutes, n),
       validFrom: rowsOf(this.validFrom, n),
       validTo: rowsOf(this.validTo, n),
-      ref: this.ref,
       ...(this.clause ? { clause: this.clause } : {}),
       notes: this.notes,
       extra: this.extra,
       columnHeaders: this.columnHeaders,
       limits: this.limits ? this.limits.build() : null,
     };
+    const kept = this.byteRefs;
+    if (kept === null) return { ...columns, ref: this.ref };
+    // The ref strings are made on the first read of `ref` (an accessor from the start, so the
+    // table keeps one shape); the duplicate check compares the bytes where they lie.
+    let column: (string | undefined)[] | null = null;
+    const lazy: LaneTable = {
+      ...columns,
+      get ref() {
+        column ??= kept.column(n);
+        return column;
+      },
+      set ref(value) {
+        column = value;
+        byteRefTables.delete(lazy);
+      },
+    };
+    byteRefTables.set(lazy, kept);
+    return lazy;
   }
+}
+
+const byteRefTables = new WeakMap<LaneTable, ByteRefs>();
+
+/** Whether rows a and b of `table` have the same ref, without making ref strings the table has not made yet. */
+export function sameRefOf(table: LaneTable): (a: number, b: number) => boolean {
+  const kept = byteRefTables.get(table);
+  if (kept !== undefined) return (a, b) => kept.same(a, b);
+  const ref = table.ref;
+  return (a, b) => ref[a] === ref[b];
+}
+
+/** A hash of each row's ref (equal refs, equal hashes), without making ref strings. */
+export function refHashOf(table: LaneTable): (row: number) => number {
+  const kept = byteRefTables.get(table);
+  if (kept !== undefined) return (row) => kept.refHash(row);
+  const ref = table.ref;
+  return (row) => textRefHash(ref[row]);
 }
 
 /** Row `i` of a lane table as an object, amounts formatted in the network currency. */

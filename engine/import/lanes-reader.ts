@@ -15,6 +15,7 @@ import { LaneLimitsBuilder } from './lane-limits';
 import { LaneTableBuilder } from './lane-table';
 import { PlainLaneRows } from './lane-row-fast';
 import { DepotIdIndex } from './depot-id-index';
+import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import { currencyMarkIn, firstCurrencyNamed } from './network-currency';
 import type { ReportCollector } from './report-collector';
 import { isBlankRecord, RecordFileReader } from './record-file-reader';
@@ -25,6 +26,8 @@ const digitsOf = (code: string) => currencyExponent(code) ?? 2;
 export interface LanesReaderOptions {
   currency?: string;
   exchangeRates?: Record<string, string>;
+  /** False: every row through the general reader (the tests compare the fast path with it). */
+  plainRows?: boolean;
 }
 
 const own = ownText;
@@ -86,17 +89,9 @@ export class LanesReader extends RecordFileReader {
     }
     const driveUnit = h.columns.get('drive')?.unit ?? null;
     this.driveUnit = driveUnit === 'hours' || driveUnit === 'hour' ? 'h' : driveUnit;
-    for (const field of ['from', 'to'] as const) {
-      if (!h.columns.has(field)) {
-        this.report.error(this.file, this.headerRow, field, null, 'missing-column', `required column "${field}" is missing; no lane can be read`);
-        this.unusable = true;
-      }
-    }
-    for (const d of h.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
-    for (const u of h.unknown) {
-      this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, kept with the lane but not used');
-      this.table.extra.push({ column: u.header, values: [] });
-    }
+    this.requireColumns(h, [['from', 'from'], ['to', 'to']], 'lane');
+    this.reportColumnProblems(h, 'unknown column, kept with the lane but not used');
+    for (const u of h.unknown) this.table.extra.push({ column: u.header, values: [] });
     for (const c of h.classTolls) this.table.classTolls.push({ name: c.name, key: c.key, toll: new Float64Array(this.table.from.length), header: c.header });
     for (const field of ['toll', 'fuel', 'rebate', 'vehicle_class'] as const) if (this.name[field] !== undefined) this.table.columnHeaders[field] = this.name[field];
     this.moneyColumns = [this.col.toll, ...h.classTolls.map((c) => c.index), this.col.fuel, this.col.fees, this.col.rebate].filter((c): c is number => c !== undefined);
@@ -122,6 +117,8 @@ export class LanesReader extends RecordFileReader {
     this.report.error(this.file, this.row, column, value, code, message);
     this.rowOk = false;
   }
+  // `fail` as a value, made once rather than a closure per row.
+  private readonly failRow = (column: string | null, value: string | null, code: IssueCode, message: string) => this.fail(column, value, code, message);
 
   private headerOf(field: LaneField): string {
     return this.name[field] ?? field;
@@ -132,9 +129,7 @@ export class LanesReader extends RecordFileReader {
     this.rowOk = true;
     const h = this.header!;
     const col = this.col;
-    if (cells.length > this.headerCells.length) {
-      this.fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
-    }
+    this.refuseSurplusFields(cells, this.failRow);
     const from = this.depot(cells, 'from');
     const to = this.depot(cells, 'to');
 
@@ -219,7 +214,7 @@ export class LanesReader extends RecordFileReader {
     // Absent optional columns get no per-row entries (a lookup past the end reads undefined).
     if (col.ref !== undefined) {
       const ref = cellText(cells, col.ref);
-      t.ref.push(ref === '' ? undefined : own(ref));
+      t.setRef(i, ref === '' ? undefined : own(ref));
     }
     if (col.notes !== undefined) {
       const notes = cellText(cells, col.notes);
@@ -238,8 +233,28 @@ export class LanesReader extends RecordFileReader {
   }
 
   protected override readPlainRow(text: string, start: number, end: number, row: number, delimiter: string): boolean {
+    const fast = this.fastRows();
+    return fast !== null && fast !== undefined && fast.read(text, start, end, row, delimiter);
+  }
+
+  // Rows that arrive as cells (the first block of a file, lines near a quote) still take the fast
+  // path when they are plain: most of a lanes file's first megabyte.
+  protected override readPlainCells(cells: readonly string[], row: number): boolean {
+    const fast = this.fastRows();
+    return fast !== null && fast !== undefined && fast.readCells(cells, row, this.decimalComma ? 59 : 44);
+  }
+
+  protected override readPlainBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    const fast = this.fastRows();
+    if (fast === undefined) return PLAIN_LATER;
+    return fast === null ? PLAIN_NEVER : fast.readBytes(bytes, start, limit, row, delimiter);
+  }
+
+  // The fast path, made once the header and the currency are known (undefined until then, null = not for this file).
+  private fastRows(): PlainLaneRows | null | undefined {
     if (this.fast === undefined) {
-      if (this.currency === null || this.header === null) return false;
+      if (this.currency === null || this.header === null) return undefined;
+      if (this.options.plainRows === false) return (this.fast = null);
       this.fast = PlainLaneRows.forFile({
         header: this.header,
         columnCount: this.headerCells.length,
@@ -250,7 +265,7 @@ export class LanesReader extends RecordFileReader {
         table: this.table,
       });
     }
-    return this.fast !== null && this.fast.read(text, start, end, row, delimiter);
+    return this.fast;
   }
 
   /**

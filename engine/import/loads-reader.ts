@@ -57,14 +57,8 @@ export class LoadsReader extends RecordFileReader {
   protected readHeader(cells: string[]): void {
     const h = matchLoadHeaders(cells);
     this.header = h;
-    for (const field of REQUIRED) {
-      if (!h.columns.has(field)) {
-        this.report.error(this.file, this.headerRow, field, null, 'missing-column', `required column "${field}" is missing; no load can be read`);
-        this.unusable = true;
-      }
-    }
-    for (const d of h.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
-    for (const u of h.unknown) this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, not used');
+    this.requireColumns(h, REQUIRED.map((field) => [field, field] as const), 'load');
+    this.reportColumnProblems(h, 'unknown column, not used');
   }
 
   protected readRow(cells: string[], row: number): boolean {
@@ -76,9 +70,7 @@ export class LoadsReader extends RecordFileReader {
       this.report.error(this.file, row, column, value, code, message);
       ok = false;
     };
-    if (cells.length > this.headerCells.length) {
-      fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
-    }
+    this.refuseSurplusFields(cells, fail);
     const id = cellText(cells, at('load'));
     if (id === '') fail(name('load'), '', 'missing-value', 'load id is empty');
     else if (this.ids.has(id)) fail(name('load'), id, 'duplicate-load', `duplicate load id; first at row ${this.ids.get(id)}`);

@@ -36,3 +36,25 @@ function plainCell(text: string, start: number, end: number): boolean {
   const last = text.charCodeAt(end - 1);
   return first > 32 && first < 127 && first !== 39 && last > 32 && last < 127;
 }
+
+// What each byte is to the byte reader of plain rows (lane-row-fast.ts): part of a plain cell, or
+// anything else (the delimiter, a line break, a quote, a control character, any non-ASCII byte: a
+// cell ends there, and a line holding any of the last three is decoded and read as text).
+/** A byte that may stand in a plain cell: printable ASCII but the quote and the file's delimiter. */
+export const CELL_BYTE = 0;
+/** The apostrophe, a cell byte the reader notes (a kept cell holding one may carry the formula guard). */
+export const APOSTROPHE_BYTE = 2;
+const tables = new Map<number, Uint8Array>();
+
+/** Per byte value, CELL_BYTE or not, for lines cut at `delimiter` (a `byteDelimiter` code). */
+export function byteClasses(delimiter: number): Uint8Array {
+  let table = tables.get(delimiter);
+  if (table === undefined) {
+    table = new Uint8Array(256).fill(1);
+    for (let c = 32; c < 127; c++) if (c !== 34) table[c] = CELL_BYTE;
+    table[39] = APOSTROPHE_BYTE;
+    table[delimiter] = 1;
+    tables.set(delimiter, table);
+  }
+  return table;
+}

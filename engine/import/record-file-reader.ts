@@ -1,11 +1,14 @@
-// What the depots and lanes readers share: finding the header, counting every data row as accepted
-// or rejected (so accepted + rejected = total holds by construction), rejecting rows the CSV stream
-// flagged, and the file-level problems (empty file, not text, header without rows).
+// What the depots, lanes, vehicles and loads readers share: finding the header, counting every data
+// row as accepted or rejected (so accepted + rejected = total holds by construction), rejecting rows
+// the CSV stream flagged, the file-level problems (empty file, not text, header without rows), and the
+// header and row problems every reader words alike (missing, repeated and unknown columns, surplus fields).
 
 import type { CsvRecordSink, CsvStreamIssue } from '../io/csv-record-stream';
+import type { HeaderMatch } from './headers';
+import { PLAIN_LATER, PLAIN_NEVER } from '../io/csv-byte-stream';
 import type { ReportCollector } from './report-collector';
 import { rejectFlaggedRow, takeStreamIssue } from './stream-issues';
-import type { FileCounts } from './types';
+import type { FileCounts, IssueCode } from './types';
 import { counted } from '../text/plural';
 
 /** True when every cell is empty or white space (a blank line, or a line of delimiters). */
@@ -58,8 +61,8 @@ export abstract class RecordFileReader implements CsvRecordSink {
       if (cells.length < this.headerCells.length && !this.unusable) this.warnShortRow(cells.length, firstRow + i);
       while (stray < strayQuotes.length && strayQuotes[stray].row < i) stray++;
       for (; stray < strayQuotes.length && strayQuotes[stray].row === i; stray++) this.warnStrayQuote(cells, strayQuotes[stray].column, firstRow + i);
-      if (this.unusable || !this.readRow(cells, firstRow + i)) this.counts.rejected++;
-      else this.counts.accepted++;
+      if (!this.unusable && (this.readPlainCells(cells, firstRow + i) || this.readRow(cells, firstRow + i))) this.counts.accepted++;
+      else this.counts.rejected++;
     }
   }
 
@@ -69,6 +72,18 @@ export abstract class RecordFileReader implements CsvRecordSink {
     this.counts.total++;
     this.counts.accepted++;
     return true;
+  }
+
+  /** The byte stream's fast path (PlainBytesTaker): the offset of the line's LF when the reader took the plain row. */
+  plainBytes(bytes: Uint8Array, start: number, limit: number, row: number, delimiter: number): number {
+    if (!this.headerRead) return PLAIN_LATER;
+    if (this.unusable) return PLAIN_NEVER;
+    const lf = this.readPlainBytes(bytes, start, limit, row, delimiter);
+    if (lf >= 0) {
+      this.counts.total++;
+      this.counts.accepted++;
+    }
+    return lf;
   }
 
   issue(issue: CsvStreamIssue): void {
@@ -98,6 +113,31 @@ export abstract class RecordFileReader implements CsvRecordSink {
     );
   }
 
+  /**
+   * A required column the header lacks is an error and makes the file unusable (no row can be read);
+   * `required` pairs each field with the header name the message gives, `item` names a row ("depot").
+   */
+  protected requireColumns<F extends string>(match: HeaderMatch<F>, required: readonly (readonly [F, string])[], item: string): void {
+    for (const [field, header] of required) {
+      if (!match.columns.has(field)) {
+        this.report.error(this.file, this.headerRow, header, null, 'missing-column', `required column "${header}" is missing; no ${item} can be read`);
+        this.unusable = true;
+      }
+    }
+  }
+
+  /** A repeated column is an error (the first is read); an unknown one a warning, `unknownNote` saying what becomes of it. */
+  protected reportColumnProblems(match: HeaderMatch<string>, unknownNote: string): void {
+    for (const d of match.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
+    for (const u of match.unknown) this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', unknownNote);
+  }
+
+  /** A row with more fields than the header: the surplus is given to `fail` as one too-many-fields error. */
+  protected refuseSurplusFields(cells: readonly string[], fail: (column: string, value: string, code: IssueCode, message: string) => void): void {
+    const width = this.headerCells.length;
+    if (cells.length > width) fail(`(column ${width + 1})`, cells.slice(width).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${width}`);
+  }
+
   finish(): void {
     if (!this.headerRead && !this.notText) this.report.error(this.file, null, null, null, 'empty-file', 'the file is empty');
     else if (this.headerRead && this.counts.total === 0) this.noDataRows();
@@ -112,6 +152,14 @@ export abstract class RecordFileReader implements CsvRecordSink {
   /** Reads a plain row straight from the text, or returns false to get it as cells in readRow. */
   protected readPlainRow(_text: string, _start: number, _end: number, _row: number, _delimiter: string): boolean {
     return false;
+  }
+  /** Reads a row already cut into cells by the fast path's rules, or returns false to get it in readRow. */
+  protected readPlainCells(_cells: readonly string[], _row: number): boolean {
+    return false;
+  }
+  /** Reads a plain row straight from UTF-8 bytes: the offset of its LF, or PLAIN_LATER / PLAIN_NEVER. */
+  protected readPlainBytes(_bytes: Uint8Array, _start: number, _limit: number, _row: number, _delimiter: number): number {
+    return PLAIN_NEVER;
   }
   /** Called with each block before its data rows are read. */
   protected beforeRows(_records: string[][], _start: number): void {}

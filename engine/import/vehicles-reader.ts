@@ -57,12 +57,7 @@ export class VehiclesReader extends RecordFileReader {
   protected readHeader(cells: string[]): void {
     const h = matchVehicleHeaders(cells);
     this.header = h;
-    for (const [field, header] of REQUIRED) {
-      if (!h.columns.has(field)) {
-        this.report.error(this.file, this.headerRow, header, null, 'missing-column', `required column "${header}" is missing; no vehicle can be read`);
-        this.unusable = true;
-      }
-    }
+    this.requireColumns(h, REQUIRED, 'vehicle');
     for (const d of DIMENSIONS) {
       const unit = h.columns.get(d.field)?.unit;
       if (unit && unit !== d.unit) {
@@ -70,8 +65,7 @@ export class VehiclesReader extends RecordFileReader {
         this.unusable = true;
       }
     }
-    for (const d of h.duplicates) this.report.error(this.file, this.headerRow, d.header, null, 'duplicate-column', `column repeats "${d.first}"; only the first is read`);
-    for (const u of h.unknown) this.report.warning(this.file, this.headerRow, u.header, null, 'unknown-column', 'unknown column, not used');
+    this.reportColumnProblems(h, 'unknown column, not used');
   }
 
   protected readRow(cells: string[], row: number): boolean {
@@ -83,9 +77,7 @@ export class VehiclesReader extends RecordFileReader {
       this.report.error(this.file, row, column, value, code, message);
       ok = false;
     };
-    if (cells.length > this.headerCells.length) {
-      fail(`(column ${this.headerCells.length + 1})`, cells.slice(this.headerCells.length).join(','), 'too-many-fields', `the row has ${cells.length} fields but the header has ${this.headerCells.length}`);
-    }
+    this.refuseSurplusFields(cells, fail);
     const id = cellText(cells, at('vehicle'));
     if (id === '') fail(name('vehicle'), '', 'missing-value', 'vehicle id is empty');
     else if (this.index.has(id)) fail(name('vehicle'), id, 'duplicate-vehicle', `duplicate vehicle id; first defined at row ${this.vehicles[this.index.get(id)!].sourceRow}`);

@@ -96,6 +96,30 @@ export class CsvRecordStream {
     if (this.inQuotes && this.pending.length > MAX_QUOTED_CHARS) this.startSwallowing();
   }
 
+  /** Spreadsheet row of the next record. */
+  get row(): number {
+    return this.nextRow;
+  }
+
+  /** A line the byte reader took (csv-byte-stream.ts) was the next row. */
+  rowTaken(): void {
+    this.nextRow++;
+  }
+
+  /**
+   * For the byte reader (csv-byte-stream.ts): when the stream stands between records (header and
+   * layout settled, no quote open, nothing stopped) with at most `maxChars` of a partial line, hands
+   * that line over and forgets it; else null. CR-only files stay here.
+   */
+  handOver(maxChars: number): string | null {
+    if (!this.started || this.stopped || this.swallowing || this.inQuotes || !this.layoutKnown || this.nextRow === 1 || this.newline === '\r') return null;
+    if (this.pending.length > maxChars) return null;
+    const rest = this.pending;
+    this.pending = '';
+    this.scanned = 0;
+    return rest;
+  }
+
   finish(): void {
     if (this.stopped) return;
     if (this.swallowing) {

@@ -2,6 +2,7 @@
 // file) and the one-call forms over whole texts or chunk sequences. Reads, validates, checks for
 // duplicate lanes, plans for the requested day and class, and builds the network when allowed.
 
+import { CsvByteStream } from '../io/csv-byte-stream';
 import { CsvRecordStream } from '../io/csv-record-stream';
 import { rememberDepotIndex } from '../network/depot-index-registry';
 import { planLanes } from './plan-network';
@@ -17,11 +18,17 @@ import type { TextSource, ValidationReport } from '../import/types';
 import type { ImportOptions, ImportResult } from './import-types';
 import { counted } from '../text/plural';
 
-/** A streaming import: depots first, then lanes, then `result()`. */
+/**
+ * A streaming import: depots first, then lanes, then `result()`. A file is fed as text chunks or as
+ * UTF-8 byte chunks (the `Bytes` forms: plain lane rows are then read from the bytes, with the same
+ * result); one file is fed one way.
+ */
 export interface ImportSession {
   feedDepots(chunk: string, fraction?: number): void;
+  feedDepotsBytes(chunk: Uint8Array, fraction?: number): void;
   finishDepots(): void;
   feedLanes(chunk: string, fraction?: number): void;
+  feedLanesBytes(chunk: Uint8Array, fraction?: number): void;
   finishLanes(): void;
   result(): ImportResult;
 }
@@ -47,8 +54,14 @@ export function startImport(options: ImportOptions = {}): ImportSession {
     plainLine: (text, start, end, row, delimiter) => depots.plainLine(text, start, end, row, delimiter),
     issue: (issue) => depots.issue(issue),
   });
+  // The depots file is small: its bytes are decoded and read as text (no byte taker).
+  let depotBytes: CsvByteStream | null = null;
+  // One file is fed one way (text or bytes): the byte stream may hold a partial line.
+  let depotText = false;
+  let laneText = false;
   let lanes: LanesReader | null = null;
   let laneStream: CsvRecordStream | null = null;
+  let laneBytes: CsvByteStream | null = null;
   let phase: 'depots' | 'lanes' | 'done' = 'depots';
   let reserved = false;
 
@@ -75,17 +88,41 @@ export function startImport(options: ImportOptions = {}): ImportSession {
     }
     return { reader: lanes as LanesReader, stream: laneStream as unknown as CsvRecordStream };
   };
+  const lanesAsBytes = () => {
+    const { reader, stream } = openLanes();
+    laneBytes ??= new CsvByteStream(stream, (bytes, start, limit, row, delimiter) => reader.plainBytes(bytes, start, limit, row, delimiter), options.utf8Text);
+    return { reader, bytes: laneBytes };
+  };
+  const afterLaneChunk = (reader: LanesReader, fraction: number | undefined) => {
+    // Size the lane table once from the share of the file read so far, instead of doubling it.
+    if (!reserved && fraction !== undefined && fraction > 0 && fraction < 1 && reader.rows > 0) {
+      reader.table.reserve(Math.ceil((reader.rows / fraction) * 1.05));
+      reserved = true;
+    }
+    progress('lanes', reader.rows, fraction);
+  };
 
   const session: ImportSession = {
     feedDepots(chunk, fraction) {
       if (phase !== 'depots') throw new Error('import: depots are finished; feed lanes now');
+      if (depotBytes !== null) throw new Error('import: the depots file is fed as bytes');
       check(depotsFile, depots.rows);
+      depotText = true;
       depotStream.feed(chunk);
+      progress('depots', depots.rows, fraction);
+    },
+    feedDepotsBytes(chunk, fraction) {
+      if (phase !== 'depots') throw new Error('import: depots are finished; feed lanes now');
+      if (depotText) throw new Error('import: the depots file is fed as text');
+      check(depotsFile, depots.rows);
+      depotBytes ??= new CsvByteStream(depotStream, undefined, options.utf8Text);
+      depotBytes.feed(chunk);
       progress('depots', depots.rows, fraction);
     },
     finishDepots() {
       if (phase !== 'depots') return;
-      depotStream.finish();
+      if (depotBytes !== null) depotBytes.finish();
+      else depotStream.finish();
       depots.finish();
       phase = 'lanes';
       progress('depots', depots.rows, 1);
@@ -93,19 +130,25 @@ export function startImport(options: ImportOptions = {}): ImportSession {
     feedLanes(chunk, fraction) {
       const { reader, stream } = openLanes();
       if (phase !== 'lanes') throw new Error('import: lanes are finished');
+      if (laneBytes !== null) throw new Error('import: the lanes file is fed as bytes');
       check(lanesFile, reader.rows);
+      laneText = true;
       stream.feed(chunk);
-      // Size the lane table once from the share of the file read so far, instead of doubling it.
-      if (!reserved && fraction !== undefined && fraction > 0 && fraction < 1 && reader.rows > 0) {
-        reader.table.reserve(Math.ceil((reader.rows / fraction) * 1.05));
-        reserved = true;
-      }
-      progress('lanes', reader.rows, fraction);
+      afterLaneChunk(reader, fraction);
+    },
+    feedLanesBytes(chunk, fraction) {
+      if (laneText) throw new Error('import: the lanes file is fed as text');
+      const { reader, bytes } = lanesAsBytes();
+      if (phase !== 'lanes') throw new Error('import: lanes are finished');
+      check(lanesFile, reader.rows);
+      bytes.feed(chunk);
+      afterLaneChunk(reader, fraction);
     },
     finishLanes() {
       const { reader, stream } = openLanes();
       if (phase !== 'lanes') return;
-      stream.finish();
+      if (laneBytes !== null) laneBytes.finish();
+      else stream.finish();
       reader.finish();
       phase = 'done';
       progress('lanes', reader.rows, 1);

@@ -27,6 +27,12 @@ export interface ImportOptions {
   signal?: { readonly aborted: boolean };
   /** Cap on stored errors and on stored warnings each; default 1000. */
   maxItems?: number;
+  /**
+   * For byte chunks (`feedDepotsBytes` / `feedLanesBytes`): the host's native UTF-8 decoder of whole
+   * characters (Node: Buffer#toString), used where lines are read as text; default the engine's own
+   * (engine/text/utf8.ts, the same text, slower).
+   */
+  utf8Text?: (bytes: Uint8Array, start: number, end: number) => string;
 }
 
 export interface ImportResult {

@@ -8,11 +8,14 @@ export function readIsoDate(text: string): number | null {
   return isoDateNumber(Number(m[1]), Number(m[2]), Number(m[3]));
 }
 
+// Days per month (February's leap day added below); one table, not an array made per date.
+const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
 /** The date year-month-day as yyyymmdd, or null when no such day exists (Gregorian calendar). */
 export function isoDateNumber(year: number, month: number, day: number): number | null {
   if (month < 1 || month > 12 || day < 1) return null;
   const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
+  const days = MONTH_DAYS[month - 1] + (month === 2 && leap ? 1 : 0);
   if (day > days) return null;
   return year * 10000 + month * 100 + day;
 }

@@ -3,9 +3,12 @@
 
 import type { WorkspaceDocument } from './document';
 
-/** Stable text of a document's content; key order and the save timestamp do not count. */
+/**
+ * Stable text of a document's content; key order, the save timestamp and the panel sizes do not count
+ * (dragging a splitter is saved with the next save, but it is no change to ask Save / Discard about).
+ */
 export function workspaceFingerprint(document: WorkspaceDocument): string {
-  return canonical({ ...document, savedAt: null });
+  return canonical({ ...document, savedAt: null, layout: null });
 }
 
 function canonical(value: unknown): string {

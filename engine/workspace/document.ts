@@ -9,7 +9,7 @@ import type { Scenario } from '../scenario/types';
 export const WORKSPACE_FORMAT = 'lanewright-workspace';
 
 /** Version written by this build. Older versions are migrated on read; newer ones are refused. */
-export const WORKSPACE_VERSION = 2;
+export const WORKSPACE_VERSION = 3;
 
 /** File name extension used by the save dialog. */
 export const WORKSPACE_EXTENSION = 'lwspace.json';
@@ -56,7 +56,20 @@ export type WorkspaceScenario = Scenario;
  */
 export type WorkspacePlanning = PlanningChoices;
 
-/** The whole workspace as it is saved (version 2; version 1 had no `planning`). */
+/**
+ * Sizes of the resizable panels in CSS pixels, as the dispatcher last set them: the results panel's
+ * height and the plan-and-route panel's width; null = the app's default for the window. The app
+ * clamps them to the window it opens in. Added in version 3.
+ */
+export interface WorkspaceLayout {
+  lowerPx: number | null;
+  sidePx: number | null;
+}
+
+/** Largest panel size kept (larger than any screen; a bigger value is a damaged file). */
+export const MAX_PANEL_PX = 20_000;
+
+/** The whole workspace as it is saved (version 3; version 2 had no `layout`, version 1 no `planning`). */
 export interface WorkspaceDocument {
   format: typeof WORKSPACE_FORMAT;
   version: typeof WORKSPACE_VERSION;
@@ -65,6 +78,7 @@ export interface WorkspaceDocument {
   files: WorkspaceFiles;
   settings: WorkspaceSettings;
   planning: WorkspacePlanning;
+  layout: WorkspaceLayout;
   scenarios: WorkspaceScenario[];
   /** Name of the scenario being viewed, or null for the base contract. */
   activeScenario: string | null;
@@ -79,6 +93,7 @@ export function emptyWorkspace(): WorkspaceDocument {
     files: { depots: null, lanes: null },
     settings: { origin: null, dispatchDate: null, vehicleClass: null, maxLegs: null },
     planning: { ...EMPTY_PLANNING_CHOICES },
+    layout: { lowerPx: null, sidePx: null },
     scenarios: [],
     activeScenario: null,
   };

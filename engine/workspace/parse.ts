@@ -1,7 +1,7 @@
 // Reads and writes the workspace file: JSON text in, a checked and migrated WorkspaceDocument out,
 // and back. Pure (no file access); the Electron main process and the browser host both use it.
 
-import { WORKSPACE_FORMAT, WORKSPACE_VERSION, type WorkspaceDocument } from './document';
+import { MAX_PANEL_PX, WORKSPACE_FORMAT, WORKSPACE_VERSION, type WorkspaceDocument } from './document';
 import { WorkspaceFormatError, WorkspaceVersionError } from './errors';
 import { checkJson, json, JsonCheckFailure, parseJsonText, showValue } from '../json/zod-checker';
 import { NewerVersionFailure, upgradeDocument, type UpgradeStep, type VersionedKind } from '../json/versioned';
@@ -20,10 +20,12 @@ export const MAX_LEGS_LIMIT = 100_000;
 /**
  * Upgrade steps keyed by the version they upgrade from; a format change adds `[n]: step` here and
  * bumps WORKSPACE_VERSION. 1 -> 2: the planning settings arrived; a version 1 file planned with the
- * defaults, so every choice is null (= default).
+ * defaults, so every choice is null (= default). 2 -> 3: the panel sizes arrived; a version 2 file
+ * opens with the sizes the window already has (null = keep / default).
  */
 export const WORKSPACE_UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   1: (raw) => ({ ...raw, planning: { ...EMPTY_PLANNING_CHOICES } }),
+  2: (raw) => ({ ...raw, layout: { lowerPx: null, sidePx: null } }),
 };
 
 const WORKSPACE_KIND: VersionedKind = { format: WORKSPACE_FORMAT, label: 'workspace', current: WORKSPACE_VERSION, steps: WORKSPACE_UPGRADES };
@@ -57,6 +59,11 @@ const planningSchema = json.object({
   exchangeRates: choice(),
 });
 
+const layoutSchema = json.object({
+  lowerPx: json.nullable(json.integer(0, MAX_PANEL_PX)),
+  sidePx: json.nullable(json.integer(0, MAX_PANEL_PX)),
+});
+
 // Scenarios are checked by the scenario reader (their own format and version), then for unique names.
 const workspaceSchema = json.object({
   format: json.exactly(WORKSPACE_FORMAT, `must be "${WORKSPACE_FORMAT}"; this is not a Lanewright workspace`),
@@ -65,6 +72,7 @@ const workspaceSchema = json.object({
   files: filesSchema,
   settings: settingsSchema,
   planning: planningSchema,
+  layout: layoutSchema,
   scenarios: json.list(json.anything(), MAX_SCENARIOS),
   activeScenario: json.nullable(json.text(200)),
 });
@@ -106,6 +114,21 @@ export function checkWorkspace(value: unknown, source: string, form: ScenarioFor
     }
     return { ...o, scenarios };
   } catch (error) {
+    if (error instanceof JsonCheckFailure) throw new WorkspaceFormatError(source, error.pointer, error.value, error.reason);
+    throw error;
+  }
+}
+
+/**
+ * Checks an in-memory workspace of this or an earlier version (the one browser mode keeps in its
+ * storage, written by whichever build ran last): older versions are upgraded as a file is, newer
+ * ones refused with WorkspaceVersionError.
+ */
+export function upgradeWorkspace(value: unknown, source: string): WorkspaceDocument {
+  try {
+    return checkWorkspace(upgradeDocument(value, WORKSPACE_KIND).raw, source, 'memory');
+  } catch (error) {
+    if (error instanceof NewerVersionFailure) throw new WorkspaceVersionError(source, error.found, error.supported);
     if (error instanceof JsonCheckFailure) throw new WorkspaceFormatError(source, error.pointer, error.value, error.reason);
     throw error;
   }

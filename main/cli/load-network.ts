@@ -1,6 +1,6 @@
 // The one place the command line turns --depots/--lanes files into a Network. Every command goes
 // through here, so --date, --vehicle-class, --skip-invalid and the planning options work the same
-// for all of them. Files stream in 1 MB chunks into the engine's importer.
+// for all of them. Files stream in 1 MB chunks of bytes into the engine's importer.
 
 import { startImport } from '../../engine/index';
 import { InvalidInputError } from '../../engine/index';
@@ -8,9 +8,9 @@ import { formatItem } from '../../engine/index';
 import type { ImportOptions, ImportResult } from '../../engine/index';
 import type { Network } from '../../engine/index';
 import { drivingLimitOf } from '../../engine/index';
-import type { PlanningSettings } from '../../engine/index';
+import type { ExportSettings, PlanningSettings } from '../../engine/index';
 import { required, UsageError, type ParsedArgs } from './args';
-import { readTextChunks } from './read-chunks';
+import { nodeUtf8Text, readByteChunks } from './read-chunks';
 import { printError } from './terminal-text';
 import { counted } from '../../engine/index';
 
@@ -29,6 +29,16 @@ export function planDateOf(args: ParsedArgs): { date: string; note: string | nul
   if (given !== undefined) return { date: given, note: null };
   const date = todayIso(args.now);
   return { date, note: `note: planning for ${date} (today); --date to choose` };
+}
+
+/**
+ * What a JSON or GeoJSON output was made from, as the app's exports carry it: the date planned for
+ * (null = the whole calendar), the vehicle class whose tolls applied (null = the file's default), the
+ * input files as given (depots and lanes first, then `more`), and the what-if scenario's name.
+ */
+export function exportSettingsOf(args: ParsedArgs, plan: { date: string | null; vehicleClass: string | null }, scenario: string | null, more: (string | undefined)[] = []): ExportSettings {
+  const files = [args.values.get('depots'), args.values.get('lanes'), ...more].filter((f): f is string => f !== undefined);
+  return { date: plan.date, vehicle_class: plan.vehicleClass, files, scenario };
 }
 
 function positive(args: ParsedArgs, name: string): number | undefined {
@@ -90,10 +100,11 @@ export function importOptionsFromArgs(args: ParsedArgs, dated = true): ImportOpt
 export function readImport(args: ParsedArgs, extra: Partial<ImportOptions> = {}, dated = true): ImportResult {
   const depotsPath = required(args, 'depots');
   const lanesPath = required(args, 'lanes');
-  const session = startImport({ ...importOptionsFromArgs(args, dated), ...extra });
-  for (const chunk of readTextChunks(depotsPath)) session.feedDepots(chunk.text, chunk.fraction);
+  // Bytes, not text: plain lane rows are read from them without a string per line.
+  const session = startImport({ ...importOptionsFromArgs(args, dated), utf8Text: nodeUtf8Text, ...extra });
+  for (const chunk of readByteChunks(depotsPath)) session.feedDepotsBytes(chunk.bytes, chunk.fraction);
   session.finishDepots();
-  for (const chunk of readTextChunks(lanesPath)) session.feedLanes(chunk.text, chunk.fraction);
+  for (const chunk of readByteChunks(lanesPath)) session.feedLanesBytes(chunk.bytes, chunk.fraction);
   session.finishLanes();
   return session.result();
 }

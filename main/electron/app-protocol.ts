@@ -1,9 +1,11 @@
 // Serves the built renderer on the app's own scheme (lanewright://app/...). Only files inside the
-// renderer folder are reachable; every response carries the Content-Security-Policy header.
+// renderer folder are reachable; every response carries the Content-Security-Policy header and the
+// cross-origin isolation headers.
 
 import { readFile } from 'node:fs/promises';
 import type { CustomScheme } from 'electron';
 import { CONTENT_SECURITY_POLICY } from '../ipc/content-security-policy';
+import { CROSS_ORIGIN_ISOLATION_HEADERS } from '../ipc/cross-origin-isolation';
 import { contentTypeFor } from '../ipc/content-types';
 import { APP_SCHEME, resolveAppAsset } from './app-page';
 
@@ -25,7 +27,8 @@ export type ReadBytes = (file: string) => Promise<Uint8Array>;
 /** A protocol.handle handler serving files under `rootDir`. */
 export function createAppProtocolHandler(rootDir: string, read: ReadBytes = (f) => readFile(f)): (request: Request) => Promise<Response> {
   return async (request) => {
-    const headers = { 'Content-Security-Policy': CONTENT_SECURITY_POLICY, 'X-Content-Type-Options': 'nosniff' };
+    // Cross-origin isolated (the headroom workers share memory); errors carry the headers too.
+    const headers = { 'Content-Security-Policy': CONTENT_SECURITY_POLICY, 'X-Content-Type-Options': 'nosniff', ...CROSS_ORIGIN_ISOLATION_HEADERS };
     if (request.method !== 'GET' && request.method !== 'HEAD') {
       return new Response('method not allowed', { status: 405, headers });
     }

@@ -2,7 +2,11 @@
 // recent list and a send function, so tests can read every item and click it without Electron.
 
 import type { MenuItemConstructorOptions } from 'electron';
+import { EXPORT_MENU, type ExportChoice } from '../../engine/index';
 import type { MenuCommand, RecentWorkspace } from '../ipc/contract';
+
+/** Shortcuts of Export entries (the rest have none). */
+const EXPORT_ACCELERATORS: Partial<Record<ExportChoice, string>> = { 'routes-csv': 'CmdOrCtrl+E' };
 
 /** What the menu needs. */
 export interface MenuDeps {
@@ -53,13 +57,8 @@ export function buildMenuTemplate(deps: MenuDeps): MenuItemConstructorOptions[] 
       { type: 'separator' },
       {
         label: 'Export',
-        submenu: [
-          item('Lane costs (CSV)…', { command: 'export-lanes' }),
-          item('Routes (CSV)…', { command: 'export-routes' }, 'CmdOrCtrl+E'),
-          item('Rebate loops (CSV)…', { command: 'export-loops' }),
-          item('Map layers (GeoJSON)…', { command: 'export-geojson' }),
-          item('Scenario file (JSON)…', { command: 'export-scenario' }),
-        ],
+        // The page's Export menu lists the same table; "…": a save dialog follows.
+        submenu: EXPORT_MENU.map((entry) => item(`${entry.label}…`, { command: 'export', what: entry.what }, EXPORT_ACCELERATORS[entry.what])),
       },
       ...(mac ? [] : ([{ type: 'separator' }, { label: 'Quit', role: 'quit', accelerator: 'Ctrl+Q' }] as MenuItemConstructorOptions[])),
     ],

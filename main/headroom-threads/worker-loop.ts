@@ -1,49 +1,39 @@
 // The body of a headroom worker thread: sleeps on the control block until the pool raises `Limit`,
-// takes the network the jobs belong to from its port (read synchronously: the thread never returns
-// to its event loop), claims and runs jobs until none is left, and sleeps again. A job that throws
-// is recorded in `Failed`; the pool then runs it on its own thread, so the user sees the engine's error.
+// takes the plan the jobs belong to from its port (read synchronously: the thread never returns
+// to its event loop), and works on it with the engine's `workOnHeadroomJobs` until every job of it
+// is claimed, then sleeps again.
 
 import { receiveMessageOnPort, type MessagePort } from 'node:worker_threads';
-import type { BucketWorkspace } from '../../engine/index';
-import { Control, type HeadroomWorkerMessage, type HeadroomNetworkMessage } from './contract';
-import { claimJob, finishJob, jobsEnd, runJob, workspaceFor } from './jobs';
+import { claimHeadroomJob, HeadroomControl, headroomJobsEnd, headroomWorkspaceFor, workOnHeadroomJobs, type BucketWorkspace, type SharedHeadroomJobs } from '../../engine/index';
+import type { HeadroomWorkerMessage } from './contract';
 
 export function runHeadroomWorker(control: Int32Array, port: MessagePort): void {
-  let net: HeadroomNetworkMessage | null = null;
+  let jobs: SharedHeadroomJobs | null = null;
   let ws: BucketWorkspace | null = null;
-  Atomics.add(control, Control.Ready, 1);
-  Atomics.notify(control, Control.Ready);
+  let held = -1;
+  Atomics.add(control, HeadroomControl.Ready, 1);
+  Atomics.notify(control, HeadroomControl.Ready);
   for (;;) {
-    if (Atomics.load(control, Control.Exit) !== 0) return;
-    const job = claimJob(control);
+    if (Atomics.load(control, HeadroomControl.Exit) !== 0) return;
+    const job = held !== -1 ? held : claimHeadroomJob(control);
+    held = -1;
     if (job === -1) {
       // Sleep until the pool raises Limit (or sets Exit and wakes the sleepers).
-      const limit = Atomics.load(control, Control.Limit);
-      if (Atomics.load(control, Control.Next) >= limit) Atomics.wait(control, Control.Limit, limit);
+      const limit = Atomics.load(control, HeadroomControl.Limit);
+      if (Atomics.load(control, HeadroomControl.Next) >= limit) Atomics.wait(control, HeadroomControl.Limit, limit);
       continue;
     }
-    while (net === null || job >= jobsEnd(net)) {
+    while (jobs === null || job >= headroomJobsEnd(jobs)) {
       const received = receiveMessageOnPort(port);
       if (received === undefined) {
-        if (Atomics.load(control, Control.Exit) !== 0) return;
-        // The message is posted before Limit is raised; give the port a moment.
-        Atomics.wait(control, Control.Exit, 0, 1);
+        if (Atomics.load(control, HeadroomControl.Exit) !== 0) return;
+        // The plan is posted before Limit is raised; give the port a moment.
+        Atomics.wait(control, HeadroomControl.Exit, 0, 1);
         continue;
       }
-      net = received.message as HeadroomWorkerMessage;
+      jobs = (received.message as HeadroomWorkerMessage).jobs;
     }
-    if (job < net.ballBase) {
-      // A job of a network the pool abandoned (its thread threw): nothing reads its results.
-      finishJob(control);
-      continue;
-    }
-    ws = workspaceFor(ws, net);
-    try {
-      runJob(net, job, ws);
-      Atomics.add(control, Control.WorkerJobs, 1);
-    } catch {
-      Atomics.compareExchange(control, Control.Failed, 0, job + 1);
-    }
-    finishJob(control);
+    ws = headroomWorkspaceFor(ws, jobs);
+    held = workOnHeadroomJobs(control, jobs, ws, job);
   }
 }

@@ -1,9 +1,9 @@
 // The one contract between the renderer and its host. Every IPC channel with its request and
 // response, the menu commands main sends to the renderer, and the `LanewrightHost` API the preload
 // exposes (and the browser host adapter imitates). The renderer imports it with `import type` only;
-// the two constants at the end are for main and the preload.
+// its constants are for main and the preload.
 
-import type { WorkspaceDocument } from '../../engine/index';
+import type { ExportChoice, WorkspaceDocument } from '../../engine/index';
 
 export type { WorkspaceDocument } from '../../engine/index';
 
@@ -119,6 +119,7 @@ export const MENU_COMMAND_CHANNEL = 'menu:command';
  * Commands from the application menu (and the quit prompt) to the renderer, which owns the
  * workspace being edited. `open-workspace` carries a path when picked from the recent list.
  * `save` with `thenQuit` comes from the quit prompt: save, and main quits once the save succeeds.
+ * `export` names one entry of the engine's `EXPORT_MENU` (the page's Export menu lists the same).
  */
 export type MenuCommand =
   | { command: 'open-workspace'; path: string | null }
@@ -127,15 +128,18 @@ export type MenuCommand =
   | { command: 'import-lanes' }
   | { command: 'save'; thenQuit: boolean }
   | { command: 'save-as' }
-  | { command: 'export-lanes' }
-  | { command: 'export-routes' }
-  | { command: 'export-loops' }
-  | { command: 'export-geojson' }
-  | { command: 'export-scenario' }
+  | { command: 'export'; what: ExportChoice }
   | { command: 'about' };
 
 /** Names of the menu commands. */
 export type MenuCommandName = MenuCommand['command'];
+
+/**
+ * Every export choice, for the preload's check of menu commands (the preload cannot take the
+ * engine's EXPORT_MENU in: a sandboxed bundle, and the engine index would add most of the engine).
+ * main/preload/host-api.ts stops compiling when a choice of EXPORT_MENU is missing here.
+ */
+export const EXPORT_CHOICES = ['routes-csv', 'lanes-csv', 'loops-csv', 'geojson', 'review-html', 'scenario-json', 'compare-csv', 'review-csv', 'calendar-review-csv'] as const satisfies readonly ExportChoice[];
 
 /**
  * The API the renderer sees as `window.lanewright` (preload on the desktop, the browser host adapter

@@ -3,8 +3,9 @@
 // menu commands are checked against the known list before the page's listener sees them.
 
 import type { IpcRenderer } from 'electron';
+import type { ExportChoice } from '../../engine/index';
 import type { ChannelName, LanewrightHost, MenuCommand, MenuCommandName, RequestOf, WireResponse } from '../ipc/contract';
-import { MENU_COMMAND_CHANNEL } from '../ipc/contract';
+import { EXPORT_CHOICES, MENU_COMMAND_CHANNEL } from '../ipc/contract';
 
 /** The parts of ipcRenderer the host uses. */
 export type HostIpc = Pick<IpcRenderer, 'invoke' | 'on' | 'removeListener'>;
@@ -16,11 +17,7 @@ const MENU_COMMANDS = [
   'import-lanes',
   'save',
   'save-as',
-  'export-lanes',
-  'export-routes',
-  'export-loops',
-  'export-geojson',
-  'export-scenario',
+  'export',
   'about',
 ] as const satisfies readonly MenuCommandName[];
 
@@ -29,14 +26,19 @@ const MENU_COMMANDS = [
 type Unlisted = Exclude<MenuCommandName, (typeof MENU_COMMANDS)[number]>;
 const everyCommandListed: Unlisted extends never ? true : Unlisted = true;
 void everyCommandListed;
+// Likewise an export the engine's EXPORT_MENU gains but the contract's EXPORT_CHOICES lacks.
+type UncheckedChoice = Exclude<ExportChoice, (typeof EXPORT_CHOICES)[number]>;
+const everyChoiceListed: UncheckedChoice extends never ? true : UncheckedChoice = true;
+void everyChoiceListed;
 
 /** The command as the page should see it, or null when it is not a known command. */
 export function cleanMenuCommand(value: unknown): MenuCommand | null {
   if (typeof value !== 'object' || value === null) return null;
-  const { command, path, thenQuit } = value as { command?: unknown; path?: unknown; thenQuit?: unknown };
+  const { command, path, thenQuit, what } = value as { command?: unknown; path?: unknown; thenQuit?: unknown; what?: unknown };
   if (typeof command !== 'string' || !(MENU_COMMANDS as readonly string[]).includes(command)) return null;
   if (command === 'open-workspace') return { command, path: typeof path === 'string' ? path : null };
   if (command === 'save') return { command, thenQuit: thenQuit === true };
+  if (command === 'export') return typeof what === 'string' && (EXPORT_CHOICES as readonly string[]).includes(what) ? { command, what: what as ExportChoice } : null;
   return { command } as MenuCommand;
 }
 

@@ -1,11 +1,13 @@
 // A small static file server for browser mode (`npm run web`) and the end-to-end tests: serves the
-// built renderer from one folder on localhost only, with the same Content-Security-Policy as the app.
+// built renderer from one folder on localhost only, with the same Content-Security-Policy as the app
+// and cross-origin isolated as the desktop window is.
 
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { createServer, type Server } from 'node:http';
 import { join, normalize, resolve, sep } from 'node:path';
 import { CONTENT_SECURITY_POLICY } from '../ipc/content-security-policy';
+import { CROSS_ORIGIN_ISOLATION_HEADERS } from '../ipc/cross-origin-isolation';
 import { contentTypeFor } from '../ipc/content-types';
 
 export interface RunningServer {
@@ -57,6 +59,8 @@ export function serveStatic(root: string, port: number): Promise<RunningServer> 
         'cache-control': 'no-cache',
         'x-content-type-options': 'nosniff',
         'content-security-policy': CONTENT_SECURITY_POLICY,
+        // Cross-origin isolated, as the desktop window is: the headroom workers share memory.
+        ...CROSS_ORIGIN_ISOLATION_HEADERS,
       });
       if (request.method === 'HEAD') {
         response.end();

@@ -23,7 +23,6 @@ import { hasChanges } from '../model/scenario-edits';
 import type { LoadRouteDrawing } from '../map/load-route-layer';
 import { LowerPanel } from './LowerPanel';
 import { useCommands } from './use-commands';
-import { useLayout } from './use-layout';
 import { useWorkbench } from './use-workbench';
 
 export function App({ host, version }: { host: LanewrightHost; version: string }) {
@@ -39,7 +38,7 @@ export function App({ host, version }: { host: LanewrightHost; version: string }
   const { replaceWith } = bench;
   const ui = useMemo(() => ({ openImport: () => void replaceWith('Importing CSV files', () => setImportOpen(true)), openAbout: () => setAboutOpen(true) }), [replaceWith]);
   const { exportFile } = useCommands(bench, ui);
-  const { layout, limits, setLowerPx, setSidePx } = useLayout();
+  const { layout, limits, setLowerPx, setSidePx } = bench.panels;
 
 
   // A newly imported network without the chosen origin starts from its first depot.

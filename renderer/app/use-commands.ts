@@ -3,7 +3,7 @@
 
 import { useCallback, useEffect } from 'react';
 import type { MenuCommand } from '../../main/ipc/contract';
-import { exportFileName } from '../../engine/index';
+import { EXPORT_MENU, exportFileName } from '../../engine/index';
 import { hasChanges } from '../model/scenario-edits';
 import type { ExportChoice } from '../model/export-file';
 import { csvDialect } from './csv-dialect-store';
@@ -35,7 +35,8 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
         // once written, browser mode no longer counts its edits as unsaved.
         if (what === 'scenario-json') return void (await saveScenarioFile());
         const file = what === 'review-html' ? await reviewReport() : await engine.client.request('export', { what, dialect: csvDialect() });
-        const result = await host.saveExport(file.fileName, file.text, what === 'geojson' ? 'geojson' : what === 'review-html' ? 'html' : 'csv');
+        const kind = EXPORT_MENU.find((entry) => entry.what === what)?.file ?? 'csv';
+        const result = await host.saveExport(file.fileName, file.text, kind);
         if (!result.ok) setMessage(`Export failed: ${result.failure.message}`);
         else if (result.value) setMessage(`Exported ${result.value.path}.`);
       } catch (error) {
@@ -61,16 +62,8 @@ export function useCommands(bench: Workbench, ui: CommandHandlers) {
             return void save(false);
           case 'save-as':
             return void save(true);
-          case 'export-lanes':
-            return void exportFile('lanes-csv');
-          case 'export-routes':
-            return void exportFile('routes-csv');
-          case 'export-loops':
-            return void exportFile('loops-csv');
-          case 'export-geojson':
-            return void exportFile('geojson');
-          case 'export-scenario':
-            return void exportFile('scenario-json');
+          case 'export':
+            return void exportFile(command.what);
           case 'about':
             return ui.openAbout();
         }

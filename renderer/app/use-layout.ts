@@ -1,8 +1,11 @@
-// Sizes of the resizable panels (the lower panel's height, the side panel's width), kept in the
-// browser's storage so the window opens as it was left, and clamped so the map, the banner and
-// the panels each keep a usable size whatever the window does.
+// Sizes of the resizable panels (the lower panel's height, the side panel's width). They belong to
+// the workspace (saved in its `layout`, reopened with it); the browser's storage keeps the last
+// sizes too, as the starting point of a window whose workspace names none (the sample, a file saved
+// before version 3). Shown sizes are clamped so the map, the banner and the panels each keep a usable
+// size whatever the window does.
 
 import { useCallback, useEffect, useState } from 'react';
+import type { WorkspaceLayout } from '../../engine/index';
 
 const KEY = 'lanewright.layout';
 
@@ -33,41 +36,62 @@ function clampTo(layout: Layout, limits: LayoutLimits): Layout {
   return { lowerPx: clamp(layout.lowerPx, limits.lower), sidePx: clamp(layout.sidePx, limits.side) };
 }
 
-function saved(): Partial<Layout> {
+const size = (v: unknown): number | null => (typeof v === 'number' && Number.isSafeInteger(v) && v >= 0 ? v : null);
+
+function saved(): WorkspaceLayout {
   try {
     const value: unknown = JSON.parse(localStorage.getItem(KEY) ?? 'null');
-    if (typeof value !== 'object' || value === null) return {};
+    if (typeof value !== 'object' || value === null) return { lowerPx: null, sidePx: null };
     const v = value as Record<string, unknown>;
-    return {
-      ...(typeof v.lowerPx === 'number' && Number.isFinite(v.lowerPx) ? { lowerPx: v.lowerPx } : {}),
-      ...(typeof v.sidePx === 'number' && Number.isFinite(v.sidePx) ? { sidePx: v.sidePx } : {}),
-    };
+    return { lowerPx: size(v.lowerPx), sidePx: size(v.sidePx) };
   } catch {
-    return {};
+    return { lowerPx: null, sidePx: null };
   }
 }
 
-export function useLayout(): { layout: Layout; limits: LayoutLimits; setLowerPx(px: number): void; setSidePx(px: number): void } {
+export interface LayoutState {
+  /** The sizes shown, clamped to the window. */
+  layout: Layout;
+  limits: LayoutLimits;
+  /** The sizes the dispatcher chose (null = the default), as the workspace keeps them. */
+  chosen: WorkspaceLayout;
+  setLowerPx(px: number): void;
+  setSidePx(px: number): void;
+  /** Applies a workspace's sizes; a null size keeps the one the window has. */
+  restore(sizes: WorkspaceLayout): void;
+}
+
+export function useLayout(): LayoutState {
   const [limits, setLimits] = useState(() => limitsFor(window.innerWidth, window.innerHeight));
-  const [layout, setLayout] = useState<Layout>(() => clampTo({ lowerPx: Math.round(window.innerHeight * 0.4), sidePx: 330, ...saved() }, limits));
+  const [chosen, setChosen] = useState<WorkspaceLayout>(saved);
   useEffect(() => {
     const onResize = () => setLimits(limitsFor(window.innerWidth, window.innerHeight));
     window.addEventListener('resize', onResize);
     return () => window.removeEventListener('resize', onResize);
   }, []);
-  const shown = clampTo(layout, limits);
-  const keep = useCallback((next: Layout) => {
-    setLayout(next);
+  const shown = clampTo({ lowerPx: chosen.lowerPx ?? Math.round(window.innerHeight * 0.4), sidePx: chosen.sidePx ?? 330 }, limits);
+  // What the dispatcher chose is kept unclamped, so a workspace saved on a small window keeps its sizes.
+  const keep = useCallback((next: WorkspaceLayout) => {
+    setChosen(next);
     try {
       localStorage.setItem(KEY, JSON.stringify(next));
     } catch {
       // Storage full or blocked: the sizes still apply for this session.
     }
   }, []);
+  const restore = useCallback(
+    (sizes: WorkspaceLayout) => setChosen((now) => {
+      const next = { lowerPx: sizes.lowerPx ?? now.lowerPx, sidePx: sizes.sidePx ?? now.sidePx };
+      return next.lowerPx === now.lowerPx && next.sidePx === now.sidePx ? now : next;
+    }),
+    [],
+  );
   return {
     layout: shown,
     limits,
-    setLowerPx: (px) => keep({ ...shown, lowerPx: px }),
-    setSidePx: (px) => keep({ ...shown, sidePx: px }),
+    chosen,
+    setLowerPx: (px) => keep({ ...chosen, lowerPx: Math.round(px) }),
+    setSidePx: (px) => keep({ ...chosen, sidePx: Math.round(px) }),
+    restore,
   };
 }

@@ -14,6 +14,7 @@ import type { PlanChoice, PlanSettings } from '../worker/protocol';
 import { useDataset, type DatasetFiles } from './use-dataset';
 import { useDiscardGuard } from './use-discard-guard';
 import { useEngine } from './use-engine';
+import { useLayout } from './use-layout';
 import { usePlan } from './use-plan';
 import { defaultSettings, documentOf, filesOf, loadFilesOf, stateOf, type LoadFiles } from './workspace-doc';
 
@@ -31,6 +32,9 @@ export function useWorkbench(host: LanewrightHost) {
   // The Loads panel's files belong to the workspace: saved with it and reopened with it.
   const [loadFiles, setLoadFiles] = useState<LoadFiles | null>(null);
   const [selected, setSelected] = useState<number | null>(null);
+  // Panel sizes are part of the workspace: saved with it, reopened with it.
+  const panels = useLayout();
+  const { restore: restoreLayout } = panels;
   // The status line's message belongs to the action that set it: it stands until the next action
   // (new settings, a scenario edit, a selection, loads files), then it is gone ("Opened the sample
   // carrier." stayed on screen through later edits). A message is tied to the action state of the
@@ -85,13 +89,14 @@ export function useWorkbench(host: LanewrightHost) {
         setScenario(state.scenario);
         setLoadFiles(loads.files);
         setSelected(null);
+        restoreLayout(state.layout);
         // A loads file that could not be read is left out: the document then differs, so it is dirty.
         lifecycle.dispatch({ type: 'opened', savedPath: path, key: workspaceFingerprint(documentOf(files, state.settings, state.scenario, loads.files)) });
         return loads.problem === null ? '' : `Note: ${loads.problem}.`;
       }
       return null;
     },
-    [host, load, lifecycle],
+    [host, load, lifecycle, restoreLayout],
   );
 
   // First show: the last workspace when there is one, otherwise the sample so a plan is on screen.
@@ -140,11 +145,14 @@ export function useWorkbench(host: LanewrightHost) {
     });
   }, [network, settings, replan]);
 
-  const document = useMemo(() => documentOf(dataset.files, settings, scenario, loadFiles), [dataset.files, settings, scenario, loadFiles]);
+  // The panel sizes are laid on last: dragging a splitter makes a new document to keep, but not a new
+  // fingerprint (they do not count as a change), so the fingerprint is not recomputed per pointer move.
+  const content = useMemo(() => documentOf(dataset.files, settings, scenario, loadFiles), [dataset.files, settings, scenario, loadFiles]);
+  const document = useMemo(() => ({ ...content, layout: { ...panels.chosen } }), [content, panels.chosen]);
 
   // The lifecycle compares this fingerprint with the one last opened or saved ("unsaved" means the
   // document really differs); the first document after an open is the clean one.
-  const docKey = useMemo(() => workspaceFingerprint(document), [document]);
+  const docKey = useMemo(() => workspaceFingerprint(content), [content]);
   useEffect(() => {
     if (dataset.files) lifecycle.dispatch({ type: 'document', key: docKey });
   }, [lifecycle, docKey, dataset.files]);
@@ -272,7 +280,7 @@ export function useWorkbench(host: LanewrightHost) {
     return ok;
   }, [continueWithAccepted, pending, setMessage]);
 
-  return { host, continueImport, engine, progress, dataset, settings, setSettings, scenario, setScenario, saveScenarioFile, scenarioFromFile, loadFiles, setLoadFiles, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
+  return { host, panels, continueImport, engine, progress, dataset, settings, setSettings, scenario, setScenario, saveScenarioFile, scenarioFromFile, loadFiles, setLoadFiles, selected, setSelected, plan, message, setMessage, dirty, save, openWorkspace, openSample, importFiles, replaceWith, discardPrompt, answerDiscard };
 }
 
 export type Workbench = ReturnType<typeof useWorkbench>;

@@ -2,6 +2,7 @@
 // finds the input files a document names (bundled sample files never go to the host).
 
 import type { LanewrightHost, WorkspaceDocument } from '../../main/ipc/contract';
+import type { WorkspaceLayout } from '../../engine/index';
 import { emptyWorkspace } from '../../engine/index';
 import { emptyScenario, type Scenario } from '../model/scenario-edits';
 import { sampleText } from '../sample/sample';
@@ -32,7 +33,7 @@ export function defaultSettings(origin: string): PlanSettings {
 }
 
 /** The document for the current state. */
-export function documentOf(files: DatasetFiles | null, settings: PlanSettings, scenario: Scenario, loadFiles: LoadFiles | null = null): WorkspaceDocument {
+export function documentOf(files: DatasetFiles | null, settings: PlanSettings, scenario: Scenario, loadFiles: LoadFiles | null = null, layout: WorkspaceLayout | null = null): WorkspaceDocument {
   const doc = emptyWorkspace();
   doc.savedAt = new Date().toISOString();
   doc.files = { depots: files ? workspaceName(files.depots) : null, lanes: files ? workspaceName(files.lanes) : null };
@@ -46,18 +47,20 @@ export function documentOf(files: DatasetFiles | null, settings: PlanSettings, s
     maxLegs: settings.maxLegs,
   };
   if (settings.planning) doc.planning = { ...settings.planning };
+  if (layout) doc.layout = { ...layout };
   doc.scenarios = [scenario];
   doc.activeScenario = scenario.changes.length > 0 ? scenario.name : null;
   return doc;
 }
 
-/** Settings and scenario from a document. */
-export function stateOf(doc: WorkspaceDocument): { settings: PlanSettings; scenario: Scenario } {
+/** Settings, scenario and panel sizes from a document. */
+export function stateOf(doc: WorkspaceDocument): { settings: PlanSettings; scenario: Scenario; layout: WorkspaceLayout } {
   const s = doc.settings;
   const scenario = doc.scenarios.find((x) => x.name === doc.activeScenario) ?? doc.scenarios[0] ?? emptyScenario();
   return {
     settings: { origin: s.origin ?? '', maxLegs: s.maxLegs, vehicleClass: s.vehicleClass ?? NO_CLASS, dispatchDate: s.dispatchDate ?? todayIso(), planning: { ...doc.planning } },
     scenario,
+    layout: { ...doc.layout },
   };
 }
 

@@ -3,7 +3,7 @@
 // kept in the browser's own storage (there are no paths to grant, so "path" is a file name).
 
 import type { AppInfo, ExportKind, HostResult, InputFileKind, LanewrightHost, MenuCommand, ReadFile, WorkspaceDocument } from '../../main/ipc/contract';
-import { checkJsonDepth, checkWorkspace, documentSizeProblem } from '../../engine/index';
+import { checkJsonDepth, documentSizeProblem, upgradeWorkspace } from '../../engine/index';
 import { loadFileText, storeFileText, WORKSPACE_KEY, WORKSPACE_SAVED_AT_KEY } from './browser-store';
 
 const WORKSPACE_NAME = 'browser workspace';
@@ -72,7 +72,8 @@ export function createBrowserHost(version: string): LanewrightHost {
     if (!text) return ok(null);
     try {
       checkJsonDepth(text);
-      return ok(checkWorkspace(JSON.parse(text), 'browser storage'));
+      // Kept by whichever build ran last: an older version is upgraded like a file.
+      return ok(upgradeWorkspace(JSON.parse(text), 'browser storage'));
     } catch (error) {
       return failed('WorkspaceFormatError', `the workspace kept in this browser cannot be used: ${(error as Error).message}`);
     }

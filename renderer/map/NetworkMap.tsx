@@ -117,9 +117,9 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
   const [labelsOn, setLabelsOn] = useState(true);
   // Bumped when the view moves or resizes: labels and the in-view count follow it.
   const [view, setView] = useState(0);
-  // The zoom the view settled at (read when a move or zoom ends). map.getZoom() during a render is
-  // already the target of a zoom animation still running, and Leaflet ignores a zoom asked for then:
-  // data-zoom said "zoomed" before the map would take the next zoom.
+  // The zoom the view has settled at. During Leaflet's zoom animation getZoom() already gives the
+  // target while a second zoom request is still ignored, so what the page states (data-zoom) is
+  // taken only when the zoom has ended: a reader that waits for it can zoom again at once.
   const [settledZoom, setSettledZoom] = useState<number | null>(null);
   const mapRef = useRef<{ map: L.Map; renderers: Renderers } | null>(null);
   const selectRef = useRef(onSelect);
@@ -135,17 +135,17 @@ export function NetworkMap({ network, solve, route, added, selected, onSelect, o
     if (!element.current) return;
     const map = L.map(element.current, { preferCanvas: true, zoomSnap: 0.25, worldCopyJump: false, attributionControl: true });
     // The caution is this app's own constant text (attribution takes HTML, so never file text here).
-    map.attributionControl.setPrefix(false).addAttribution('Land and borders: Natural Earth (public domain)').addAttribution(MAP_CAUTION);
+    // As the prefix it reads as its own sentence, set apart from the data credit ("…(public domain),
+    // Costs are estimates" read as one run-on line when both were attributions).
+    map.attributionControl.setPrefix(MAP_CAUTION).addAttribution('Land and borders: Natural Earth (public domain)');
     map.setView([49.5, 6], 5);
     const renderers = makeRenderers(map);
     addBasemap(map, renderers.basePane);
     mapRef.current = { map, renderers };
     setReady((n) => n + 1);
+    map.on('moveend zoomend resize', () => setView((n) => n + 1));
+    map.on('zoomend', () => setSettledZoom(map.getZoom()));
     setSettledZoom(map.getZoom());
-    map.on('moveend zoomend resize', () => {
-      setView((n) => n + 1);
-      setSettledZoom(map.getZoom());
-    });
     // The panels around the map resize (loop banner, window, splitter), and so does the key when it
     // is opened or closed; Leaflet must re-measure its box. Until the user pans or zooms, the map
     // keeps the whole network in view as its box changes.

@@ -1,11 +1,10 @@
-// What the Export menu offers: the worker's exports (tables and map layers computed from the plan)
-// plus the scenario file, which the UI writes itself from the scenario it holds.
+// What the Export menu offers (the engine's EXPORT_MENU): the worker's exports (tables and map
+// layers computed from the plan), the Contract review's calendar report (HTML), and the scenario
+// file, which the UI writes itself from the scenario it holds.
 
-import { exportFileName } from '../../engine/index';
-import type { ExportKind } from '../worker/protocol';
+import { exportFileName, type ExportChoice } from '../../engine/index';
 
-/** One entry of the Export menu; the review report is the Contract review's calendar report (HTML). */
-export type ExportChoice = ExportKind | 'scenario-json' | 'review-html';
+export type { ExportChoice };
 
 /**
  * File name for a scenario document: the scenario's name reduced to letters, digits, dots, dashes

@@ -1,7 +1,7 @@
 // Messages between the UI thread and the engine worker. Everything here is structured-clone data
 // (typed arrays travel as transferables), so the same shapes serve the worker and unit tests.
 
-import type { ChangeView, CsvDialect, EstimateRules, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
+import type { ChangeView, CsvDialect, EstimateRules, ExportChoice, LaneKey, PlanAmounts, PlanningChoices } from '../../engine/index';
 import type { AddedLane } from '../model/added-lanes';
 import type { Scenario } from '../model/scenario-edits';
 import type { DispatchRequest, DispatchView } from './dispatch-loads';
@@ -207,10 +207,12 @@ export interface RouteView {
 }
 
 /**
- * What the worker exports. `review-csv` and `calendar-review-csv` are the contract review last made
- * (the Contract review tab); `compare-csv` compares the active scenario with the base from the origin.
+ * What the worker exports: every Export menu entry but the two the UI makes (the scenario file, and
+ * the review report from a `review` request). `review-csv` and `calendar-review-csv` are the contract
+ * review last made (the Contract review tab); `compare-csv` compares the active scenario with the base
+ * from the origin.
  */
-export type ExportKind = 'routes-csv' | 'lanes-csv' | 'loops-csv' | 'geojson' | 'review-csv' | 'calendar-review-csv' | 'compare-csv';
+export type ExportKind = Exclude<ExportChoice, 'scenario-json' | 'review-html'>;
 
 export interface WorkerErrorView {
   name: string;

@@ -4,10 +4,11 @@
 // scenario through the engine's overlay.
 
 import { auditNetwork, calendarFixChanges, calendarReport, calendarReportScenario, calendarReviewHtml, reviewCalendarUnder, type CalendarReport, type ImportResult, type ReviewedFile, type ScenarioChange } from '../../engine/index';
-import type { Network } from '../../engine/index';
+import type { HeadroomRunner, Network } from '../../engine/index';
 import { auditReport, type AuditReport } from '../../engine/index';
 import { overlayKeys, scenarioImport } from '../../engine/index';
 import { hasChanges, type Scenario } from '../model/scenario-edits';
+import type { HeadroomThreadsView } from './headroom-protocol';
 
 export type ContractReviewView = AuditReport & {
   scenarioProblems: string[];
@@ -17,6 +18,8 @@ export type ContractReviewView = AuditReport & {
   calendarHtml: string | null;
   /** The calendar's verified fix plan as scenario changes (one rebate per lane, notes naming plan, row and classes); empty without one. */
   calendarFix: ScenarioChange[];
+  /** The threads the review's headroom searches ran on (headroom-pool.ts), and why one when so. */
+  headroomThreads: HeadroomThreadsView;
 };
 
 export interface CalendarContext {
@@ -37,14 +40,18 @@ const calendarCache = new WeakMap<object, { key: string; part: CalendarPart }>()
 
 const calendarKey = (context: CalendarContext, scenario: Scenario | null) => JSON.stringify([context.imported.plan.settings, scenario?.changes ?? [], context.fixBy, context.files]);
 
-/** Audits the planned network, with the scenario laid over the import's lane rows first when it has changes. */
+/**
+ * Audits the planned network, with the scenario laid over the import's lane rows first when it has
+ * changes; headroom searches go through `runner` (the engine worker's thread pool).
+ */
 export function reviewContract(
   imported: ImportResult,
   network: Network,
   scenario: Scenario | null,
   onProgress?: (phase: string, fraction: number) => void,
   context?: CalendarContext,
-): ContractReviewView {
+  runner?: HeadroomRunner,
+): Omit<ContractReviewView, 'headroomThreads'> {
   let target = network;
   let scenarioProblems: string[] = [];
   // Lane keys as scenarios name them (counted over the file's rows), for the fix plan's changes.
@@ -60,6 +67,7 @@ export function reviewContract(
   const order = { loops: 0, 'fix-plan': 1, headroom: 2 } as const;
   const audit = auditNetwork(target, {
     laneKeys,
+    headroomRunner: runner,
     onProgress: (p) => onProgress?.(phases[p.phase], (order[p.phase] + (p.total > 0 ? p.done / p.total : 0)) / (context ? 6 : 3)),
   });
   let calendar: CalendarReport | null = null;
@@ -72,6 +80,7 @@ export function reviewContract(
     const calendarPhases = { periods: 'Planning every period', loops: 'Rebate loops over the calendar', 'fix-plan': 'A fix plan for the whole calendar', verify: 'Checking the plan in every period', headroom: 'Headroom over the calendar' } as const;
     const reviewed = reviewCalendarUnder(context.imported, active, {
       fixBy: context.fixBy,
+      headroomRunner: runner,
       onProgress: (p) => onProgress?.(calendarPhases[p.phase], 0.5 + (p.total > 0 ? p.done / p.total : 0) / 2),
     });
     calendar = calendarReport({ ...context.imported, lanes: reviewed.overlay.table }, reviewed.review, context.fixBy, calendarReportScenario(active, reviewed));

@@ -12,6 +12,7 @@ import { currencyKey, importTexts, replanImport, reportOf } from './import-texts
 import { laneOfRows, networkView, transferablesOf } from './network-view';
 import type { ContractReviewView, FromWorker, NamedText, PlanChoice, PlanSettings, SolveView, ToWorker } from './protocol';
 import { reviewContract } from './review';
+import { createAppHeadroomPool, type AppHeadroomPool } from './headroom-pool';
 import { dispatchLoads } from './dispatch-loads';
 import { withLaneDetails } from './lane-details';
 import { DEFAULT_QUERY, queryDepots } from '../model/results-table';
@@ -46,7 +47,11 @@ export class WorkerSession {
   /** The contract review last made, for its CSV exports; a new import or plan drops it. */
   private reviewed: { scenario: Scenario | null; report: ContractReviewView } | null = null;
 
-  constructor(private readonly post: Post) {}
+  /** `headroom`: the engine worker's headroom threads (engine.worker.ts); by default the calling thread alone. */
+  constructor(
+    private readonly post: Post,
+    private readonly headroom: AppHeadroomPool = createAppHeadroomPool({ isolated: false, cores: 1, spawn: () => { throw new Error('no headroom workers here'); } }),
+  ) {}
 
   handle(message: ToWorker): void {
     try {
@@ -92,7 +97,9 @@ export class WorkerSession {
         const progress = (phase: string, fraction: number) => this.post({ kind: 'progress', id: message.id, phase, fraction });
         if (!this.imported) throw new LanewrightError('workspace: no network is loaded yet');
         const context = { imported: this.imported, files: this.files, fixBy: message.fixBy ?? 'lane' };
-        const review = reviewContract(this.imported, this.need(), message.scenario, progress, context);
+        const network = this.need();
+        const measured = this.headroom.measure((runner) => reviewContract(this.imported!, network, message.scenario, progress, context, runner));
+        const review = { ...measured.result, headroomThreads: measured.threads };
         this.reviewed = { scenario: message.scenario, report: review };
         this.post({ kind: 'reviewed', id: message.id, review });
         return;
@@ -121,6 +128,8 @@ export class WorkerSession {
     this.base = null;
     this.baseKey = '';
     this.reviewed = null;
+    // A review may follow: the headroom workers start now, while the user looks at the network.
+    this.headroom.warm();
     const view = networkView(result, plan, this.rowIndex!.keys);
     this.post({ kind: 'loaded', id, network: view, report: reportOf(result) }, transferablesOf(view));
   }

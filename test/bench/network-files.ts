@@ -6,6 +6,7 @@
 import { closeSync, openSync, writeSync } from 'node:fs';
 import { join } from 'node:path';
 import { seeded } from './harness';
+import { gridLanes, ringLanes, sparsePotentials } from './network-shapes';
 
 export type NetworkShape = 'grid' | 'chain' | 'random';
 
@@ -55,8 +56,7 @@ function laneLine(u: number, v: number, base: number, pu: number, pv: number, km
 export function writeNetworkFiles(folder: string, shape: NetworkShape, size: number, laneTarget = 0): NetworkFiles {
   const rand = seeded(shape === 'grid' ? 23 : shape === 'chain' ? 29 : 11);
   const depotCount = shape === 'grid' ? size * size : size;
-  const potential = new Float64Array(depotCount);
-  for (let d = 0; d < depotCount; d++) potential[d] = rand() < 0.1 ? Math.floor(rand() * 3_000) : 0;
+  const potential = sparsePotentials(depotCount, rand);
 
   const depots = join(folder, `${shape}-depots.csv`);
   const dw = lineWriter(depots);
@@ -73,34 +73,12 @@ export function writeNetworkFiles(folder: string, shape: NetworkShape, size: num
     laneCount++;
   };
   let origin = 0;
-  if (shape === 'grid') {
-    for (let r = 0; r < size; r++) {
-      for (let c = 0; c < size; c++) {
-        const d = r * size + c;
-        if (c + 1 < size) {
-          const base = 800 + Math.floor(rand() * 1_600);
-          lane(d, d + 1, base);
-          lane(d + 1, d, base);
-        }
-        if (r + 1 < size) {
-          const base = 800 + Math.floor(rand() * 1_600);
-          lane(d, d + size, base);
-          lane(d + size, d, base);
-        }
-      }
-    }
-    origin = Math.floor(size / 2) * size + Math.floor(size / 2);
-  } else if (shape === 'chain') {
+  if (shape === 'grid') origin = gridLanes(size, rand, lane);
+  else if (shape === 'chain') {
     // No potentials here: a one-step lane costs 1.00 and a k-step lane k.00 + 0.01, so one step at a time is cheapest.
     potential.fill(0);
     for (let d = 0; d < depotCount; d++) for (let k = 1; k <= 10 && d + k < depotCount; k++) lane(d, d + k, 100 * k + (k > 1 ? 1 : 0));
-  } else {
-    for (let e = 0; e < laneTarget; e++) {
-      const u = e < depotCount ? e : Math.floor(rand() * depotCount);
-      const v = e < depotCount ? (e + 1) % depotCount : Math.floor(rand() * depotCount);
-      lane(u, v, Math.floor(rand() * 10_000));
-    }
-  }
+  } else ringLanes(depotCount, laneTarget, rand, lane);
   lw.close();
   return { depots, lanes, origin: `D${origin}`, depotCount, laneCount };
 }

@@ -6,6 +6,7 @@ import { buildNetwork } from '../../engine/network/build';
 import type { DepotInput, LaneInput, Network } from '../../engine/network/types';
 import type { Minor } from '../../engine/money/minor';
 import { seeded } from './harness';
+import { gridLanes, ringLanes, sparsePotentials } from './network-shapes';
 
 export interface Generated {
   network: Network;
@@ -45,13 +46,12 @@ export function randomSparse(depotCount: number, laneCount: number, seed: number
   const from = new Int32Array(laneCount);
   const to = new Int32Array(laneCount);
   const net = new Float64Array(laneCount);
-  for (let e = 0; e < laneCount; e++) {
-    const u = e < depotCount ? e : Math.floor(rand() * depotCount);
-    const v = e < depotCount ? (e + 1) % depotCount : Math.floor(rand() * depotCount);
+  let e = 0;
+  ringLanes(depotCount, laneCount, rand, (u, v, base) => {
     from[e] = u;
     to[e] = v;
-    net[e] = Math.floor(rand() * 10_000) + potential[u] - potential[v];
-  }
+    net[e++] = base + potential[u] - potential[v];
+  });
   return { network: compile(depotCount, from, to, net), origin: 0 };
 }
 
@@ -62,32 +62,15 @@ export function randomSparse(depotCount: number, laneCount: number, seed: number
 export function roadGrid(side: number, seed: number): Generated {
   const rand = seeded(seed);
   const depotCount = side * side;
-  const potential = new Float64Array(depotCount);
-  for (let d = 0; d < depotCount; d++) potential[d] = rand() < 0.1 ? Math.floor(rand() * 3_000) : 0;
+  const potential = sparsePotentials(depotCount, rand);
   const from: number[] = [];
   const to: number[] = [];
   const net: number[] = [];
-  const lane = (u: number, v: number, base: number) => {
+  const centre = gridLanes(side, rand, (u, v, base) => {
     from.push(u);
     to.push(v);
     net.push(base + potential[u] - potential[v]);
-  };
-  for (let r = 0; r < side; r++) {
-    for (let c = 0; c < side; c++) {
-      const d = r * side + c;
-      if (c + 1 < side) {
-        const base = 800 + Math.floor(rand() * 1_600);
-        lane(d, d + 1, base);
-        lane(d + 1, d, base);
-      }
-      if (r + 1 < side) {
-        const base = 800 + Math.floor(rand() * 1_600);
-        lane(d, d + side, base);
-        lane(d + side, d, base);
-      }
-    }
-  }
-  const centre = Math.floor(side / 2) * side + Math.floor(side / 2);
+  });
   return { network: compile(depotCount, Int32Array.from(from), Int32Array.from(to), Float64Array.from(net)), origin: centre };
 }
 

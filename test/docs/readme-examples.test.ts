@@ -36,6 +36,11 @@ describe('README examples', () => {
     }
   });
 
+  it('has one install block', () => {
+    const blocks = [...readFileSync('README.md', 'utf8').matchAll(/```\w*\n([\s\S]*?)```/g)].map((m) => m[1]);
+    expect(blocks.filter((b) => /^npm (install|ci)\b/m.test(b))).toHaveLength(1);
+  });
+
   it('every example that plans for a date gives --date', () => {
     for (const line of lines) {
       const command = line.split(/\s+/)[2];

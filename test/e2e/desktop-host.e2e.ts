@@ -1,6 +1,7 @@
 // The renderer under a scripted desktop host (the `window.lanewright` the preload would define),
-// for what only the desktop has: a workspace path that Save writes to without a dialog, and
-// workspaces naming files on disk that may have gone. The host records every save it is asked for.
+// for what only the desktop has: a workspace path that Save writes to without a dialog, workspaces
+// naming files on disk that may have gone, and the application menu's commands (exports included).
+// The host records every save and export it is asked for.
 
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -23,7 +24,7 @@ function fakeDesktopHost(docs: Record<string, unknown>): string {
     const docs = ${JSON.stringify(docs)};
     const ok = (value) => ({ ok: true, value });
     const fail = (error, message, path) => ({ ok: false, failure: { error, message, path, field: null } });
-    const state = { saves: [], listener: null, failNextSave: false };
+    const state = { saves: [], exports: [], listener: null, failNextSave: false };
     window.__fakeHost = state;
     window.lanewright = {
       kind: 'desktop',
@@ -42,7 +43,10 @@ function fakeDesktopHost(docs: Record<string, unknown>): string {
       async recentWorkspaces() { return ok([{ path: ${JSON.stringify(OLD)}, name: 'old', openedAt: '2026-08-01T08:00:00Z' }]); },
       async pickFile() { return ok(null); },
       async readFile(path) { return fail('FileAccessError', path + ': no such file', path); },
-      async saveExport() { return ok(null); },
+      async saveExport(suggestedName, text, kind) {
+        state.exports.push({ suggestedName, kind, start: text.slice(0, 15) });
+        return ok({ path: '/work/dispatch/' + suggestedName });
+      },
       async setDirty() { return ok(null); },
       async appInfo() { return ok({ name: 'Lanewright', version: 'test', platform: 'linux', runtime: null }); },
       onMenuCommand(listener) { state.listener = listener; return () => { state.listener = null; }; },
@@ -55,6 +59,7 @@ let page: Page;
 
 const menu = (p: Page, command: object) => p.evaluate((c) => (window as unknown as { __fakeHost: { listener: (c: object) => void } }).__fakeHost.listener(c), command);
 const saves = (p: Page) => p.evaluate(() => (window as unknown as { __fakeHost: { saves: { path: string | null; saveAs: boolean; lanes: string }[] } }).__fakeHost.saves);
+const exports = (p: Page) => p.evaluate(() => (window as unknown as { __fakeHost: { exports: { suggestedName: string; kind: string; start: string }[] } }).__fakeHost.exports);
 const failNextSave = (p: Page) => p.evaluate(() => void ((window as unknown as { __fakeHost: { failNextSave: boolean } }).__fakeHost.failNextSave = true));
 const dataset = (p: Page) => p.locator('.lw-dataset').innerText();
 const prompt = (p: Page) => p.getByRole('dialog', { name: 'Unsaved changes' });
@@ -166,6 +171,22 @@ describe('renderer under the desktop host', () => {
     await prompt(page).getByRole('button', { name: 'Discard' }).click();
     await expect.poll(() => statusMessage(page)).toMatch(new RegExp(`Opened ${OLD}`));
     expect(await dataset(page)).not.toMatch(/unsaved/);
+  });
+
+  it('exports the contract review report and the review tables from the application menu', async () => {
+    await menu(page, { command: 'export', what: 'review-html' });
+    await expect.poll(() => exports(page), { timeout: 60_000 }).toHaveLength(1);
+    // The whole calendar of the sample's lanes file (every class, any origin), as the Export menu names it.
+    const [report] = await exports(page);
+    expect(report).toEqual({ suggestedName: expect.stringMatching(/^contract-review-\d{4}-\d\d-\d\d-\d{4}-\d\d-\d\d\.html$/), kind: 'html', start: '<!DOCTYPE html>' });
+    await expect.poll(() => statusMessage(page)).toContain(`Exported /work/dispatch/${report.suggestedName}.`);
+    // The review the report made is the one the review tables export.
+    await menu(page, { command: 'export', what: 'review-csv' });
+    await menu(page, { command: 'export', what: 'calendar-review-csv' });
+    await expect.poll(() => exports(page)).toHaveLength(3);
+    const [, day, calendar] = await exports(page);
+    expect(day).toMatchObject({ suggestedName: expect.stringMatching(/^contract-review-2026-08-15\.csv$/), kind: 'csv' });
+    expect(calendar).toMatchObject({ suggestedName: expect.stringMatching(/^calendar-review-\d{4}-\d\d-\d\d-\d{4}-\d\d-\d\d\.csv$/), kind: 'csv' });
   });
 
   it('made no request outside localhost and logged no errors', () => {

@@ -8,17 +8,15 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { importNetwork } from '../../engine/planning/import-network';
-import { editLaneAmount, offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { editLaneAmount, offsiteRequests, openReadyApp, snap, waitForPlan, type Session } from './support/browser';
 import { sample } from './support/expected';
 
 let session: Session;
 let page: Page;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 900 });
+  session = await openReadyApp({ width: 1440, height: 900 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

@@ -5,7 +5,7 @@
 
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { chooseFile, offsiteRequests, openApp, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, pickImportFiles, waitForPlan, type Session } from './support/browser';
 
 let session: Session;
 let page: Page;
@@ -17,10 +17,8 @@ const depots = `id,name,lat,lon\n${IMG},${BOLD},51.9,4.1\n${META},<i id=lw-injec
 const lanes = `from,to,toll,fuel,fees,rebate,notes\n${IMG},${META},1.00,2.00,0,0,<script>window.__lwInjected=2</script>\n${META},PLAIN,1.00,2.00,0,0,${BOLD}\nPLAIN,${IMG},1.00,2.00,0,0,ok\n`;
 
 beforeAll(async () => {
-  session = await openApp();
+  session = await openReadyApp();
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {
@@ -31,10 +29,7 @@ describe('hostile text in the files', () => {
   it('imports and plans depots with markup in ids and names, and creates no element from them', async () => {
     const url = page.url();
     await page.getByRole('button', { name: 'Import CSV…' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'depots.csv', depots);
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'lanes.csv', lanes);
-    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('lanes.csv');
+    const dialog = await pickImportFiles(page, { name: 'depots.csv', text: depots }, { name: 'lanes.csv', text: lanes });
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
     await expect.poll(() => page.locator('.lw-status').innerText(), { timeout: 30_000 }).toContain('3 depots · 3 lanes');
     await waitForPlan(page);

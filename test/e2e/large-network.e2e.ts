@@ -5,7 +5,7 @@
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bigNetwork } from './support/big-network';
-import { chooseFile, offsiteRequests, openApp, recordTimings, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, pickImportFiles, recordTimings, snap, solveCount, timedEdit, tollCell, waitForPlan, type Session } from './support/browser';
 import { expectedPlan } from './support/expected';
 
 const DEPOTS = 5_000;
@@ -15,9 +15,7 @@ const EDITS = 5;
 let session: Session;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 1000 });
-  await session.page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(session.page);
+  session = await openReadyApp({ width: 1440, height: 1000 });
 });
 
 afterAll(async () => {
@@ -42,10 +40,7 @@ describe('5,000 depots and 50,000 lanes', () => {
     const huge = bigNetwork(DEPOTS * 4, LANES_PER_DEPOT, 7);
     const statusBefore = await page.locator('.lw-status').innerText();
     await page.getByRole('button', { name: 'Import CSV…' }).click();
-    let dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'huge-depots.csv', huge.depotsText);
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'huge-lanes.csv', huge.lanesText);
-    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('huge-lanes.csv');
+    let dialog = await pickImportFiles(page, { name: 'huge-depots.csv', text: huge.depotsText }, { name: 'huge-lanes.csv', text: huge.lanesText });
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
     // The progress sits inside the modal dialog, so the keyboard reaches its Cancel: Tab from Import.
     const progress = dialog.getByRole('group', { name: 'Work in progress' });
@@ -67,10 +62,7 @@ describe('5,000 depots and 50,000 lanes', () => {
     await expect.poll(() => page.getByRole('dialog').count()).toBe(0);
 
     await page.getByRole('button', { name: 'Import CSV…' }).click();
-    dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'synthetic-depots.csv', depotsText);
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'synthetic-lanes.csv', lanesText);
-    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('synthetic-lanes.csv');
+    dialog = await pickImportFiles(page, { name: 'synthetic-depots.csv', text: depotsText }, { name: 'synthetic-lanes.csv', text: lanesText });
     await expect.poll(() => dialog.getByTestId('import-depots-name').innerText()).toBe('synthetic-depots.csv');
     const importStart = Date.now();
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
@@ -93,16 +85,10 @@ describe('5,000 depots and 50,000 lanes', () => {
     const engineMs: number[] = [];
     const editToScreen: number[] = [];
     for (let i = 0; i < EDITS; i++) {
-      const cell = page.locator('[data-testid="lane-table"] tbody tr').nth(i).locator('input[aria-label^="toll of lane"]');
-      const before = await solveCount(page);
-      await cell.fill(`${100 + i}.00`);
-      const started = Date.now();
-      await cell.press('Enter');
-      await waitForPlan(page, before);
-      editToScreen.push(Date.now() - started);
-      const status = page.locator('[data-testid="recompute-ms"]');
-      roundTrips.push(Number(await status.getAttribute('data-round-trip-ms')));
-      engineMs.push(Number(await status.getAttribute('data-solve-ms')));
+      const edit = await timedEdit(page, tollCell(page, i), `${100 + i}.00`);
+      editToScreen.push(edit.editToScreenMs);
+      roundTrips.push(edit.roundTripMs);
+      engineMs.push(edit.solveMs);
     }
     expect(await page.locator('[data-testid="lane-table"] tbody tr.lw-changed-row').count()).toBe(EDITS);
     const longTasks = await longTasksOf();

@@ -5,7 +5,7 @@
 
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, it } from 'vitest';
-import { offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, snap, waitForPlan, type Session } from './support/browser';
 
 const sessions: Session[] = [];
 
@@ -36,11 +36,9 @@ describe.each([
   let page: Page;
 
   it('keeps banner, map and panel usable, and folds the banner to one line once read', async () => {
-    const session = await openApp({ width, height });
+    const session = await openReadyApp({ width, height });
     sessions.push(session);
     page = session.page;
-    await page.getByRole('button', { name: 'I understand' }).click();
-    await waitForPlan(page);
     await page.getByRole('button', { name: 'Sample carrier with rebate loop' }).click();
     const banner = page.getByRole('alert').filter({ hasText: 'Rebate loop' });
     await banner.waitFor();

@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { chooseFile, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { chooseFile, openReadyApp, snap, type Session } from './support/browser';
 
 const LOADS = 10_000;
 /** Far fewer than the loads: a window of rows in view plus overscan. */
@@ -34,10 +34,8 @@ const rendered = () => page.locator('[data-testid="loads-table"] tbody tr[data-l
 const focusedLoad = () => page.evaluate(() => document.activeElement?.getAttribute('data-load') ?? null);
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 900 });
+  session = await openReadyApp({ width: 1440, height: 900 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

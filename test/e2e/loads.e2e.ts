@@ -13,7 +13,7 @@ import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { DISPATCH_CAUTION } from '../../engine/text/cautions';
 import { serializeScenarioDocument } from '../../engine/scenario/document';
 import type { Scenario } from '../../engine/scenario/types';
-import { chooseFile, offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { chooseFile, offsiteRequests, openReadyApp, snap, type Session } from './support/browser';
 import { pdfPages } from './support/pdf-text';
 
 let session: Session;
@@ -21,10 +21,8 @@ let page: Page;
 const text = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
 
 beforeAll(async () => {
-  session = await openApp();
+  session = await openReadyApp();
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

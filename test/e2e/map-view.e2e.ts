@@ -5,18 +5,15 @@
 
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, it } from 'vitest';
-import { offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, snap, waitForPlan, type Session } from './support/browser';
 import { expectedPlan, sample } from './support/expected';
 
 const sessions: Session[] = [];
 
 async function start(width: number, height: number): Promise<Page> {
-  const session = await openApp({ width, height });
+  const session = await openReadyApp({ width, height });
   sessions.push(session);
-  const page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
-  return page;
+  return session.page;
 }
 
 const map = (page: Page) => page.getByRole('region', { name: /Network map/ });

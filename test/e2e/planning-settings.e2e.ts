@@ -7,17 +7,15 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { importNetwork } from '../../engine/planning/import-network';
 import { cheapestRoutes, STATUS_REACHABLE } from '../../engine/routes/cheapest-routes';
-import { offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { sample } from './support/expected';
 
 let session: Session;
 let page: Page;
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 900 });
+  session = await openReadyApp({ width: 1440, height: 900 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

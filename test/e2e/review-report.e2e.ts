@@ -12,7 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { reviewCalendar } from '../../engine/audit/calendar/calendar-review';
 import { calendarReport } from '../../engine/report/calendar-report';
 import { importNetwork } from '../../engine/planning/import-network';
-import { offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, snap, waitForPlan, type Session } from './support/browser';
 import { pdfPages } from './support/pdf-text';
 
 let session: Session;
@@ -20,10 +20,8 @@ let page: Page;
 const text = (name: string) => readFileSync(`sample-data/${name}`, 'utf8');
 
 beforeAll(async () => {
-  session = await openApp();
+  session = await openReadyApp();
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

@@ -12,7 +12,7 @@ import { formatMinor, type Minor } from '../../engine/money/minor';
 import { importNetwork } from '../../engine/planning/import-network';
 import { cheapestRoutes, STATUS_REACHABLE } from '../../engine/routes/cheapest-routes';
 import { routePath } from '../../engine/routes/route-path';
-import { offsiteRequests, openApp, snap, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, snap, type Session } from './support/browser';
 import { sample } from './support/expected';
 import { pdfPages } from './support/pdf-text';
 
@@ -47,10 +47,8 @@ function routeWithEstimates(date: string): { id: string; cost: number; legs: Exp
 }
 
 beforeAll(async () => {
-  session = await openApp({ width: 1440, height: 900 });
+  session = await openReadyApp({ width: 1440, height: 900 });
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

@@ -6,7 +6,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { emptyWorkspace } from '../../engine/workspace/document';
 import { WORKSPACE_KEY } from '../../renderer/host/browser-store';
-import { offsiteRequests, openApp, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openReadyApp, type Session } from './support/browser';
 
 let session: Session;
 let page: Page;
@@ -15,10 +15,8 @@ beforeAll(async () => {
   const kept = emptyWorkspace();
   kept.files = { depots: 'sample:depots.csv', lanes: 'sample:lanes.csv', loads: 'sample:loads.csv', vehicles: 'sample:vehicles.csv' };
   kept.settings = { ...kept.settings, origin: 'RTM', dispatchDate: '2026-08-15' };
-  session = await openApp(undefined, `localStorage.setItem(${JSON.stringify(WORKSPACE_KEY)}, ${JSON.stringify(JSON.stringify(kept))});`);
+  session = await openReadyApp(undefined, `localStorage.setItem(${JSON.stringify(WORKSPACE_KEY)}, ${JSON.stringify(JSON.stringify(kept))});`);
   page = session.page;
-  await page.getByRole('button', { name: 'I understand' }).click();
-  await waitForPlan(page);
 });
 
 afterAll(async () => {

@@ -10,7 +10,7 @@ import { parseCsvText } from '../../engine/io/csv-papaparse';
 import { formatMinor, type Minor } from '../../engine/money/minor';
 import { importNetwork } from '../../engine/planning/import-network';
 import { parseScenarioDocument, SCENARIO_VERSION, serializeScenarioDocument } from '../../engine/scenario/document';
-import { chooseFile, offsiteRequests, openApp, snap, solveCount, waitForPlan, type Session } from './support/browser';
+import { offsiteRequests, openApp, pickImportFiles, snap, solveCount, waitForPlan, type Session } from './support/browser';
 import { expectedPlan, sample } from './support/expected';
 
 let session: Session;
@@ -274,10 +274,7 @@ describe('workspace in the browser', () => {
     await page.getByRole('button', { name: 'Import CSV…' }).click();
     // Removing the added lane left an edit no scenario file holds: asked first.
     await page.getByRole('dialog', { name: 'Unsaved changes' }).getByRole('button', { name: 'Discard' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), 'depots.csv', sample('depots.csv'));
-    await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), 'lanes-broken.csv', broken);
-    await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe('lanes-broken.csv');
+    const dialog = await pickImportFiles(page, { name: 'depots.csv', text: sample('depots.csv') }, { name: 'lanes-broken.csv', text: broken });
     await dialog.getByRole('button', { name: 'Import', exact: true }).click();
     const report = page.getByRole('dialog', { name: 'Import report' });
     await report.waitFor();

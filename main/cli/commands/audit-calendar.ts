@@ -7,9 +7,10 @@ import { readFileSync } from 'node:fs';
 import { calendarFixChanges, calendarLoopRows, calendarReport, calendarReportScenario, calendarReviewCsv, calendarReviewHtml, formatCsvRows, reviewCalendarUnder, serializeScenarioDocument, withChange, type Scenario } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { inCsvDialect } from '../csv-dialect-option';
-import { loadImport } from '../load-network';
+import { exportSettingsOf, loadImport } from '../load-network';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
+import { auditProgress, negotiableOption } from './audit-shared';
 import { counted, plural } from '../../../engine/index';
 
 /** Value options only the calendar review reads (kept together so the option table can take them as they are). */
@@ -27,7 +28,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const threads = wholeNumberOption(args, 'threads', 1);
   const fixBy = fixByOption(args);
-  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const negotiable = negotiableOption(args);
   const loopsCsv = args.values.get('loops-csv');
   const reportPath = args.values.get('report');
 
@@ -36,7 +37,6 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   const imported = loadImport(args, {}, false);
   const readMs = performance.now() - readStart;
 
-  let lastLine = '';
   const solveStart = performance.now();
   // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
   const pool = createHeadroomThreadPool({ threads });
@@ -51,12 +51,7 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
       negotiable,
       fixBy,
       skipInvalid: args.flags.has('skip-invalid'),
-      onProgress: args.flags.has('progress')
-        ? ({ phase, done, total }) => {
-            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-            if (line !== lastLine) out.warn((lastLine = line));
-          }
-        : undefined,
+      onProgress: auditProgress(args, out),
     });
   } finally {
     pool.close();
@@ -72,7 +67,9 @@ export function runCalendarAudit(args: ParsedArgs, out: CommandOutput, what: { p
   const window = report.window.from === null ? 'every date (the lanes file names none)' : `${report.window.from} to ${report.window.to}`;
   out.warn(`calendar review${what ? ` under scenario "${what.scenario.name}" (${what.path})` : ''}: ${window}, ${counted(report.periods.length, 'period')}, ${plural(report.classes.length, 'vehicle class', 'vehicle classes')} ${report.classes.map((c) => c ?? 'default toll').join(', ')} (--date D reviews one day)`);
   for (const name of review.negotiableUnmatched) out.warn(`--negotiable: no lane has the contract reference, clause or lane key "${name}"; it marks nothing`);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : inCsvDialect(args, calendarReviewCsv(report, exponent)));
+  // The whole calendar: no one date, and every class unless --vehicle-class named one.
+  const settings = exportSettingsOf(args, { date: null, vehicleClass: args.values.has('vehicle-class') ? imported.plan.vehicleClass : null }, what ? what.scenario.name : null, [what?.path]);
+  out.write(args.flags.has('json') ? JSON.stringify({ ...report, settings }) + '\n' : inCsvDialect(args, calendarReviewCsv(report, exponent)));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(calendarLoopRows(report, exponent))));
   if (reportPath) {
     const files = ['depots', 'lanes'].map((k) => args.values.get(k)!).map((path) => ({ name: path, sha256: sha256(path) }));

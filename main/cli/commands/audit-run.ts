@@ -10,10 +10,11 @@ import { auditLoopRows, auditReport, reviewCsv } from '../../../engine/index';
 import { formatCsvRows } from '../../../engine/index';
 import { UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { CALENDAR_AUDIT_OPTIONS, runCalendarAudit } from './audit-calendar';
-import { loadImport, planDateOf } from '../load-network';
+import { exportSettingsOf, loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import { createHeadroomThreadPool } from '../../headroom-threads/pool';
 import type { CommandOutput } from '../run';
+import { auditProgress, negotiableOption } from './audit-shared';
 import { counted, plural } from '../../../engine/index';
 
 /** The --scenario file, read before any work; null without one. */
@@ -30,7 +31,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   }
   const loopCap = wholeNumberOption(args, 'loop-cap', 1);
   const threads = wholeNumberOption(args, 'threads', 1);
-  const negotiable = (args.values.get('negotiable') ?? '').split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const negotiable = negotiableOption(args);
   const loopsCsv = args.values.get('loops-csv');
   csvDialectOption(args);
 
@@ -49,7 +50,6 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   }
   const readMs = performance.now() - readStart;
 
-  let lastLine = '';
   const solveStart = performance.now();
   // Headroom searches over worker threads (main/headroom-threads); the results do not depend on how many.
   const pool = createHeadroomThreadPool({ threads });
@@ -60,12 +60,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
       loopCap,
       negotiable,
       laneKeys,
-      onProgress: args.flags.has('progress')
-        ? ({ phase, done, total }) => {
-            const line = `audit: ${phase} ${total === 0 ? 100 : Math.floor((100 * done) / total)}%`;
-            if (line !== lastLine) out.warn((lastLine = line));
-          }
-        : undefined,
+      onProgress: auditProgress(args, out),
     });
   } finally {
     pool.close();
@@ -75,7 +70,7 @@ export function runAudit(args: ParsedArgs, out: CommandOutput): number {
   for (const name of audit.negotiableUnmatched ?? []) out.warn(`--negotiable: no lane has the contract reference or lane key "${name}"; it marks nothing`);
   const report = auditReport(network, audit);
   // Which review this is: one day, named.
-  const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, ...report };
+  const dayReport = { review: 'day' as const, date: planDateOf(args).date, scenario: what ? what.scenario.name : null, settings: exportSettingsOf(args, imported.plan, what ? what.scenario.name : null, [what?.path]), ...report };
   out.write(args.flags.has('json') ? JSON.stringify(dayReport) + '\n' : inCsvDialect(args, reviewCsv(network, report)));
   if (loopsCsv) out.writeFile(loopsCsv, inCsvDialect(args, formatCsvRows(auditLoopRows(network, report))));
   if (args.flags.has('timings')) out.timing({ read_ms: readMs, audit_ms: solveMs, depots: network.depotCount, lanes: network.laneCount, threads: pool.threads, headroom_worker_jobs: pool.workerJobs() });

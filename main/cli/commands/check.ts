@@ -12,7 +12,7 @@ export const checkCommand: CommandSpec = {
     'Reads both files and prints each error and warning (file, row, column, value, reason) and the row counts\n' +
     '(accepted + rejected = total), as lines or one JSON object with --json. Exit status 0 without errors,\n' +
     '1 with errors (warnings alone do not fail), 2 for a mistake on the command line.',
-  example: 'lanewright check --depots sample-data/depots.csv --lanes sample-data/lanes.csv',
+  example: 'lanewright check --depots sample-data/depots.csv --lanes sample-data/lanes.csv --date 2026-06-01',
   options: [...NETWORK_FILES, JSON_OPTION, OUT_OPTION, ...PLANNING_OPTIONS],
   load: async () => (await import('./check-run')).runCheck,
 };

@@ -9,7 +9,7 @@ import { parseScenarioDocument } from '../../../engine/index';
 import { compareCsv, compareReport } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
 import { readDocumentFile } from '../files';
-import { loadImport, planDateOf } from '../load-network';
+import { exportSettingsOf, loadImport, planDateOf } from '../load-network';
 import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 
@@ -24,7 +24,7 @@ export function runCompare(args: ParsedArgs, out: CommandOutput): number {
   const network = imported.network;
   const comparison = compareImport(imported, scenario, originId, { loopCap });
   const report = compareReport(comparison);
-  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, ...report }) + '\n' : inCsvDialect(args, compareCsv(report, network.exponent)));
+  out.write(args.flags.has('json') ? JSON.stringify({ date: planDateOf(args).date, settings: exportSettingsOf(args, imported.plan, scenario.name, [scenarioPath]), ...report }) + '\n' : inCsvDialect(args, compareCsv(report, network.exponent)));
 
   for (const p of report.problems) out.warn(`scenario ${scenarioPath}: ${p.message}; the change is kept in the scenario but not applied (code ${p.code})`);
   for (const loop of report.loops_appeared) {

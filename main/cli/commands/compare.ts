@@ -14,7 +14,7 @@ export const compareCommand: CommandSpec = {
     'Applies the scenario\'s changes (amounts, closed or added lanes, validity) and prints each depot\'s cost\n' +
     'before and after and whether its route changed, as CSV or one JSON object with --json; rebate loops the\n' +
     'scenario creates or removes are named on stderr. The scenario file is never rewritten.',
-  example: 'lanewright compare --depots sample-data/depots.csv --lanes sample-data/lanes.csv --scenario what-if.json --from RTM --date 2026-06-01',
+  example: 'lanewright compare --depots sample-data/depots.csv --lanes sample-data/lanes-rebate-loop.csv --scenario sample-data/what-if-clause-7-2.json --from RTM --date 2026-06-01',
   options: [
     ...NETWORK_FILES,
     { name: 'scenario', value: 'FILE', help: 'scenario JSON file (lanewright-scenario)', required: true },

@@ -7,7 +7,7 @@
 import { parseScenarioDocument, planLoads, dispatchCsv, InvalidInputError, importLoads, importVehicles, formatItem, dispatchReport, type VehiclesImport, type ValidationReport } from '../../../engine/index';
 import { required, UsageError, wholeNumberOption, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
-import { importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
+import { exportSettingsOf, importOptionsFromArgs, loadImport, planDateOf } from '../load-network';
 import { inCsvDialect } from '../csv-dialect-option';
 import { readTextChunks } from '../read-chunks';
 import type { CommandOutput } from '../run';
@@ -71,7 +71,7 @@ export function runDispatch(args: ParsedArgs, out: CommandOutput): number {
   });
   const solveMs = performance.now() - solveStart;
   const report = dispatchReport(plan);
-  out.write(args.flags.has('json') ? JSON.stringify(report) + '\n' : inCsvDialect(args, dispatchCsv(report)));
+  out.write(args.flags.has('json') ? JSON.stringify({ ...report, settings: exportSettingsOf(args, { date, vehicleClass: imported.plan.vehicleClass }, scenario ? scenario.name : null, [loadsPath, vehiclesPath, scenarioPath]) }) + '\n' : inCsvDialect(args, dispatchCsv(report)));
   if (scenario) out.warn(`note: loads planned under the what-if scenario "${scenario.name}" (${scenarioPath}), not the lanes as the file has them`);
   for (const w of report.warnings) out.warn(`warning: ${w}`);
   for (const n of report.notes) out.warn(`note: ${n}`);

@@ -17,7 +17,7 @@ import { parseScenarioDocument, scenarioImport } from '../../../engine/index';
 import type { Network } from '../../../engine/index';
 import { UsageError, type ParsedArgs } from '../args';
 import { readTextFile } from '../files';
-import { loadImport } from '../load-network';
+import { exportSettingsOf, loadImport } from '../load-network';
 import { inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 import { counted } from '../../../engine/index';
@@ -67,7 +67,9 @@ export function runExport(args: ParsedArgs, out: CommandOutput): number {
   }
   if ((routesOut || lanesOut || geojsonOut) && routes) out.afterOutput(`CAUTION: ${routes.tail.caution}`);
   if (loopsOut) out.writeFile(loopsOut, inCsvDialect(args, loopsCsv(network, loops)), `loops: ${loopsOut} (${counted(loops.length, 'loop')})`);
-  if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops })), `GeoJSON: ${geojsonOut}`);
+  // The GeoJSON says what it was made from, as the app's export does (engine/export/export-settings.ts).
+  const settings = exportSettingsOf(args, imported.plan, scenario ? scenario.name : null);
+  if (geojsonOut) out.writeFile(geojsonOut, geoJsonText(networkGeoJson(network, { report, loops, settings })), `GeoJSON: ${geojsonOut}`);
   if (loops.length > 0) out.warn(`WARNING: ${counted(loops.length, 'rebate loop')} in the network; the contract terms need fixing (see the loops export)`);
   return 0;
 }

@@ -11,7 +11,7 @@ import { routesReportStream } from '../../../engine/index';
 import { routesCsvChunks, routesJsonChunks } from '../../../engine/index';
 import type { Network, PlanningSettings } from '../../../engine/index';
 import { required, wholeNumberOption, type ParsedArgs } from '../args';
-import { loadImport, planDateOf } from '../load-network';
+import { exportSettingsOf, loadImport, planDateOf } from '../load-network';
 import { csvDialectOption, inCsvDialect } from '../csv-dialect-option';
 import type { CommandOutput } from '../run';
 import { counted, plural } from '../../../engine/index';
@@ -30,9 +30,9 @@ function targetDepots(network: Network, args: ParsedArgs): number[] | undefined 
  * records and the plan's columns are garbage once this returns, so the solve, the report and the
  * writing reuse their memory (about as much as the network again on a million lanes).
  */
-function networkOnly(args: ParsedArgs): { network: Network; settings: PlanningSettings } {
+function networkOnly(args: ParsedArgs): { network: Network; settings: PlanningSettings; plan: { date: string | null; vehicleClass: string | null } } {
   const imported = loadImport(args);
-  return { network: imported.network, settings: imported.plan.settings };
+  return { network: imported.network, settings: imported.plan.settings, plan: { date: imported.plan.date, vehicleClass: imported.plan.vehicleClass } };
 }
 
 export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
@@ -41,7 +41,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   csvDialectOption(args); // a wrong name is refused before any file is read
 
   const readStart = performance.now();
-  const { network, settings } = networkOnly(args);
+  const { network, settings, plan } = networkOnly(args);
   const origin = depotIndexOf(network, originId, `--from`);
   const depots = targetDepots(network, args);
   const readMs = performance.now() - readStart;
@@ -59,7 +59,7 @@ export function runRoutes(args: ParsedArgs, out: CommandOutput): number {
   const reportMs = performance.now() - reportStart;
 
   const writeStart = performance.now();
-  if (args.flags.has('json')) for (const chunk of routesJsonChunks(report, undefined, { date: planDateOf(args).date })) out.write(chunk);
+  if (args.flags.has('json')) for (const chunk of routesJsonChunks(report, undefined, { date: planDateOf(args).date, settings: exportSettingsOf(args, plan, null) })) out.write(chunk);
   else if (!args.values.has('csv-dialect')) for (const chunk of routesCsvChunks(report)) out.write(chunk);
   // Another dialect re-writes the whole table (its numeric columns are judged over every row), so
   // only then is the CSV held in memory at once.

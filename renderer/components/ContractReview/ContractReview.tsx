@@ -6,10 +6,11 @@
 import { CautionLine } from '../CautionLine/CautionLine';
 import { useEffect, useState } from 'react';
 import { WorkCancelledError, type Engine } from '../../app/use-engine';
-import { formatMoney, formatMoneyWithCode } from '../../model/format';
+import { formatMoney, formatMoneyWithCode, formatMs } from '../../model/format';
 import { fixPlanScenario, withChanges, type Scenario } from '../../model/scenario-edits';
 import type { NetworkView } from '../../worker/protocol';
 import type { ContractReviewView } from '../../worker/protocol';
+import type { HeadroomThreadsView } from '../../worker/headroom-protocol';
 import type { LanewrightHost } from '../../../main/ipc/contract';
 import { CalendarReview } from './CalendarReview';
 import { FixPlanTable, HeadroomTable, LoopLanes, ReviewExports } from './ReviewTables';
@@ -133,8 +134,20 @@ export function ContractReview({ engine, network, scenario, onScenario, host, on
       <section aria-label="Rebate headroom">
         <h3>Rebate headroom per lane{review.headroom_after_fix_plan ? ' (after the fix plan)' : ''}</h3>
         <p className="lw-muted">Floor: the lowest net a lane can have before some loop of lanes pays for itself. Headroom: net minus floor, how much more rebate the lane could carry.</p>
+        <HeadroomThreads threads={review.headroomThreads} />
         {review.headroom.length > 0 ? <HeadroomTable rows={review.headroom} exponent={network.exponent} /> : <p>Not available while a loop has no fix.</p>}
       </section>
     </div>
+  );
+}
+
+/** The review's figures on its headroom searches: how many ran, and on how many threads (and why one, when so). */
+function HeadroomThreads({ threads }: { threads: HeadroomThreadsView }) {
+  if (threads.runs === 0) return null;
+  return (
+    <p className="lw-muted" data-testid="review-threads" data-threads={threads.used} data-available={threads.available} data-pairs={threads.pairs} data-ms={threads.ms}>
+      Headroom {plural(threads.runs, 'search', 'searches')}: {counted(threads.runs, 'network')}, {threads.pairs.toLocaleString('en')} lane {plural(threads.pairs, 'pair')} in {formatMs(threads.ms)}; threads used: {threads.used} of {threads.available}
+      {threads.oneThreadBecause !== null ? ` (one thread: ${threads.oneThreadBecause})` : ''}.
+    </p>
   );
 }

@@ -5,6 +5,7 @@
 import type { DispatchLoadRow } from '../../../engine/index';
 import { formatDriveMinutes, formatMoney } from '../../model/format';
 import { loadCautions, toggleLoadSort, type LoadSortKey, type LoadsQuery } from '../../model/loads-table';
+import { SortHeader, sortOf } from '../DataTable/SortHeader';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { useRowKeys } from '../DataTable/use-row-keys';
@@ -42,12 +43,7 @@ export function LoadsTable({ rows, exponent, query, onQuery, selected, onSelect 
         <thead>
           <tr aria-rowindex={1}>
             {COLUMNS.map((c) => (
-              <th key={c.key} scope="col" aria-sort={query.sortKey === c.key ? (query.descending ? 'descending' : 'ascending') : 'none'} className={c.numeric ? 'lw-num' : undefined}>
-                <button type="button" className="lw-sort" onClick={() => onQuery(toggleLoadSort(query, c.key))}>
-                  {c.label}
-                  <span aria-hidden="true">{query.sortKey === c.key ? (query.descending ? ' ▼' : ' ▲') : ''}</span>
-                </button>
-              </th>
+              <SortHeader key={c.key} label={c.label} numeric={c.numeric} sort={sortOf(query, c.key)} onSort={() => onQuery(toggleLoadSort(query, c.key))} />
             ))}
             <th scope="col">Cautions</th>
           </tr>

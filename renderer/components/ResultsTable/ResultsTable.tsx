@@ -6,6 +6,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { counted } from '../../../engine/index';
 import { CautionLine } from '../CautionLine/CautionLine';
+import { SortHeader, sortOf } from '../DataTable/SortHeader';
 import { SpacerRow } from '../DataTable/SpacerRow';
 import { useRowWindow } from '../DataTable/use-row-window';
 import { useRowKeys } from '../DataTable/use-row-keys';
@@ -71,12 +72,7 @@ export function ResultsTable({ network, solve, selected, onSelect, onExport }: R
         <thead>
           <tr aria-rowindex={1}>
             {columns.map((c) => (
-              <th key={c.key} scope="col" aria-sort={query.sortKey === c.key ? (query.descending ? 'descending' : 'ascending') : 'none'} className={c.numeric ? 'lw-num' : undefined}>
-                <button type="button" className="lw-sort" onClick={() => setQuery(toggleSort(query, c.key))}>
-                  {c.label}
-                  <span aria-hidden="true">{query.sortKey === c.key ? (query.descending ? ' ▼' : ' ▲') : ''}</span>
-                </button>
-              </th>
+              <SortHeader key={c.key} label={c.label} numeric={c.numeric} sort={sortOf(query, c.key)} onSort={() => setQuery(toggleSort(query, c.key))} />
             ))}
           </tr>
         </thead>

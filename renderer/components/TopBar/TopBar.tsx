@@ -1,6 +1,7 @@
 // The header: product name, what is loaded, and the commands (the sample carrier, import, save,
 // exports, about). In the desktop app the same commands are also in the application menu.
 
+import { EXPORT_MENU } from '../../../engine/index';
 import type { ExportChoice } from '../../model/export-file';
 import { CsvDialectPicker } from '../CsvDialectPicker/CsvDialectPicker';
 
@@ -63,14 +64,11 @@ export function TopBar({ datasetName, desktop, dirty, importing, onSample, onImp
             }}
           >
             <option value="">Export…</option>
-            <option value="routes-csv">Routes (CSV)</option>
-            <option value="lanes-csv">Lane costs (CSV)</option>
-            <option value="loops-csv">Rebate loops (CSV)</option>
-            <option value="geojson">Network and routes (GeoJSON)</option>
-            <option value="review-html">Contract review report (HTML)</option>
-            <option value="scenario-json">Scenario file (JSON)</option>
-            <option value="compare-csv">Scenario comparison (CSV)</option>
-            <option value="review-csv">Contract review, one day (CSV)</option>
+            {EXPORT_MENU.map((entry) => (
+              <option key={entry.what} value={entry.what}>
+                {entry.label}
+              </option>
+            ))}
           </select>
         </label>
         <CsvDialectPicker />

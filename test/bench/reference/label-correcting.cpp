@@ -197,6 +197,9 @@ Result solve(const Graph& g) {
       if (!queued[v]) enqueue(v);
     }
   nextScan:;
+    // As in Lanewright: once the root is unbounded, so is every depot ever labelled (all are
+    // reachable from it), and the queue holds nothing left to scan.
+    if (state[root] == UNBOUNDED) break;
   }
   return r;
 }

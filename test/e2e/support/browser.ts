@@ -4,7 +4,8 @@
 
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
+import { expect } from 'vitest';
 import { serveStatic, type RunningServer } from '../../../main/web/static-server';
 
 export const CHROMIUM = '/usr/bin/chromium';
@@ -92,6 +93,15 @@ export async function chooseFile(page: Page, click: () => Promise<void>, name: s
   await chooser.setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(text, 'utf8') });
 }
 
+/** In the open Import dialog, picks the depots file and then the lanes file and waits until the dialog names the lanes file; returns the dialog. */
+export async function pickImportFiles(page: Page, depots: { name: string; text: string }, lanes: { name: string; text: string }): Promise<Locator> {
+  const dialog = page.getByRole('dialog', { name: 'Import depots and lanes' });
+  await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose depots file…' }).click(), depots.name, depots.text);
+  await chooseFile(page, () => dialog.getByRole('button', { name: 'Choose lanes file…' }).click(), lanes.name, lanes.text);
+  await expect.poll(() => dialog.getByTestId('import-lanes-name').innerText()).toBe(lanes.name);
+  return dialog;
+}
+
 export const TIMINGS_FILE = 'test-output/e2e-timings.json';
 
 /** Writes `figures` under `key` in the e2e timings file, keeping what other specs wrote there (printed, never asserted). */
@@ -108,8 +118,8 @@ export function recordTimings(key: string, figures: Record<string, unknown>): vo
 }
 
 /** openApp with the first-run notice read and the first plan on screen. */
-export async function openReadyApp(viewport?: { width: number; height: number }): Promise<Session> {
-  const session = await openApp(viewport);
+export async function openReadyApp(viewport?: { width: number; height: number }, initScript?: string): Promise<Session> {
+  const session = await openApp(viewport, initScript);
   await session.page.getByRole('button', { name: 'I understand' }).click();
   await waitForPlan(session.page);
   return session;
@@ -123,4 +133,25 @@ export async function editLaneAmount(page: Page, field: string, nth: number, amo
   await cell.fill(amount);
   await cell.press('Enter');
   await waitForPlan(page, before);
+}
+
+/** The toll cell of row `nth` of the lane table as shown (the bulk specs' edits). */
+export function tollCell(page: Page, nth: number): Locator {
+  return page.locator('[data-testid="lane-table"] tbody tr').nth(nth).locator('input[aria-label^="toll of lane"]');
+}
+
+/**
+ * Types `amount` into `cell`, presses Enter and waits for the re-plan. Returns how long the edit took
+ * to reach the screen (from the key press) and the page's own figures of that recompute; for the
+ * timings file, never asserted.
+ */
+export async function timedEdit(page: Page, cell: Locator, amount: string): Promise<{ editToScreenMs: number; roundTripMs: number; solveMs: number }> {
+  const before = await solveCount(page);
+  await cell.fill(amount);
+  const started = Date.now();
+  await cell.press('Enter');
+  await waitForPlan(page, before);
+  const editToScreenMs = Date.now() - started;
+  const status = page.locator('[data-testid="recompute-ms"]');
+  return { editToScreenMs, roundTripMs: Number(await status.getAttribute('data-round-trip-ms')), solveMs: Number(await status.getAttribute('data-solve-ms')) };
 }

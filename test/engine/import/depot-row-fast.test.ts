@@ -5,24 +5,14 @@
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { CsvRecordStream } from '../../../engine/io/csv-record-stream';
 import { DepotsReader } from '../../../engine/import/depots-reader';
 import { ReportCollector } from '../../../engine/import/report-collector';
+import { fileArb, rowArb, streamInto } from './plain-row-files';
 
 function readDepots(text: string, fast: boolean, chunk: number) {
   const report = new ReportCollector(10_000);
   const reader = new DepotsReader('depots.csv', report);
-  const stream: CsvRecordStream = new CsvRecordStream({
-    records: (rows, first, bad, badText, stray) => {
-      reader.decimalComma = stream.delimiter === ';';
-      reader.records(rows, first, bad, badText, stray);
-    },
-    plainLine: fast ? (t, s, e, row, d) => reader.plainLine(t, s, e, row, d) : undefined,
-    issue: (issue) => reader.issue(issue),
-  });
-  for (let i = 0; i < text.length; i += chunk) stream.feed(text.slice(i, i + chunk));
-  stream.finish();
-  reader.finish();
+  streamInto(reader, text, chunk, fast);
   return {
     depots: reader.depots.map((d) => ({ ...d, lat: Object.is(d.lat, -0) ? '-0' : d.lat, lon: Object.is(d.lon, -0) ? '-0' : d.lon, extra: d.extra && { ...d.extra } })),
     index: [...reader.index],
@@ -32,56 +22,32 @@ function readDepots(text: string, fast: boolean, chunk: number) {
   };
 }
 
-const plain = {
-  id: ['A', 'B', 'D12', 'Liège', 'a-very-long-depot-code-17', 'X'],
-  name: ['Depot one', '', 'Dépôt', 'a;b'],
-  lat: ['45.0000', '-12.5', '0', '-0', '90', '-90.000', '51.123456789012', '1.5'],
-  lon: ['2.0000', '-179.99', '180', '0.0', '13.4050', '-0.1276'],
-  text: ['hub', '', 'note text that is long', 'x'],
+const values = {
+  plain: {
+    id: ['A', 'B', 'D12', 'Liège', 'a-very-long-depot-code-17', 'X'],
+    name: ['Depot one', '', 'Dépôt', 'a;b'],
+    lat: ['45.0000', '-12.5', '0', '-0', '90', '-90.000', '51.123456789012', '1.5'],
+    lon: ['2.0000', '-179.99', '180', '0.0', '13.4050', '-0.1276'],
+    text: ['hub', '', 'note text that is long', 'x'],
+  },
+  messy: {
+    id: ['', ' A', 'B ', "'=x", 'A\u00a0'],
+    name: [' padded', "'=cmd", "a;'=b", '@x'],
+    lat: ['91', '-90.0001', '45,5', '1e3', '.5', '5.', '+5', '1.234', 'x', '', '12345678901234567890', '0.1234567890123456789', '-'],
+    lon: ['180.5', '-181', '2,5', 'abc', ' 3', '', '99999999999999999999999'],
+    text: ["'=x", ' spaced ', '=cmd'],
+  },
 };
-const messy = {
-  id: ['', ' A', 'B ', "'=x", 'A\u00a0'],
-  name: [' padded', "'=cmd", "a;'=b", '@x'],
-  lat: ['91', '-90.0001', '45,5', '1e3', '.5', '5.', '+5', '1.234', 'x', '', '12345678901234567890', '0.1234567890123456789', '-'],
-  lon: ['180.5', '-181', '2,5', 'abc', ' 3', '', '99999999999999999999999'],
-  text: ["'=x", ' spaced ', '=cmd'],
-};
-type Kind = keyof typeof plain;
+type Kind = keyof typeof values.plain;
 const KINDS: Kind[] = ['id', 'name', 'lat', 'lon', 'text', 'text', 'text'];
 
-const rowArb = fc
-  .tuple(fc.array(fc.nat(), { minLength: KINDS.length, maxLength: KINDS.length }), fc.option(fc.tuple(fc.nat({ max: KINDS.length - 1 }), fc.nat()), { freq: 2 }))
-  .map(([picks, odd]) =>
-    KINDS.map((kind, k) => {
-      if (odd !== null && odd[0] === k) return messy[kind][odd[1] % messy[kind].length];
-      return plain[kind][picks[k] % plain[kind].length];
-    }),
-  );
-
-const fileArb = fc
-  .record({
-    semicolon: fc.boolean(),
-    rows: fc.array(rowArb, { minLength: 1, maxLength: 40 }),
-    extraField: fc.integer({ min: 0, max: 20 }),
-    chunk: fc.integer({ min: 7, max: 200 }),
-  })
-  .map(({ semicolon, rows, extraField, chunk }) => {
-    const d = semicolon ? ';' : ',';
-    const header = ['id', 'name', 'lat', 'lon', 'type', 'notes', 'region'].join(d);
-    const lines = rows.map((r, i) => {
-      // A cell holding the delimiter is quoted, so the line leaves the fast path as real files do.
-      const cells = r.map((c) => (c.includes(d) ? `"${c}"` : c));
-      if (i === extraField) cells.push('surplus');
-      if (i === extraField + 1) cells.pop();
-      return cells.join(d);
-    });
-    return { text: [header, ...lines].join('\n') + '\n', chunk };
-  });
+// A cell holding the delimiter is quoted, so the line leaves the fast path as real files do.
+const files = fileArb(['id', 'name', 'lat', 'lon', 'type', 'notes', 'region'], rowArb(values, KINDS), (r, d) => r.map((c) => (c.includes(d) ? `"${c}"` : c)));
 
 describe('DepotsReader fast path (plain rows)', () => {
   it('reads random files to the same depots, ids and report as the general reader', () => {
     fc.assert(
-      fc.property(fileArb, ({ text, chunk }) => {
+      fc.property(files, ({ text, chunk }) => {
         expect(readDepots(text, true, chunk)).toEqual(readDepots(text, false, chunk));
       }),
       { numRuns: 600, seed: 20261203 },

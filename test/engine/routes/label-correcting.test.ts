@@ -5,7 +5,7 @@
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DETACHED, IN_TREE, UNBOUNDED, labelCorrect } from '../../../engine/routes/label-correcting';
+import { DETACHED, IN_TREE, UNBOUNDED, labelCorrect, type LoopFound } from '../../../engine/routes/label-correcting';
 import type { Network } from '../../../engine/network/types';
 import { anyNetwork, jsBellmanFord, toNetwork, unboundedByReference, type Spec } from './reference-graphs';
 
@@ -43,6 +43,51 @@ const manySources = fc
     return { spec: { n, lanes, origin: sources[0] } as Spec, sources };
   });
 
+/** A recorded loop is a closed walk: each lane leaves the depot before it and enters the next, and one lap nets a rebate. */
+function expectClosedLoop(network: Network, loop: LoopFound): void {
+  const k = loop.positions.length;
+  expect(loop.depots).toHaveLength(k);
+  expect(new Set(loop.depots).size, 'no depot twice in a loop').toBe(k);
+  let lap = 0;
+  loop.positions.forEach((p, i) => {
+    expect(originOf(network, p)).toBe(loop.depots[i]);
+    expect(network.outTo[p]).toBe(loop.depots[(i + 1) % k]);
+    lap += network.outNet[p];
+  });
+  expect(lap).toBeLessThan(0);
+}
+
+/**
+ * Brute force for small networks, sharing nothing with the engine: Floyd-Warshall over every pair
+ * and a boolean reachability closure. Depot k lies on a negative closed walk exactly when its
+ * all-pairs cost to itself ends below zero, and a depot is unbounded from the origin exactly when
+ * such a k is reachable from the origin and reaches it. Costs stay exact integers at these sizes.
+ */
+function bruteForce(spec: Spec): { unbounded: Set<number>; reachable: Set<number>; cost: number[] } {
+  const { n, origin } = spec;
+  const all = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? 0 : Infinity)));
+  const reach = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => i === j));
+  for (const [u, v, w] of spec.lanes) {
+    all[u][v] = Math.min(all[u][v], w);
+    reach[u][v] = true;
+  }
+  for (let k = 0; k < n; k++) {
+    for (let i = 0; i < n; i++) {
+      for (let j = 0; j < n; j++) {
+        if (all[i][k] + all[k][j] < all[i][j]) all[i][j] = all[i][k] + all[k][j];
+        if (reach[i][k] && reach[k][j]) reach[i][j] = true;
+      }
+    }
+  }
+  const unbounded = new Set<number>();
+  const reachable = new Set<number>();
+  for (let d = 0; d < n; d++) {
+    if (reach[origin][d]) reachable.add(d);
+    for (let k = 0; k < n; k++) if (reach[origin][k] && all[k][k] < 0 && reach[k][d]) unbounded.add(d);
+  }
+  return { unbounded, reachable, cost: all[origin] };
+}
+
 describe('labelCorrect against reference libraries', () => {
   it("'mark': unbounded set, costs, tree and every loop recorded agree with the reference, from one or several sources", () => {
     let severalLoops = 0;
@@ -76,15 +121,7 @@ describe('labelCorrect against reference libraries', () => {
         }
         expect(result.loops.length > 0).toBe(unbounded.size > 0);
         for (const loop of result.loops) {
-          const k = loop.positions.length;
-          expect(loop.depots).toHaveLength(k);
-          let lap = 0;
-          loop.positions.forEach((p, i) => {
-            expect(originOf(network, p)).toBe(loop.depots[i]);
-            expect(network.outTo[p]).toBe(loop.depots[(i + 1) % k]);
-            lap += network.outNet[p];
-          });
-          expect(lap).toBeLessThan(0);
+          expectClosedLoop(network, loop);
           for (const d of loop.depots) expect(result.state[d]).toBe(UNBOUNDED);
         }
       }),
@@ -99,6 +136,46 @@ describe('labelCorrect against reference libraries', () => {
         const result = labelCorrect(toNetwork(spec), { sources, onLoop: 'stop' });
         const unbounded = unboundedByReference(withVirtualSource(spec, sources));
         expect(result.loops).toHaveLength(unbounded.size > 0 ? 1 : 0);
+      }),
+      { seed: SEED, numRuns: 1000 },
+    );
+  });
+
+  it("'mark' from one origin: unbounded set, costs and loops equal brute force, also when a loop runs back through the origin", () => {
+    let originUnbounded = 0;
+    let originBounded = 0;
+    fc.assert(
+      fc.property(anyNetwork(8, 22, -9, 20), (spec) => {
+        const network = toNetwork(spec);
+        const result = labelCorrect(network, { sources: [spec.origin], onLoop: 'mark' });
+        const brute = bruteForce(spec);
+        if (brute.unbounded.has(spec.origin)) originUnbounded++;
+        else if (brute.unbounded.size > 0) originBounded++;
+        for (let d = 0; d < spec.n; d++) {
+          const s = result.state[d];
+          expect(s === UNBOUNDED, `depot ${d} unbounded`).toBe(brute.unbounded.has(d));
+          if (brute.unbounded.has(d)) continue;
+          expect(s === IN_TREE, `depot ${d} reached`).toBe(brute.reachable.has(d));
+          if (s === IN_TREE) expect(result.dist[d], `cost of depot ${d}`).toBe(brute.cost[d]);
+        }
+        expect(result.loops.length > 0).toBe(brute.unbounded.size > 0);
+        for (const loop of result.loops) expectClosedLoop(network, loop);
+      }),
+      { seed: SEED, numRuns: 1500 },
+    );
+    // Both ways out of a loop were taken: the origin itself unbounded (the solve ends there) and not.
+    expect(originUnbounded).toBeGreaterThan(100);
+    expect(originBounded).toBeGreaterThan(20);
+  });
+
+  it("'stop' from one origin returns the loop as a closed walk of lanes with a net rebate", () => {
+    fc.assert(
+      fc.property(anyNetwork(8, 22, -9, 20), (spec) => {
+        const network = toNetwork(spec);
+        const result = labelCorrect(network, { sources: [spec.origin], onLoop: 'stop' });
+        const brute = bruteForce(spec);
+        expect(result.loops).toHaveLength(brute.unbounded.size > 0 ? 1 : 0);
+        for (const loop of result.loops) expectClosedLoop(network, loop);
       }),
       { seed: SEED, numRuns: 1000 },
     );

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { emptyWorkspace, WORKSPACE_VERSION, type WorkspaceDocument } from '../../../engine/workspace/document';
-import { parseWorkspace, serializeWorkspace, checkWorkspace } from '../../../engine/workspace/parse';
+import { parseWorkspace, serializeWorkspace, checkWorkspace, upgradeWorkspace } from '../../../engine/workspace/parse';
 import { WorkspaceFormatError, WorkspaceVersionError } from '../../../engine/workspace/errors';
 import { SCENARIO_VERSION } from '../../../engine/scenario/document';
 
@@ -48,6 +48,39 @@ function withField(mutate: (doc: Record<string, any>) => void): string {
   return JSON.stringify(doc);
 }
 
+describe('version 3: panel sizes', () => {
+  it('keeps the panel sizes, and null for a size never set', () => {
+    const doc = { ...sampleWorkspace(), layout: { lowerPx: 312, sidePx: null } };
+    expect(parseWorkspace(serializeWorkspace(doc), 'p.json').document.layout).toEqual({ lowerPx: 312, sidePx: null });
+  });
+
+  it('upgrades a version 2 file: everything kept, no panel size set', () => {
+    const v2 = JSON.parse(serializeWorkspace({ ...sampleWorkspace(), planning: { ...sampleWorkspace().planning, fuelPrice: '1.719' } })) as Record<string, unknown>;
+    delete v2.layout;
+    v2.version = 2;
+    const { document, migratedFrom } = parseWorkspace(JSON.stringify(v2), 'old.json');
+    expect(migratedFrom).toBe(2);
+    expect(document.version).toBe(3);
+    expect(document.layout).toEqual({ lowerPx: null, sidePx: null });
+    expect(document.planning.fuelPrice).toBe('1.719');
+    expect(document.scenarios).toEqual(sampleWorkspace().scenarios);
+  });
+
+  it('upgrades a version 2 workspace kept in memory form (browser storage written by the previous build)', () => {
+    const { layout: _layout, ...kept } = { ...sampleWorkspace(), version: 2 };
+    const document = upgradeWorkspace(JSON.parse(JSON.stringify(kept)), 'browser storage');
+    expect(document).toEqual({ ...sampleWorkspace(), layout: { lowerPx: null, sidePx: null } });
+    expect(() => upgradeWorkspace({ ...sampleWorkspace(), version: WORKSPACE_VERSION + 1 }, 'browser storage')).toThrow(WorkspaceVersionError);
+    expect(() => upgradeWorkspace({ ...sampleWorkspace(), layout: { lowerPx: 'tall', sidePx: null } }, 'browser storage')).toThrow(WorkspaceFormatError);
+  });
+
+  it('refuses a missing layout, an unknown field, or a size that is not a whole number of pixels', () => {
+    expect(failure(withField((d) => delete d.layout)).field).toBe('/layout');
+    expect(failure(withField((d) => (d.layout.mapPx = 300))).field).toBe('/layout/mapPx');
+    for (const bad of [-1, 12.5, '300', 1e9]) expect(failure(withField((d) => (d.layout.lowerPx = bad))).field).toBe('/layout/lowerPx');
+  });
+});
+
 describe('version 2: planning settings', () => {
   it('keeps the planning settings as typed', () => {
     const doc = { ...sampleWorkspace(), planning: { ...sampleWorkspace().planning, fuelPrice: '1.719', drivingLimit: 'us', exchangeRates: 'USD=0.92,CHF=1.05' } };
@@ -60,10 +93,10 @@ describe('version 2: planning settings', () => {
     v1.version = 1;
     const { document, migratedFrom } = parseWorkspace(JSON.stringify(v1), 'old.json');
     expect(migratedFrom).toBe(1);
-    expect(document.version).toBe(2);
+    expect(document.version).toBe(WORKSPACE_VERSION);
     expect(document.planning).toEqual({ fuelPrice: null, fuelConsumption: null, drivingLimit: null, detourFactor: null, averageSpeed: null, defaultToll: null, currency: null, exchangeRates: null });
     const { planning: _planning, ...rest } = document;
-    const { planning: _expected, ...expected } = { ...sampleWorkspace(), version: 2 };
+    const { planning: _expected, ...expected } = sampleWorkspace();
     expect(rest).toEqual(expected);
   });
 

@@ -237,7 +237,7 @@ describe('lanewright audit --loop-cap with a huge count', () => {
 });
 
 describe('lanewright audit --threads', () => {
-  // Large enough for the headroom searches to go to worker threads (main/headroom-threads/pool.ts MIN_PAIRS_FOR_THREADS).
+  // Large enough for the headroom searches to go to worker threads (MIN_PAIRS_FOR_THREADS, engine/audit/headroom-shared-jobs.ts).
   const count = 2_500;
   const rand = seededRandom(31);
   const potential = Array.from({ length: count }, () => Math.floor(rand() * 5_000));

@@ -73,7 +73,11 @@ describe('lanewright export', () => {
     const result = run('export', '--date', '2026-06-01', '--depots', D, '--lanes', 'sample-data/lanes-rebate-loop.csv', '--from', 'RTM', '--lanes-out', lanes, '--routes-out', routes, '--loops-out', loops, '--geojson-out', geo);
     expect(result.status, result.stderr).toBe(0);
     for (const f of [lanes, routes, loops, geo]) expect(existsSync(f)).toBe(true);
-    expect(JSON.parse(readFileSync(geo, 'utf8')).type).toBe('FeatureCollection');
+    const json = JSON.parse(readFileSync(geo, 'utf8'));
+    expect(json.type).toBe('FeatureCollection');
+    // Its settings and the caution travel with it, as in the app's export.
+    expect(json.settings).toEqual({ date: '2026-06-01', vehicle_class: null, files: [D, 'sample-data/lanes-rebate-loop.csv'], scenario: null });
+    expect(json.caution).toMatch(/estimate/i);
     expect(readFileSync(loops, 'utf8')).toMatch(/FRA,SXB,20/);
     expect(result.stderr).toMatch(/rebate loop/i);
     // The exported lanes re-import cleanly.

@@ -1,7 +1,7 @@
 // The command line's option tables: strict parsing with its own message for each kind of mistake,
 // help and usage generated from the same tables, --version. Run in-process (cli-harness).
 
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCommandLine, UsageError } from '../../../main/cli/args';
 import { closestName, editDistance } from '../../../main/cli/closest-name';
@@ -90,6 +90,14 @@ describe('usage and help come from the same tables', () => {
       const words = command.example.split(' ');
       expect(words.slice(0, 2)).toEqual(['lanewright', command.name]);
       expect(() => parseCommandLine(command.name, words.slice(2), command.options)).not.toThrow();
+    }
+  });
+  it('the example of every command reads only files shipped in sample-data/ and names its date', () => {
+    for (const command of COMMANDS) {
+      const words = command.example.split(' ');
+      const inputs = words.filter((_, i) => ['--depots', '--lanes', '--loads', '--vehicles', '--scenario'].includes(words[i - 1]));
+      for (const file of inputs) expect(existsSync(file), `${command.name}: ${file}`).toBe(true);
+      expect(command.example, command.name).toMatch(/--date \d{4}-\d{2}-\d{2}/);
     }
   });
   it('`lanewright help CMD`, `-h` and the overview', async () => {

@@ -57,6 +57,14 @@ describe('app protocol handler', () => {
     expect(await response.text()).toContain('<title>x</title>');
   });
 
+  it('makes the page cross-origin isolated: COOP same-origin, COEP require-corp on every answer (HTML Standard, cross-origin isolation)', async () => {
+    for (const response of [await handler(new Request(APP_PAGE_URL)), await handler(new Request('lanewright://app/missing.js'))]) {
+      expect(response.headers.get('cross-origin-opener-policy')).toBe('same-origin');
+      expect(response.headers.get('cross-origin-embedder-policy')).toBe('require-corp');
+      expect(response.headers.get('cross-origin-resource-policy')).toBe('same-origin');
+    }
+  });
+
   it('answers 404 outside the folder or for missing files, 405 for writes', async () => {
     expect((await handler(new Request('lanewright://app/..%2f..%2fetc%2fpasswd'))).status).toBe(404);
     expect((await handler(new Request('lanewright://app/missing.js'))).status).toBe(404);

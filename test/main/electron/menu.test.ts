@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { MenuItemConstructorOptions } from 'electron';
 import { buildMenuTemplate } from '../../../main/electron/menu';
 import type { MenuCommand, MenuCommandName } from '../../../main/ipc/contract';
+import { EXPORT_MENU } from '../../../engine/export/export-menu';
 
 function flatten(items: MenuItemConstructorOptions[]): MenuItemConstructorOptions[] {
   return items.flatMap((i) => [i, ...(Array.isArray(i.submenu) ? flatten(i.submenu) : [])]);
@@ -23,8 +24,23 @@ describe('application menu', () => {
   it('reaches every menu command of the contract', () => {
     const { items, sent } = menu('linux', [{ path: '/p/a.json', name: 'a.json', openedAt: '2026-03-02T08:00:00Z' }]);
     for (const item of items) if (item.click) (item.click as () => void)();
-    const expected: MenuCommandName[] = ['open-workspace', 'new-workspace', 'import-depots', 'import-lanes', 'save', 'save-as', 'export-lanes', 'export-routes', 'export-loops', 'export-geojson', 'export-scenario', 'about'];
+    const expected: MenuCommandName[] = ['open-workspace', 'new-workspace', 'import-depots', 'import-lanes', 'save', 'save-as', 'export', 'about'];
     expect(new Set(sent.map((c) => c.command))).toEqual(new Set(expected));
+  });
+
+  it('offers every export of the page’s Export menu, in its order, each sending its choice', () => {
+    const m = menu('linux');
+    const exportMenu = m.items.find((i) => i.label === 'Export');
+    const labels = (exportMenu?.submenu as MenuItemConstructorOptions[]).map((i) => i.label);
+    expect(labels).toEqual(EXPORT_MENU.map((e) => `${e.label}…`));
+    for (const needed of ['Contract review report (HTML)…', 'Scenario comparison (CSV)…', 'Contract review, one day (CSV)…', 'Contract review, calendar (CSV)…']) expect(labels).toContain(needed);
+    m.click('Contract review report (HTML)…');
+    m.click('Scenario comparison (CSV)…');
+    expect(m.sent).toEqual([
+      { command: 'export', what: 'review-html' },
+      { command: 'export', what: 'compare-csv' },
+    ]);
+    expect(m.items.find((i) => i.label === 'Routes (CSV)…')?.accelerator).toBe('CmdOrCtrl+E');
   });
 
   it('opens a recent workspace by its path and can clear the list', () => {

@@ -4,6 +4,7 @@ import { MENU_COMMAND_CHANNEL } from '../../../main/ipc/contract';
 import { validateRequest } from '../../../main/ipc/validate-request';
 import { CHANNEL_NAMES } from '../../../main/ipc/channels';
 import { emptyWorkspace } from '../../../engine/workspace/document';
+import { EXPORT_MENU } from '../../../engine/export/export-menu';
 
 function fakeIpc() {
   const invoked: [string, unknown][] = [];
@@ -67,8 +68,13 @@ describe('preload host API', () => {
     expect(cleanMenuCommand({ command: 'open-workspace' })).toEqual({ command: 'open-workspace', path: null });
     expect(cleanMenuCommand({ command: 'save', thenQuit: 'yes' })).toEqual({ command: 'save', thenQuit: false });
     expect(cleanMenuCommand({ command: 'save', thenQuit: true })).toEqual({ command: 'save', thenQuit: true });
-    expect(cleanMenuCommand({ command: 'export-routes', path: '/x' })).toEqual({ command: 'export-routes' });
-    expect(cleanMenuCommand({ command: 'export-scenario' })).toEqual({ command: 'export-scenario' });
+    expect(cleanMenuCommand({ command: 'about', path: '/x' })).toEqual({ command: 'about' });
+    expect(cleanMenuCommand({ command: 'export', what: 'routes-csv', path: '/x' })).toEqual({ command: 'export', what: 'routes-csv' });
+    expect(cleanMenuCommand({ command: 'export', what: 'review-html' })).toEqual({ command: 'export', what: 'review-html' });
+    // Every entry of the Export menu passes; anything else is dropped.
+    for (const { what } of EXPORT_MENU) expect(cleanMenuCommand({ command: 'export', what })).toEqual({ command: 'export', what });
+    expect(cleanMenuCommand({ command: 'export', what: 'toString' })).toBeNull();
+    expect(cleanMenuCommand({ command: 'export' })).toBeNull();
     expect(cleanMenuCommand('about')).toBeNull();
     expect(cleanMenuCommand(null)).toBeNull();
   });

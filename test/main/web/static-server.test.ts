@@ -50,6 +50,15 @@ describe('static server', () => {
     expect(script.headers['content-type']).toMatch(/^text\/javascript/);
   });
 
+  it('makes the app cross-origin isolated: COOP same-origin and COEP require-corp on the page and its scripts (HTML Standard, cross-origin isolation)', async () => {
+    for (const path of ['/', '/assets/app.js']) {
+      const answer = await get(path);
+      expect(answer.headers['cross-origin-opener-policy'], path).toBe('same-origin');
+      expect(answer.headers['cross-origin-embedder-policy'], path).toBe('require-corp');
+      expect(answer.headers['cross-origin-resource-policy'], path).toBe('same-origin');
+    }
+  });
+
   it('refuses paths outside the folder and answers 404 for missing files', async () => {
     for (const path of ['/../secret.txt', '/%2e%2e/secret.txt', '/assets/../../secret.txt', '/..%2fsecret.txt']) {
       const answer = await get(path);

@@ -47,3 +47,12 @@ describe('loads and vehicles files in the workspace', () => {
     expect(missing.problem).toContain('/plans/gone.csv');
   });
 });
+
+describe('The panel sizes', () => {
+  it('travel with the workspace: written as chosen, read back by stateOf; null when never set', () => {
+    const doc = documentOf(network, settings, scenario, null, { lowerPx: 296, sidePx: null });
+    const reopened = parseWorkspace(serializeWorkspace(doc), 'w.json').document;
+    expect(stateOf(reopened).layout).toEqual({ lowerPx: 296, sidePx: null });
+    expect(documentOf(network, settings, scenario).layout).toEqual({ lowerPx: null, sidePx: null });
+  });
+});
