@@ -234,3 +234,16 @@ describe('a NUL in the first 64 KB', () => {
     expect(view(viaBytes(encoder.encode(text), 4096))).toEqual(whole);
   });
 });
+
+describe('a plain cell longer than a chunk', () => {
+  // Found running the CLI on a 28 MB file: a 1.2 MB ref read from the bytes was made into text with
+  // one String.fromCharCode.apply, which overflowed the stack (a RangeError trace to the user).
+  it('is read from the bytes as the app reads it', () => {
+    const rows = Array.from({ length: 60_000 }, (_, i) => `A,B,R${i},1.00,2`);
+    rows[50_000] = `A,B,${'y'.repeat(1_200_000)},1.00,2`;
+    const bytes = encoder.encode(`from,to,ref,toll,fuel\r\n${rows.join('\r\n')}\r\n`);
+    const app = view(viaText(bytes, true));
+    expect(app.ref[50_000].length).toBe(1_200_000);
+    expect(view(viaBytes(bytes, 1 << 20))).toEqual(app);
+  });
+});
