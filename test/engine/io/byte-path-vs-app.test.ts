@@ -243,7 +243,7 @@ describe('a plain cell longer than a chunk', () => {
     rows[50_000] = `A,B,${'y'.repeat(1_200_000)},1.00,2`;
     const bytes = encoder.encode(`from,to,ref,toll,fuel\r\n${rows.join('\r\n')}\r\n`);
     const app = view(viaText(bytes, true));
-    expect(app.ref[50_000].length).toBe(1_200_000);
+    expect(app.ref[50_000]?.length).toBe(1_200_000);
     expect(view(viaBytes(bytes, 1 << 20))).toEqual(app);
   });
 });
