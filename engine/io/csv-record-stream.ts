@@ -37,9 +37,13 @@ export interface CsvRecordSink {
 // A quoted field longer than this is taken to be an unclosed quote rather than data, so a broken
 // file cannot make the reader buffer the rest of a huge file.
 const MAX_QUOTED_CHARS = 4_000_000;
+/** A NUL within this many characters of the start refuses the whole file (not text). */
+const NUL_CHECK_CHARS = 65536;
 
 export class CsvRecordStream {
   private pending = '';
+  /** The first chunks, held until the NUL check has seen NUL_CHECK_CHARS of them. */
+  private head = '';
   private scanned = 0;
   private inQuotes = false;
   private started = false;
@@ -71,16 +75,32 @@ export class CsvRecordStream {
   feed(chunk: string): void {
     if (this.stopped || chunk.length === 0) return;
     if (!this.started) {
-      if (chunk.charCodeAt(0) === 0xfeff) chunk = chunk.slice(1);
-      if (chunk.length === 0) return;
-      this.started = true;
-      // NUL never occurs in UTF-8 text; UTF-16 files and binaries are full of it.
-      if (chunk.slice(0, 65536).includes('\u0000')) {
-        this.stopped = true;
-        this.sink.issue({ code: 'not-text', row: null, columnIndex: null, value: null, linesLost: 0 });
-        return;
-      }
+      // The NUL check sees the first 64 KB however the text is cut: chunks wait until then (or finish).
+      this.head += chunk;
+      if (this.head.length <= NUL_CHECK_CHARS) return;
+      this.start();
+      return;
     }
+    this.read(chunk);
+  }
+
+  // Reads the held first chunks as one, unless a NUL in the first 64 KB refuses the file.
+  private start(): void {
+    let text = this.head;
+    this.head = '';
+    if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
+    if (text.length === 0) return;
+    this.started = true;
+    // NUL never occurs in UTF-8 text; UTF-16 files and binaries are full of it.
+    if (text.slice(0, NUL_CHECK_CHARS).includes('\u0000')) {
+      this.stopped = true;
+      this.sink.issue({ code: 'not-text', row: null, columnIndex: null, value: null, linesLost: 0 });
+      return;
+    }
+    this.read(text);
+  }
+
+  private read(chunk: string): void {
     this.charsSeen += chunk.length;
     if (this.swallowing) {
       this.countSwallowed(chunk);
@@ -121,6 +141,7 @@ export class CsvRecordStream {
   }
 
   finish(): void {
+    if (!this.started) this.start();
     if (this.stopped) return;
     if (this.swallowing) {
       this.endSwallowing();

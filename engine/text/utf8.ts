@@ -172,7 +172,11 @@ export function asciiText(bytes: Uint8Array, start: number, end: number): string
       return String.fromCharCode(bytes[start], bytes[start + 1], bytes[start + 2], bytes[start + 3], bytes[start + 4], bytes[start + 5], bytes[start + 6]);
     case 8:
       return String.fromCharCode(bytes[start], bytes[start + 1], bytes[start + 2], bytes[start + 3], bytes[start + 4], bytes[start + 5], bytes[start + 6], bytes[start + 7]);
-    default:
-      return String.fromCharCode.apply(null, bytes.subarray(start, end) as unknown as number[]);
+    default: {
+      // In pieces: one apply over a cell of a million bytes overflows the stack.
+      let out = '';
+      for (let s = start; s < end; s += PIECE) out += String.fromCharCode.apply(null, bytes.subarray(s, Math.min(end, s + PIECE)) as unknown as number[]);
+      return out;
+    }
   }
 }

@@ -154,18 +154,21 @@ describe('CsvByteStream (the byte path) against the text path', () => {
   });
 
   it('takes plain rows from the bytes and the rest the general way', () => {
-    const lines = ['from,to,ref,toll,fuel', ...Array.from({ length: 40 }, (_, i) => (i === 20 ? 'Liège,B,"R, 20",1.00,2.5' : `A,B,R${i},1.00,2.5`))];
+    // Past 64 KB: the stream holds the first chunks until the NUL check has seen that much.
+    const lines = ['from,to,ref,toll,fuel', ...Array.from({ length: 4040 }, (_, i) => (i === 4020 ? 'Liège,B,"R, 20",1.00,2.5' : `A,B,R${i},1.00,2.5`))];
     const bytes = encoder.encode(lines.join('\r\n') + '\r\n');
+    const start = 70_000;
     // Rows read from the bytes are counted by the text stream's rowTaken.
     const taken = vi.spyOn(CsvRecordStream.prototype, 'rowTaken');
-    const result = importWith(cutAt(bytes, [50, 51, 52, 300]), true);
-    // The first chunk is the header and the start of row 2; every later row but the quoted one (row 22) is taken.
-    expect(taken).toHaveBeenCalledTimes(38);
+    const result = importWith(cutAt(bytes, [50, 51, 52, 300, start, start + 1, start + 2, start + 300]), true);
+    // The text stream reads the first 70 000 bytes; every row ending after them but the quoted one is taken.
+    const endsBefore = bytes.subarray(0, start).filter((b) => b === 10).length;
+    expect(taken).toHaveBeenCalledTimes(lines.length - endsBefore - 1);
     taken.mockRestore();
-    expect(result.lanes.count).toBe(40);
-    expect(result.lanes.ref[20]).toBe('R, 20');
-    expect(result.lanes.from[20]).toBe(3);
-    expect(result.lanes.toll[39]).toBe(100);
+    expect(result.lanes.count).toBe(4040);
+    expect(result.lanes.ref[4020]).toBe('R, 20');
+    expect(result.lanes.from[4020]).toBe(3);
+    expect(result.lanes.toll[4039]).toBe(100);
     expect(result.report.errors).toEqual([]);
   });
 
@@ -189,16 +192,17 @@ describe('CsvByteStream (the byte path) against the text path', () => {
   });
 
   it('reads invalid UTF-8 and NUL in later lines as the text path does', () => {
-    const plain = Array.from({ length: 30 }, (_, i) => `A,B,R${i},1.00,2`).join('\n');
+    const plain = Array.from({ length: 6000 }, (_, i) => `A,B,R${i},1.00,2`).join('\n');
     const bytes = Uint8Array.from([...encoder.encode(`from,to,ref,toll,fuel\n${plain}\nA,B,R`), 0xff, ...encoder.encode(',1,2\nB,A,X'), 0x00, ...encoder.encode(',1,2\nA,C,R99,1,2\n')]);
-    for (let p = 0; p <= bytes.length; p += 7) expectSamePaths(bytes, [p, p + 3]);
-    // A NUL in the first chunk refuses the whole file (not text); past it, only its row.
-    expect(importWith([bytes], true).report.errors.map((e) => e.code)).toEqual(['not-text']);
+    for (let p = 0; p <= bytes.length; p += 9973) expectSamePaths(bytes, [p, p + 3]);
+    // A NUL in the first 64 KB refuses the whole file (not text); past it, only its row.
+    const early = Uint8Array.from([...encoder.encode('from,to,ref,toll,fuel\nA,B,X'), 0x00, ...encoder.encode(`,1,2\n${plain}\n`)]);
+    expect(importWith(cutAt(early, [30, 4000]), true).report.errors.map((e) => [e.row, e.code])).toEqual([[null, 'not-text']]);
     const result = importWith(cutAt(bytes, [encoder.encode(`from,to,ref,toll,fuel\n${plain}\n`).length]), true);
-    expect(result.lanes.count).toBe(31);
+    expect(result.lanes.count).toBe(6001);
     expect(result.report.errors.map((e) => [e.row, e.code])).toEqual([
-      [32, 'not-text'],
-      [33, 'not-text'],
+      [6002, 'not-text'],
+      [6003, 'not-text'],
     ]);
   });
 
