@@ -37,7 +37,7 @@ export function depotCanvas(pane: string, network: NetworkView, handlers: DepotH
       onCounts(answer.counts.drawn, answer.counts.inView);
     });
     layer = offscreen;
-    restyled = () => offscreen.setContent(content());
+    restyled = () => offscreen.setCanvasContent(content());
   } else {
     const points = { lat: network.lat, lon: network.lon, ...mercatorOf(network) };
     const painted = new PaintLayer(pane, (ctx, bounds, map) => {

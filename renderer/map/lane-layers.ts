@@ -44,7 +44,7 @@ export function laneSetLayer(pane: string, network: NetworkView, lanes: Int32Arr
     return {
       addTo: (map) => layer.addTo(map),
       remove: () => layer.remove(),
-      setLanes: (next, nextAdded) => layer.setContent(content(next, nextAdded)),
+      setLanes: (next, nextAdded) => layer.setCanvasContent(content(next, nextAdded)),
     };
   }
   const data = paintDataOf(network);

@@ -46,7 +46,7 @@ export class OffscreenPaintLayer extends L.Layer {
   }
 
   /** New content for the same canvas (the route tree after a solve): the old picture stays until the new one is painted. */
-  setContent(content: CanvasContent): void {
+  setCanvasContent(content: CanvasContent): void {
     this.content = content;
     if (this.id) paintClient().content(this.id, content);
   }
