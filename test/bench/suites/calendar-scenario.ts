@@ -9,6 +9,7 @@ import { importNetwork } from '../../../engine/planning/import-network';
 import { calendarReviewHtml } from '../../../engine/report/calendar-html';
 import { calendarReport } from '../../../engine/report/calendar-report';
 import { calendarReportScenario, reviewCalendarUnder } from '../../../engine/scenario/calendar-under-scenario';
+import { parseScenarioDocument } from '../../../engine/scenario/document';
 import type { Scenario, ScenarioChange } from '../../../engine/scenario/types';
 import { timeBest, type BenchSuite } from '../harness';
 import { generated } from './calendar';
@@ -57,27 +58,13 @@ export const suite: BenchSuite = {
   run(record) {
     const cases: { name: string; depots: string; lanes: string; scenario: Scenario; repeat: number }[] = [];
     const sampleLanes = sample('lanes-rebate-loop.csv');
-    const key = (from: string, to: string, ref: string) => ({ from, to, ref, occurrence: 1 });
+    // The what-if shipped for the sample (the same five changes the calendar-under-scenario test uses).
     cases.push({
       name: 'sample loop variant, 5-change what-if',
       depots: sample('depots.csv'),
       lanes: sampleLanes,
       repeat: 3,
-      scenario: {
-        name: 'sample what-if',
-        description: null,
-        changes: [
-          { kind: 'set-amount', lane: key('FRA', 'SXB', 'BFH-L-019'), field: 'rebate', amountMinor: 16_900, note: null },
-          { kind: 'set-validity', lane: key('FRA', 'SXB', 'BFH-L-019'), validFrom: '2026-03-01', validTo: '2026-05-31', note: null },
-          { kind: 'set-amount', lane: key('SXB', 'FRA', 'BFH-L-023'), field: 'toll', vehicleClass: '2axle', amountMinor: 50, note: null },
-          { kind: 'close-lane', lane: key('KRL', 'MHG', 'BFH-L-188'), note: null },
-          {
-            kind: 'add-lane',
-            lane: { from: 'LUX', to: 'ANR', ref: 'WHATIF-1', tollMinor: 0, fuelMinor: 14_530, feesMinor: 1_200, rebateMinor: 40_000, validFrom: '2026-10-01', validTo: '2026-12-31', distanceKm: 291.1, driveMinutes: 257 },
-            note: null,
-          },
-        ],
-      },
+      scenario: parseScenarioDocument(sample('what-if-spring-rebate.json'), 'what-if-spring-rebate.json'),
     });
     const big = generated(2_000, 20_000, 100, 20, 100);
     cases.push({ name: '2k/20k, 100 validity windows, 35-change what-if', depots: big.depots, lanes: big.lanes, scenario: whatIf(big.lanes), repeat: 1 });
